@@ -1,0 +1,59 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Flow regime (laminar / transitional / turbulent) and, in turbulent flow,
+ * the roughness zone from the roughness Reynolds number
+ * ε⁺ = Re·(ε/D)·√(f/8). */
+#pragma once
+
+#include "friction.h"
+#include "status.h"
+
+typedef enum {
+  RG_REGIME_LAMINAR = 0,
+  RG_REGIME_TRANSITIONAL,
+  RG_REGIME_TURBULENT
+} RgRegime;
+
+typedef enum {
+  RG_ZONE_NONE = 0,           /* not turbulent */
+  RG_ZONE_SMOOTH,             /* hydraulically smooth */
+  RG_ZONE_TRANSITIONALLY_ROUGH,
+  RG_ZONE_FULLY_ROUGH
+} RgRoughnessZone;
+
+/* Reynolds numbers bounding the transitional range. */
+typedef struct {
+  double re_laminar_max;   /* default 2000 */
+  double re_turbulent_min; /* default 4000 */
+} RgTransition;
+
+/* Roughness Reynolds number thresholds (sources in regime.c). */
+extern const double RG_EPS_PLUS_SMOOTH_MAX;      /* 5 */
+extern const double RG_EPS_PLUS_FULLY_ROUGH_MIN; /* 70 */
+
+void rg_transition_default (RgTransition *t);
+/* 0 < re_laminar_max < re_turbulent_min, both finite. */
+RgStatus rg_transition_check (const RgTransition *t, RgError *err);
+
+RgRegime rg_regime_classify (const RgTransition *t, double re);
+double rg_roughness_reynolds (double re, double rr, double f);
+RgRoughnessZone rg_roughness_zone_classify (double eps_plus);
+
+/* "laminar", "transitional", "turbulent" */
+const char *rg_regime_id (RgRegime regime);
+/* "none", "smooth", "transitionally-rough", "fully-rough" */
+const char *rg_roughness_zone_id (RgRoughnessZone zone);
+
+/* Everything the friction side knows about one operating point. */
+typedef struct {
+  RgRegime regime;
+  RgRoughnessZone zone;        /* RG_ZONE_NONE unless turbulent */
+  double f;                    /* design value: 64/Re when laminar, else the model */
+  double f_laminar;            /* 64/Re; meaningful when has_laminar */
+  int has_laminar;             /* 1 in the transitional range */
+  double eps_plus;             /* roughness Reynolds number (0 when laminar) */
+  double roughness_elasticity; /* ∂ln f/∂ln(ε/D); 0 when laminar */
+} RgFrictionPoint;
+
+RgStatus rg_friction_point (RgFrictionModel model, const RgTransition *t,
+                            double re, double rr, RgFrictionPoint *out,
+                            RgError *err);

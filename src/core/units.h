@@ -1,0 +1,47 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Units: parse value-with-unit text and convert to and from SI.
+ * The core works in SI only; conversion happens where a value enters or
+ * leaves.  Parsing never follows the process locale ("2.5" always). */
+#pragma once
+
+#include "status.h"
+
+typedef enum {
+  RG_QTY_FLOW = 0,         /* m3/s */
+  RG_QTY_LENGTH,           /* m (lengths, diameters, elevation, head) */
+  RG_QTY_ROUGHNESS,        /* m (as length, plus µm/um) */
+  RG_QTY_TEMPERATURE,      /* K */
+  RG_QTY_PRESSURE,         /* Pa */
+  RG_QTY_DYN_VISCOSITY,    /* Pa·s */
+  RG_QTY_KIN_VISCOSITY,    /* m2/s */
+  RG_QTY_DENSITY,          /* kg/m3 */
+  RG_QTY_VELOCITY,         /* m/s */
+  RG_QTY_GRADIENT,         /* m per 100 m */
+  RG_QTY_TIME,             /* s */
+  RG_QTY_ROUGHNESS_RATE,   /* m/s (aging rate) */
+  RG_QTY_SALINITY,         /* kg/kg */
+  RG_QTY_N
+} RgQuantity;
+
+/* Parse "150 gpm", "2 in", "68 F", "1.5e-3" (a bare number is SI) into SI.
+ * Errors name the quantity (`what`, e.g. "--flow") and list the accepted
+ * units. */
+RgStatus rg_units_parse (RgQuantity q, const char *what, const char *text,
+                         double *si, RgError *err);
+
+/* A viscosity that may be dynamic or kinematic ("1 cP", "1 cSt", "1e-6 m2/s").
+ * A bare number is taken as dynamic (Pa·s). */
+RgStatus rg_units_parse_viscosity (const char *what, const char *text,
+                                   double *si, int *is_kinematic,
+                                   RgError *err);
+
+/* value [unit] -> SI and back; `unit` is one of the spellings parse accepts. */
+RgStatus rg_units_to_si (RgQuantity q, double value, const char *unit,
+                         double *si, RgError *err);
+RgStatus rg_units_from_si (RgQuantity q, double si, const char *unit,
+                           double *value, RgError *err);
+
+/* Canonical display symbol of the SI unit of q ("m³/s", "K", …). */
+const char *rg_units_si_symbol (RgQuantity q);
+/* Comma-separated list of the accepted unit spellings for messages. */
+const char *rg_units_accepted (RgQuantity q);

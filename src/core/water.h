@@ -1,0 +1,25 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Liquid water: IAPWS-IF97 region 1 (density), region 4 (saturation
+ * pressure) and IAPWS R12-08 (viscosity), 0.01–150 °C, up to 10 MPa. */
+#pragma once
+
+#include "status.h"
+
+#define RG_WATER_T_MIN_K 273.16
+#define RG_WATER_T_MAX_K 423.15
+#define RG_WATER_P_MAX_PA 10.0e6
+
+/* Saturation pressure (IF97 region 4), 273.15 K ≤ T ≤ 647.096 K. */
+RgStatus rg_water_saturation_pressure (double t_k, double *p_pa, RgError *err);
+
+/* Density of liquid water (IF97 region 1). Errors when T or p are outside
+ * the range above, or when the water would be vapour (p below saturation). */
+RgStatus rg_water_density (double t_k, double p_pa, double *rho, RgError *err);
+
+/* Dynamic viscosity, IAPWS R12-08 (industrial formulation, no critical
+ * enhancement), at the density above. */
+RgStatus rg_water_viscosity (double t_k, double rho, double *mu, RgError *err);
+
+/* Both, with the same range checks. */
+RgStatus rg_water_properties (double t_k, double p_pa, double *rho,
+                              double *mu, RgError *err);
