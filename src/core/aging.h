@@ -1,0 +1,36 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Roughness growth with service age: the linear model of Colebrook and
+ * White (1937), ε(t) = ε₀ + α·t. */
+#pragma once
+
+#include "line.h"
+#include "status.h"
+
+typedef struct {
+  const char *id;            /* stable key */
+  const char *name;          /* for people */
+  double rate_m_per_year;    /* α */
+  const char *source;
+} RgAgingClass;
+
+int rg_aging_class_count (void);
+const RgAgingClass *rg_aging_class_at (int index);
+RgStatus rg_aging_class_lookup (const char *id, const RgAgingClass **out,
+                                RgError *err);
+
+RgStatus rg_aging_roughness (double roughness_new_m, double rate_m_per_year,
+                             double age_years, double *roughness_m,
+                             RgError *err);
+
+typedef struct {
+  double roughness_m;            /* ε(t) */
+  RgLineResult result;           /* the line at age t */
+  RgLineResult result_new;       /* the line when new */
+  double head_loss_ratio_to_new; /* h_total(t) / h_total(0) */
+  double head_loss_rate_m_per_year; /* d h_total / dt at t */
+} RgAgingResult;
+
+/* `in` describes the line when new (in->roughness_m = ε₀). */
+RgStatus rg_aging_evaluate (const RgLineInput *in, double rate_m_per_year,
+                            double age_years, RgAgingResult *out,
+                            RgError *err);
