@@ -1,0 +1,45 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#pragma once
+
+#include <gtk/gtk.h>
+
+#include "model/rugosa-project.h"
+#include "rugosa-chart-input.h"
+
+G_BEGIN_DECLS
+
+#define RUGOSA_TYPE_CANVAS (rugosa_canvas_get_type ())
+G_DECLARE_FINAL_TYPE (RugosaCanvas, rugosa_canvas, RUGOSA, CANVAS, GtkWidget)
+
+/* The friction chart on screen.  The canvas draws through the chart engine
+ * (cached background, overlay on top); it follows `selection` (a
+ * GtkSingleSelection over the project's lines) and changes it on a click or
+ * the arrow keys.  `probe-text` holds the (Re, f, ε/D) under the pointer. */
+
+GtkWidget  *rugosa_canvas_new             (void);
+void        rugosa_canvas_set_project     (RugosaCanvas       *self,
+                                           RugosaProject      *project,
+                                           GSettings          *settings);
+void        rugosa_canvas_set_selection   (RugosaCanvas       *self,
+                                           GtkSingleSelection *selection);
+/* Rebuild the overlay from the project's results (cheap; the background is
+ * rebuilt by the engine only when its spec changed). */
+void        rugosa_canvas_refresh         (RugosaCanvas       *self);
+const char *rugosa_canvas_get_probe_text  (RugosaCanvas       *self);
+/* Duration of the last snapshot, microseconds (diagnostics, benchmark). */
+gint64      rugosa_canvas_get_last_draw_us (RugosaCanvas      *self);
+/* How many times the chart background was built (tests). */
+guint       rugosa_canvas_get_background_builds (RugosaCanvas *self);
+/* The input the canvas last drew (tests); NULL before the first refresh. */
+const RugosaChartInput *rugosa_canvas_get_input (RugosaCanvas *self);
+/* Device point of a line's design marker; FALSE when not drawn. */
+gboolean    rugosa_canvas_marker_position (RugosaCanvas *self,
+                                           guint         position,
+                                           double       *x,
+                                           double       *y);
+/* What a pointer at (x, y) would show (hover/probe), as if it moved there. */
+void        rugosa_canvas_pointer_at      (RugosaCanvas *self,
+                                           double        x,
+                                           double        y);
+
+G_END_DECLS

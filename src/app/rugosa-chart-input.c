@@ -1,0 +1,178 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#define G_LOG_DOMAIN "rugosa-chart-input"
+
+#include "config.h"
+
+#include <math.h>
+#include <stdio.h>
+
+#include "rugosa-chart-input.h"
+#include "rugosa-display.h"
+
+char *
+rugosa_chart_input_unit (GSettings  *settings,
+                         const char *key)
+{
+  if (settings == NULL)
+    return NULL;
+  return g_settings_get_string (settings, key);
+}
+
+void
+rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
+                              RugosaProject   *project)
+{
+  RugosaSettings *ps = rugosa_project_get_settings (project);
+
+  spec->re_min = rugosa_settings_get_double (ps, "chart-re-min");
+  spec->re_max = rugosa_settings_get_double (ps, "chart-re-max");
+  spec->f_min = rugosa_settings_get_double (ps, "chart-f-min");
+  spec->f_max = rugosa_settings_get_double (ps, "chart-f-max");
+  spec->transition.re_laminar_max = rugosa_settings_get_double (ps, "re-laminar-max");
+  spec->transition.re_turbulent_min = rugosa_settings_get_double (ps, "re-turbulent-min");
+}
+
+static RugosaChartRgba
+_rugosa_chart_input_colour (const char *hex)
+{
+  RugosaChartRgba c = { 0.2, 0.4, 0.7, 1.0 };
+  unsigned r, g, b;
+
+  if (hex != NULL && sscanf (hex, "#%02x%02x%02x", &r, &g, &b) == 3)
+    {
+      c.r = r / 255.0;
+      c.g = g / 255.0;
+      c.b = b / 255.0;
+    }
+  return c;
+}
+
+static const char *
+_rugosa_chart_input_keep (RugosaChartInput *input,
+                          char             *owned)
+{
+  g_ptr_array_add (input->owned, owned);
+  return owned;
+}
+
+RugosaChartInput *
+rugosa_chart_input_new (RugosaProject *project,
+                        GSettings     *settings,
+                        int            selected)
+{
+  RugosaChartInput *input = g_new0 (RugosaChartInput, 1);
+  RugosaSettings *ps = rugosa_project_get_settings (project);
+  guint n = rugosa_project_get_n_lines (project);
+  double age = rugosa_settings_get_double (ps, "service-age");
+  g_autofree char *u_vel = rugosa_chart_input_unit (settings, "unit-velocity");
+  g_autofree char *u_head = rugosa_chart_input_unit (settings, "unit-head");
+
+  input->owned = g_ptr_array_new_with_free_func (g_free);
+  rugosa_chart_spec_init (&input->spec);
+  rugosa_chart_input_fill_spec (&input->spec, project);
+  input->lines = g_new0 (RugosaChartLine, MAX (n, 1));
+  input->line_index = g_new0 (guint, MAX (n, 1));
+
+  for (guint i = 0; i < n; i++)
+    {
+      RugosaLine *line = rugosa_project_get_line (project, i);
+      const RugosaLineResults *res = rugosa_project_get_results (project, line);
+      const RugosaOperatingPoint *design, *pmin, *pmax;
+      RugosaChartLine *cl;
+      RugosaChartPoint *trail;
+      double d, rr_new, rr_aged;
+
+      if (res == NULL || !res->ok)
+        continue;
+      design = &res->points[RUGOSA_FLOW_DESIGN];
+      if (!design->present || !design->ok)
+        continue;
+      d = res->inner_diameter_m;
+      rr_new = d > 0 ? res->roughness_new_m / d : 0.0;
+      rr_aged = d > 0 ? res->roughness_m / d : 0.0;
+
+      cl = &input->lines[input->n_lines];
+      input->line_index[input->n_lines] = i;
+      input->n_lines++;
+
+      cl->name = _rugosa_chart_input_keep (input, g_strdup (rugosa_line_get_name (line)));
+      cl->colour = _rugosa_chart_input_colour (rugosa_line_get_colour (line));
+      cl->rr_new = rr_new;
+      cl->rr_aged = rr_aged;
+      cl->regime = design->result.friction.regime;
+      cl->re = design->result.reynolds;
+      cl->f = design->result.friction.f;
+      if (design->result.friction.has_laminar)
+        {
+          cl->f_laminar = design->result.friction.f_laminar;
+          /* In the transitional range the design value is the turbulent one. */
+          cl->f_turbulent = design->result.friction.f;
+        }
+      pmin = &res->points[RUGOSA_FLOW_MINIMUM];
+      pmax = &res->points[RUGOSA_FLOW_MAXIMUM];
+      if (pmin->present && pmin->ok)
+        {
+          cl->has_flow_min = 1;
+          cl->flow_min.re = pmin->result.reynolds;
+          cl->flow_min.f = pmin->result.friction.f;
+        }
+      if (pmax->present && pmax->ok)
+        {
+          cl->has_flow_max = 1;
+          cl->flow_max.re = pmax->result.reynolds;
+          cl->flow_max.f = pmax->result.friction.f;
+        }
+
+      /* The aging trail: the design point from new to the service age. */
+      trail = g_new0 (RugosaChartPoint, RUGOSA_CHART_TRAIL_POINTS);
+      g_ptr_array_add (input->owned, trail);
+      cl->n_trail = 0;
+      if (age > 0.0)
+        {
+          for (guint k = 0; k < RUGOSA_CHART_TRAIL_POINTS; k++)
+            {
+              double a = age * k / (RUGOSA_CHART_TRAIL_POINTS - 1);
+              const RugosaLineResults *ra = rugosa_project_get_results_at (project, line, a);
+              const RugosaOperatingPoint *pa;
+
+              if (ra == NULL || !ra->ok)
+                break;
+              pa = &ra->points[RUGOSA_FLOW_DESIGN];
+              if (!pa->present || !pa->ok)
+                break;
+              trail[cl->n_trail].re = pa->result.reynolds;
+              trail[cl->n_trail].f = pa->result.friction.f;
+              cl->n_trail++;
+            }
+          /* get_results_at may reuse its buffer: read the selected age last. */
+          res = rugosa_project_get_results (project, line);
+          design = &res->points[RUGOSA_FLOW_DESIGN];
+        }
+      cl->trail = trail;
+
+      cl->readout_velocity =
+        _rugosa_chart_input_keep (input, rugosa_display_format (RG_QTY_VELOCITY, design->result.velocity_m_s, u_vel));
+      {
+        /* The gradient is a ratio: head per 100 of the same length unit. */
+        g_autofree char *g = rugosa_display_format (RG_QTY_LENGTH, design->result.gradient_m_per_100m, u_head);
+        cl->readout_head_per_100m =
+          _rugosa_chart_input_keep (input, g_strdup_printf ("%s/100 %s", g,
+                                                            g_strcmp0 (u_head, "ft") == 0 ? "ft" : "m"));
+      }
+      cl->readout_head_total =
+        _rugosa_chart_input_keep (input, rugosa_display_format (RG_QTY_LENGTH, design->result.head_loss_total_m, u_head));
+      cl->selected = ((int) i == selected);
+    }
+  return input;
+}
+
+void
+rugosa_chart_input_free (RugosaChartInput *input)
+{
+  if (input == NULL)
+    return;
+  g_free (input->lines);
+  g_free (input->line_index);
+  g_ptr_array_unref (input->owned);
+  g_free (input);
+}

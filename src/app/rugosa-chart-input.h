@@ -1,0 +1,44 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Fill the chart engine's plain C input from the project: the background
+ * spec from the project settings and one RugosaChartLine per line option
+ * from the model's results, with readouts in the display units.  Shared by
+ * the canvas, the export and the print code so all three draw the same. */
+#pragma once
+
+#include <gio/gio.h>
+
+#include "chart/rugosa-chart.h"
+#include "model/rugosa-project.h"
+
+G_BEGIN_DECLS
+
+typedef struct {
+  RugosaChartSpec  spec;
+  RugosaChartLine *lines;
+  size_t           n_lines;
+  /* Line i of `lines` is project line `line_index[i]` (lines that could
+   * not be evaluated are left out of the overlay). */
+  guint           *line_index;
+  GPtrArray       *owned;   /* strings and trails the lines point into */
+} RugosaChartInput;
+
+/* The number of points of an aging trail, new to the selected age. */
+#define RUGOSA_CHART_TRAIL_POINTS 16
+
+RugosaChartInput *rugosa_chart_input_new  (RugosaProject *project,
+                                           GSettings     *settings,
+                                           int            selected);
+void              rugosa_chart_input_free (RugosaChartInput *input);
+
+/* The spec's background fields from the project settings (size, scale
+ * and theme are left as they are). */
+void rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
+                                   RugosaProject   *project);
+
+/* The unit chosen in GSettings for a display field ("unit-flow", …). */
+char *rugosa_chart_input_unit (GSettings  *settings,
+                               const char *key);
+
+G_DEFINE_AUTOPTR_CLEANUP_FUNC (RugosaChartInput, rugosa_chart_input_free)
+
+G_END_DECLS

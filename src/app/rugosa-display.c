@@ -1,0 +1,97 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#define G_LOG_DOMAIN "rugosa-display"
+
+#include "config.h"
+
+#include <math.h>
+#include <string.h>
+
+#include "rugosa-display.h"
+
+const char *
+rugosa_display_unit_symbol (const char *unit)
+{
+  static const struct { const char *key, *shown; } pretty[] = {
+    { "m3/s", "m³/s" }, { "m3/h", "m³/h" }, { "ft3/min", "ft³/min" },
+    { "cfs", "ft³/s" }, { "um", "µm" }, { "C", "°C" }, { "F", "°F" },
+    { "kg/m3", "kg/m³" }, { "lb/ft3", "lb/ft³" }, { "mPa.s", "mPa·s" },
+    { "Pa.s", "Pa·s" }, { "m/100m", "m/100 m" }, { "ft/100ft", "ft/100 ft" }, { "mm/yr", "mm/yr" },
+    { "mm2/s", "mm²/s" },
+    { "m2/s", "m²/s" },
+  };
+
+  if (unit == NULL)
+    return "";
+  for (guint i = 0; i < G_N_ELEMENTS (pretty); i++)
+    if (g_strcmp0 (pretty[i].key, unit) == 0)
+      return pretty[i].shown;
+  return unit;
+}
+
+char *
+rugosa_display_significant (double x,
+                            int    digits)
+{
+  char buf[G_ASCII_DTOSTR_BUF_SIZE];
+  double ax = fabs (x);
+  char fmt[16];
+
+  if (!isfinite (x))
+    return g_strdup ("—");
+  if (x == 0.0)
+    return g_strdup ("0");
+  if (ax >= 1e-3 && ax < 1e6)
+    {
+      /* Fixed notation with `digits` significant figures. */
+      int decimals = digits - 1 - (int) floor (log10 (ax));
+      if (decimals < 0)
+        decimals = 0;
+      g_snprintf (fmt, sizeof fmt, "%%.%df", decimals);
+    }
+  else
+    g_snprintf (fmt, sizeof fmt, "%%.%dg", digits);
+  g_ascii_formatd (buf, sizeof buf, fmt, x);
+  return g_strdup (buf);
+}
+
+char *
+rugosa_display_number (RgQuantity  q,
+                       double      si,
+                       const char *unit)
+{
+  double v = si;
+
+  if (unit != NULL && rg_units_from_si (q, si, unit, &v, NULL) != RG_OK)
+    v = si;
+  return rugosa_display_significant (v, 4);
+}
+
+char *
+rugosa_display_format (RgQuantity  q,
+                       double      si,
+                       const char *unit)
+{
+  double v = si;
+  const char *shown = unit;
+  g_autofree char *num = NULL;
+
+  if (unit == NULL || rg_units_from_si (q, si, unit, &v, NULL) != RG_OK)
+    {
+      v = si;
+      shown = rg_units_si_symbol (q);
+    }
+  num = rugosa_display_significant (v, 4);
+  /* A field reads "0.007 mm", not "0.007000 mm". */
+  if (strchr (num, '.') != NULL && strchr (num, 'e') == NULL)
+    {
+      char *end = num + strlen (num) - 1;
+      while (*end == '0')
+        *end-- = '\0';
+      if (*end == '.')
+        *end = '\0';
+    }
+  if (shown == NULL || *shown == '\0')
+    return g_steal_pointer (&num);
+  /* The core's parser reads these symbols back (°C, m³/s, mPa·s, µm). */
+  return g_strdup_printf ("%s %s", num, rugosa_display_unit_symbol (shown));
+}

@@ -1,0 +1,814 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#define G_LOG_DOMAIN "rugosa-line-panel"
+
+#include "config.h"
+
+#include <glib/gi18n.h>
+#include <math.h>
+
+#include "core/aging.h"
+#include "core/catalog.h"
+#include "core/fittings.h"
+#include "core/fluid.h"
+#include "rugosa-display.h"
+#include "rugosa-line-panel.h"
+#include "rugosa-readout.h"
+
+/* The model stores roughness growth per year; the units parser works in
+ * metres per second.  A Julian year of 365.25 days (IAU), the year
+ * rg_units uses for "per year". */
+#define SECONDS_PER_YEAR (365.25 * 86400.0)
+
+struct _RugosaLinePanel
+{
+  GtkWidget parent_instance;
+
+  /* template widgets */
+  GtkColorButton   *colour_button;
+  GtkEntry         *name_entry;
+  GtkBox           *warnings_box;
+  GtkLabel         *warnings_label;
+  AdwComboRow      *fluid_kind_row;
+  AdwActionRow     *salinity_row;
+  AdwActionRow     *temperature_row;
+  AdwActionRow     *pressure_row;
+  AdwActionRow     *density_row;
+  AdwActionRow     *viscosity_row;
+  AdwActionRow     *oil_t1_row;
+  AdwActionRow     *oil_nu1_row;
+  AdwActionRow     *oil_t2_row;
+  AdwActionRow     *oil_nu2_row;
+  AdwActionRow     *oil_density_ref_row;
+  AdwActionRow     *oil_t_ref_row;
+  AdwActionRow     *oil_expansion_row;
+  GtkSpinButton    *oil_expansion_spin;
+  AdwActionRow     *fluid_props_row;
+  GtkDropDown      *material_dropdown;
+  GtkDropDown      *aging_dropdown;
+  GtkDropDown      *pipe_dropdown;
+  AdwActionRow     *roughness_row;
+  AdwActionRow     *aging_rate_row;
+  AdwActionRow     *inner_diameter_row;
+  AdwExpanderRow   *fittings_row;
+  GtkDropDown      *fitting_add_dropdown;
+
+  /* borrowed references */
+  RugosaProject *project;
+  GSettings     *settings;
+
+  /* owned references */
+  RugosaLine *line;
+  GHashTable *entries;       /* property name -> RugosaQuantityEntry */
+  GPtrArray  *fitting_rows;  /* rows added to fittings_row */
+  gboolean    updating;      /* set while widgets follow the line */
+};
+
+G_DEFINE_FINAL_TYPE (RugosaLinePanel, rugosa_line_panel, GTK_TYPE_WIDGET)
+
+enum {
+  EDIT_LINE,
+  N_SIGNALS
+};
+
+static guint signals[N_SIGNALS];
+
+/* The display unit of each edited quantity: a GSettings key, or a fixed
+ * spelling where the preferences offer no choice. */
+static const struct {
+  const char *property;
+  const char *settings_key;
+  const char *fixed_unit;
+} entry_units[] = {
+  { "temperature", "unit-temperature", NULL },
+  { "pressure", "unit-pressure", NULL },
+  { "salinity", NULL, "g/kg" },
+  { "density", "unit-density", NULL },
+  { "viscosity", "unit-viscosity", NULL },
+  { "oil-t1", "unit-temperature", NULL },
+  { "oil-nu1", NULL, "cSt" },
+  { "oil-t2", "unit-temperature", NULL },
+  { "oil-nu2", NULL, "cSt" },
+  { "oil-density-ref", "unit-density", NULL },
+  { "oil-t-ref", "unit-temperature", NULL },
+  { "roughness", "unit-roughness", NULL },
+  { "aging-rate", NULL, "mm/yr" },
+  { "inner-diameter", "unit-diameter", NULL },
+  { "length", "unit-length", NULL },
+  { "elevation", "unit-length", NULL },
+  { "flow-design", "unit-flow", NULL },
+  { "flow-minimum", "unit-flow", NULL },
+  { "flow-maximum", "unit-flow", NULL },
+};
+
+static const char *fluid_titles[RG_FLUID_N_KINDS] = {
+  [RG_FLUID_WATER] = N_("Water (IAPWS-IF97)"),
+  [RG_FLUID_CUSTOM] = N_("Given density and viscosity"),
+  [RG_FLUID_SEAWATER] = N_("Seawater (Sharqawy et al. 2010)"),
+  [RG_FLUID_OIL] = N_("Petroleum oil (ASTM D341)"),
+  [RG_FLUID_AIR] = N_("Air (ideal gas)"),
+};
+
+GtkWidget *
+rugosa_line_panel_new (void)
+{
+  return g_object_new (RUGOSA_TYPE_LINE_PANEL, NULL);
+}
+
+RugosaQuantityEntry *
+rugosa_line_panel_get_entry (RugosaLinePanel *self,
+                             const char      *property)
+{
+  g_return_val_if_fail (RUGOSA_IS_LINE_PANEL (self), NULL);
+  return g_hash_table_lookup (self->entries, property);
+}
+
+const char *
+rugosa_line_panel_get_fluid_readout (RugosaLinePanel *self)
+{
+  return adw_action_row_get_subtitle (self->fluid_props_row);
+}
+
+RugosaLine *
+rugosa_line_panel_get_line (RugosaLinePanel *self)
+{
+  return self->line;
+}
+
+static void
+_rugosa_line_panel_emit (RugosaLinePanel *self,
+                         const char      *property,
+                         GVariant        *value)
+{
+  g_autoptr (GVariant) v = g_variant_ref_sink (value);
+
+  if (self->updating || self->line == NULL)
+    return;
+  g_signal_emit (self, signals[EDIT_LINE], 0, self->line, property, v);
+}
+
+/* The model's value of a double property, in the entry's SI. */
+static double
+_rugosa_line_panel_si_of (RugosaLinePanel *self,
+                          const char      *property)
+{
+  double v = rugosa_line_get_double (self->line, property);
+
+  if (g_strcmp0 (property, "aging-rate") == 0)
+    v /= SECONDS_PER_YEAR;
+  return v;
+}
+
+static void
+_rugosa_line_panel_committed (RugosaQuantityEntry *entry,
+                              double               si,
+                              RugosaLinePanel     *self)
+{
+  const char *property = gtk_widget_get_name (GTK_WIDGET (entry));
+  double v = si;
+
+  if (g_strcmp0 (property, "aging-rate") == 0)
+    v *= SECONDS_PER_YEAR;
+  _rugosa_line_panel_emit (self, property, g_variant_new_double (v));
+}
+
+static void
+_rugosa_line_panel_expansion_changed (GtkSpinButton   *spin,
+                                      RugosaLinePanel *self)
+{
+  _rugosa_line_panel_emit (self, "oil-expansion",
+                           g_variant_new_double (gtk_spin_button_get_value (spin)));
+}
+
+static void
+_rugosa_line_panel_fluid_kind_changed (AdwComboRow     *row,
+                                       GParamSpec      *pspec,
+                                       RugosaLinePanel *self)
+{
+  guint kind = adw_combo_row_get_selected (row);
+
+  if (kind >= RG_FLUID_N_KINDS)
+    return;
+  _rugosa_line_panel_emit (self, "fluid-kind", g_variant_new_int32 (kind));
+}
+
+static void
+_rugosa_line_panel_name_commit (RugosaLinePanel *self)
+{
+  const char *text = gtk_editable_get_text (GTK_EDITABLE (self->name_entry));
+
+  if (self->line == NULL || g_strcmp0 (text, rugosa_line_get_name (self->line)) == 0)
+    return;
+  if (*text == '\0')
+    {
+      /* A line keeps a name: an emptied field returns to the old one. */
+      gtk_editable_set_text (GTK_EDITABLE (self->name_entry), rugosa_line_get_name (self->line));
+      return;
+    }
+  _rugosa_line_panel_emit (self, "name", g_variant_new_string (text));
+}
+
+static void
+_rugosa_line_panel_name_activate (GtkEntry        *entry,
+                                  RugosaLinePanel *self)
+{
+  _rugosa_line_panel_name_commit (self);
+}
+
+static void
+_rugosa_line_panel_name_leave (GtkEventControllerFocus *focus,
+                               RugosaLinePanel         *self)
+{
+  _rugosa_line_panel_name_commit (self);
+}
+
+static void
+_rugosa_line_panel_colour_set (GtkColorButton  *button,
+                               RugosaLinePanel *self)
+{
+  GdkRGBA rgba;
+  g_autofree char *hex = NULL;
+
+  gtk_color_chooser_get_rgba (GTK_COLOR_CHOOSER (button), &rgba);
+  hex = g_strdup_printf ("#%02x%02x%02x",
+                         (int) lround (rgba.red * 255), (int) lround (rgba.green * 255),
+                         (int) lround (rgba.blue * 255));
+  _rugosa_line_panel_emit (self, "colour", g_variant_new_string (hex));
+}
+
+/* Dropdown index 0 is "custom"; index i ≥ 1 is catalog entry i − 1. */
+static void
+_rugosa_line_panel_dropdown_changed (GtkDropDown     *dropdown,
+                                     GParamSpec      *pspec,
+                                     RugosaLinePanel *self)
+{
+  guint i = gtk_drop_down_get_selected (dropdown);
+  const char *id = NULL;
+  const char *property;
+
+  if (i == GTK_INVALID_LIST_POSITION || self->updating)
+    return;
+  if (dropdown == self->material_dropdown)
+    {
+      property = "material-id";
+      if (i > 0)
+        id = rg_material_at (i - 1)->id;
+    }
+  else if (dropdown == self->aging_dropdown)
+    {
+      property = "aging-class-id";
+      if (i > 0)
+        id = rg_aging_class_at (i - 1)->id;
+    }
+  else
+    {
+      property = "pipe-designation";
+      if (i > 0)
+        id = rg_pipe_at (i - 1)->designation;
+    }
+  _rugosa_line_panel_emit (self, property, g_variant_new_maybe (G_VARIANT_TYPE_STRING,
+                                                                id ? g_variant_new_string (id) : NULL));
+}
+
+static void
+_rugosa_line_panel_fitting_add (GtkButton       *button,
+                                RugosaLinePanel *self)
+{
+  guint i = gtk_drop_down_get_selected (self->fitting_add_dropdown);
+  GVariant *old;
+  GVariantBuilder b;
+  GVariantIter iter;
+  const char *id;
+  double k, count;
+
+  if (self->line == NULL || i == GTK_INVALID_LIST_POSITION)
+    return;
+  old = rugosa_line_get_fittings (self->line);
+  g_variant_builder_init (&b, G_VARIANT_TYPE (RUGOSA_LINE_FITTINGS_TYPE));
+  if (old != NULL)
+    {
+      g_variant_iter_init (&iter, old);
+      while (g_variant_iter_next (&iter, "(&sdd)", &id, &k, &count))
+        g_variant_builder_add (&b, "(sdd)", id, k, count);
+    }
+  /* Entry 0 of the list is a loss given by its K alone. */
+  if (i == 0)
+    g_variant_builder_add (&b, "(sdd)", "", 1.0, 1.0);
+  else
+    g_variant_builder_add (&b, "(sdd)", rg_fitting_at (i - 1)->id, 0.0, 1.0);
+  _rugosa_line_panel_emit (self, "fittings", g_variant_builder_end (&b));
+}
+
+/* Rebuild the fitting list with one entry changed (count or K), or
+ * removed when `remove` is set. */
+static void
+_rugosa_line_panel_fitting_edit (RugosaLinePanel *self,
+                                 guint            index,
+                                 gboolean         remove,
+                                 double           new_count,
+                                 double           new_k)
+{
+  GVariant *old = rugosa_line_get_fittings (self->line);
+  GVariantBuilder b;
+  GVariantIter iter;
+  const char *id;
+  double k, count;
+  guint j = 0;
+
+  g_variant_builder_init (&b, G_VARIANT_TYPE (RUGOSA_LINE_FITTINGS_TYPE));
+  g_variant_iter_init (&iter, old);
+  while (g_variant_iter_next (&iter, "(&sdd)", &id, &k, &count))
+    {
+      if (j == index)
+        {
+          if (!remove)
+            g_variant_builder_add (&b, "(sdd)", id, new_k >= 0 ? new_k : k,
+                                   new_count >= 0 ? new_count : count);
+        }
+      else
+        g_variant_builder_add (&b, "(sdd)", id, k, count);
+      j++;
+    }
+  _rugosa_line_panel_emit (self, "fittings", g_variant_builder_end (&b));
+}
+
+static void
+_rugosa_line_panel_fitting_count (GtkSpinButton   *spin,
+                                  RugosaLinePanel *self)
+{
+  guint index = GPOINTER_TO_UINT (g_object_get_data (G_OBJECT (spin), "index"));
+  _rugosa_line_panel_fitting_edit (self, index, FALSE, gtk_spin_button_get_value (spin), -1);
+}
+
+static void
+_rugosa_line_panel_fitting_k (GtkSpinButton   *spin,
+                              RugosaLinePanel *self)
+{
+  guint index = GPOINTER_TO_UINT (g_object_get_data (G_OBJECT (spin), "index"));
+  _rugosa_line_panel_fitting_edit (self, index, FALSE, -1, gtk_spin_button_get_value (spin));
+}
+
+static void
+_rugosa_line_panel_fitting_remove (GtkButton       *button,
+                                   RugosaLinePanel *self)
+{
+  guint index = GPOINTER_TO_UINT (g_object_get_data (G_OBJECT (button), "index"));
+  _rugosa_line_panel_fitting_edit (self, index, TRUE, -1, -1);
+}
+
+static void
+_rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
+{
+  GVariant *fittings;
+  GVariantIter iter;
+  const char *id;
+  double k, count, total = 0;
+  guint index = 0;
+
+  for (guint i = 0; i < self->fitting_rows->len; i++)
+    adw_expander_row_remove (self->fittings_row, g_ptr_array_index (self->fitting_rows, i));
+  g_ptr_array_set_size (self->fitting_rows, 0);
+
+  fittings = self->line ? rugosa_line_get_fittings (self->line) : NULL;
+  if (fittings == NULL)
+    {
+      adw_expander_row_set_subtitle (self->fittings_row, _("None"));
+      return;
+    }
+
+  g_variant_iter_init (&iter, fittings);
+  while (g_variant_iter_next (&iter, "(&sdd)", &id, &k, &count))
+    {
+      GtkWidget *row = adw_action_row_new ();
+      GtkWidget *spin = gtk_spin_button_new_with_range (0, 999, 1);
+      GtkWidget *remove = gtk_button_new_from_icon_name ("user-trash-symbolic");
+      const RgFitting *fitting = NULL;
+
+      if (*id != '\0' && rg_fitting_lookup (id, &fitting, NULL) == RG_OK)
+        adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), fitting->name);
+      else
+        {
+          GtkWidget *kspin = gtk_spin_button_new_with_range (0, 1000, 0.05);
+
+          adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), _("Other loss, K each"));
+          gtk_spin_button_set_digits (GTK_SPIN_BUTTON (kspin), 2);
+          gtk_spin_button_set_value (GTK_SPIN_BUTTON (kspin), k);
+          gtk_widget_set_valign (kspin, GTK_ALIGN_CENTER);
+          gtk_widget_set_tooltip_text (kspin, _("Loss coefficient K of one such loss"));
+          g_object_set_data (G_OBJECT (kspin), "index", GUINT_TO_POINTER (index));
+          g_signal_connect (kspin, "value-changed", G_CALLBACK (_rugosa_line_panel_fitting_k), self);
+          adw_action_row_add_suffix (ADW_ACTION_ROW (row), kspin);
+        }
+      gtk_spin_button_set_value (GTK_SPIN_BUTTON (spin), count);
+      gtk_widget_set_valign (spin, GTK_ALIGN_CENTER);
+      gtk_widget_set_tooltip_text (spin, _("How many"));
+      g_object_set_data (G_OBJECT (spin), "index", GUINT_TO_POINTER (index));
+      g_signal_connect (spin, "value-changed", G_CALLBACK (_rugosa_line_panel_fitting_count), self);
+      adw_action_row_add_suffix (ADW_ACTION_ROW (row), spin);
+
+      gtk_widget_set_valign (remove, GTK_ALIGN_CENTER);
+      gtk_widget_add_css_class (remove, "flat");
+      gtk_widget_set_tooltip_text (remove, _("Remove from the line"));
+      g_object_set_data (G_OBJECT (remove), "index", GUINT_TO_POINTER (index));
+      g_signal_connect (remove, "clicked", G_CALLBACK (_rugosa_line_panel_fitting_remove), self);
+      adw_action_row_add_suffix (ADW_ACTION_ROW (row), remove);
+
+      adw_expander_row_add_row (self->fittings_row, row);
+      g_ptr_array_add (self->fitting_rows, row);
+      total += count;
+      index++;
+    }
+
+  {
+    const RugosaLineResults *res = rugosa_readout_results (self->project, self->line);
+    g_autofree char *sub = NULL;
+
+    if (res && res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
+      {
+        g_autofree char *ksum = rugosa_display_significant (res->points[RUGOSA_FLOW_DESIGN].minor_loss_k_total, 3);
+        sub = g_strdup_printf (ngettext ("%d item, ΣK %s at the design flow",
+                                         "%d items, ΣK %s at the design flow", (int) total),
+                               (int) total, ksum);
+      }
+    else
+      sub = g_strdup_printf (ngettext ("%d item", "%d items", (int) total), (int) total);
+    adw_expander_row_set_subtitle (self->fittings_row, index ? sub : _("None"));
+  }
+}
+
+static void
+_rugosa_line_panel_update_units (RugosaLinePanel *self)
+{
+  for (guint i = 0; i < G_N_ELEMENTS (entry_units); i++)
+    {
+      RugosaQuantityEntry *e = g_hash_table_lookup (self->entries, entry_units[i].property);
+      g_autofree char *unit = NULL;
+
+      if (e == NULL)
+        continue;
+      if (entry_units[i].settings_key && self->settings)
+        unit = g_settings_get_string (self->settings, entry_units[i].settings_key);
+      rugosa_quantity_entry_set_unit (e, unit ? unit : entry_units[i].fixed_unit);
+    }
+}
+
+static void
+_rugosa_line_panel_settings_changed (GSettings       *settings,
+                                     const char      *key,
+                                     RugosaLinePanel *self)
+{
+  if (g_str_has_prefix (key, "unit-"))
+    {
+      _rugosa_line_panel_update_units (self);
+      rugosa_line_panel_refresh (self);
+    }
+}
+
+void
+rugosa_line_panel_set_context (RugosaLinePanel *self,
+                               RugosaProject   *project,
+                               GSettings       *settings)
+{
+  g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
+
+  if (self->settings)
+    g_signal_handlers_disconnect_by_data (self->settings, self);
+  self->project = project;
+  self->settings = settings;
+  if (settings)
+    g_signal_connect_object (settings, "changed", G_CALLBACK (_rugosa_line_panel_settings_changed), self, 0);
+  _rugosa_line_panel_update_units (self);
+}
+
+/* Catalog references are looked up the way the model looks them up
+ * (tolerant of spelling), then found in the list by identity. */
+static void
+_rugosa_line_panel_select (GtkDropDown *dropdown,
+                           const void  *entry,
+                           int          n,
+                           const void *(*at) (int))
+{
+  guint sel = 0;
+
+  if (entry != NULL)
+    for (int i = 0; i < n; i++)
+      if (at (i) == entry)
+        {
+          sel = i + 1;
+          break;
+        }
+  gtk_drop_down_set_selected (dropdown, sel);
+}
+
+static const void *_material_at (int i) { return rg_material_at (i); }
+static const void *_aging_at (int i) { return rg_aging_class_at (i); }
+static const void *_pipe_at (int i) { return rg_pipe_at (i); }
+
+static void
+_rugosa_line_panel_select_catalogs (RugosaLinePanel *self)
+{
+  const RgMaterial *material = NULL;
+  const RgAgingClass *aging = NULL;
+  const RgPipe *pipe = NULL;
+  const char *id;
+
+  if ((id = rugosa_line_get_material_id (self->line)) != NULL)
+    rg_material_lookup (id, &material, NULL);
+  if ((id = rugosa_line_get_aging_class_id (self->line)) != NULL)
+    rg_aging_class_lookup (id, &aging, NULL);
+  if ((id = rugosa_line_get_pipe_designation (self->line)) != NULL)
+    rg_pipe_lookup (id, &pipe, NULL);
+  _rugosa_line_panel_select (self->material_dropdown, material, rg_material_count (), _material_at);
+  _rugosa_line_panel_select (self->aging_dropdown, aging, rg_aging_class_count (), _aging_at);
+  _rugosa_line_panel_select (self->pipe_dropdown, pipe, rg_pipe_count (), _pipe_at);
+}
+
+void
+rugosa_line_panel_refresh (RugosaLinePanel *self)
+{
+  const RugosaLineResults *res;
+  int kind;
+  GHashTableIter iter;
+  const char *property;
+  RugosaQuantityEntry *entry;
+  g_autofree char *warnings = NULL;
+
+  g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
+
+  gtk_widget_set_sensitive (GTK_WIDGET (self), self->line != NULL);
+  if (self->line == NULL || self->project == NULL)
+    return;
+
+  self->updating = TRUE;
+
+  if (!gtk_widget_has_focus (GTK_WIDGET (self->name_entry))
+      || g_strcmp0 (gtk_editable_get_text (GTK_EDITABLE (self->name_entry)), rugosa_line_get_name (self->line)) != 0)
+    gtk_editable_set_text (GTK_EDITABLE (self->name_entry), rugosa_line_get_name (self->line));
+  {
+    GdkRGBA rgba;
+    if (gdk_rgba_parse (&rgba, rugosa_line_get_colour (self->line)))
+      gtk_color_chooser_set_rgba (GTK_COLOR_CHOOSER (self->colour_button), &rgba);
+  }
+
+  kind = rugosa_line_get_fluid_kind (self->line);
+  adw_combo_row_set_selected (self->fluid_kind_row, kind);
+  gtk_widget_set_visible (GTK_WIDGET (self->temperature_row), kind != RG_FLUID_CUSTOM);
+  gtk_widget_set_visible (GTK_WIDGET (self->pressure_row), kind != RG_FLUID_CUSTOM);
+  gtk_widget_set_visible (GTK_WIDGET (self->salinity_row), kind == RG_FLUID_SEAWATER);
+  gtk_widget_set_visible (GTK_WIDGET (self->density_row), kind == RG_FLUID_CUSTOM);
+  gtk_widget_set_visible (GTK_WIDGET (self->viscosity_row), kind == RG_FLUID_CUSTOM);
+  gtk_widget_set_visible (GTK_WIDGET (self->oil_t1_row), kind == RG_FLUID_OIL);
+  gtk_widget_set_visible (GTK_WIDGET (self->oil_nu1_row), kind == RG_FLUID_OIL);
+  gtk_widget_set_visible (GTK_WIDGET (self->oil_t2_row), kind == RG_FLUID_OIL);
+  gtk_widget_set_visible (GTK_WIDGET (self->oil_nu2_row), kind == RG_FLUID_OIL);
+  gtk_widget_set_visible (GTK_WIDGET (self->oil_density_ref_row), kind == RG_FLUID_OIL);
+  gtk_widget_set_visible (GTK_WIDGET (self->oil_t_ref_row), kind == RG_FLUID_OIL);
+  gtk_widget_set_visible (GTK_WIDGET (self->oil_expansion_row), kind == RG_FLUID_OIL);
+  gtk_spin_button_set_value (self->oil_expansion_spin, rugosa_line_get_double (self->line, "oil-expansion"));
+
+  _rugosa_line_panel_select_catalogs (self);
+
+  res = rugosa_readout_results (self->project, self->line);
+
+  /* Entries show the line's own values; where a catalog entry decides a
+   * value, the entry shows that value and is read-only. */
+  g_hash_table_iter_init (&iter, self->entries);
+  while (g_hash_table_iter_next (&iter, (gpointer *) &property, (gpointer *) &entry))
+    {
+      double v = _rugosa_line_panel_si_of (self, property);
+      gboolean from_catalog = FALSE;
+
+      if (res != NULL)
+        {
+          if (g_strcmp0 (property, "roughness") == 0 && rugosa_line_get_material_id (self->line))
+            from_catalog = TRUE, v = res->roughness_new_m;
+          else if (g_strcmp0 (property, "aging-rate") == 0 && rugosa_line_get_aging_class_id (self->line))
+            from_catalog = TRUE, v = res->aging_rate_m_per_year / SECONDS_PER_YEAR;
+          else if (g_strcmp0 (property, "inner-diameter") == 0 && rugosa_line_get_pipe_designation (self->line))
+            from_catalog = TRUE, v = res->inner_diameter_m;
+        }
+      /* A field showing an error keeps the user's text until it is fixed. */
+      if (rugosa_quantity_entry_get_error_text (entry) == NULL
+          || rugosa_quantity_entry_get_value (entry) != v)
+        {
+          if (rugosa_quantity_entry_get_error_text (entry) == NULL)
+            rugosa_quantity_entry_set_value (entry, v);
+        }
+      gtk_editable_set_editable (rugosa_quantity_entry_get_editable (entry), !from_catalog);
+      gtk_widget_set_can_focus (GTK_WIDGET (entry), !from_catalog);
+    }
+
+  if (res != NULL && res->ok)
+    {
+      g_autofree char *ud = self->settings ? g_settings_get_string (self->settings, "unit-density") : NULL;
+      g_autofree char *uv = self->settings ? g_settings_get_string (self->settings, "unit-viscosity") : NULL;
+      g_autofree char *rho = rugosa_display_format (RG_QTY_DENSITY, res->density_kg_m3, ud);
+      g_autofree char *mu = rugosa_display_format (RG_QTY_DYN_VISCOSITY, res->dynamic_viscosity_pa_s, uv);
+      g_autofree char *text = g_strdup_printf (_("ρ = %s · μ = %s"), rho, mu);
+
+      adw_action_row_set_subtitle (self->fluid_props_row, text);
+    }
+  else
+    adw_action_row_set_subtitle (self->fluid_props_row, res ? res->error : "");
+
+  _rugosa_line_panel_fill_fittings (self);
+
+  warnings = rugosa_readout_warnings (self->project, self->line);
+  gtk_widget_set_visible (GTK_WIDGET (self->warnings_box), warnings != NULL);
+  gtk_label_set_text (self->warnings_label, warnings ? warnings : "");
+
+  self->updating = FALSE;
+}
+
+void
+rugosa_line_panel_set_line (RugosaLinePanel *self,
+                            RugosaLine      *line)
+{
+  GHashTableIter iter;
+  gpointer entry;
+
+  g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
+
+  if (self->line != line)
+    {
+      /* Errors belong to the line being edited. */
+      g_hash_table_iter_init (&iter, self->entries);
+      while (g_hash_table_iter_next (&iter, NULL, &entry))
+        rugosa_quantity_entry_set_error (entry, NULL);
+    }
+  g_set_object (&self->line, line);
+  rugosa_line_panel_refresh (self);
+}
+
+static void
+_rugosa_line_panel_entry_error (RugosaQuantityEntry *entry,
+                                GParamSpec          *pspec,
+                                AdwActionRow        *row)
+{
+  const char *error = rugosa_quantity_entry_get_error_text (entry);
+  const char *plain = g_object_get_data (G_OBJECT (row), "plain-subtitle");
+
+  /* The explanation sits under the field's title while it is wrong. */
+  adw_action_row_set_subtitle (row, error ? error : plain ? plain : "");
+  if (error)
+    gtk_widget_add_css_class (GTK_WIDGET (row), "field-error");
+  else
+    gtk_widget_remove_css_class (GTK_WIDGET (row), "field-error");
+}
+
+static void
+_rugosa_line_panel_collect_entries (RugosaLinePanel *self,
+                                    GtkWidget       *widget)
+{
+  for (GtkWidget *child = gtk_widget_get_first_child (widget); child; child = gtk_widget_get_next_sibling (child))
+    {
+      if (RUGOSA_IS_QUANTITY_ENTRY (child))
+        {
+          GtkWidget *row = gtk_widget_get_ancestor (child, ADW_TYPE_ACTION_ROW);
+
+          g_hash_table_insert (self->entries, (gpointer) gtk_widget_get_name (child), child);
+          if (row)
+            {
+              g_object_set_data_full (G_OBJECT (row), "plain-subtitle",
+                                      g_strdup (adw_action_row_get_subtitle (ADW_ACTION_ROW (row))), g_free);
+              g_signal_connect_object (child, "notify::error-text",
+                                       G_CALLBACK (_rugosa_line_panel_entry_error), row, 0);
+            }
+          continue;
+        }
+      _rugosa_line_panel_collect_entries (self, child);
+    }
+}
+
+static void
+_rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
+{
+  g_autoptr (GtkStringList) kinds = gtk_string_list_new (NULL);
+  g_autoptr (GtkStringList) materials = gtk_string_list_new (NULL);
+  g_autoptr (GtkStringList) agings = gtk_string_list_new (NULL);
+  g_autoptr (GtkStringList) pipes = gtk_string_list_new (NULL);
+  g_autoptr (GtkStringList) fittings = gtk_string_list_new (NULL);
+  GtkExpression *expr;
+
+  for (int i = 0; i < RG_FLUID_N_KINDS; i++)
+    gtk_string_list_append (kinds, _(fluid_titles[i]));
+  adw_combo_row_set_model (self->fluid_kind_row, G_LIST_MODEL (kinds));
+
+  gtk_string_list_append (materials, _("Custom roughness"));
+  for (int i = 0; i < rg_material_count (); i++)
+    gtk_string_list_append (materials, rg_material_at (i)->name);
+  gtk_string_list_append (agings, _("Custom growth rate"));
+  for (int i = 0; i < rg_aging_class_count (); i++)
+    gtk_string_list_append (agings, rg_aging_class_at (i)->name);
+  gtk_string_list_append (pipes, _("Custom bore"));
+  for (int i = 0; i < rg_pipe_count (); i++)
+    {
+      const RgPipe *p = rg_pipe_at (i);
+      g_autofree char *title = g_strdup_printf ("%s (%s)", p->designation, p->standard);
+      gtk_string_list_append (pipes, title);
+    }
+  gtk_string_list_append (fittings, _("Other loss, K given"));
+  for (int i = 0; i < rg_fitting_count (); i++)
+    gtk_string_list_append (fittings, rg_fitting_at (i)->name);
+
+  gtk_drop_down_set_model (self->material_dropdown, G_LIST_MODEL (materials));
+  gtk_drop_down_set_model (self->aging_dropdown, G_LIST_MODEL (agings));
+  gtk_drop_down_set_model (self->pipe_dropdown, G_LIST_MODEL (pipes));
+  gtk_drop_down_set_model (self->fitting_add_dropdown, G_LIST_MODEL (fittings));
+
+  /* Searchable lists match on the shown text. */
+  expr = gtk_property_expression_new (GTK_TYPE_STRING_OBJECT, NULL, "string");
+  gtk_drop_down_set_expression (self->material_dropdown, expr);
+  gtk_drop_down_set_expression (self->pipe_dropdown, expr);
+  gtk_drop_down_set_expression (self->fitting_add_dropdown, expr);
+  gtk_expression_unref (expr);
+}
+
+static void
+rugosa_line_panel_dispose (GObject *object)
+{
+  RugosaLinePanel *self = RUGOSA_LINE_PANEL (object);
+
+  if (self->settings)
+    g_signal_handlers_disconnect_by_data (self->settings, self);
+  self->settings = NULL;
+  g_clear_object (&self->line);
+  g_clear_pointer (&self->entries, g_hash_table_unref);
+  g_clear_pointer (&self->fitting_rows, g_ptr_array_unref);
+  gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_LINE_PANEL);
+  G_OBJECT_CLASS (rugosa_line_panel_parent_class)->dispose (object);
+}
+
+static void
+rugosa_line_panel_class_init (RugosaLinePanelClass *klass)
+{
+  GObjectClass *object_class = G_OBJECT_CLASS (klass);
+  GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
+
+  object_class->dispose = rugosa_line_panel_dispose;
+
+  signals[EDIT_LINE] =
+    g_signal_new ("edit-line", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST,
+                  0, NULL, NULL, NULL, G_TYPE_NONE, 3,
+                  RUGOSA_TYPE_LINE, G_TYPE_STRING, G_TYPE_VARIANT);
+
+  g_type_ensure (RUGOSA_TYPE_QUANTITY_ENTRY);
+  gtk_widget_class_set_template_from_resource (widget_class, "/org/rugosa/Rugosa/rugosa-line-panel.ui");
+#define BIND(name) gtk_widget_class_bind_template_child (widget_class, RugosaLinePanel, name)
+  BIND (colour_button);
+  BIND (name_entry);
+  BIND (warnings_box);
+  BIND (warnings_label);
+  BIND (fluid_kind_row);
+  BIND (salinity_row);
+  BIND (temperature_row);
+  BIND (pressure_row);
+  BIND (density_row);
+  BIND (viscosity_row);
+  BIND (oil_t1_row);
+  BIND (oil_nu1_row);
+  BIND (oil_t2_row);
+  BIND (oil_nu2_row);
+  BIND (oil_density_ref_row);
+  BIND (oil_t_ref_row);
+  BIND (oil_expansion_row);
+  BIND (oil_expansion_spin);
+  BIND (fluid_props_row);
+  BIND (material_dropdown);
+  BIND (aging_dropdown);
+  BIND (pipe_dropdown);
+  BIND (roughness_row);
+  BIND (aging_rate_row);
+  BIND (inner_diameter_row);
+  BIND (fittings_row);
+  BIND (fitting_add_dropdown);
+#undef BIND
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_committed);
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_expansion_changed);
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_fluid_kind_changed);
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_name_activate);
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_name_leave);
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_colour_set);
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_dropdown_changed);
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_fitting_add);
+
+  gtk_widget_class_set_layout_manager_type (widget_class, GTK_TYPE_BOX_LAYOUT);
+  gtk_widget_class_set_css_name (widget_class, "linepanel");
+}
+
+static void
+rugosa_line_panel_init (RugosaLinePanel *self)
+{
+  GtkLayoutManager *layout;
+
+  self->entries = g_hash_table_new (g_str_hash, g_str_equal);
+  self->fitting_rows = g_ptr_array_new ();
+  self->updating = TRUE;
+  gtk_widget_init_template (GTK_WIDGET (self));
+  layout = gtk_widget_get_layout_manager (GTK_WIDGET (self));
+  gtk_orientable_set_orientation (GTK_ORIENTABLE (layout), GTK_ORIENTATION_VERTICAL);
+  gtk_box_layout_set_spacing (GTK_BOX_LAYOUT (layout), 18);
+  _rugosa_line_panel_fill_catalogs (self);
+  _rugosa_line_panel_collect_entries (self, GTK_WIDGET (self));
+  self->updating = FALSE;
+  gtk_widget_set_sensitive (GTK_WIDGET (self), FALSE);
+}

@@ -1,0 +1,36 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#pragma once
+
+#include <adwaita.h>
+
+#include "model/rugosa-project.h"
+#include "rugosa-quantity-entry.h"
+
+G_BEGIN_DECLS
+
+#define RUGOSA_TYPE_LINE_PANEL (rugosa_line_panel_get_type ())
+G_DECLARE_FINAL_TYPE (RugosaLinePanel, rugosa_line_panel, RUGOSA, LINE_PANEL, GtkWidget)
+
+/* The side panel editing one line option: fluid, pipe wall, bore and run,
+ * fittings and flows.  It never changes the line itself: every edit is
+ * emitted as `edit-line` (line, property name, value as a GVariant — "d"
+ * for numbers, "i" for the fluid kind, "ms" for catalog ids where nothing
+ * means custom, "s" for name and colour, "a(sdd)" for fittings) so the
+ * window can route it through the undo history. */
+
+GtkWidget  *rugosa_line_panel_new          (void);
+void        rugosa_line_panel_set_context  (RugosaLinePanel *self,
+                                            RugosaProject   *project,
+                                            GSettings       *settings);
+void        rugosa_line_panel_set_line     (RugosaLinePanel *self,
+                                            RugosaLine      *line);
+RugosaLine *rugosa_line_panel_get_line     (RugosaLinePanel *self);
+/* Re-read the line and its results (after any change). */
+void        rugosa_line_panel_refresh      (RugosaLinePanel *self);
+/* The quantity entry editing a double property ("temperature", …). */
+RugosaQuantityEntry *rugosa_line_panel_get_entry (RugosaLinePanel *self,
+                                                  const char      *property);
+/* The density · viscosity readout text (tests). */
+const char *rugosa_line_panel_get_fluid_readout (RugosaLinePanel *self);
+
+G_END_DECLS

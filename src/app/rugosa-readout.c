@@ -1,0 +1,168 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#define G_LOG_DOMAIN "rugosa-readout"
+
+#include "config.h"
+
+#include <glib/gi18n.h>
+#include <math.h>
+
+#include "rugosa-display.h"
+#include "rugosa-readout.h"
+
+const RugosaLineResults *
+rugosa_readout_results (RugosaProject *project,
+                        RugosaLine    *line)
+{
+  if (project == NULL || line == NULL || rugosa_project_find_line (project, line) < 0)
+    return NULL;
+  return rugosa_project_get_results (project, line);
+}
+
+const char *
+rugosa_readout_regime (RgRegime regime)
+{
+  switch (regime)
+    {
+    case RG_REGIME_LAMINAR: return _("laminar");
+    case RG_REGIME_TRANSITIONAL: return _("transitional");
+    case RG_REGIME_TURBULENT: return _("turbulent");
+    default: return "—";
+    }
+}
+
+const char *
+rugosa_readout_zone (RgRoughnessZone zone)
+{
+  switch (zone)
+    {
+    case RG_ZONE_SMOOTH: return _("smooth");
+    case RG_ZONE_TRANSITIONALLY_ROUGH: return _("transitionally rough");
+    case RG_ZONE_FULLY_ROUGH: return _("fully rough");
+    case RG_ZONE_NONE:
+    default: return "—";
+    }
+}
+
+char *
+rugosa_readout_change (double ratio_to_new)
+{
+  char buf[G_ASCII_DTOSTR_BUF_SIZE];
+
+  if (!isfinite (ratio_to_new) || ratio_to_new <= 0.0)
+    return g_strdup ("—");
+  g_ascii_formatd (buf, sizeof buf, "%+.1f", (ratio_to_new - 1.0) * 100.0);
+  return g_strdup_printf ("%s %%", buf);
+}
+
+static char *
+_unit (GSettings *s, const char *key)
+{
+  return s ? g_settings_get_string (s, key) : NULL;
+}
+
+char *
+rugosa_readout_line_full (RugosaProject *project,
+                          RugosaLine    *line,
+                          GSettings     *settings)
+{
+  const RugosaLineResults *res = rugosa_readout_results (project, line);
+  const RugosaOperatingPoint *p;
+  GString *s = g_string_new (NULL);
+  g_autofree char *uf = _unit (settings, "unit-flow");
+  g_autofree char *uv = _unit (settings, "unit-velocity");
+  g_autofree char *uh = _unit (settings, "unit-head");
+  g_autofree char *up = _unit (settings, "unit-pressure");
+  g_autofree char *flow = NULL, *vel = NULL, *head = NULL, *newhead = NULL;
+  g_autofree char *dp = NULL, *grad = NULL, *re = NULL, *f = NULL, *change = NULL;
+  g_autofree char *rr = NULL, *age = NULL;
+
+  g_string_append_printf (s, "%s\n", rugosa_line_get_name (line));
+  if (res == NULL || !res->ok)
+    {
+      g_string_append (s, res ? res->error : _("Not evaluated."));
+      return g_string_free (s, FALSE);
+    }
+  p = &res->points[RUGOSA_FLOW_DESIGN];
+  if (!p->present || !p->ok)
+    {
+      g_string_append (s, p->present ? p->error : _("No design flow."));
+      return g_string_free (s, FALSE);
+    }
+
+  flow = rugosa_display_format (RG_QTY_FLOW, p->flow_m3_s, uf);
+  vel = rugosa_display_format (RG_QTY_VELOCITY, p->result.velocity_m_s, uv);
+  head = rugosa_display_format (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
+  newhead = rugosa_display_format (RG_QTY_LENGTH, p->result_new.head_loss_total_m, uh);
+  dp = rugosa_display_format (RG_QTY_PRESSURE, p->result.pressure_drop_pa, up);
+  grad = rugosa_display_significant (p->result.gradient_m_per_100m, 3);
+  re = rugosa_display_significant (p->result.reynolds, 4);
+  f = rugosa_display_significant (p->result.friction.f, 4);
+  rr = rugosa_display_significant (p->result.relative_roughness, 3);
+  change = rugosa_readout_change (p->head_loss_ratio_to_new);
+
+  age = rugosa_display_significant (res->age_years, 3);
+  g_string_append_printf (s, _("Design flow %s after %s years of service\n"), flow, age);
+  g_string_append_printf (s, _("Velocity %s\n"), vel);
+  g_string_append_printf (s, _("Reynolds number %s, ε/D %s\n"), re, rr);
+  g_string_append_printf (s, _("Friction factor f %s (%s, %s)\n"), f,
+                          rugosa_readout_regime (p->result.friction.regime),
+                          rugosa_readout_zone (p->result.friction.zone));
+  g_string_append_printf (s, _("Head loss %s (new: %s, change %s)\n"), head, newhead, change);
+  /* A ratio: head lost per 100 of the same length unit. */
+  g_string_append_printf (s, _("Gradient %s %s per 100 %s\n"), grad,
+                          rugosa_display_unit_symbol (uh ? uh : "m"), rugosa_display_unit_symbol (uh ? uh : "m"));
+  g_string_append_printf (s, _("Pressure drop %s"), dp);
+  if (p->warnings.count > 0)
+    for (int i = 0; i < p->warnings.count; i++)
+      g_string_append_printf (s, "\n⚠ %s", p->warnings.text[i]);
+  return g_string_free (s, FALSE);
+}
+
+char *
+rugosa_readout_warnings (RugosaProject *project,
+                         RugosaLine    *line)
+{
+  const RugosaLineResults *res = rugosa_readout_results (project, line);
+  GString *s;
+  g_autoptr (GPtrArray) seen = g_ptr_array_new ();
+
+  if (res == NULL)
+    return NULL;
+  s = g_string_new (NULL);
+  if (!res->ok)
+    g_string_append (s, res->error);
+  for (int k = 0; k < RUGOSA_N_FLOWS; k++)
+    {
+      const RugosaOperatingPoint *p = &res->points[k];
+
+      if (!p->present)
+        continue;
+      if (!p->ok)
+        {
+          if (s->len)
+            g_string_append_c (s, '\n');
+          g_string_append (s, p->error);
+          continue;
+        }
+      for (int i = 0; i < p->warnings.count; i++)
+        {
+          gboolean dup = FALSE;
+
+          /* The same remark at two flows is shown once. */
+          for (guint j = 0; j < seen->len; j++)
+            dup |= g_strcmp0 (g_ptr_array_index (seen, j), p->warnings.text[i]) == 0;
+          if (dup)
+            continue;
+          g_ptr_array_add (seen, (gpointer) p->warnings.text[i]);
+          if (s->len)
+            g_string_append_c (s, '\n');
+          g_string_append (s, p->warnings.text[i]);
+        }
+    }
+  if (s->len == 0)
+    {
+      g_string_free (s, TRUE);
+      return NULL;
+    }
+  return g_string_free (s, FALSE);
+}

@@ -1,0 +1,32 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Human-readable readouts of model results in the display units. */
+#pragma once
+
+#include <gio/gio.h>
+
+#include "model/rugosa-project.h"
+
+G_BEGIN_DECLS
+
+/* Several lines of text: the full readout of the design point of `line`
+ * at the settings' service age (used by the chart tooltip). */
+char *rugosa_readout_line_full   (RugosaProject *project,
+                                  RugosaLine    *line,
+                                  GSettings     *settings);
+/* The model's results of `line`, or NULL when the line is no longer part
+ * of the project (a row or panel may still hold it while a load or an
+ * undo replaces the lines). */
+const RugosaLineResults *rugosa_readout_results (RugosaProject *project,
+                                                 RugosaLine    *line);
+/* "laminar", "transitional", "turbulent" for people. */
+const char *rugosa_readout_regime (RgRegime regime);
+/* "smooth", "transitionally rough", "fully rough", "—". */
+const char *rugosa_readout_zone   (RgRoughnessZone zone);
+/* Every warning of the line (fluid, velocity, gradient, ranges) as one text
+ * with one warning a line; NULL when there is none. */
+char *rugosa_readout_warnings    (RugosaProject *project,
+                                  RugosaLine    *line);
+/* "+12.3 %" change of the total head loss since new. */
+char *rugosa_readout_change      (double ratio_to_new);
+
+G_END_DECLS

@@ -1,0 +1,227 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#define G_LOG_DOMAIN "rugosa-window"
+
+#include "config.h"
+
+#include <glib/gi18n.h>
+
+#include "rugosa-chart-input.h"
+#include "rugosa-window-private.h"
+
+/* Sizes offered for an exported chart, logical pixels (PNG pixels; SVG and
+ * PDF points). */
+static const struct { const char *id; const char *label; double w, h; } export_sizes[] = {
+  { "960x600", N_("960 × 600 (slides)"), 960, 600 },
+  { "1280x800", N_("1280 × 800"), 1280, 800 },
+  { "1920x1200", N_("1920 × 1200 (large screen)"), 1920, 1200 },
+  { "842x595", N_("842 × 595 (A4 landscape, points)"), 842, 595 },
+  { "792x612", N_("792 × 612 (US Letter landscape, points)"), 792, 612 },
+};
+
+static char *
+_rugosa_window_today (void)
+{
+  g_autoptr (GDateTime) now = g_date_time_new_now_local ();
+  return g_date_time_format (now, "%Y-%m-%d");
+}
+
+static void
+_rugosa_window_export_response (GtkNativeDialog *dialog,
+                                int              response,
+                                RugosaWindow    *self)
+{
+  g_autoptr (GFile) file = NULL;
+  g_autofree char *path = NULL;
+  g_autofree char *date = NULL;
+  g_autoptr (GError) error = NULL;
+  g_autoptr (RugosaChartInput) input = NULL;
+  const char *size_id, *format_id;
+  RugosaChartFormat format = RUGOSA_CHART_FORMAT_PNG;
+  double w = 960, h = 600;
+  guint pos;
+
+  if (response != GTK_RESPONSE_ACCEPT)
+    {
+      g_object_unref (dialog);
+      return;
+    }
+  file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
+  path = g_file_get_path (file);
+  size_id = gtk_file_chooser_get_choice (GTK_FILE_CHOOSER (dialog), "size");
+  format_id = gtk_file_chooser_get_choice (GTK_FILE_CHOOSER (dialog), "format");
+  for (guint i = 0; i < G_N_ELEMENTS (export_sizes); i++)
+    if (g_strcmp0 (size_id, export_sizes[i].id) == 0)
+      w = export_sizes[i].w, h = export_sizes[i].h;
+
+  /* The file name's extension wins over the format choice. */
+  if (g_str_has_suffix (path, ".svg"))
+    format = RUGOSA_CHART_FORMAT_SVG;
+  else if (g_str_has_suffix (path, ".pdf"))
+    format = RUGOSA_CHART_FORMAT_PDF;
+  else if (g_str_has_suffix (path, ".png"))
+    format = RUGOSA_CHART_FORMAT_PNG;
+  else
+    {
+      const char *ext = ".png";
+      char *with;
+
+      if (g_strcmp0 (format_id, "svg") == 0)
+        format = RUGOSA_CHART_FORMAT_SVG, ext = ".svg";
+      else if (g_strcmp0 (format_id, "pdf") == 0)
+        format = RUGOSA_CHART_FORMAT_PDF, ext = ".pdf";
+      with = g_strconcat (path, ext, NULL);
+      g_free (path);
+      path = with;
+    }
+
+  pos = gtk_single_selection_get_selected (self->selection);
+  input = rugosa_chart_input_new (self->project, self->settings,
+                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos);
+  date = _rugosa_window_today ();
+  if (!rugosa_chart_export (&input->spec, input->lines, input->n_lines, format, w, h, date, path, &error))
+    {
+      GtkWidget *msg = adw_message_dialog_new (GTK_WINDOW (self), _("Could not export the chart"), error->message);
+      adw_message_dialog_add_response (ADW_MESSAGE_DIALOG (msg), "close", _("_Close"));
+      gtk_window_present (GTK_WINDOW (msg));
+    }
+  else
+    {
+      g_autofree char *base = g_path_get_basename (path);
+      g_autofree char *text = g_strdup_printf (_("Chart exported to %s."), base);
+      _rugosa_window_toast (self, text);
+    }
+  g_object_unref (dialog);
+}
+
+static void
+_rugosa_window_export_chart (GtkWidget  *widget,
+                             const char *action_name,
+                             GVariant   *param)
+{
+  RugosaWindow *self = RUGOSA_WINDOW (widget);
+  GtkFileChooserNative *dialog;
+  const char *size_ids[G_N_ELEMENTS (export_sizes) + 1] = { 0 };
+  const char *size_labels[G_N_ELEMENTS (export_sizes) + 1] = { 0 };
+  static const char *format_ids[] = { "png", "svg", "pdf", NULL };
+  static const char *format_labels[] = { "PNG", "SVG", "PDF", NULL };
+
+  for (guint i = 0; i < G_N_ELEMENTS (export_sizes); i++)
+    {
+      size_ids[i] = export_sizes[i].id;
+      size_labels[i] = _(export_sizes[i].label);
+    }
+  dialog = gtk_file_chooser_native_new (_("Export the Chart"), GTK_WINDOW (self),
+                                        GTK_FILE_CHOOSER_ACTION_SAVE, _("_Export"), _("_Cancel"));
+  gtk_file_chooser_add_choice (GTK_FILE_CHOOSER (dialog), "format", _("Format"), format_ids, format_labels);
+  gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "format", "png");
+  gtk_file_chooser_add_choice (GTK_FILE_CHOOSER (dialog), "size", _("Size"), size_ids, size_labels);
+  gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "size", "1280x800");
+  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), _("friction chart.png"));
+  g_signal_connect (dialog, "response", G_CALLBACK (_rugosa_window_export_response), self);
+  gtk_native_dialog_show (GTK_NATIVE_DIALOG (dialog));
+}
+
+static void
+_rugosa_window_csv_response (GtkNativeDialog *dialog,
+                             int              response,
+                             RugosaWindow    *self)
+{
+  if (response == GTK_RESPONSE_ACCEPT)
+    {
+      g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
+      g_autofree char *path = g_file_get_path (file);
+      g_autoptr (GString) out = g_string_new (NULL);
+      g_autoptr (GError) error = NULL;
+
+      if (!rugosa_project_format_eval (self->project, -1.0, RUGOSA_EVAL_FORMAT_CSV, out, &error)
+          || !g_file_set_contents (path, out->str, out->len, &error))
+        {
+          GtkWidget *msg = adw_message_dialog_new (GTK_WINDOW (self), _("Could not export the results"), error->message);
+          adw_message_dialog_add_response (ADW_MESSAGE_DIALOG (msg), "close", _("_Close"));
+          gtk_window_present (GTK_WINDOW (msg));
+        }
+      else
+        _rugosa_window_toast (self, _("Results exported (CSV, SI units)."));
+    }
+  g_object_unref (dialog);
+}
+
+static void
+_rugosa_window_export_csv (GtkWidget  *widget,
+                           const char *action_name,
+                           GVariant   *param)
+{
+  RugosaWindow *self = RUGOSA_WINDOW (widget);
+  GtkFileChooserNative *dialog;
+
+  dialog = gtk_file_chooser_native_new (_("Export the Results Table"), GTK_WINDOW (self),
+                                        GTK_FILE_CHOOSER_ACTION_SAVE, _("_Export"), _("_Cancel"));
+  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), _("line results.csv"));
+  g_signal_connect (dialog, "response", G_CALLBACK (_rugosa_window_csv_response), self);
+  gtk_native_dialog_show (GTK_NATIVE_DIALOG (dialog));
+}
+
+/* --- print ----------------------------------------------------------- */
+
+static void
+_rugosa_window_draw_page (GtkPrintOperation *op,
+                          GtkPrintContext   *context,
+                          int                page_nr,
+                          RugosaWindow      *self)
+{
+  cairo_t *cr = gtk_print_context_get_cairo_context (context);
+  double w = gtk_print_context_get_width (context);
+  double h = gtk_print_context_get_height (context);
+  guint pos = gtk_single_selection_get_selected (self->selection);
+  g_autoptr (RugosaChartInput) input = NULL;
+  g_autofree char *date = _rugosa_window_today ();
+  RugosaChart *chart = rugosa_chart_new ();
+  RgError err = { 0 };
+
+  input = rugosa_chart_input_new (self->project, self->settings,
+                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos);
+  /* The page in points; the chart keeps its own proportions below 200 × 150. */
+  input->spec.width = MAX (w, 200);
+  input->spec.height = MAX (h, 150);
+  input->spec.scale = 1;
+  input->spec.theme = RUGOSA_CHART_THEME_LIGHT;
+  g_strlcpy (input->spec.footer_date, date, sizeof input->spec.footer_date);
+  if (rugosa_chart_set_spec (chart, &input->spec, &err) == RG_OK)
+    {
+      rugosa_chart_set_lines (chart, input->lines, input->n_lines);
+      /* Vector output: the same drawing code as the screen and exports. */
+      rugosa_chart_draw_direct (chart, cr);
+    }
+  else
+    g_warning ("Cannot print the chart: %s", err.text);
+  rugosa_chart_free (chart);
+}
+
+static void
+_rugosa_window_print (GtkWidget  *widget,
+                      const char *action_name,
+                      GVariant   *param)
+{
+  RugosaWindow *self = RUGOSA_WINDOW (widget);
+  g_autoptr (GtkPrintOperation) op = gtk_print_operation_new ();
+  g_autoptr (GtkPageSetup) setup = gtk_page_setup_new ();
+  g_autoptr (GError) error = NULL;
+
+  gtk_page_setup_set_orientation (setup, GTK_PAGE_ORIENTATION_LANDSCAPE);
+  gtk_print_operation_set_default_page_setup (op, setup);
+  gtk_print_operation_set_n_pages (op, 1);
+  gtk_print_operation_set_job_name (op, _("Friction chart"));
+  gtk_print_operation_set_embed_page_setup (op, TRUE);
+  g_signal_connect (op, "draw-page", G_CALLBACK (_rugosa_window_draw_page), self);
+  if (gtk_print_operation_run (op, GTK_PRINT_OPERATION_ACTION_PRINT_DIALOG, GTK_WINDOW (self), &error)
+      == GTK_PRINT_OPERATION_RESULT_ERROR)
+    _rugosa_window_toast (self, error->message);
+}
+
+void
+_rugosa_window_output_class_init (GtkWidgetClass *widget_class)
+{
+  gtk_widget_class_install_action (widget_class, "win.export-chart", NULL, _rugosa_window_export_chart);
+  gtk_widget_class_install_action (widget_class, "win.export-csv", NULL, _rugosa_window_export_csv);
+  gtk_widget_class_install_action (widget_class, "win.print", NULL, _rugosa_window_print);
+}

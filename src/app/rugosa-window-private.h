@@ -1,0 +1,72 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* RugosaWindow is split over rugosa-window.c (layout, selection, editing),
+ * rugosa-window-files.c (open, save, recent, drop, autosave, close guard)
+ * and rugosa-window-output.c (chart export, CSV, print). */
+#pragma once
+
+#include "rugosa-canvas.h"
+#include "rugosa-line-panel.h"
+#include "rugosa-results-table.h"
+#include "rugosa-window.h"
+
+G_BEGIN_DECLS
+
+struct _RugosaWindow
+{
+  AdwApplicationWindow parent_instance;
+
+  /* template widgets */
+  AdwWindowTitle     *window_title;
+  AdwToastOverlay    *toast_overlay;
+  GtkListView        *lines_view;
+  RugosaCanvas       *canvas;
+  GtkLabel           *probe_label;
+  GtkScale           *age_scale;
+  GtkAdjustment      *age_adjustment;
+  GtkLabel           *age_label;
+  GtkLabel           *age_change_label;
+  RugosaResultsTable *results_table;
+  RugosaLinePanel    *line_panel;
+  GtkMenuButton      *primary_menu_button;
+  GMenu              *recent_section;
+
+  /* borrowed references */
+  GSettings *settings;
+
+  /* owned references */
+  RugosaProject      *project;
+  RugosaHistory      *history;
+  GtkSingleSelection *selection;
+  GFile              *file;
+  GPtrArray          *bound_rows;   /* line list rows on screen */
+  char               *autosave_id;  /* unique per window */
+
+  guint    autosave_source;
+  gboolean modified;
+  gboolean close_confirmed;
+  gboolean close_after_save;
+  gboolean following_model;  /* widgets being set from the model */
+};
+
+/* rugosa-window.c */
+void     _rugosa_window_refresh_all       (RugosaWindow  *self);
+void     _rugosa_window_update_title      (RugosaWindow  *self);
+void     _rugosa_window_update_actions    (RugosaWindow  *self);
+void     _rugosa_window_toast             (RugosaWindow  *self,
+                                           const char    *text);
+/* Replace the project's content (load, new, recovery) and reset history. */
+void     _rugosa_window_project_replaced  (RugosaWindow  *self);
+
+/* rugosa-window-files.c */
+void     _rugosa_window_files_class_init  (GtkWidgetClass *widget_class);
+void     _rugosa_window_files_init        (RugosaWindow   *self);
+void     _rugosa_window_files_dispose     (RugosaWindow   *self);
+void     _rugosa_window_mark_modified     (RugosaWindow   *self);
+void     _rugosa_window_set_file          (RugosaWindow   *self,
+                                           GFile          *file);
+void     _rugosa_window_remove_autosave   (RugosaWindow   *self);
+
+/* rugosa-window-output.c */
+void     _rugosa_window_output_class_init (GtkWidgetClass *widget_class);
+
+G_END_DECLS

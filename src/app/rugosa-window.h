@@ -1,0 +1,52 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#pragma once
+
+#include <adwaita.h>
+
+#include "model/rugosa-history.h"
+#include "model/rugosa-project.h"
+#include "rugosa-application.h"
+
+G_BEGIN_DECLS
+
+#define RUGOSA_TYPE_WINDOW (rugosa_window_get_type ())
+G_DECLARE_FINAL_TYPE (RugosaWindow, rugosa_window, RUGOSA, WINDOW, AdwApplicationWindow)
+
+RugosaWindow  *rugosa_window_new            (RugosaApplication *application);
+RugosaProject *rugosa_window_get_project    (RugosaWindow *self);
+RugosaHistory *rugosa_window_get_history    (RugosaWindow *self);
+/* The file the project was read from or last saved to, or NULL. */
+GFile         *rugosa_window_get_file       (RugosaWindow *self);
+gboolean       rugosa_window_get_modified   (RugosaWindow *self);
+/* An unnamed, unmodified project: a file to open may replace it. */
+gboolean       rugosa_window_is_pristine    (RugosaWindow *self);
+
+/* Read `file` into this window (errors are shown in the window). */
+void           rugosa_window_load_file      (RugosaWindow *self,
+                                             GFile        *file);
+/* The same, synchronously, reporting the error (tests, recovery). */
+gboolean       rugosa_window_load_file_sync (RugosaWindow *self,
+                                             GFile        *file,
+                                             GError      **error);
+gboolean       rugosa_window_save_file_sync (RugosaWindow *self,
+                                             GFile        *file,
+                                             GError      **error);
+/* On start: if an autosaved copy of unsaved work is left over from a
+ * session that did not end cleanly, ask whether to recover it. */
+void           rugosa_window_offer_recovery (RugosaWindow *self);
+/* Write the autosave copy now (tests; normally on a coalesced timeout). */
+gboolean       rugosa_window_autosave_now   (RugosaWindow *self,
+                                             GError      **error);
+/* Where the autosave copy of this window goes. */
+char          *rugosa_window_autosave_path  (RugosaWindow *self);
+
+/* Pieces, for tests and the benchmark. */
+GtkWidget     *rugosa_window_get_canvas     (RugosaWindow *self);
+GtkWidget     *rugosa_window_get_line_panel (RugosaWindow *self);
+GtkWidget     *rugosa_window_get_results    (RugosaWindow *self);
+GtkRange      *rugosa_window_get_age_scale  (RugosaWindow *self);
+GtkSingleSelection *rugosa_window_get_selection (RugosaWindow *self);
+/* The text beside the slider ("+18.2 % head loss against new"). */
+const char    *rugosa_window_get_age_summary (RugosaWindow *self);
+
+G_END_DECLS
