@@ -26,9 +26,11 @@ struct _RugosaCanvas
   /* owned references */
   RugosaChart      *chart;
   RugosaChartInput *input;
+  RugosaTrailCache *trails;
   char             *probe_text;
 
   int      hover;          /* overlay index under the pointer, or -1 */
+  double   pointer_x, pointer_y;
   gboolean frame_log;
   gint64   last_draw_us;
   gint64   dirty_since_us; /* when the last refresh asked for a frame */
@@ -75,7 +77,7 @@ rugosa_canvas_refresh (RugosaCanvas *self)
       return;
     }
   self->input = rugosa_chart_input_new (self->project, self->settings,
-                                        _rugosa_canvas_selected (self));
+                                        _rugosa_canvas_selected (self), self->trails);
   rugosa_chart_set_lines (self->chart, self->input->lines, self->input->n_lines);
   if (self->hover >= (int) self->input->n_lines)
     self->hover = -1;
@@ -115,6 +117,15 @@ rugosa_canvas_set_selection (RugosaCanvas       *self,
   if (selection)
     g_signal_connect_swapped (selection, "notify::selected",
                               G_CALLBACK (_rugosa_canvas_selection_changed), self);
+}
+
+void
+rugosa_canvas_get_pointer (RugosaCanvas *self,
+                           double       *x,
+                           double       *y)
+{
+  *x = self->pointer_x;
+  *y = self->pointer_y;
 }
 
 const char *
@@ -257,6 +268,8 @@ rugosa_canvas_pointer_at (RugosaCanvas *self,
   int hover;
 
   _rugosa_canvas_update_spec (self);
+  self->pointer_x = x;
+  self->pointer_y = y;
   hover = rugosa_chart_hit_test (self->chart, x, y, HIT_RADIUS);
   if (hover != self->hover)
     {
@@ -266,7 +279,8 @@ rugosa_canvas_pointer_at (RugosaCanvas *self,
     }
 
   rugosa_chart_probe (self->chart, x, y, &probe);
-  if (!probe.in_plot)
+  /* Over a marker the tooltip speaks for the line instead. */
+  if (!probe.in_plot || hover >= 0)
     {
       _rugosa_canvas_set_probe_text (self, NULL);
       return;
@@ -416,6 +430,7 @@ rugosa_canvas_finalize (GObject *object)
 
   g_clear_pointer (&self->input, rugosa_chart_input_free);
   g_clear_pointer (&self->chart, rugosa_chart_free);
+  g_clear_pointer (&self->trails, rugosa_trail_cache_free);
   g_free (self->probe_text);
   G_OBJECT_CLASS (rugosa_canvas_parent_class)->finalize (object);
 }
@@ -458,6 +473,7 @@ rugosa_canvas_init (RugosaCanvas *self)
 
   self->hover = -1;
   self->chart = rugosa_chart_new ();
+  self->trails = rugosa_trail_cache_new ();
   self->frame_log = g_getenv ("RUGOSA_FRAME_LOG") != NULL && g_strcmp0 (g_getenv ("RUGOSA_FRAME_LOG"), "0") != 0;
 
   gtk_widget_set_focusable (GTK_WIDGET (self), TRUE);

@@ -26,6 +26,10 @@ void        rugosa_canvas_set_selection   (RugosaCanvas       *self,
  * rebuilt by the engine only when its spec changed). */
 void        rugosa_canvas_refresh         (RugosaCanvas       *self);
 const char *rugosa_canvas_get_probe_text  (RugosaCanvas       *self);
+/* Where the pointer was last seen over the canvas (widget coordinates). */
+void        rugosa_canvas_get_pointer     (RugosaCanvas       *self,
+                                           double             *x,
+                                           double             *y);
 /* Duration of the last snapshot, microseconds (diagnostics, benchmark). */
 gint64      rugosa_canvas_get_last_draw_us (RugosaCanvas      *self);
 /* How many times the chart background was built (tests). */

@@ -5,6 +5,7 @@
 
 #include <math.h>
 #include <stdio.h>
+#include <string.h>
 
 #include "rugosa-chart-input.h"
 #include "rugosa-display.h"
@@ -47,6 +48,124 @@ _rugosa_chart_input_colour (const char *hex)
   return c;
 }
 
+struct _RugosaTrailCache
+{
+  GHashTable *entries;   /* RugosaLine (ref held) -> TrailEntry */
+};
+
+typedef struct {
+  RugosaLine *line;
+  guint64     revision;
+  int         model;
+  double      re_laminar_max, re_turbulent_min;
+  GArray     *points;    /* RugosaChartPoint at 0, 1, 2 … years */
+  gboolean    broken;    /* an age that would not evaluate was met */
+} TrailEntry;
+
+static void
+_trail_entry_free (gpointer data)
+{
+  TrailEntry *e = data;
+
+  g_object_unref (e->line);
+  g_array_unref (e->points);
+  g_free (e);
+}
+
+RugosaTrailCache *
+rugosa_trail_cache_new (void)
+{
+  RugosaTrailCache *cache = g_new0 (RugosaTrailCache, 1);
+
+  cache->entries = g_hash_table_new_full (NULL, NULL, NULL, _trail_entry_free);
+  return cache;
+}
+
+void
+rugosa_trail_cache_free (RugosaTrailCache *cache)
+{
+  if (cache == NULL)
+    return;
+  g_hash_table_unref (cache->entries);
+  g_free (cache);
+}
+
+static gboolean
+_trail_point_at (RugosaProject    *project,
+                 RugosaLine       *line,
+                 double            age,
+                 RugosaChartPoint *out)
+{
+  const RugosaLineResults *ra = rugosa_project_get_results_at (project, line, age);
+  const RugosaOperatingPoint *pa;
+
+  if (ra == NULL || !ra->ok)
+    return FALSE;
+  pa = &ra->points[RUGOSA_FLOW_DESIGN];
+  if (!pa->present || !pa->ok)
+    return FALSE;
+  out->re = pa->result.reynolds;
+  out->f = pa->result.friction.f;
+  return TRUE;
+}
+
+/* The cached yearly samples of `line` up to `age`, computed as needed. */
+static TrailEntry *
+_trail_cache_get (RugosaTrailCache *cache,
+                  RugosaProject    *project,
+                  RugosaLine       *line,
+                  double            age)
+{
+  RugosaSettings *ps = rugosa_project_get_settings (project);
+  TrailEntry *e = g_hash_table_lookup (cache->entries, line);
+  int model = rugosa_settings_get_friction_model (ps);
+  double lam = rugosa_settings_get_double (ps, "re-laminar-max");
+  double turb = rugosa_settings_get_double (ps, "re-turbulent-min");
+  guint need = (guint) floor (age) + 1;
+
+  if (e != NULL && (e->revision != rugosa_line_get_revision (line) || e->model != model
+                    || e->re_laminar_max != lam || e->re_turbulent_min != turb))
+    {
+      g_hash_table_remove (cache->entries, line);
+      e = NULL;
+    }
+  if (e == NULL)
+    {
+      e = g_new0 (TrailEntry, 1);
+      e->line = g_object_ref (line);
+      e->revision = rugosa_line_get_revision (line);
+      e->model = model;
+      e->re_laminar_max = lam;
+      e->re_turbulent_min = turb;
+      e->points = g_array_new (FALSE, FALSE, sizeof (RugosaChartPoint));
+      g_hash_table_insert (cache->entries, line, e);
+    }
+  while (!e->broken && e->points->len < need)
+    {
+      RugosaChartPoint p;
+
+      if (_trail_point_at (project, line, (double) e->points->len, &p))
+        g_array_append_val (e->points, p);
+      else
+        e->broken = TRUE;
+    }
+  return e;
+}
+
+/* Forget lines that left the project (deleted, or a file was loaded). */
+static void
+_trail_cache_prune (RugosaTrailCache *cache,
+                    RugosaProject    *project)
+{
+  GHashTableIter iter;
+  gpointer key;
+
+  g_hash_table_iter_init (&iter, cache->entries);
+  while (g_hash_table_iter_next (&iter, &key, NULL))
+    if (rugosa_project_find_line (project, key) < 0)
+      g_hash_table_iter_remove (&iter);
+}
+
 static const char *
 _rugosa_chart_input_keep (RugosaChartInput *input,
                           char             *owned)
@@ -56,9 +175,10 @@ _rugosa_chart_input_keep (RugosaChartInput *input,
 }
 
 RugosaChartInput *
-rugosa_chart_input_new (RugosaProject *project,
-                        GSettings     *settings,
-                        int            selected)
+rugosa_chart_input_new (RugosaProject    *project,
+                        GSettings        *settings,
+                        int               selected,
+                        RugosaTrailCache *cache)
 {
   RugosaChartInput *input = g_new0 (RugosaChartInput, 1);
   RugosaSettings *ps = rugosa_project_get_settings (project);
@@ -68,6 +188,8 @@ rugosa_chart_input_new (RugosaProject *project,
   g_autofree char *u_head = rugosa_chart_input_unit (settings, "unit-head");
 
   input->owned = g_ptr_array_new_with_free_func (g_free);
+  if (cache != NULL)
+    _trail_cache_prune (cache, project);
   rugosa_chart_spec_init (&input->spec);
   rugosa_chart_input_fill_spec (&input->spec, project);
   input->lines = g_new0 (RugosaChartLine, MAX (n, 1));
@@ -124,30 +246,37 @@ rugosa_chart_input_new (RugosaProject *project,
         }
 
       /* The aging trail: the design point from new to the service age. */
-      trail = g_new0 (RugosaChartPoint, RUGOSA_CHART_TRAIL_POINTS);
-      g_ptr_array_add (input->owned, trail);
       cl->n_trail = 0;
-      if (age > 0.0)
+      if (age > 0.0 && cache != NULL)
         {
-          for (guint k = 0; k < RUGOSA_CHART_TRAIL_POINTS; k++)
-            {
-              double a = age * k / (RUGOSA_CHART_TRAIL_POINTS - 1);
-              const RugosaLineResults *ra = rugosa_project_get_results_at (project, line, a);
-              const RugosaOperatingPoint *pa;
+          TrailEntry *e = _trail_cache_get (cache, project, line, age);
+          guint whole = MIN (e->points->len, (guint) floor (age) + 1);
 
-              if (ra == NULL || !ra->ok)
-                break;
-              pa = &ra->points[RUGOSA_FLOW_DESIGN];
-              if (!pa->present || !pa->ok)
-                break;
-              trail[cl->n_trail].re = pa->result.reynolds;
-              trail[cl->n_trail].f = pa->result.friction.f;
-              cl->n_trail++;
-            }
-          /* get_results_at may reuse its buffer: read the selected age last. */
+          trail = g_new0 (RugosaChartPoint, whole + 1);
+          memcpy (trail, e->points->data, whole * sizeof *trail);
+          cl->n_trail = whole;
+          /* The last point is the marker itself, at the exact age. */
+          trail[cl->n_trail].re = design->result.reynolds;
+          trail[cl->n_trail].f = design->result.friction.f;
+          cl->n_trail++;
+          /* get_results_at may reuse its buffer: read the selected age again. */
           res = rugosa_project_get_results (project, line);
           design = &res->points[RUGOSA_FLOW_DESIGN];
         }
+      else if (age > 0.0)
+        {
+          trail = g_new0 (RugosaChartPoint, RUGOSA_CHART_TRAIL_POINTS);
+          for (guint k = 0; k < RUGOSA_CHART_TRAIL_POINTS; k++)
+            if (_trail_point_at (project, line, age * k / (RUGOSA_CHART_TRAIL_POINTS - 1), &trail[cl->n_trail]))
+              cl->n_trail++;
+            else
+              break;
+          res = rugosa_project_get_results (project, line);
+          design = &res->points[RUGOSA_FLOW_DESIGN];
+        }
+      else
+        trail = g_new0 (RugosaChartPoint, 1);
+      g_ptr_array_add (input->owned, trail);
       cl->trail = trail;
 
       cl->readout_velocity =

@@ -22,12 +22,22 @@ typedef struct {
   GPtrArray       *owned;   /* strings and trails the lines point into */
 } RugosaChartInput;
 
-/* The number of points of an aging trail, new to the selected age. */
+/* The number of points of an aging trail, new to the selected age, when
+ * no trail cache is given (exports, printing). */
 #define RUGOSA_CHART_TRAIL_POINTS 16
 
-RugosaChartInput *rugosa_chart_input_new  (RugosaProject *project,
-                                           GSettings     *settings,
-                                           int            selected);
+/* Aging trails sampled once a year of service and kept per line until the
+ * line or the friction settings change, so a slider move asks the model
+ * for one new point a line instead of a whole trail. */
+typedef struct _RugosaTrailCache RugosaTrailCache;
+RugosaTrailCache *rugosa_trail_cache_new  (void);
+void              rugosa_trail_cache_free (RugosaTrailCache *cache);
+
+/* `cache` may be NULL. */
+RugosaChartInput *rugosa_chart_input_new  (RugosaProject    *project,
+                                           GSettings        *settings,
+                                           int               selected,
+                                           RugosaTrailCache *cache);
 void              rugosa_chart_input_free (RugosaChartInput *input);
 
 /* The spec's background fields from the project settings (size, scale

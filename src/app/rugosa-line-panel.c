@@ -620,6 +620,20 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
 }
 
 void
+rugosa_line_panel_refresh_results (RugosaLinePanel *self)
+{
+  g_autofree char *warnings = NULL;
+
+  g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
+  if (self->line == NULL || self->project == NULL)
+    return;
+  warnings = rugosa_readout_warnings (self->project, self->line);
+  gtk_widget_set_visible (GTK_WIDGET (self->warnings_box), warnings != NULL);
+  if (g_strcmp0 (gtk_label_get_text (self->warnings_label), warnings ? warnings : "") != 0)
+    gtk_label_set_text (self->warnings_label, warnings ? warnings : "");
+}
+
+void
 rugosa_line_panel_set_line (RugosaLinePanel *self,
                             RugosaLine      *line)
 {
@@ -735,6 +749,9 @@ rugosa_line_panel_dispose (GObject *object)
   g_clear_pointer (&self->entries, g_hash_table_unref);
   g_clear_pointer (&self->fitting_rows, g_ptr_array_unref);
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_LINE_PANEL);
+  /* Template children without an id are not cleared by the call above. */
+  for (GtkWidget *child; (child = gtk_widget_get_first_child (GTK_WIDGET (self))) != NULL;)
+    gtk_widget_unparent (child);
   G_OBJECT_CLASS (rugosa_line_panel_parent_class)->dispose (object);
 }
 

@@ -27,6 +27,8 @@ void        rugosa_line_panel_set_line     (RugosaLinePanel *self,
 RugosaLine *rugosa_line_panel_get_line     (RugosaLinePanel *self);
 /* Re-read the line and its results (after any change). */
 void        rugosa_line_panel_refresh      (RugosaLinePanel *self);
+/* Re-read only what the service age changes (the warnings). */
+void        rugosa_line_panel_refresh_results (RugosaLinePanel *self);
 /* The quantity entry editing a double property ("temperature", …). */
 RugosaQuantityEntry *rugosa_line_panel_get_entry (RugosaLinePanel *self,
                                                   const char      *property);

@@ -278,6 +278,9 @@ rugosa_quantity_entry_dispose (GObject *object)
   RugosaQuantityEntry *self = RUGOSA_QUANTITY_ENTRY (object);
 
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_QUANTITY_ENTRY);
+  /* Template children without an id are not cleared by the call above. */
+  for (GtkWidget *child; (child = gtk_widget_get_first_child (GTK_WIDGET (self))) != NULL;)
+    gtk_widget_unparent (child);
   G_OBJECT_CLASS (rugosa_quantity_entry_parent_class)->dispose (object);
 }
 

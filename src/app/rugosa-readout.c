@@ -146,6 +146,9 @@ rugosa_readout_warnings (RugosaProject *project,
         }
       for (int i = 0; i < p->warnings.count; i++)
         {
+          static const char *const where[RUGOSA_N_FLOWS] = {
+            NULL, N_("At the lowest flow: "), N_("At the highest flow: ")
+          };
           gboolean dup = FALSE;
 
           /* The same remark at two flows is shown once. */
@@ -156,6 +159,8 @@ rugosa_readout_warnings (RugosaProject *project,
           g_ptr_array_add (seen, (gpointer) p->warnings.text[i]);
           if (s->len)
             g_string_append_c (s, '\n');
+          if (where[k] != NULL)
+            g_string_append (s, _(where[k]));
           g_string_append (s, p->warnings.text[i]);
         }
     }

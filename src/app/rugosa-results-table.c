@@ -23,7 +23,8 @@ struct _RugosaResultsTable
   GSettings     *settings;
 
   /* owned references */
-  GPtrArray *bound;   /* GtkLabel cells on screen */
+  GPtrArray  *bound;   /* GtkLabel cells on screen */
+  GHashTable *units;   /* settings key -> unit, read once per change */
 };
 
 G_DEFINE_FINAL_TYPE (RugosaResultsTable, rugosa_results_table, GTK_TYPE_WIDGET)
@@ -37,17 +38,17 @@ typedef struct {
 
 static const Column columns[] = {
   { "name", N_("Line option"), NULL, FALSE },
-  { "flow", N_("Design flow"), "unit-flow", TRUE },
   { "velocity", N_("Velocity"), "unit-velocity", TRUE },
+  { "head-loss", N_("Head loss"), "unit-head", TRUE },
+  { "change", N_("Loss vs new"), NULL, TRUE },
+  { "gradient", N_("Gradient"), "unit-gradient", TRUE },
+  { "pressure-drop", N_("Pressure drop"), "unit-pressure", TRUE },
   { "reynolds", N_("Re"), NULL, TRUE },
   { "f", N_("f (Darcy)"), NULL, TRUE },
   { "regime", N_("Regime"), NULL, FALSE },
   { "zone", N_("Roughness zone"), NULL, FALSE },
-  { "head-loss", N_("Head loss"), "unit-head", TRUE },
-  { "pressure-drop", N_("Pressure drop"), "unit-pressure", TRUE },
-  { "gradient", N_("Gradient"), "unit-gradient", TRUE },
   { "elasticity", N_("∂ln f/∂ln ε"), NULL, TRUE },
-  { "change", N_("Loss vs new"), NULL, TRUE },
+  { "flow", N_("Design flow"), "unit-flow", TRUE },
   { "warnings", N_("Remarks"), NULL, FALSE },
 };
 
@@ -60,7 +61,18 @@ rugosa_results_table_new (void)
 static char *
 _unit (RugosaResultsTable *self, const char *key)
 {
-  return self->settings ? g_settings_get_string (self->settings, key) : NULL;
+  const char *unit;
+
+  if (self->settings == NULL)
+    return NULL;
+  /* A slider move refreshes every cell: keep GSettings out of that loop. */
+  unit = g_hash_table_lookup (self->units, key);
+  if (unit == NULL)
+    {
+      unit = g_settings_get_string (self->settings, key);
+      g_hash_table_insert (self->units, (gpointer) key, (gpointer) unit);
+    }
+  return g_strdup (unit);
 }
 
 char *
@@ -151,7 +163,8 @@ _rugosa_results_table_update_label (RugosaResultsTable *self,
   if (line == NULL)
     return;
   text = rugosa_results_table_format_cell (self, line, column);
-  gtk_label_set_text (label, text);
+  if (g_strcmp0 (gtk_label_get_text (label), text) != 0)
+    gtk_label_set_text (label, text);
   if (g_strcmp0 (column, "warnings") == 0)
     {
       g_autofree char *all = self->project ? rugosa_readout_warnings (self->project, line) : NULL;
@@ -263,6 +276,7 @@ _rugosa_results_table_settings_changed (GSettings          *settings,
 {
   if (g_str_has_prefix (key, "unit-"))
     {
+      g_hash_table_remove_all (self->units);
       _rugosa_results_table_update_titles (self);
       rugosa_results_table_refresh (self);
     }
@@ -296,7 +310,11 @@ rugosa_results_table_dispose (GObject *object)
     g_signal_handlers_disconnect_by_data (self->settings, self);
   self->settings = NULL;
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_RESULTS_TABLE);
+  /* Template children without an id are not cleared by the call above. */
+  for (GtkWidget *child; (child = gtk_widget_get_first_child (GTK_WIDGET (self))) != NULL;)
+    gtk_widget_unparent (child);
   g_clear_pointer (&self->bound, g_ptr_array_unref);
+  g_clear_pointer (&self->units, g_hash_table_unref);
   G_OBJECT_CLASS (rugosa_results_table_parent_class)->dispose (object);
 }
 
@@ -317,6 +335,7 @@ static void
 rugosa_results_table_init (RugosaResultsTable *self)
 {
   self->bound = g_ptr_array_new ();
+  self->units = g_hash_table_new_full (g_str_hash, g_str_equal, NULL, g_free);
   gtk_widget_init_template (GTK_WIDGET (self));
 
   for (guint i = 0; i < G_N_ELEMENTS (columns); i++)
@@ -333,6 +352,8 @@ rugosa_results_table_init (RugosaResultsTable *self)
       gtk_column_view_column_set_resizable (c, TRUE);
       if (g_strcmp0 (columns[i].id, "warnings") == 0)
         gtk_column_view_column_set_expand (c, TRUE);
+      if (g_strcmp0 (columns[i].id, "name") == 0)
+        gtk_column_view_column_set_fixed_width (c, 170);
       gtk_column_view_append_column (self->view, c);
       g_object_unref (c);
     }

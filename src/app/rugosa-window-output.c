@@ -76,7 +76,7 @@ _rugosa_window_export_response (GtkNativeDialog *dialog,
 
   pos = gtk_single_selection_get_selected (self->selection);
   input = rugosa_chart_input_new (self->project, self->settings,
-                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos);
+                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
   date = _rugosa_window_today ();
   if (!rugosa_chart_export (&input->spec, input->lines, input->n_lines, format, w, h, date, path, &error))
     {
@@ -179,7 +179,7 @@ _rugosa_window_draw_page (GtkPrintOperation *op,
   RgError err = { 0 };
 
   input = rugosa_chart_input_new (self->project, self->settings,
-                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos);
+                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
   /* The page in points; the chart keeps its own proportions below 200 × 150. */
   input->spec.width = MAX (w, 200);
   input->spec.height = MAX (h, 150);

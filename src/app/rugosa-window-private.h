@@ -46,6 +46,7 @@ struct _RugosaWindow
   gboolean close_confirmed;
   gboolean close_after_save;
   gboolean following_model;  /* widgets being set from the model */
+  gboolean age_changing;     /* the slider is moving the service age */
 };
 
 /* rugosa-window.c */

@@ -275,6 +275,40 @@ _rugosa_window_line_activated (RugosaWindow *self,
   gtk_widget_activate_action (GTK_WIDGET (self), "win.line-rename", NULL);
 }
 
+/* The pointer readout follows the pointer, below and to the right of it,
+ * turning back at the canvas edges. */
+static gboolean
+_rugosa_window_place_probe (GtkOverlay   *overlay,
+                            GtkWidget    *child,
+                            GdkRectangle *allocation,
+                            RugosaWindow *self)
+{
+  GtkRequisition nat;
+  double px, py;
+  int w = gtk_widget_get_width (GTK_WIDGET (overlay));
+  int h = gtk_widget_get_height (GTK_WIDGET (overlay));
+
+  if (child != GTK_WIDGET (self->probe_label))
+    return FALSE;
+  gtk_widget_get_preferred_size (child, NULL, &nat);
+  rugosa_canvas_get_pointer (self->canvas, &px, &py);
+  allocation->width = nat.width;
+  allocation->height = nat.height;
+  allocation->x = (int) px + 16;
+  allocation->y = (int) py + 18;
+  if (allocation->x + nat.width > w)
+    allocation->x = MAX (0, (int) px - 16 - nat.width);
+  if (allocation->y + nat.height > h)
+    allocation->y = MAX (0, (int) py - 18 - nat.height);
+  return TRUE;
+}
+
+static void
+_rugosa_window_probe_moved (RugosaWindow *self)
+{
+  gtk_widget_queue_allocate (gtk_widget_get_parent (GTK_WIDGET (self->probe_label)));
+}
+
 /* --- refreshing ------------------------------------------------------ */
 
 static void
@@ -319,7 +353,11 @@ _rugosa_window_refresh_all (RugosaWindow *self)
 {
   rugosa_canvas_refresh (self->canvas);
   rugosa_results_table_refresh (self->results_table);
-  rugosa_line_panel_refresh (self->line_panel);
+  /* A slider move changes results, not inputs: the panel's fields stay. */
+  if (self->age_changing)
+    rugosa_line_panel_refresh_results (self->line_panel);
+  else
+    rugosa_line_panel_refresh (self->line_panel);
   _rugosa_window_refresh_rows (self);
   _rugosa_window_update_age_summary (self);
   _rugosa_window_update_actions (self);
@@ -346,7 +384,9 @@ _rugosa_window_age_changed (RugosaWindow *self)
     return;
   /* The service age is a view of the document, not an edit: it is saved
    * with the project but does not fill the undo history. */
+  self->age_changing = TRUE;
   g_object_set (rugosa_project_get_settings (self->project), "service-age", age, NULL);
+  self->age_changing = FALSE;
 }
 
 static void
@@ -743,6 +783,7 @@ _rugosa_window_setup (RugosaWindow *self)
   g_object_bind_property_full (self->canvas, "probe-text", self->probe_label, "visible", G_BINDING_DEFAULT,
                                _rugosa_window_probe_visible, NULL, NULL, NULL);
 
+  g_signal_connect_object (self->canvas, "notify::probe-text", G_CALLBACK (_rugosa_window_probe_moved), self, G_CONNECT_SWAPPED);
   g_signal_connect_object (self->project, "changed", G_CALLBACK (_rugosa_window_project_changed), self, G_CONNECT_SWAPPED);
   g_signal_connect_object (self->project, "items-changed", G_CALLBACK (_rugosa_window_items_changed), self, G_CONNECT_SWAPPED | G_CONNECT_AFTER);
   g_signal_connect_object (self->selection, "notify::selected", G_CALLBACK (_rugosa_window_selection_changed), self, G_CONNECT_SWAPPED);
@@ -800,6 +841,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, primary_menu_button);
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, recent_section);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_line_activated);
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_place_probe);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_age_changed);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_edit_line);
 

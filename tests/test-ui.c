@@ -1,0 +1,559 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The desktop application, driven in-process under Xvfb: the demo project,
+ * editing through the side panel, the service-age slider, refused input,
+ * files, undo and redo, autosave, and a screenshot of the main window.
+ *
+ * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
+ * display the program reports a skip. */
+#define G_LOG_DOMAIN "test-ui"
+
+#include "config.h"
+
+#include <adwaita.h>
+#include <glib/gstdio.h>
+#include <math.h>
+#include <string.h>
+
+#include "rugosa-application.h"
+#include "rugosa-canvas.h"
+#include "rugosa-line-panel.h"
+#include "rugosa-quantity-entry.h"
+#include "rugosa-readout.h"
+#include "rugosa-results-table.h"
+#include "rugosa-window.h"
+
+static RugosaApplication *app;
+static char *tmpdir;
+
+static void
+drain (void)
+{
+  while (g_main_context_pending (NULL))
+    g_main_context_iteration (NULL, FALSE);
+}
+
+static char *
+demo_path (void)
+{
+  const char *src = g_getenv ("RUGOSA_SOURCE_DIR");
+  g_assert_nonnull (src);
+  return g_build_filename (src, "data", "demo.rugosa", NULL);
+}
+
+static RugosaWindow *
+open_demo (void)
+{
+  RugosaWindow *win = rugosa_window_new (app);
+  g_autofree char *path = demo_path ();
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+
+  gtk_window_set_default_size (GTK_WINDOW (win), 1400, 900);
+  gtk_window_present (GTK_WINDOW (win));
+  g_assert_true (rugosa_window_load_file_sync (win, file, &error));
+  g_assert_no_error (error);
+  drain ();
+  return win;
+}
+
+static void
+close_window (RugosaWindow *win)
+{
+  /* Tests leave changes behind on purpose: no save prompt. */
+  gtk_window_destroy (GTK_WINDOW (win));
+  drain ();
+}
+
+/* The first line of the project that evaluates, whose fluid is `kind`
+ * (or any kind when kind < 0) and, when `aging` is set, roughens. */
+static guint
+find_line (RugosaWindow *win,
+           int           kind,
+           gboolean      aging)
+{
+  RugosaProject *project = rugosa_window_get_project (win);
+
+  for (guint i = 0; i < rugosa_project_get_n_lines (project); i++)
+    {
+      RugosaLine *line = rugosa_project_get_line (project, i);
+      const RugosaLineResults *res = rugosa_project_get_results (project, line);
+
+      if (!res->ok || !res->points[RUGOSA_FLOW_DESIGN].ok)
+        continue;
+      if (kind >= 0 && rugosa_line_get_fluid_kind (line) != kind)
+        continue;
+      if (aging && !(res->aging_rate_m_per_year > 0.0))
+        continue;
+      return i;
+    }
+  g_test_fail_printf ("The demo project has no line of the kind this test needs.");
+  return 0;
+}
+
+static RugosaLinePanel *
+select_line (RugosaWindow *win,
+             guint         position)
+{
+  gtk_single_selection_set_selected (rugosa_window_get_selection (win), position);
+  drain ();
+  return RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win));
+}
+
+static const RugosaOperatingPoint *
+design_point (RugosaWindow *win,
+              guint         position)
+{
+  RugosaProject *project = rugosa_window_get_project (win);
+  const RugosaLineResults *res =
+    rugosa_project_get_results (project, rugosa_project_get_line (project, position));
+
+  g_assert_true (res->ok);
+  return &res->points[RUGOSA_FLOW_DESIGN];
+}
+
+static void
+test_demo_loads (void)
+{
+  RugosaWindow *win = open_demo ();
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaCanvas *canvas = RUGOSA_CANVAS (rugosa_window_get_canvas (win));
+  RugosaResultsTable *table = RUGOSA_RESULTS_TABLE (rugosa_window_get_results (win));
+  const RugosaChartInput *input;
+  guint n = rugosa_project_get_n_lines (project);
+  guint ok = 0;
+
+  g_assert_cmpuint (n, >=, 2);
+  for (guint i = 0; i < n; i++)
+    {
+      const RugosaLineResults *res = rugosa_project_get_results (project, rugosa_project_get_line (project, i));
+      if (res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
+        ok++;
+    }
+  /* Every line that evaluates is drawn on the chart. */
+  input = rugosa_canvas_get_input (canvas);
+  g_assert_nonnull (input);
+  g_assert_cmpuint (input->n_lines, ==, ok);
+  g_assert_cmpuint (ok, >=, 1);
+  for (size_t i = 0; i < input->n_lines; i++)
+    {
+      g_assert_true (isfinite (input->lines[i].re) && input->lines[i].re > 0);
+      g_assert_true (isfinite (input->lines[i].f) && input->lines[i].f > 0);
+    }
+  g_assert_false (rugosa_window_get_modified (win));
+
+  {
+    guint i = find_line (win, -1, FALSE);
+    g_autofree char *text = rugosa_results_table_format_cell (table, rugosa_project_get_line (project, i), "head-loss");
+    g_assert_cmpstr (text, !=, "—");
+    g_assert_cmpstr (text, !=, "");
+  }
+  close_window (win);
+}
+
+static void
+test_temperature_changes_density (void)
+{
+  RugosaWindow *win = open_demo ();
+  guint pos = find_line (win, 0 /* RG_FLUID_WATER */, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  RugosaQuantityEntry *entry = rugosa_line_panel_get_entry (panel, "temperature");
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaLine *line = rugosa_project_get_line (project, pos);
+  RugosaResultsTable *table = RUGOSA_RESULTS_TABLE (rugosa_window_get_results (win));
+  g_autofree char *readout_before = g_strdup (rugosa_line_panel_get_fluid_readout (panel));
+  g_autofree char *head_before = rugosa_results_table_format_cell (table, line, "head-loss");
+  g_autofree char *re_before = rugosa_results_table_format_cell (table, line, "reynolds");
+  g_autofree char *re_after = NULL;
+  double rho_before = rugosa_project_get_results (project, line)->density_kg_m3;
+  double mu_before = rugosa_project_get_results (project, line)->dynamic_viscosity_pa_s;
+  double t_before = rugosa_line_get_double (line, "temperature");
+  const char *target = t_before < 330.0 ? "140 F" : "68 F";
+  /* Source: NIST SP 811 (2008) B.9, T/K = (t/°F + 459.67)/1.8 */
+  double t_expected = t_before < 330.0 ? (140.0 + 459.67) / 1.8 : (68.0 + 459.67) / 1.8;
+  const RugosaLineResults *res;
+
+  g_assert_nonnull (entry);
+  g_assert_true (rugosa_quantity_entry_commit_text (entry, target));
+  drain ();
+
+  g_assert_cmpfloat_with_epsilon (rugosa_line_get_double (line, "temperature"), t_expected, 1e-9);
+  res = rugosa_project_get_results (project, line);
+  g_assert_true (res->ok);
+  /* Common practice (no single source): liquid water gets lighter and
+   * thinner as it warms between 0 and 100 °C. */
+  if (t_expected > t_before)
+    {
+      g_assert_cmpfloat (res->density_kg_m3, <, rho_before);
+      g_assert_cmpfloat (res->dynamic_viscosity_pa_s, <, mu_before);
+    }
+  else
+    {
+      g_assert_cmpfloat (res->density_kg_m3, >, rho_before);
+      g_assert_cmpfloat (res->dynamic_viscosity_pa_s, >, mu_before);
+    }
+  /* The panel's readout and the table follow. */
+  g_assert_cmpstr (rugosa_line_panel_get_fluid_readout (panel), !=, readout_before);
+  re_after = rugosa_results_table_format_cell (table, line, "reynolds");
+  g_assert_cmpstr (re_after, !=, re_before);
+  (void) head_before;
+  g_assert_true (rugosa_window_get_modified (win));
+  close_window (win);
+}
+
+static void
+test_slider_grows_head_loss (void)
+{
+  RugosaWindow *win = open_demo ();
+  guint pos = find_line (win, -1, TRUE);
+  GtkRange *scale = rugosa_window_get_age_scale (win);
+  RugosaCanvas *canvas = RUGOSA_CANVAS (rugosa_window_get_canvas (win));
+  double h0, h40, ratio;
+  guint builds;
+  const RugosaChartInput *input;
+
+  select_line (win, pos);
+  gtk_range_set_value (scale, 0.0);
+  drain ();
+  h0 = design_point (win, pos)->result.head_loss_total_m;
+
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (canvas));
+  builds = rugosa_canvas_get_background_builds (canvas);
+
+  gtk_range_set_value (scale, 40.0);
+  drain ();
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (canvas));
+  h40 = design_point (win, pos)->result.head_loss_total_m;
+  ratio = design_point (win, pos)->head_loss_ratio_to_new;
+
+  /* Source: Colebrook and White (1937), roughness grows with age, so at a
+   * fixed flow the friction factor and the head loss do not fall. */
+  g_assert_cmpfloat (h40, >, h0);
+  g_assert_cmpfloat (ratio, >, 1.0);
+  /* The summary beside the slider shows the change against new. */
+  g_assert_nonnull (strstr (rugosa_window_get_age_summary (win), "+"));
+  /* The aging trail reaches the marker; only the overlay was redrawn. */
+  input = rugosa_canvas_get_input (canvas);
+  for (size_t i = 0; i < input->n_lines; i++)
+    if (input->line_index[i] == pos)
+      g_assert_cmpuint (input->lines[i].n_trail, >=, 2);
+  g_assert_cmpuint (rugosa_canvas_get_background_builds (canvas), ==, builds);
+  close_window (win);
+}
+
+static void
+test_bad_value_keeps_last (void)
+{
+  RugosaWindow *win = open_demo ();
+  guint pos = find_line (win, 0 /* RG_FLUID_WATER */, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaLine *line = rugosa_project_get_line (project, pos);
+  RugosaQuantityEntry *flow = rugosa_line_panel_get_entry (panel, "flow-design");
+  RugosaQuantityEntry *temp = rugosa_line_panel_get_entry (panel, "temperature");
+  RugosaCanvas *canvas = RUGOSA_CANVAS (rugosa_window_get_canvas (win));
+  double q = rugosa_line_get_double (line, "flow-design");
+  double t = rugosa_line_get_double (line, "temperature");
+  double re = design_point (win, pos)->result.reynolds;
+  GtkWidget *text_widget;
+  const RugosaChartInput *input;
+  gboolean drawn = FALSE;
+
+  /* Not a number: the parser refuses it. */
+  g_assert_false (rugosa_quantity_entry_commit_text (flow, "lots gpm"));
+  drain ();
+  g_assert_nonnull (rugosa_quantity_entry_get_error_text (flow));
+  text_widget = GTK_WIDGET (rugosa_quantity_entry_get_editable (flow));
+  g_assert_true (gtk_widget_has_css_class (text_widget, "error"));
+  g_assert_cmpfloat (rugosa_line_get_double (line, "flow-design"), ==, q);
+
+  /* A unit of another quantity. */
+  g_assert_false (rugosa_quantity_entry_commit_text (flow, "3 m"));
+  g_assert_nonnull (rugosa_quantity_entry_get_error_text (flow));
+  g_assert_cmpfloat (rugosa_line_get_double (line, "flow-design"), ==, q);
+
+  /* Parsed, but outside the water formulation's range: the core refuses
+   * it and the last valid temperature stays.
+   * Source: IAPWS-IF97 region 1 covers 273.15 K to 623.15 K; the core's
+   * water.h accepts up to 150 °C. */
+  g_assert_true (rugosa_quantity_entry_commit_text (temp, "400 C"));
+  drain ();
+  g_assert_nonnull (rugosa_quantity_entry_get_error_text (temp));
+  g_assert_cmpfloat (rugosa_line_get_double (line, "temperature"), ==, t);
+
+  /* The chart still draws the line at its last valid point. */
+  input = rugosa_canvas_get_input (canvas);
+  for (size_t i = 0; i < input->n_lines; i++)
+    if (input->line_index[i] == pos)
+      {
+        drawn = TRUE;
+        g_assert_true (isfinite (input->lines[i].re));
+        g_assert_true (isfinite (input->lines[i].f));
+        g_assert_cmpfloat_with_epsilon (input->lines[i].re, re, re * 1e-12);
+      }
+  g_assert_true (drawn);
+
+  /* A good value clears the mark. */
+  g_assert_true (rugosa_quantity_entry_commit_text (flow, "20 L/s"));
+  drain ();
+  g_assert_null (rugosa_quantity_entry_get_error_text (flow));
+  g_assert_false (gtk_widget_has_css_class (text_widget, "error"));
+  /* Source: SI definition, 1 L = 1e-3 m³ */
+  g_assert_cmpfloat_with_epsilon (rugosa_line_get_double (line, "flow-design"), 0.020, 1e-15);
+  close_window (win);
+}
+
+static void
+test_save_reopen (void)
+{
+  RugosaWindow *win = open_demo ();
+  RugosaWindow *again;
+  guint pos = find_line (win, -1, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  g_autofree char *path = g_build_filename (tmpdir, "saved.rugosa", NULL);
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+
+  g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "1234 ft"));
+  drain ();
+  g_assert_true (rugosa_window_get_modified (win));
+  g_assert_true (rugosa_window_save_file_sync (win, file, &error));
+  g_assert_no_error (error);
+  g_assert_false (rugosa_window_get_modified (win));
+
+  again = rugosa_window_new (app);
+  g_assert_true (rugosa_window_load_file_sync (again, file, &error));
+  g_assert_no_error (error);
+  g_assert_true (rugosa_project_equal (rugosa_window_get_project (win), rugosa_window_get_project (again)));
+  /* Source: NIST SP 811 (2008) B.8, 1 ft = 0.3048 m exactly */
+  g_assert_cmpfloat_with_epsilon (rugosa_line_get_double (rugosa_project_get_line (rugosa_window_get_project (again), pos), "length"),
+                                  1234 * 0.3048, 1e-9);
+  close_window (again);
+  close_window (win);
+}
+
+static void
+test_undo_redo (void)
+{
+  RugosaWindow *win = open_demo ();
+  guint pos = find_line (win, -1, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaLine *line = rugosa_project_get_line (project, pos);
+  RugosaQuantityEntry *length = rugosa_line_panel_get_entry (panel, "length");
+  double before = rugosa_line_get_double (line, "length");
+  double h_before = design_point (win, pos)->result.head_loss_total_m;
+  guint n = rugosa_project_get_n_lines (project);
+
+  g_assert_true (rugosa_quantity_entry_commit_text (length, before > 500 ? "250 m" : "750 m"));
+  drain ();
+  g_assert_cmpfloat (rugosa_line_get_double (line, "length"), !=, before);
+  g_assert_cmpfloat (design_point (win, pos)->result.head_loss_total_m, !=, h_before);
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  drain ();
+  g_assert_cmpfloat (rugosa_line_get_double (line, "length"), ==, before);
+  /* The panel shows the restored value. */
+  g_assert_cmpfloat (rugosa_quantity_entry_get_value (length), ==, before);
+  g_assert_cmpfloat (design_point (win, pos)->result.head_loss_total_m, ==, h_before);
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.redo", NULL);
+  drain ();
+  g_assert_cmpfloat (rugosa_line_get_double (line, "length"), !=, before);
+
+  /* Structural edits too: add a line, undo it. */
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.line-add", NULL);
+  drain ();
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, n + 1);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  drain ();
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, n);
+  close_window (win);
+}
+
+static void
+test_autosave (void)
+{
+  RugosaWindow *win = open_demo ();
+  guint pos = find_line (win, -1, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  g_autofree char *autosave = rugosa_window_autosave_path (win);
+  g_autoptr (RugosaProject) copy = rugosa_project_new ();
+  g_autoptr (GError) error = NULL;
+  g_autofree char *saved = g_build_filename (tmpdir, "autosaved-then-saved.rugosa", NULL);
+  g_autoptr (GFile) file = g_file_new_for_path (saved);
+
+  g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "321 m"));
+  drain ();
+  g_assert_true (rugosa_window_autosave_now (win, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_test (autosave, G_FILE_TEST_EXISTS));
+  /* The recovery copy holds the unsaved change. */
+  g_assert_true (rugosa_project_load (copy, autosave, &error));
+  g_assert_true (rugosa_project_equal (copy, rugosa_window_get_project (win)));
+  /* A real save makes the copy unnecessary. */
+  g_assert_true (rugosa_window_save_file_sync (win, file, &error));
+  g_assert_false (g_file_test (autosave, G_FILE_TEST_EXISTS));
+  close_window (win);
+}
+
+static void
+test_probe_and_keys (void)
+{
+  RugosaWindow *win = open_demo ();
+  RugosaCanvas *canvas = RUGOSA_CANVAS (rugosa_window_get_canvas (win));
+  GtkSingleSelection *sel = rugosa_window_get_selection (win);
+  guint n = rugosa_project_get_n_lines (rugosa_window_get_project (win));
+  guint pos = find_line (win, -1, FALSE);
+  double x, y;
+
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (canvas));
+  g_assert_true (rugosa_canvas_marker_position (canvas, pos, &x, &y));
+  /* On a marker the tooltip speaks; the pointer readout stays away. */
+  rugosa_canvas_pointer_at (canvas, x, y);
+  g_assert_null (rugosa_canvas_get_probe_text (canvas));
+  /* Somewhere off the markers and labels, inside the plot, the readout
+   * names Re, f and ε/D. */
+  {
+    int w = gtk_widget_get_width (GTK_WIDGET (canvas));
+    int h = gtk_widget_get_height (GTK_WIDGET (canvas));
+    gboolean found = FALSE;
+
+    for (int i = 1; i < 10 && !found; i++)
+      for (int j = 1; j < 10 && !found; j++)
+        {
+          const char *text;
+
+          rugosa_canvas_pointer_at (canvas, w * i / 10.0, h * j / 10.0);
+          text = rugosa_canvas_get_probe_text (canvas);
+          found = text && strstr (text, "Re") && strstr (text, "ε/D");
+        }
+    g_assert_true (found);
+  }
+
+  gtk_single_selection_set_selected (sel, 0);
+  gtk_widget_activate_action (GTK_WIDGET (canvas), "canvas.step", "i", 1);
+  g_assert_cmpuint (gtk_single_selection_get_selected (sel), ==, 1 % n);
+  gtk_widget_activate_action (GTK_WIDGET (canvas), "canvas.step", "i", -1);
+  g_assert_cmpuint (gtk_single_selection_get_selected (sel), ==, 0);
+  close_window (win);
+}
+
+static void
+test_units_preference (void)
+{
+  RugosaWindow *win = open_demo ();
+  GSettings *settings = rugosa_application_get_settings (app);
+  guint pos = find_line (win, -1, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  RugosaQuantityEntry *flow = rugosa_line_panel_get_entry (panel, "flow-design");
+  const char *text;
+
+  g_settings_set_string (settings, "unit-flow", "gpm");
+  drain ();
+  text = gtk_editable_get_text (rugosa_quantity_entry_get_editable (flow));
+  g_assert_true (g_str_has_suffix (text, " gpm"));
+  g_settings_reset (settings, "unit-flow");
+  drain ();
+  close_window (win);
+}
+
+static void
+test_screenshot (void)
+{
+  RugosaWindow *win = open_demo ();
+  g_autofree char *path = NULL;
+  const char *build = g_getenv ("RUGOSA_BUILD_DIR");
+  GdkPaintable *paintable;
+  GtkSnapshot *snapshot;
+  GskRenderNode *node;
+  GdkTexture *texture;
+  int w, h;
+
+  find_line (win, -1, TRUE);
+  select_line (win, find_line (win, -1, TRUE));
+  gtk_range_set_value (rugosa_window_get_age_scale (win), 25.0);
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
+  drain ();
+  /* Without a compositor the window keeps a thin border outside the
+   * widget: grow the window until the widget itself is 1400 × 900. */
+  for (int tries = 0; tries < 5; tries++)
+    {
+      w = gtk_widget_get_width (GTK_WIDGET (win));
+      h = gtk_widget_get_height (GTK_WIDGET (win));
+      if (w == 1400 && h == 900)
+        break;
+      gtk_window_set_default_size (GTK_WINDOW (win), 1400 + (1400 - w) + (tries ? 0 : 0),
+                                   900 + (900 - h));
+      gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
+      drain ();
+    }
+  w = gtk_widget_get_width (GTK_WIDGET (win));
+  h = gtk_widget_get_height (GTK_WIDGET (win));
+  g_assert_cmpint (w, ==, 1400);
+  g_assert_cmpint (h, ==, 900);
+
+  paintable = gtk_widget_paintable_new (GTK_WIDGET (win));
+  snapshot = gtk_snapshot_new ();
+  gdk_paintable_snapshot (paintable, snapshot, w, h);
+  node = gtk_snapshot_free_to_node (snapshot);
+  g_assert_nonnull (node);
+  texture = gsk_renderer_render_texture (gtk_native_get_renderer (GTK_NATIVE (win)), node,
+                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
+  path = g_build_filename (build ? build : ".", "rugosa-window.png", NULL);
+  g_assert_true (gdk_texture_save_to_png (texture, path));
+  g_test_message ("screenshot: %s", path);
+  g_assert_cmpint (gdk_texture_get_width (texture), ==, 1400);
+
+  g_object_unref (texture);
+  gsk_render_node_unref (node);
+  g_object_unref (paintable);
+  close_window (win);
+}
+
+int
+main (int argc, char *argv[])
+{
+  int status;
+
+  tmpdir = g_dir_make_tmp ("rugosa-test-ui-XXXXXX", NULL);
+  {
+    /* Recovery copies and recent files go to a private folder. */
+    g_autofree char *state = g_build_filename (tmpdir, "state", NULL);
+    g_autofree char *data = g_build_filename (tmpdir, "data", NULL);
+    g_setenv ("XDG_STATE_HOME", state, TRUE);
+    g_setenv ("XDG_DATA_HOME", data, TRUE);
+  }
+  g_setenv ("GSETTINGS_BACKEND", "memory", TRUE);
+  g_setenv ("GSK_RENDERER", "cairo", FALSE);
+
+  g_test_init (&argc, &argv, NULL);
+  gtk_disable_setlocale ();
+  if (!gtk_init_check ())
+    {
+      g_print ("1..0 # SKIP no display\n");
+      return 0;
+    }
+  adw_init ();
+
+  app = g_object_new (RUGOSA_TYPE_APPLICATION,
+                      "application-id", "org.rugosa.Rugosa.Test",
+                      "flags", G_APPLICATION_NON_UNIQUE,
+                      "resource-base-path", "/org/rugosa/Rugosa",
+                      NULL);
+  g_assert_true (g_application_register (G_APPLICATION (app), NULL, NULL));
+
+  g_test_add_func ("/ui/demo/loads", test_demo_loads);
+  g_test_add_func ("/ui/panel/temperature-changes-density", test_temperature_changes_density);
+  g_test_add_func ("/ui/slider/head-loss-grows", test_slider_grows_head_loss);
+  g_test_add_func ("/ui/entry/bad-value-keeps-last", test_bad_value_keeps_last);
+  g_test_add_func ("/ui/files/save-reopen", test_save_reopen);
+  g_test_add_func ("/ui/history/undo-redo", test_undo_redo);
+  g_test_add_func ("/ui/files/autosave", test_autosave);
+  g_test_add_func ("/ui/canvas/probe-and-keys", test_probe_and_keys);
+  g_test_add_func ("/ui/preferences/flow-unit", test_units_preference);
+  g_test_add_func ("/ui/screenshot", test_screenshot);
+
+  status = g_test_run ();
+  g_object_unref (app);
+  return status;
+}
