@@ -78,3 +78,4 @@ void cli_table_number (GString *out, const char *label, double value,
 int cli_cmd_friction (int argc, char **argv);
 int cli_cmd_fluid (int argc, char **argv);
 int cli_cmd_line (int argc, char **argv);
+int cli_cmd_catalog (int argc, char **argv);

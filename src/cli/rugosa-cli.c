@@ -18,11 +18,17 @@ static const char usage_text[] =
   "             --re RE --rr EPS_OVER_D [--model colebrook|haaland|swamee-jain|churchill] [--json]\n"
   "  fluid      density and viscosity of a fluid\n"
   "             water --temperature T [--pressure P] [--json]\n"
+  "             seawater --temperature T --salinity S [--pressure P]\n"
+  "             air --temperature T [--pressure P]\n"
+  "             oil --temperature T --oil-nu1 NU --oil-t1 T --oil-nu2 NU --oil-t2 T\n"
+  "                 --oil-density RHO [--oil-density-t T] [--oil-expansion PER_K]\n"
+  "             custom --density RHO --viscosity MU (dynamic \"1 cP\" or kinematic \"1 cSt\")\n"
   "  line       hydraulics of one line\n"
   "             --flow Q (--diameter D | --pipe DESIGNATION) --length L\n"
   "             (--roughness E | --material NAME) --fluid KIND [fluid options]\n"
   "             [--k-sum K] [--fitting NAME[xCOUNT]]... [--elevation DZ]\n"
   "             [--age YEARS --aging CLASS|RATE] [--model M] [--json]\n"
+  "  catalog    list a catalog: materials, pipes, fittings, fluids or aging [--json]\n"
   "\n"
   "Values take units: \"12 L/s\", \"150 gpm\", \"4 in\", \"0.045 mm\", \"20 C\", \"68 F\".\n"
   "A bare number is SI. Exit status 2 means the input was refused.\n"
@@ -42,6 +48,7 @@ main (int argc, char **argv)
     { "friction", cli_cmd_friction },
     { "fluid", cli_cmd_fluid },
     { "line", cli_cmd_line },
+    { "catalog", cli_cmd_catalog },
   };
 
   /* Messages may be translated; numbers are always written and read in the
