@@ -54,8 +54,8 @@ materials (GString *out, gboolean json)
 
   list_begin (out, json);
   if (!json)
-    g_string_append_printf (out, "%-28s %-40s %12s  %s\n", "id", "material",
-                            "ε new (mm)", "published range (mm)");
+    g_string_append_printf (out, "%-28s %-44s %12s  %s\n", "id", "material",
+                            "new (mm)", "published range (mm)");
   for (int i = 0; i < rg_material_count (); i++)
     {
       const RgMaterial *m = rg_material_at (i);
@@ -72,10 +72,15 @@ materials (GString *out, gboolean json)
           item_end (&j, out);
         }
       else
-        g_string_append_printf (out, "%-28s %-40s %12s  %s – %s\n", m->id, m->name,
+        {
+          cli_pad (out, m->id, 28);
+          g_string_append_c (out, ' ');
+          cli_pad (out, m->name, 44);
+          g_string_append_printf (out, " %12s  %s – %s\n",
                                 cli_format_short (m->roughness_m * 1e3, a, sizeof a),
                                 cli_format_short (m->roughness_min_m * 1e3, b, sizeof b),
                                 cli_format_short (m->roughness_max_m * 1e3, c, sizeof c));
+        }
     }
   list_end (out, json);
 }
@@ -123,7 +128,7 @@ fittings (GString *out, gboolean json)
 
   list_begin (out, json);
   if (!json)
-    g_string_append_printf (out, "%-30s %-44s %8s %8s %8s\n", "id", "fitting", "K1", "Ki", "Kd");
+    g_string_append_printf (out, "%-30s %-50s %8s %8s %8s\n", "id", "fitting", "K1", "Ki", "Kd");
   for (int i = 0; i < rg_fitting_count (); i++)
     {
       const RgFitting *f = rg_fitting_at (i);
@@ -140,13 +145,18 @@ fittings (GString *out, gboolean json)
           item_end (&j, out);
         }
       else
-        g_string_append_printf (out, "%-30s %-44s %8s %8s %8s\n", f->id, f->name,
+        {
+          cli_pad (out, f->id, 30);
+          g_string_append_c (out, ' ');
+          cli_pad (out, f->name, 50);
+          g_string_append_printf (out, " %8s %8s %8s\n",
                                 cli_format_short (f->k1, a, sizeof a),
                                 cli_format_short (f->ki, b, sizeof b),
                                 cli_format_short (f->kd, c, sizeof c));
+        }
     }
   if (!json)
-    g_string_append (out, "Use --fitting NAME[xCOUNT]; a plain coefficient as --fitting \"K=0.8x2\".\n");
+    g_string_append (out, "\nUse --fitting NAME[xCOUNT]; a plain coefficient as --fitting \"K=0.8x2\".\n");
   list_end (out, json);
 }
 
@@ -157,7 +167,7 @@ aging (GString *out, gboolean json)
 
   list_begin (out, json);
   if (!json)
-    g_string_append_printf (out, "%-24s %-48s %12s\n", "id", "class", "α (mm/yr)");
+    g_string_append_printf (out, "%-24s %-70s %12s\n", "id", "class", "rate (mm/yr)");
   for (int i = 0; i < rg_aging_class_count (); i++)
     {
       const RgAgingClass *k = rg_aging_class_at (i);
@@ -172,8 +182,13 @@ aging (GString *out, gboolean json)
           item_end (&j, out);
         }
       else
-        g_string_append_printf (out, "%-24s %-48s %12s\n", k->id, k->name,
+        {
+          cli_pad (out, k->id, 24);
+          g_string_append_c (out, ' ');
+          cli_pad (out, k->name, 70);
+          g_string_append_printf (out, " %12s\n",
                                 cli_format_short (k->rate_m_per_year * 1e3, a, sizeof a));
+        }
     }
   list_end (out, json);
 }

@@ -32,6 +32,24 @@ parse_quantity (const CliArgs *args, const char *name, RgQuantity q,
   return rg_units_parse (q, name, text, si, err) == RG_OK;
 }
 
+/* A quantity that must be greater than zero (or, with allow_zero, not
+ * negative); the sentence names the option, as the core cannot. */
+static gboolean
+parse_positive (const CliArgs *args, const char *name, RgQuantity q,
+                gboolean allow_zero, const char *example, double *si,
+                RgError *err)
+{
+  if (!parse_quantity (args, name, q, si, err))
+    return FALSE;
+  if (allow_zero ? *si < 0.0 : *si <= 0.0)
+    {
+      rg_error_set (err, RG_ERR_DOMAIN, "%s must be %s, e.g. %s \"%s\".", name,
+                    allow_zero ? "zero or greater" : "greater than zero", name, example);
+      return FALSE;
+    }
+  return TRUE;
+}
+
 static gboolean
 parse_model (const CliArgs *args, RgFrictionModel *model, RgError *err)
 {
@@ -524,7 +542,7 @@ cli_cmd_line (int argc, char **argv)
     }
   else if (!cli_args_has (&args, "--diameter"))
     return cli_fail ("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\".");
-  else if (!parse_quantity (&args, "--diameter", RG_QTY_LENGTH, &in.diameter_m, &err))
+  else if (!parse_positive (&args, "--diameter", RG_QTY_LENGTH, FALSE, "102.3 mm", &in.diameter_m, &err))
     return cli_fail_error (&err);
 
   /* Roughness: a value, a material, or the pipe's usual material. */
@@ -532,7 +550,7 @@ cli_cmd_line (int argc, char **argv)
     return cli_fail ("Give either --roughness (a value) or --material (a catalog name), not both.");
   if (cli_args_has (&args, "--roughness"))
     {
-      if (!parse_quantity (&args, "--roughness", RG_QTY_ROUGHNESS, &in.roughness_m, &err))
+      if (!parse_positive (&args, "--roughness", RG_QTY_ROUGHNESS, TRUE, "0.045 mm", &in.roughness_m, &err))
         return cli_fail_error (&err);
     }
   else
@@ -549,11 +567,11 @@ cli_cmd_line (int argc, char **argv)
 
   if (!cli_args_has (&args, "--flow"))
     return cli_fail ("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\".");
-  if (!parse_quantity (&args, "--flow", RG_QTY_FLOW, &in.flow_m3_s, &err))
+  if (!parse_positive (&args, "--flow", RG_QTY_FLOW, FALSE, "12 L/s", &in.flow_m3_s, &err))
     return cli_fail_error (&err);
   if (!cli_args_has (&args, "--length"))
     return cli_fail ("--length is required: give the line length, e.g. --length \"250 m\".");
-  if (!parse_quantity (&args, "--length", RG_QTY_LENGTH, &in.length_m, &err))
+  if (!parse_positive (&args, "--length", RG_QTY_LENGTH, FALSE, "250 m", &in.length_m, &err))
     return cli_fail_error (&err);
   if (cli_args_has (&args, "--elevation")
       && !parse_quantity (&args, "--elevation", RG_QTY_LENGTH, &in.elevation_m, &err))

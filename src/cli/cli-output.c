@@ -113,10 +113,22 @@ cli_json_end (CliJson *json)
 }
 
 void
+cli_pad (GString *out, const char *text, int width)
+{
+  /* printf pads by bytes; labels hold ε, ∂, Σ, ° … so pad by characters */
+  glong n = g_utf8_strlen (text, -1);
+
+  g_string_append (out, text);
+  for (; n < width; n++)
+    g_string_append_c (out, ' ');
+}
+
+void
 cli_table_row (GString *out, const char *label, const char *value,
                const char *unit)
 {
-  g_string_append_printf (out, "%-26s %s%s%s\n", label, value,
+  cli_pad (out, label, 26);
+  g_string_append_printf (out, " %s%s%s\n", value,
                           unit != NULL && *unit != '\0' ? " " : "",
                           unit != NULL ? unit : "");
 }

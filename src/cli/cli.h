@@ -69,6 +69,9 @@ char *cli_format_exact (double value, char *buf, gsize len);
 /* "%.6g" in the C locale. */
 char *cli_format_short (double value, char *buf, gsize len);
 
+/* Appends text padded with spaces to `width` characters (not bytes). */
+void cli_pad (GString *out, const char *text, int width);
+
 /* Table writer: "label    value unit" lines. */
 void cli_table_row (GString *out, const char *label, const char *value,
                     const char *unit);

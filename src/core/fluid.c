@@ -12,14 +12,17 @@
  *       least viscous gases (hydrogen) are near 9e-6 Pa·s, pumped heavy
  *       residues and bitumens stay well below 1e5 Pa·s.
  *   The kinematic viscosity is μ/ρ.
- * Seawater, oil and air live in their own files; this build reports them as
- *   not available.
+ * Seawater, oil and air live in their own files (seawater.c, oil.c, air.c);
+ *   this file maps the shared RgFluidSpec onto them.
  *
  * rg_fluid_spec_init gives every kind a usable state: 293.15 K (20 °C) and
  * 101 325 Pa absolute (one standard atmosphere).  A pressure of 0 is not
  * taken to mean "default": it is refused like any other impossible value. */
 #include "fluid.h"
 
+#include "air.h"
+#include "oil.h"
+#include "seawater.h"
 #include "water.h"
 
 #include <math.h>
@@ -48,6 +51,20 @@ rg_fluid_spec_init (RgFluidSpec *spec, RgFluidKind kind)
   spec->kind = kind;
   spec->temperature_k = DEFAULT_T_K;
   spec->pressure_pa = DEFAULT_P_PA;
+  /* Common practice (no single source): standard seawater is taken at an
+   * absolute salinity of 35 g/kg. */
+  spec->salinity_kg_kg = 0.035;
+  /* Common practice (no single source): a mineral oil of ISO VG 46 (ISO 3448
+   * midpoint 46 mm²/s at 40 °C), about 6.8 mm²/s at 100 °C for a viscosity
+   * index near 100, 870 kg/m³ at 15 °C, β = 0.00064 per K.  A starting point
+   * to be replaced by the oil's data sheet. */
+  spec->oil_t1_k = 313.15;
+  spec->oil_nu1_m2_s = 46.0e-6;
+  spec->oil_t2_k = 373.15;
+  spec->oil_nu2_m2_s = 6.8e-6;
+  spec->oil_density_ref_kg_m3 = 870.0;
+  spec->oil_t_ref_k = 288.15;
+  spec->oil_expansion_per_k = 0.00064;
 }
 
 const char *
@@ -117,7 +134,6 @@ rg_fluid_properties (const RgFluidSpec *spec, RgFluidProps *out,
   RgFluidProps p;
   RgStatus st;
 
-  (void) warnings; /* water and custom fluids raise no warnings */
   if (spec == NULL || out == NULL)
     return rg_error_set (err, RG_ERR_DOMAIN, "No fluid was given.");
   switch (spec->kind)
@@ -129,11 +145,23 @@ rg_fluid_properties (const RgFluidSpec *spec, RgFluidProps *out,
       st = custom_properties (spec, &p, err);
       break;
     case RG_FLUID_SEAWATER:
+      st = rg_seawater_properties (spec->temperature_k, spec->salinity_kg_kg, &p, err);
+      break;
     case RG_FLUID_OIL:
+      {
+        const RgOilSpec oil = {
+          .t1_k = spec->oil_t1_k, .nu1_m2_s = spec->oil_nu1_m2_s,
+          .t2_k = spec->oil_t2_k, .nu2_m2_s = spec->oil_nu2_m2_s,
+          .density_ref_kg_m3 = spec->oil_density_ref_kg_m3,
+          .t_ref_k = spec->oil_t_ref_k,
+          .expansion_per_k = spec->oil_expansion_per_k,
+        };
+        st = rg_oil_properties (&oil, spec->temperature_k, &p, warnings, err);
+      }
+      break;
     case RG_FLUID_AIR:
-      return rg_error_set (err, RG_ERR_DOMAIN,
-                           "The fluid '%s' is not available in this build.",
-                           KIND_ID[spec->kind]);
+      st = rg_air_properties (spec->temperature_k, spec->pressure_pa, &p, warnings, err);
+      break;
     case RG_FLUID_N_KINDS:
     default:
       return rg_error_set (err, RG_ERR_DOMAIN,
