@@ -140,6 +140,43 @@ check("line transitional", code == 0 and doc.get("regime") == "transitional"
       and close(doc["friction_factor_laminar"], 64 / doc["reynolds"], 1e-14)
       and "roughness_zone" not in doc, out + err)
 
+# --- eval: the project path gives what the line command gives --------------
+import os
+demo = os.path.join(os.environ.get("RUGOSA_SOURCE_DIR", os.path.dirname(__file__) + "/.."), "data", "demo.rugosa")
+code, out, err = run("eval", demo, "--format", "json", "--age", "25")
+check("eval exit", code == 0, err)
+doc = json.loads(out) if code == 0 else {"results": []}
+project = json.load(open(demo))
+for line in project["lines"]:
+    rows = [r for r in doc["results"] if r["line"] == line["name"] and r["case"] == "design"]
+    check(f"eval row {line['name']}", len(rows) == 1)
+    if not rows:
+        continue
+    row = rows[0]
+    check(f"eval keys {line['name']}", LINE_KEYS <= set(row), sorted(LINE_KEYS - set(row)))
+    args = ["line", "--flow", repr(line["flow"]["design_m3_s"]), "--length", repr(line["length_m"]),
+            "--elevation", repr(line.get("elevation_change_m", 0.0)),
+            "--fluid", line["fluid"]["kind"], "--temperature", repr(line["fluid"]["temperature_K"]),
+            "--pressure", repr(line["fluid"]["pressure_Pa"]), "--json", "--age", "25"]
+    pipe = line["pipe"]
+    args += ["--pipe", pipe["designation"]] if "designation" in pipe else ["--diameter", repr(pipe["inner_diameter_m"])]
+    mat = line["material"]
+    args += ["--material", mat["catalog"]] if "catalog" in mat else ["--roughness", repr(mat["roughness_m"])]
+    args += ["--aging", "%r mm/yr" % (line["aging"]["rate_m_per_year"] * 1e3)]
+    for fit in line.get("fittings", []):
+        name = fit["catalog"] if "catalog" in fit else "K=%r" % fit["k"]
+        args += ["--fitting", "%s x%d" % (name, fit["count"])]
+    code, out, err = run(*args)
+    ref = json.loads(out) if code == 0 else {}
+    check(f"eval vs line exit {line['name']}", code == 0, err)
+    for key in ("velocity_m_s", "reynolds", "friction_factor", "head_loss_total_m", "pressure_drop_Pa",
+                "roughness_m", "head_loss_ratio_to_new", "minor_loss_k_total"):
+        check(f"eval vs line {line['name']} {key}", key in ref and close(row[key], ref[key], 1e-12),
+              f"{row.get(key)} vs {ref.get(key)}")
+
+code, out, err = run("eval", "/nonexistent/x.rugosa")
+check("eval missing file", code == 2 and out == "" and len(err.splitlines()) == 1, err)
+
 # --- bad input: exit 2, one sentence naming the option, nothing on stdout -----
 BASE = ["line", "--flow", "12 L/s", "--diameter", "100 mm", "--length", "250 m",
         "--roughness", "0.045 mm", "--fluid", "water", "--temperature", "15 C"]

@@ -468,8 +468,9 @@ parse_aging (const char *text, double *rate_m_per_year, RgError *err)
     }
   if (rg_units_parse (RG_QTY_ROUGHNESS_RATE, "--aging", text, &si, err) != RG_OK)
     return FALSE;
-  if (rg_units_from_si (RG_QTY_ROUGHNESS_RATE, si, "m/yr", rate_m_per_year, err) != RG_OK)
+  if (rg_units_from_si (RG_QTY_ROUGHNESS_RATE, si, "mm/yr", rate_m_per_year, err) != RG_OK)
     return FALSE;
+  *rate_m_per_year *= 1e-3;
   if (!(*rate_m_per_year >= 0.0 && *rate_m_per_year <= 0.01))
     {
       rg_error_set (err, RG_ERR_DOMAIN,

@@ -82,3 +82,9 @@ int cli_cmd_friction (int argc, char **argv);
 int cli_cmd_fluid (int argc, char **argv);
 int cli_cmd_line (int argc, char **argv);
 int cli_cmd_catalog (int argc, char **argv);
+int cli_cmd_eval (int argc, char **argv);
+
+/* Shared by the project commands (cli-project.c). */
+typedef struct _RugosaProject RugosaProject;
+RugosaProject *cli_load_project (const CliArgs *args, const char *command);
+gboolean cli_parse_age_option (const CliArgs *args, double *age);

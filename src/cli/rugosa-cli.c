@@ -28,6 +28,8 @@ static const char usage_text[] =
   "             (--roughness E | --material NAME) --fluid KIND [fluid options]\n"
   "             [--k-sum K] [--fitting NAME[xCOUNT]]... [--elevation DZ]\n"
   "             [--age YEARS --aging CLASS|RATE] [--model M] [--json]\n"
+  "  eval       evaluate every line option of a project file\n"
+  "             PROJECT [--age YEARS] [--format table|csv|json]\n"
   "  catalog    list a catalog: materials, pipes, fittings, fluids or aging [--json]\n"
   "\n"
   "Values take units: \"12 L/s\", \"150 gpm\", \"4 in\", \"0.045 mm\", \"20 C\", \"68 F\".\n"
@@ -49,6 +51,7 @@ main (int argc, char **argv)
     { "fluid", cli_cmd_fluid },
     { "line", cli_cmd_line },
     { "catalog", cli_cmd_catalog },
+    { "eval", cli_cmd_eval },
   };
 
   /* Messages may be translated; numbers are always written and read in the
