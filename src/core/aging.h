@@ -9,7 +9,9 @@
 typedef struct {
   const char *id;            /* stable key */
   const char *name;          /* for people */
-  double rate_m_per_year;    /* α */
+  double rate_m_per_year;    /* α, the typical rate of the class */
+  double rate_min_m_per_year; /* the published spread of the class */
+  double rate_max_m_per_year;
   const char *source;
 } RgAgingClass;
 

@@ -40,3 +40,15 @@ const RgPipe *rg_pipe_at (int index);
  * "3/4 Type L", …), tolerant of case and spacing. */
 RgStatus rg_pipe_lookup (const char *designation, const RgPipe **out,
                          RgError *err);
+
+/* Helpers shared by the catalog lookups (materials, pipes, fittings, aging
+ * classes).  Levenshtein distance between two strings, ASCII case folded;
+ * only the first 63 bytes of each are compared. */
+int rg_catalog_edit_distance (const char *a, const char *b);
+
+/* Write into `buf` the (up to) three names of `count` candidates nearest to
+ * `query`, as "a, b or c": names containing the query first, then by edit
+ * distance.  `name_at(i)` gives the i-th
+ * candidate. */
+void rg_catalog_closest (const char *query, const char *(*name_at) (int),
+                         int count, char *buf, size_t len);

@@ -1,19 +1,28 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Flow regime and roughness zone.
  *
- * Regime: laminar below re_laminar_max, turbulent above re_turbulent_min,
- * transitional between.  Defaults 2000 and 4000: the range most
- * engineering texts give for pipe flow (e.g. Munson, Young and Okiishi,
- * Fundamentals of Fluid Mechanics, §8.1; White, Fluid Mechanics, §6.1).
- * In the transitional range the design value is the turbulent one and the
- * laminar value is reported beside it.
+ * Regime: laminar for Re < re_laminar_max, transitional for
+ * re_laminar_max ≤ Re < re_turbulent_min, turbulent from re_turbulent_min.
+ * Defaults 2000 and 4000: the "critical zone" of Moody's chart (Moody 1944,
+ * "Friction factors for pipe flow", Trans. ASME 66(8), 671–684; from memory,
+ * not checked against the document).  Texts differ (Munson, Young and
+ * Okiishi give about 2100 and 4000, White about 2300 for the onset), so both
+ * limits can be set, within 500 ≤ lower ≤ upper ≤ 1e5.
+ * In the transitional range the design value is the turbulent one (the
+ * conservative choice: it is the larger) and the laminar value 64/Re is
+ * reported beside it.  If a lower limit below RG_FRICTION_RE_MIN is set, a
+ * transitional point below that Reynolds number takes its turbulent value
+ * at RG_FRICTION_RE_MIN, the lowest the correlations are computed for.
  *
- * Roughness zone from ε⁺ = Re·(ε/D)·√(f/8) (the roughness Reynolds number
- * k_s·u_τ/ν with u_τ = V·√(f/8)):
- *   ε⁺ < 5    hydraulically smooth   (Nikuradse 1933; Schlichting,
- *             Boundary-Layer Theory, 8th ed., §17.2)
- *   ε⁺ > 70   fully rough            (same sources)
- *   between   transitionally rough. */
+ * Roughness zone from ε⁺ = Re·(ε/D)·√(f/8), the roughness Reynolds number
+ * k_s·u_τ/ν with friction velocity u_τ = V·√(f/8):
+ *   ε⁺ < 5         hydraulically smooth
+ *   5 ≤ ε⁺ ≤ 70    transitionally rough
+ *   ε⁺ > 70        fully rough
+ * Both limits: Nikuradse (1933), "Strömungsgesetze in rauhen Rohren",
+ * VDI-Forschungsheft 361, as summarised in Schlichting, Boundary-Layer
+ * Theory (the chapter on flow in rough pipes); from memory, edition and
+ * section not checked. */
 #include "regime.h"
 
 #include <math.h>
@@ -28,14 +37,26 @@ rg_transition_default (RgTransition *t)
   t->re_turbulent_min = 4000.0;
 }
 
+/* Bounds on settable transition limits: a sanity range, not physics.
+ * Below about 2000 pipe flow stays laminar whatever the disturbances, and
+ * with great care it has been kept laminar to about 1e5 (from memory of
+ * Pfenninger's 1961 experiments as cited by White, Viscous Fluid Flow; not
+ * checked against the document); 500 leaves room for cautious choices. */
+static const double TRANSITION_RE_LOWEST = 500.0;
+static const double TRANSITION_RE_HIGHEST = 1.0e5;
+
 RgStatus
 rg_transition_check (const RgTransition *t, RgError *err)
 {
-  if (!isfinite (t->re_laminar_max) || !isfinite (t->re_turbulent_min)
-      || t->re_laminar_max < 500.0 || t->re_turbulent_min > 1.0e5
-      || t->re_laminar_max > t->re_turbulent_min)
+  if (t == NULL)
     return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The transition thresholds must satisfy 500 ≤ lower ≤ upper ≤ 100000 (Reynolds numbers).");
+                         "The transition limits are missing.");
+  const double lo = t->re_laminar_max, hi = t->re_turbulent_min;
+  /* written so that NaN fails */
+  if (!(lo >= TRANSITION_RE_LOWEST && lo <= hi && hi <= TRANSITION_RE_HIGHEST))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The transition limits must satisfy %g ≤ lower ≤ upper ≤ %g (Reynolds numbers), not lower %g and upper %g.",
+                         TRANSITION_RE_LOWEST, TRANSITION_RE_HIGHEST, lo, hi);
   return RG_OK;
 }
 
@@ -103,6 +124,7 @@ rg_friction_point (RgFrictionModel model, const RgTransition *t, double re,
                    double rr, RgFrictionPoint *out, RgError *err)
 {
   RgTransition def;
+  RgFrictionPoint p;
   RgStatus st;
 
   if (t == NULL)
@@ -112,40 +134,43 @@ rg_friction_point (RgFrictionModel model, const RgTransition *t, double re,
     }
   if ((st = rg_transition_check (t, err)) != RG_OK)
     return st;
-  if (!isfinite (re) || re <= 0.0 || re > RG_FRICTION_RE_MAX)
+  if (!(re > 0.0 && re <= RG_FRICTION_RE_MAX))
     return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The Reynolds number must lie between 0 and %g.",
-                         RG_FRICTION_RE_MAX);
-  if (!isfinite (rr) || rr < 0.0 || rr > RG_FRICTION_RR_MAX)
+                         "The Reynolds number must be a number above 0 and at most %g, not %g.",
+                         RG_FRICTION_RE_MAX, re);
+  if (!(rr >= 0.0 && rr <= RG_FRICTION_RR_MAX))
     return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The relative roughness must lie between 0 and %g.",
-                         RG_FRICTION_RR_MAX);
+                         "The relative roughness must be a number between 0 and %g, not %g.",
+                         RG_FRICTION_RR_MAX, rr);
 
-  out->regime = rg_regime_classify (t, re);
-  out->zone = RG_ZONE_NONE;
-  out->has_laminar = 0;
-  out->eps_plus = 0.0;
-  out->roughness_elasticity = 0.0;
-  if ((st = rg_friction_laminar (re, &out->f_laminar, err)) != RG_OK)
+  /* Filled here and copied out only on success, so that a failure leaves
+   * *out untouched. */
+  p.regime = rg_regime_classify (t, re);
+  p.zone = RG_ZONE_NONE;
+  p.has_laminar = 0;
+  p.eps_plus = 0.0;
+  p.roughness_elasticity = 0.0;
+  if ((st = rg_friction_laminar (re, &p.f_laminar, err)) != RG_OK)
     return st;
 
-  if (out->regime == RG_REGIME_LAMINAR)
+  if (p.regime == RG_REGIME_LAMINAR)
     {
-      out->f = out->f_laminar;
+      p.f = p.f_laminar;
+      *out = p;
       return RG_OK;
     }
 
-  /* The turbulent correlations are computed from RG_FRICTION_RE_MIN; a lower
-   * laminar limit than that (settable) still needs a design value. */
+  /* see the top of the file for Reynolds numbers below RG_FRICTION_RE_MIN */
   const double re_t = fmax (re, RG_FRICTION_RE_MIN);
-  if ((st = rg_friction_model (model, re_t, rr, &out->f, err)) != RG_OK)
+  if ((st = rg_friction_model (model, re_t, rr, &p.f, err)) != RG_OK)
     return st;
-  if ((st = rg_friction_roughness_elasticity (re_t, rr, &out->roughness_elasticity, err)) != RG_OK)
+  if ((st = rg_friction_roughness_elasticity (re_t, rr, &p.roughness_elasticity, err)) != RG_OK)
     return st;
-  out->eps_plus = rg_roughness_reynolds (re, rr, out->f);
-  if (out->regime == RG_REGIME_TRANSITIONAL)
-    out->has_laminar = 1;
+  p.eps_plus = rg_roughness_reynolds (re, rr, p.f);
+  if (p.regime == RG_REGIME_TRANSITIONAL)
+    p.has_laminar = 1;
   else
-    out->zone = rg_roughness_zone_classify (out->eps_plus);
+    p.zone = rg_roughness_zone_classify (p.eps_plus);
+  *out = p;
   return RG_OK;
 }

@@ -31,11 +31,18 @@ extern const double RG_EPS_PLUS_SMOOTH_MAX;      /* 5 */
 extern const double RG_EPS_PLUS_FULLY_ROUGH_MIN; /* 70 */
 
 void rg_transition_default (RgTransition *t);
-/* 0 < re_laminar_max < re_turbulent_min, both finite. */
+/* 500 ≤ re_laminar_max ≤ re_turbulent_min ≤ 1e5 (equal limits: no
+ * transitional range).  NULL or NaN fails. */
 RgStatus rg_transition_check (const RgTransition *t, RgError *err);
 
+/* Laminar for re < re_laminar_max, transitional up to (not including)
+ * re_turbulent_min, turbulent from there.  `re` must be a number (callers
+ * check it; rg_friction_point does). */
 RgRegime rg_regime_classify (const RgTransition *t, double re);
+/* ε⁺ = re·rr·√(f/8) */
 double rg_roughness_reynolds (double re, double rr, double f);
+/* Smooth for ε⁺ < 5, fully rough for ε⁺ > 70, transitionally rough between
+ * (both limits included).  Never RG_ZONE_NONE. */
 RgRoughnessZone rg_roughness_zone_classify (double eps_plus);
 
 /* "laminar", "transitional", "turbulent" */

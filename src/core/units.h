@@ -45,3 +45,13 @@ RgStatus rg_units_from_si (RgQuantity q, double si, const char *unit,
 const char *rg_units_si_symbol (RgQuantity q);
 /* Comma-separated list of the accepted unit spellings for messages. */
 const char *rg_units_accepted (RgQuantity q);
+
+/* The i-th unit offered for q, counting from 0, in its display spelling
+ * ("m³/h", "°C"), for unit pickers and tables; NULL past the end or for an
+ * unknown q.  Every choice is accepted by rg_units_to_si/_from_si. */
+const char *rg_units_choice (RgQuantity q, int i);
+
+/* Pressures are absolute everywhere in Rugosa: "psi" and "psia" both mean
+ * pound-force per square inch absolute, "bar" is absolute; gauge spellings
+ * ("psig", "barg", "kPag", …) are refused with a sentence that says to add
+ * the atmospheric pressure. */

@@ -9,6 +9,12 @@
 #define RG_WATER_T_MAX_K 423.15
 #define RG_WATER_P_MAX_PA 10.0e6
 
+/* Densities accepted by rg_water_viscosity.  Liquid water inside the range
+ * above spans 917.0 kg/m³ (150 °C at saturation) to 1004.9 kg/m³ (about
+ * 4 °C at 10 MPa), both from IF97 region 1; the bounds leave a margin. */
+#define RG_WATER_RHO_MIN_KG_M3 900.0
+#define RG_WATER_RHO_MAX_KG_M3 1010.0
+
 /* Saturation pressure (IF97 region 4), 273.15 K ≤ T ≤ 647.096 K. */
 RgStatus rg_water_saturation_pressure (double t_k, double *p_pa, RgError *err);
 
@@ -17,7 +23,8 @@ RgStatus rg_water_saturation_pressure (double t_k, double *p_pa, RgError *err);
 RgStatus rg_water_density (double t_k, double p_pa, double *rho, RgError *err);
 
 /* Dynamic viscosity, IAPWS R12-08 (industrial formulation, no critical
- * enhancement), at the density above. */
+ * enhancement), at the density above.  T within the range above, rho within
+ * RG_WATER_RHO_MIN_KG_M3 … RG_WATER_RHO_MAX_KG_M3. */
 RgStatus rg_water_viscosity (double t_k, double rho, double *mu, RgError *err);
 
 /* Both, with the same range checks. */

@@ -1,0 +1,244 @@
+#!/usr/bin/env python3
+# SPDX-License-Identifier: GPL-3.0-or-later
+"""Turn the engineering catalogs under data/ into one C file.
+
+The JSON files are the only home of the numbers; this script converts units
+(inch -> m exactly, 1 in = 25.4 mm; mm -> m), computes ID = OD - 2*wall,
+checks the tables for consistency and writes catalog-data.c / catalog-data.h
+with the tables as const arrays.  Python 3 standard library only.
+
+Usage: gen-catalogs.py OUTDIR materials.json fittings.json aging.json pipes-*.json
+"""
+
+import json
+import math
+import os
+import sys
+
+INCH_M = 0.0254  # exact (international inch, 1959)
+MM_M = 0.001
+
+
+class CatalogError(Exception):
+    pass
+
+
+def c_str(s):
+    out = ['"']
+    for ch in s:
+        if ch == '\\':
+            out.append('\\\\')
+        elif ch == '"':
+            out.append('\\"')
+        elif ch == '\n':
+            out.append('\\n')
+        else:
+            out.append(ch)
+    out.append('"')
+    return ''.join(out)
+
+
+def c_num(x):
+    x = float(x)
+    if not math.isfinite(x):
+        raise CatalogError('non-finite number %r' % x)
+    r = repr(x)
+    if 'e' not in r and '.' not in r:
+        r += '.0'
+    return r
+
+
+def load(path):
+    with open(path, encoding='utf-8') as f:
+        return json.load(f, object_pairs_hook=no_duplicates)
+
+
+def no_duplicates(pairs):
+    d = {}
+    for k, v in pairs:
+        if k in d:
+            raise CatalogError('duplicate key %r' % k)
+        d[k] = v
+    return d
+
+
+def materials(doc):
+    rows = []
+    ids = set()
+    for m in doc['materials']:
+        lo, hi = m['range_mm']
+        eps = m['roughness_mm']
+        if not (0 < lo <= eps <= hi):
+            raise CatalogError('material %s: roughness %g mm outside its range [%g, %g]'
+                               % (m['id'], eps, lo, hi))
+        if m['id'] in ids:
+            raise CatalogError('material %s listed twice' % m['id'])
+        ids.add(m['id'])
+        rows.append(m)
+    return rows, ids
+
+
+def iso4065_wall(dn, renard_exponent, minimum):
+    """ISO 4065 wall for nominal OD dn (mm) and series S = 10**exponent."""
+    e = dn / (2.0 * 10.0 ** renard_exponent + 1.0)
+    e = round(e, 2)
+    e = math.ceil(round(e * 10.0, 6)) / 10.0
+    return max(e, minimum)
+
+
+def pipes(doc, files_by_name, material_ids):
+    std = doc['standard']
+    unit = {'in': INCH_M, 'mm': MM_M}[doc['units']]
+    if doc['material_id'] not in material_ids:
+        raise CatalogError('%s: unknown material %s' % (std, doc['material_id']))
+    if 'outside_diameters' in doc:
+        ods = doc['outside_diameters']
+    else:
+        ref = files_by_name[doc['outside_diameters_from']]
+        if ref['units'] != doc['units']:
+            raise CatalogError('%s: outside diameters in other units' % std)
+        ods = ref['outside_diameters']
+    rows = []
+    for s in doc['series']:
+        for nominal, wall in s['walls'].items():
+            if nominal not in ods:
+                raise CatalogError('%s %s: no outside diameter for %s' % (std, s['label'], nominal))
+            od = ods[nominal]
+            if not (0 < 2 * wall < od):
+                raise CatalogError('%s %s %s: wall %g does not fit OD %g'
+                                   % (std, nominal, s['label'], wall, od))
+            if 'renard_exponent' in s:
+                want = iso4065_wall(float(od), s['renard_exponent'], doc['minimum_wall_mm'])
+                if abs(want - wall) > 1e-9:
+                    raise CatalogError('%s dn %s %s: wall %g, ISO 4065 rule gives %g'
+                                       % (std, nominal, s['label'], wall, want))
+            od_m = od * unit
+            wall_m = wall * unit
+            rows.append({
+                'designation': doc['designation'].format(nominal=nominal, label=s['label']),
+                'standard': std,
+                'nominal': ('DN ' + nominal) if doc['units'] == 'mm' else nominal,
+                'series': s['series'],
+                'material_id': doc['material_id'],
+                'od': od_m,
+                'wall': wall_m,
+                'id': od_m - 2.0 * wall_m,
+                'source': doc['source'],
+            })
+    return rows
+
+
+def main(argv):
+    outdir = argv[1]
+    docs = {}
+    for path in argv[2:]:
+        docs[os.path.basename(path)] = load(path)
+
+    mats, mat_ids = materials(docs['materials.json'])
+    fit_doc = docs['fittings.json']
+    aging_doc = docs['aging.json']
+
+    pipe_rows = []
+    for name in sorted(docs):
+        if name.startswith('pipes-'):
+            pipe_rows += pipes(docs[name], docs, mat_ids)
+    seen = set()
+    for p in pipe_rows:
+        key = p['designation'].lower()
+        if key in seen:
+            raise CatalogError('designation %s listed twice' % p['designation'])
+        seen.add(key)
+
+    fit_ids = set()
+    for f in fit_doc['fittings']:
+        if f['id'] in fit_ids:
+            raise CatalogError('fitting %s listed twice' % f['id'])
+        fit_ids.add(f['id'])
+        if f['source'] not in fit_doc['sources']:
+            raise CatalogError('fitting %s: unknown source %s' % (f['id'], f['source']))
+        if min(f['k1'], f['ki'], f['kd']) < 0:
+            raise CatalogError('fitting %s: negative constant' % f['id'])
+
+    for c in aging_doc['classes']:
+        lo, hi = c['range_mm_per_year']
+        if not (0 <= lo <= c['rate_mm_per_year'] <= hi):
+            raise CatalogError('aging class %s: rate outside its range' % c['id'])
+
+    h = []
+    h.append('/* Generated by build-aux/gen-catalogs.py from the JSON files under data/: do not edit. */')
+    h.append('#pragma once')
+    h.append('#include "core/aging.h"')
+    h.append('#include "core/catalog.h"')
+    h.append('#include "core/fittings.h"')
+    h.append('')
+    for typ, name in (('RgMaterial', 'materials'), ('RgPipe', 'pipes'),
+                      ('RgFitting', 'fittings'), ('RgAgingClass', 'aging_classes')):
+        h.append('extern const %s rg_catalog_%s[];' % (typ, name))
+        h.append('extern const int rg_catalog_%s_count;' % name)
+
+    c = []
+    c.append('/* SPDX-License-Identifier: GPL-3.0-or-later */')
+    c.append('/* Generated by build-aux/gen-catalogs.py from the JSON files under data/: do not edit.')
+    c.append(' * The sources of every table are in the JSON files and in the')
+    c.append(' * `source` field of each row. */')
+    c.append('#include "catalog-data.h"')
+    c.append('')
+
+    c.append('const RgMaterial rg_catalog_materials[] = {')
+    for m in mats:
+        lo, hi = m['range_mm']
+        c.append('  { .id = %s, .name = %s, .roughness_m = %s, .roughness_min_m = %s,'
+                 ' .roughness_max_m = %s, .source = %s },'
+                 % (c_str(m['id']), c_str(m['name']), c_num(m['roughness_mm'] * MM_M),
+                    c_num(lo * MM_M), c_num(hi * MM_M), c_str(m['source'])))
+    c.append('};')
+    c.append('const int rg_catalog_materials_count = %d;' % len(mats))
+    c.append('')
+
+    c.append('const RgPipe rg_catalog_pipes[] = {')
+    for p in pipe_rows:
+        c.append('  { .designation = %s, .standard = %s, .nominal = %s, .series = %s,'
+                 ' .material_id = %s, .outside_diameter_m = %s, .wall_m = %s,'
+                 ' .inner_diameter_m = %s, .source = %s },'
+                 % (c_str(p['designation']), c_str(p['standard']), c_str(p['nominal']),
+                    c_str(p['series']), c_str(p['material_id']), c_num(p['od']),
+                    c_num(p['wall']), c_num(p['id']), c_str(p['source'])))
+    c.append('};')
+    c.append('const int rg_catalog_pipes_count = %d;' % len(pipe_rows))
+    c.append('')
+
+    c.append('const RgFitting rg_catalog_fittings[] = {')
+    for f in fit_doc['fittings']:
+        src = fit_doc['sources'][f['source']]
+        c.append('  { .id = %s, .name = %s, .k1 = %s, .ki = %s, .kd = %s, .source = %s },'
+                 % (c_str(f['id']), c_str(f['name']), c_num(f['k1']), c_num(f['ki']),
+                    c_num(f['kd']), c_str('From memory of ' + src + '; not checked against the document')))
+    c.append('};')
+    c.append('const int rg_catalog_fittings_count = %d;' % len(fit_doc['fittings']))
+    c.append('')
+
+    c.append('const RgAgingClass rg_catalog_aging_classes[] = {')
+    year_rate = MM_M
+    for a in aging_doc['classes']:
+        lo, hi = a['range_mm_per_year']
+        c.append('  { .id = %s, .name = %s, .rate_m_per_year = %s, .rate_min_m_per_year = %s,'
+                 ' .rate_max_m_per_year = %s, .source = %s },'
+                 % (c_str(a['id']), c_str(a['name']), c_num(a['rate_mm_per_year'] * year_rate),
+                    c_num(lo * year_rate), c_num(hi * year_rate), c_str(a['source'])))
+    c.append('};')
+    c.append('const int rg_catalog_aging_classes_count = %d;' % len(aging_doc['classes']))
+
+    os.makedirs(outdir, exist_ok=True)
+    with open(os.path.join(outdir, 'catalog-data.h'), 'w', encoding='utf-8') as f:
+        f.write('\n'.join(h) + '\n')
+    with open(os.path.join(outdir, 'catalog-data.c'), 'w', encoding='utf-8') as f:
+        f.write('\n'.join(c) + '\n')
+    return 0
+
+
+if __name__ == '__main__':
+    try:
+        sys.exit(main(sys.argv))
+    except (CatalogError, KeyError, ValueError) as e:
+        sys.stderr.write('gen-catalogs: %s\n' % e)
+        sys.exit(1)

@@ -1,0 +1,188 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#define G_LOG_DOMAIN "rugosa-cli"
+
+#include "config.h"
+
+#include <math.h>
+#include <stdio.h>
+#include <string.h>
+
+#include "cli.h"
+
+static const CliOption *
+find_option (const CliOption *options, const char *name)
+{
+  for (const CliOption *o = options; o->name != NULL; o++)
+    if (g_str_equal (o->name, name))
+      return o;
+  return NULL;
+}
+
+gboolean
+cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
+                int argc, char **argv, int first, GString *message)
+{
+  args->command = command;
+  args->values = g_hash_table_new_full (g_str_hash, g_str_equal, g_free,
+                                        (GDestroyNotify) g_ptr_array_unref);
+  args->positional = g_ptr_array_new_with_free_func (g_free);
+
+  for (int i = first; i < argc; i++)
+    {
+      const char *arg = argv[i];
+      g_autofree char *name = NULL;
+      const char *value = NULL;
+      const CliOption *opt;
+
+      if (arg[0] != '-' || arg[1] == '\0' || g_ascii_isdigit (arg[1])
+          || (arg[1] == '.' && g_ascii_isdigit (arg[2])))
+        {
+          g_ptr_array_add (args->positional, g_strdup (arg));
+          continue;
+        }
+      const char *eq = strchr (arg, '=');
+      if (g_str_has_prefix (arg, "--") && eq != NULL)
+        {
+          name = g_strndup (arg, (gsize) (eq - arg));
+          value = eq + 1;
+        }
+      else
+        name = g_strdup (arg);
+
+      opt = find_option (options, name);
+      if (opt == NULL)
+        {
+          g_string_printf (message,
+                           "Unknown option %s for '%s'; see 'rugosa-cli %s --help'.",
+                           name, command, command);
+          return FALSE;
+        }
+      if (opt->has_value && value == NULL)
+        {
+          if (i + 1 >= argc)
+            {
+              g_string_printf (message, "Option %s needs a value.", name);
+              return FALSE;
+            }
+          value = argv[++i];
+        }
+      else if (!opt->has_value && value != NULL)
+        {
+          g_string_printf (message, "Option %s takes no value.", name);
+          return FALSE;
+        }
+      if (value != NULL && !g_utf8_validate (value, -1, NULL))
+        {
+          g_string_printf (message, "The value of %s is not valid UTF-8 text.", name);
+          return FALSE;
+        }
+
+      GPtrArray *list = g_hash_table_lookup (args->values, name);
+      if (list != NULL && !opt->repeatable)
+        {
+          g_string_printf (message, "Option %s is given more than once.", name);
+          return FALSE;
+        }
+      if (list == NULL)
+        {
+          list = g_ptr_array_new_with_free_func (g_free);
+          g_hash_table_insert (args->values, g_strdup (name), list);
+        }
+      g_ptr_array_add (list, g_strdup (value != NULL ? value : ""));
+    }
+  return TRUE;
+}
+
+void
+cli_args_clear (CliArgs *args)
+{
+  g_clear_pointer (&args->values, g_hash_table_unref);
+  g_clear_pointer (&args->positional, g_ptr_array_unref);
+}
+
+gboolean
+cli_args_has (const CliArgs *args, const char *name)
+{
+  return g_hash_table_contains (args->values, name);
+}
+
+const char *
+cli_args_get (const CliArgs *args, const char *name)
+{
+  GPtrArray *list = g_hash_table_lookup (args->values, name);
+  return list != NULL && list->len > 0 ? g_ptr_array_index (list, list->len - 1) : NULL;
+}
+
+GPtrArray *
+cli_args_get_all (const CliArgs *args, const char *name)
+{
+  static GPtrArray *empty;
+  GPtrArray *list = g_hash_table_lookup (args->values, name);
+
+  if (list != NULL)
+    return list;
+  if (empty == NULL)
+    empty = g_ptr_array_new ();
+  return empty;
+}
+
+int
+cli_fail (const char *fmt, ...)
+{
+  va_list ap;
+  g_autofree char *text = NULL;
+
+  va_start (ap, fmt);
+  text = g_strdup_vprintf (fmt, ap);
+  va_end (ap);
+  fprintf (stderr, "rugosa-cli: %s\n", text);
+  return CLI_EXIT_USAGE;
+}
+
+int
+cli_fail_error (const RgError *err)
+{
+  return cli_fail ("%s", err->text[0] != '\0' ? err->text : "The computation failed.");
+}
+
+const char *
+cli_require (const CliArgs *args, const char *name, const char *hint,
+             GString *message)
+{
+  const char *v = cli_args_get (args, name);
+
+  if (v == NULL)
+    g_string_printf (message, "%s is required: %s.", name, hint);
+  return v;
+}
+
+gboolean
+cli_parse_number (const char *what, const char *text, double *out,
+                  GString *message)
+{
+  char *end = NULL;
+  double v;
+
+  while (g_ascii_isspace (*text))
+    text++;
+  if (*text == '\0')
+    {
+      g_string_printf (message, "%s needs a number; the value is empty.", what);
+      return FALSE;
+    }
+  v = g_ascii_strtod (text, &end);
+  while (end != NULL && g_ascii_isspace (*end))
+    end++;
+  if (end == text || (end != NULL && *end != '\0'))
+    {
+      g_string_printf (message, "%s needs a plain number, not \"%s\".", what, text);
+      return FALSE;
+    }
+  if (!isfinite (v))
+    {
+      g_string_printf (message, "%s must be a finite number, not \"%s\".", what, text);
+      return FALSE;
+    }
+  *out = v;
+  return TRUE;
+}

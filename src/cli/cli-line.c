@@ -1,0 +1,715 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The computation commands: friction, fluid, line. */
+#define G_LOG_DOMAIN "rugosa-cli"
+
+#include "config.h"
+
+#include <math.h>
+#include <stdio.h>
+#include <string.h>
+
+#include "cli.h"
+#include "core/aging.h"
+#include "core/catalog.h"
+#include "core/fittings.h"
+#include "core/fluid.h"
+#include "core/line.h"
+#include "core/units.h"
+
+static int
+finish_output (GString *out)
+{
+  fputs (out->str, stdout);
+  return fflush (stdout) == 0 ? CLI_EXIT_OK : CLI_EXIT_FAILURE;
+}
+
+static gboolean
+parse_quantity (const CliArgs *args, const char *name, RgQuantity q,
+                double *si, RgError *err)
+{
+  const char *text = cli_args_get (args, name);
+
+  return rg_units_parse (q, name, text, si, err) == RG_OK;
+}
+
+/* A quantity that must be greater than zero (or, with allow_zero, not
+ * negative); the sentence names the option, as the core cannot. */
+static gboolean
+parse_positive (const CliArgs *args, const char *name, RgQuantity q,
+                gboolean allow_zero, const char *example, double *si,
+                RgError *err)
+{
+  if (!parse_quantity (args, name, q, si, err))
+    return FALSE;
+  if (allow_zero ? *si < 0.0 : *si <= 0.0)
+    {
+      rg_error_set (err, RG_ERR_DOMAIN, "%s must be %s, e.g. %s \"%s\".", name,
+                    allow_zero ? "zero or greater" : "greater than zero", name, example);
+      return FALSE;
+    }
+  return TRUE;
+}
+
+static gboolean
+parse_model (const CliArgs *args, RgFrictionModel *model, RgError *err)
+{
+  const char *id = cli_args_get (args, "--model");
+
+  *model = RG_FRICTION_COLEBROOK;
+  if (id == NULL)
+    return TRUE;
+  return rg_friction_model_from_id (id, model, err) == RG_OK;
+}
+
+/* ---- friction ---------------------------------------------------------- */
+
+static const CliOption friction_options[] = {
+  { "--re", TRUE, FALSE },
+  { "--rr", TRUE, FALSE },
+  { "--model", TRUE, FALSE },
+  { "--json", FALSE, FALSE },
+  { NULL, FALSE, FALSE },
+};
+
+int
+cli_cmd_friction (int argc, char **argv)
+{
+  g_auto (CliArgs) args = { 0 };
+  g_autoptr (GString) msg = g_string_new (NULL);
+  g_autoptr (GString) out = g_string_new (NULL);
+  RgError err = { 0 };
+  RgFrictionModel model;
+  RgFrictionPoint pt;
+  const char *re_text, *rr_text;
+  double re, rr;
+
+  if (!cli_args_parse (&args, "friction", friction_options, argc, argv, 2, msg))
+    return cli_fail ("%s", msg->str);
+  if (args.positional->len > 0)
+    return cli_fail ("Unexpected argument \"%s\" for 'friction'.",
+                     (char *) g_ptr_array_index (args.positional, 0));
+  if ((re_text = cli_require (&args, "--re", "give the Reynolds number, e.g. --re 1e5", msg)) == NULL
+      || (rr_text = cli_require (&args, "--rr", "give the relative roughness ε/D, e.g. --rr 0.0002", msg)) == NULL)
+    return cli_fail ("%s", msg->str);
+  if (!cli_parse_number ("--re", re_text, &re, msg)
+      || !cli_parse_number ("--rr", rr_text, &rr, msg))
+    return cli_fail ("%s", msg->str);
+  if (!(re > 0.0 && re <= RG_FRICTION_RE_MAX))
+    return cli_fail ("--re must lie between 0 (exclusive) and %g.", RG_FRICTION_RE_MAX);
+  if (!(rr >= 0.0 && rr <= RG_FRICTION_RR_MAX))
+    return cli_fail ("--rr must lie between 0 and %g.", RG_FRICTION_RR_MAX);
+  if (!parse_model (&args, &model, &err))
+    return cli_fail_error (&err);
+  if (rg_friction_point (model, NULL, re, rr, &pt, &err) != RG_OK)
+    return cli_fail_error (&err);
+
+  if (cli_args_has (&args, "--json"))
+    {
+      CliJson json;
+      cli_json_begin (&json, out);
+      cli_json_number (&json, "friction_factor", pt.f);
+      cli_json_string (&json, "model", rg_friction_model_id (model));
+      cli_json_number (&json, "reynolds", re);
+      cli_json_number (&json, "relative_roughness", rr);
+      cli_json_string (&json, "regime", rg_regime_id (pt.regime));
+      if (pt.has_laminar)
+        cli_json_number (&json, "friction_factor_laminar", pt.f_laminar);
+      if (pt.regime == RG_REGIME_TURBULENT)
+        {
+          cli_json_string (&json, "roughness_zone", rg_roughness_zone_id (pt.zone));
+          cli_json_number (&json, "roughness_reynolds", pt.eps_plus);
+        }
+      cli_json_number (&json, "roughness_elasticity", pt.roughness_elasticity);
+      cli_json_end (&json);
+    }
+  else
+    {
+      char buf[G_ASCII_DTOSTR_BUF_SIZE];
+      /* f first, alone on the first line, with 17 significant digits */
+      g_string_append_printf (out, "%s\n", cli_format_exact (pt.f, buf, sizeof buf));
+      cli_table_row (out, "model", rg_friction_model_title (model), NULL);
+      cli_table_row (out, "regime", rg_regime_id (pt.regime), NULL);
+      if (pt.has_laminar)
+        cli_table_number (out, "laminar value (64/Re)", pt.f_laminar, NULL);
+      if (pt.regime == RG_REGIME_TURBULENT)
+        {
+          cli_table_row (out, "roughness zone", rg_roughness_zone_id (pt.zone), NULL);
+          cli_table_number (out, "roughness Reynolds ε⁺", pt.eps_plus, NULL);
+        }
+      cli_table_number (out, "∂ln f/∂ln(ε/D)", pt.roughness_elasticity, NULL);
+    }
+  return finish_output (out);
+}
+
+/* ---- fluids ------------------------------------------------------------ */
+
+#define FLUID_OPTIONS \
+  { "--temperature", TRUE, FALSE }, \
+  { "--pressure", TRUE, FALSE }, \
+  { "--salinity", TRUE, FALSE }, \
+  { "--density", TRUE, FALSE }, \
+  { "--viscosity", TRUE, FALSE }, \
+  { "--oil-nu1", TRUE, FALSE }, \
+  { "--oil-t1", TRUE, FALSE }, \
+  { "--oil-nu2", TRUE, FALSE }, \
+  { "--oil-t2", TRUE, FALSE }, \
+  { "--oil-density", TRUE, FALSE }, \
+  { "--oil-density-t", TRUE, FALSE }, \
+  { "--oil-expansion", TRUE, FALSE }
+
+/* Fills `spec` for the fluid `kind_text` from the options.  Unused options
+ * of another fluid are refused, so a typo cannot pass unnoticed. */
+static gboolean
+fluid_from_args (const CliArgs *args, const char *kind_text, RgFluidSpec *spec,
+                 RgError *err)
+{
+  static const char *const per_kind[RG_FLUID_N_KINDS][8] = {
+    [RG_FLUID_WATER] = { "--temperature", "--pressure" },
+    [RG_FLUID_CUSTOM] = { "--density", "--viscosity" },
+    [RG_FLUID_SEAWATER] = { "--temperature", "--pressure", "--salinity" },
+    [RG_FLUID_OIL] = { "--temperature", "--oil-nu1", "--oil-t1", "--oil-nu2",
+                       "--oil-t2", "--oil-density", "--oil-density-t",
+                       "--oil-expansion" },
+    [RG_FLUID_AIR] = { "--temperature", "--pressure" },
+  };
+  static const char *const all[] = {
+    "--temperature", "--pressure", "--salinity", "--density", "--viscosity",
+    "--oil-nu1", "--oil-t1", "--oil-nu2", "--oil-t2", "--oil-density",
+    "--oil-density-t", "--oil-expansion",
+  };
+  RgFluidKind kind;
+
+  if (rg_fluid_kind_from_id (kind_text, &kind, err) != RG_OK)
+    return FALSE;
+  rg_fluid_spec_init (spec, kind);
+
+  for (gsize i = 0; i < G_N_ELEMENTS (all); i++)
+    {
+      gboolean allowed = FALSE;
+      if (!cli_args_has (args, all[i]))
+        continue;
+      for (int j = 0; j < 8 && per_kind[kind][j] != NULL; j++)
+        allowed |= g_str_equal (per_kind[kind][j], all[i]);
+      if (!allowed)
+        {
+          rg_error_set (err, RG_ERR_DOMAIN, "%s does not apply to the fluid '%s'.",
+                        all[i], rg_fluid_kind_id (kind));
+          return FALSE;
+        }
+    }
+
+  switch (kind)
+    {
+    case RG_FLUID_CUSTOM:
+      {
+        const char *visc = cli_args_get (args, "--viscosity");
+        int kinematic = 0;
+        double mu;
+        if (!cli_args_has (args, "--density") || visc == NULL)
+          {
+            rg_error_set (err, RG_ERR_DOMAIN,
+                          "A custom fluid needs --density (e.g. \"998 kg/m3\") and --viscosity (dynamic, e.g. \"1 cP\", or kinematic, e.g. \"1 cSt\").");
+            return FALSE;
+          }
+        if (!parse_quantity (args, "--density", RG_QTY_DENSITY, &spec->density_kg_m3, err))
+          return FALSE;
+        if (rg_units_parse_viscosity ("--viscosity", visc, &mu, &kinematic, err) != RG_OK)
+          return FALSE;
+        spec->viscosity_pa_s = kinematic ? mu * spec->density_kg_m3 : mu;
+        return TRUE;
+      }
+    case RG_FLUID_OIL:
+      {
+        static const struct { const char *name; RgQuantity q; gsize offset; gboolean required; } oil[] = {
+          { "--oil-nu1", RG_QTY_KIN_VISCOSITY, G_STRUCT_OFFSET (RgFluidSpec, oil_nu1_m2_s), TRUE },
+          { "--oil-t1", RG_QTY_TEMPERATURE, G_STRUCT_OFFSET (RgFluidSpec, oil_t1_k), TRUE },
+          { "--oil-nu2", RG_QTY_KIN_VISCOSITY, G_STRUCT_OFFSET (RgFluidSpec, oil_nu2_m2_s), TRUE },
+          { "--oil-t2", RG_QTY_TEMPERATURE, G_STRUCT_OFFSET (RgFluidSpec, oil_t2_k), TRUE },
+          { "--oil-density", RG_QTY_DENSITY, G_STRUCT_OFFSET (RgFluidSpec, oil_density_ref_kg_m3), TRUE },
+          { "--oil-density-t", RG_QTY_TEMPERATURE, G_STRUCT_OFFSET (RgFluidSpec, oil_t_ref_k), FALSE },
+        };
+        for (gsize i = 0; i < G_N_ELEMENTS (oil); i++)
+          {
+            if (!cli_args_has (args, oil[i].name))
+              {
+                if (!oil[i].required)
+                  continue;
+                rg_error_set (err, RG_ERR_DOMAIN,
+                              "An oil needs --oil-nu1 and --oil-t1, --oil-nu2 and --oil-t2 (two kinematic viscosities at two temperatures) and --oil-density; %s is missing.",
+                              oil[i].name);
+                return FALSE;
+              }
+            if (!parse_quantity (args, oil[i].name, oil[i].q,
+                                 G_STRUCT_MEMBER_P (spec, oil[i].offset), err))
+              return FALSE;
+          }
+        if (cli_args_has (args, "--oil-expansion"))
+          {
+            g_autoptr (GString) m = g_string_new (NULL);
+            if (!cli_parse_number ("--oil-expansion", cli_args_get (args, "--oil-expansion"),
+                                   &spec->oil_expansion_per_k, m))
+              {
+                rg_error_set (err, RG_ERR_PARSE, "%s (per kelvin, e.g. 0.00064)", m->str);
+                return FALSE;
+              }
+          }
+      }
+      break;
+    case RG_FLUID_WATER:
+    case RG_FLUID_SEAWATER:
+    case RG_FLUID_AIR:
+    case RG_FLUID_N_KINDS:
+    default:
+      break;
+    }
+
+  if (kind != RG_FLUID_CUSTOM)
+    {
+      if (!cli_args_has (args, "--temperature"))
+        {
+          rg_error_set (err, RG_ERR_DOMAIN,
+                        "--temperature is required for %s: e.g. --temperature \"20 C\".",
+                        rg_fluid_kind_id (kind));
+          return FALSE;
+        }
+      if (!parse_quantity (args, "--temperature", RG_QTY_TEMPERATURE, &spec->temperature_k, err))
+        return FALSE;
+    }
+  if (cli_args_has (args, "--pressure")
+      && !parse_quantity (args, "--pressure", RG_QTY_PRESSURE, &spec->pressure_pa, err))
+    return FALSE;
+  if (kind == RG_FLUID_SEAWATER)
+    {
+      if (!cli_args_has (args, "--salinity"))
+        {
+          rg_error_set (err, RG_ERR_DOMAIN,
+                        "--salinity is required for seawater: e.g. --salinity \"35 g/kg\".");
+          return FALSE;
+        }
+      if (!parse_quantity (args, "--salinity", RG_QTY_SALINITY, &spec->salinity_kg_kg, err))
+        return FALSE;
+    }
+  return TRUE;
+}
+
+static const CliOption fluid_options[] = {
+  FLUID_OPTIONS,
+  { "--json", FALSE, FALSE },
+  { NULL, FALSE, FALSE },
+};
+
+int
+cli_cmd_fluid (int argc, char **argv)
+{
+  g_auto (CliArgs) args = { 0 };
+  g_autoptr (GString) msg = g_string_new (NULL);
+  g_autoptr (GString) out = g_string_new (NULL);
+  RgError err = { 0 };
+  RgWarnings warnings;
+  RgFluidSpec spec;
+  RgFluidProps props;
+
+  if (!cli_args_parse (&args, "fluid", fluid_options, argc, argv, 2, msg))
+    return cli_fail ("%s", msg->str);
+  if (args.positional->len != 1)
+    return cli_fail ("'fluid' needs exactly one fluid name: water, seawater, oil, air or custom.");
+  if (!fluid_from_args (&args, g_ptr_array_index (args.positional, 0), &spec, &err))
+    return cli_fail_error (&err);
+  rg_warnings_clear (&warnings);
+  if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
+    return cli_fail_error (&err);
+
+  if (cli_args_has (&args, "--json"))
+    {
+      CliJson json;
+      const char *w[RG_WARNINGS_MAX];
+      for (int i = 0; i < warnings.count; i++)
+        w[i] = warnings.text[i];
+      cli_json_begin (&json, out);
+      cli_json_number (&json, "density_kg_m3", props.density_kg_m3);
+      cli_json_number (&json, "dynamic_viscosity_Pa_s", props.dynamic_viscosity_pa_s);
+      cli_json_number (&json, "kinematic_viscosity_m2_s", props.kinematic_viscosity_m2_s);
+      if (warnings.count > 0)
+        cli_json_string_array (&json, "warnings", w, warnings.count);
+      cli_json_end (&json);
+    }
+  else
+    {
+      cli_table_number (out, "density", props.density_kg_m3, "kg/m³");
+      cli_table_number (out, "dynamic viscosity", props.dynamic_viscosity_pa_s, "Pa·s");
+      cli_table_number (out, "kinematic viscosity", props.kinematic_viscosity_m2_s, "m²/s");
+      for (int i = 0; i < warnings.count; i++)
+        g_string_append_printf (out, "warning: %s\n", warnings.text[i]);
+    }
+  return finish_output (out);
+}
+
+/* ---- line -------------------------------------------------------------- */
+
+static const CliOption line_options[] = {
+  { "--flow", TRUE, FALSE },
+  { "--diameter", TRUE, FALSE },
+  { "--pipe", TRUE, FALSE },
+  { "--length", TRUE, FALSE },
+  { "--roughness", TRUE, FALSE },
+  { "--material", TRUE, FALSE },
+  { "--age", TRUE, FALSE },
+  { "--aging", TRUE, FALSE },
+  { "--fitting", TRUE, TRUE },
+  { "--k-sum", TRUE, FALSE },
+  { "--elevation", TRUE, FALSE },
+  { "--model", TRUE, FALSE },
+  { "--re-laminar-max", TRUE, FALSE },
+  { "--re-turbulent-min", TRUE, FALSE },
+  { "--fluid", TRUE, FALSE },
+  FLUID_OPTIONS,
+  { "--json", FALSE, FALSE },
+  { NULL, FALSE, FALSE },
+};
+
+/* "NAME", "NAME x3", "NAMEx3", "NAME*3", "K=0.5", "K=0.5 x2". */
+static gboolean
+parse_fitting (const char *text, RgFittingUse *use, RgError *err)
+{
+  g_autofree char *s = g_strstrip (g_strdup (text));
+  g_autofree char *name = NULL;
+  double count = 1.0;
+  char *sep = NULL;
+
+  for (char *p = s + strlen (s); p > s; p--)
+    {
+      if (!g_ascii_isdigit (p[-1]) && p[-1] != '.')
+        {
+          if ((p[-1] == 'x' || p[-1] == 'X' || p[-1] == '*') && *p != '\0')
+            sep = p - 1;
+          break;
+        }
+    }
+  if (sep != NULL && sep > s)
+    {
+      g_autoptr (GString) m = g_string_new (NULL);
+      if (!cli_parse_number ("--fitting count", sep + 1, &count, m))
+        {
+          rg_error_set (err, RG_ERR_PARSE, "%s", m->str);
+          return FALSE;
+        }
+      if (!(count >= 1.0 && count <= 10000.0 && count == floor (count)))
+        {
+          rg_error_set (err, RG_ERR_DOMAIN,
+                        "--fitting \"%s\": the count must be a whole number from 1 to 10000.", text);
+          return FALSE;
+        }
+      name = g_strstrip (g_strndup (s, (gsize) (sep - s)));
+    }
+  else
+    name = g_strdup (s);
+
+  use->count = count;
+  use->fitting = NULL;
+  use->k_plain = 0.0;
+  if (g_ascii_strncasecmp (name, "K=", 2) == 0 || g_ascii_strncasecmp (name, "K ", 2) == 0)
+    {
+      g_autoptr (GString) m = g_string_new (NULL);
+      if (!cli_parse_number ("--fitting K", name + 2, &use->k_plain, m))
+        {
+          rg_error_set (err, RG_ERR_PARSE, "%s", m->str);
+          return FALSE;
+        }
+      if (!(use->k_plain >= 0.0 && use->k_plain <= 1.0e4))
+        {
+          rg_error_set (err, RG_ERR_DOMAIN,
+                        "--fitting \"%s\": a plain K must lie between 0 and 10000.", text);
+          return FALSE;
+        }
+      return TRUE;
+    }
+  return rg_fitting_lookup (name, &use->fitting, err) == RG_OK;
+}
+
+/* Age in years: a bare number is years; "10 yr" and other times convert. */
+static gboolean
+parse_age (const char *text, double *years, RgError *err)
+{
+  g_autoptr (GString) m = g_string_new (NULL);
+  double si;
+
+  if (cli_parse_number ("--age", text, years, m))
+    ;
+  else if (rg_units_parse (RG_QTY_TIME, "--age", text, &si, err) == RG_OK)
+    rg_units_from_si (RG_QTY_TIME, si, "yr", years, err);
+  else
+    return FALSE;
+  if (!(*years >= 0.0 && *years <= 200.0))
+    {
+      rg_error_set (err, RG_ERR_DOMAIN, "--age must lie between 0 and 200 years.");
+      return FALSE;
+    }
+  return TRUE;
+}
+
+/* A class of the aging catalog, or a rate ("0.05 mm/yr"). */
+static gboolean
+parse_aging (const char *text, double *rate_m_per_year, RgError *err)
+{
+  const RgAgingClass *klass;
+  RgError lookup_err = { 0 };
+  double si;
+
+  if (rg_aging_class_lookup (text, &klass, &lookup_err) == RG_OK)
+    {
+      *rate_m_per_year = klass->rate_m_per_year;
+      return TRUE;
+    }
+  /* Not a class: a rate with a unit, or else the class error stands. */
+  if (strpbrk (text, "0123456789") == NULL)
+    {
+      *err = lookup_err;
+      return FALSE;
+    }
+  if (rg_units_parse (RG_QTY_ROUGHNESS_RATE, "--aging", text, &si, err) != RG_OK)
+    return FALSE;
+  if (rg_units_from_si (RG_QTY_ROUGHNESS_RATE, si, "mm/yr", rate_m_per_year, err) != RG_OK)
+    return FALSE;
+  *rate_m_per_year *= 1e-3;
+  if (!(*rate_m_per_year >= 0.0 && *rate_m_per_year <= 0.01))
+    {
+      rg_error_set (err, RG_ERR_DOMAIN,
+                    "--aging must be a growth rate between 0 and 10 mm/yr, or a class name.");
+      return FALSE;
+    }
+  return TRUE;
+}
+
+static void
+range_warnings (RgFrictionModel model, const RgLineResult *r, RgWarnings *w)
+{
+  /* Stated ranges: Colebrook's chart range as usually quoted (Moody 1944:
+   * Re 4000–1e8, ε/D ≤ 0.05); Haaland (1983): same; Swamee and Jain (1976):
+   * 5000 ≤ Re ≤ 1e8, 1e-6 ≤ ε/D ≤ 1e-2. */
+  double re_lo = 4000.0, re_hi = 1.0e8, rr_hi = 0.05;
+
+  if (model == RG_FRICTION_SWAMEE_JAIN)
+    {
+      re_lo = 5000.0;
+      rr_hi = 1.0e-2;
+    }
+  if (r->friction.regime == RG_REGIME_TRANSITIONAL)
+    rg_warnings_add (w, "The flow is transitional (Re %.0f): the friction factor may lie anywhere from the laminar %.4g to the turbulent %.4g; the turbulent value is used.",
+                     r->reynolds, r->friction.f_laminar, r->friction.f);
+  else if (r->friction.regime == RG_REGIME_TURBULENT && model != RG_FRICTION_CHURCHILL
+           && (r->reynolds < re_lo || r->reynolds > re_hi))
+    rg_warnings_add (w, "The Reynolds number %.3g lies outside %g–%g, the range stated for %s.",
+                     r->reynolds, re_lo, re_hi, rg_friction_model_title (model));
+  if (r->relative_roughness > rr_hi && r->friction.regime != RG_REGIME_LAMINAR)
+    rg_warnings_add (w, "The relative roughness %.3g exceeds %g, the largest stated for %s.",
+                     r->relative_roughness, rr_hi, rg_friction_model_title (model));
+}
+
+int
+cli_cmd_line (int argc, char **argv)
+{
+  g_auto (CliArgs) args = { 0 };
+  g_autoptr (GString) msg = g_string_new (NULL);
+  g_autoptr (GString) out = g_string_new (NULL);
+  g_autoptr (GArray) uses = g_array_new (FALSE, TRUE, sizeof (RgFittingUse));
+  RgError err = { 0 };
+  RgWarnings warnings;
+  RgFluidSpec spec;
+  RgFluidProps props;
+  RgLineInput in;
+  RgAgingResult aged;
+  const RgPipe *pipe = NULL;
+  const RgMaterial *material = NULL;
+  const char *fluid;
+  double age = 0.0, rate = 0.0, k_extra = 0.0, k_fittings = 0.0;
+
+  rg_warnings_clear (&warnings);
+  rg_line_input_init (&in);
+
+  if (!cli_args_parse (&args, "line", line_options, argc, argv, 2, msg))
+    return cli_fail ("%s", msg->str);
+  if (args.positional->len > 0)
+    return cli_fail ("Unexpected argument \"%s\" for 'line'.",
+                     (char *) g_ptr_array_index (args.positional, 0));
+
+  /* Pipe: catalog designation or inner diameter (not both). */
+  if (cli_args_has (&args, "--pipe") && cli_args_has (&args, "--diameter"))
+    return cli_fail ("Give either --pipe (a catalog designation) or --diameter (an inner diameter), not both.");
+  if (cli_args_has (&args, "--pipe"))
+    {
+      if (rg_pipe_lookup (cli_args_get (&args, "--pipe"), &pipe, &err) != RG_OK)
+        return cli_fail_error (&err);
+      in.diameter_m = pipe->inner_diameter_m;
+    }
+  else if (!cli_args_has (&args, "--diameter"))
+    return cli_fail ("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\".");
+  else if (!parse_positive (&args, "--diameter", RG_QTY_LENGTH, FALSE, "102.3 mm", &in.diameter_m, &err))
+    return cli_fail_error (&err);
+
+  /* Roughness: a value, a material, or the pipe's usual material. */
+  if (cli_args_has (&args, "--roughness") && cli_args_has (&args, "--material"))
+    return cli_fail ("Give either --roughness (a value) or --material (a catalog name), not both.");
+  if (cli_args_has (&args, "--roughness"))
+    {
+      if (!parse_positive (&args, "--roughness", RG_QTY_ROUGHNESS, TRUE, "0.045 mm", &in.roughness_m, &err))
+        return cli_fail_error (&err);
+    }
+  else
+    {
+      const char *name = cli_args_get (&args, "--material");
+      if (name == NULL && pipe != NULL)
+        name = pipe->material_id;
+      if (name == NULL)
+        return cli_fail ("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material.");
+      if (rg_material_lookup (name, &material, &err) != RG_OK)
+        return cli_fail_error (&err);
+      in.roughness_m = material->roughness_m;
+    }
+
+  if (!cli_args_has (&args, "--flow"))
+    return cli_fail ("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\".");
+  if (!parse_positive (&args, "--flow", RG_QTY_FLOW, FALSE, "12 L/s", &in.flow_m3_s, &err))
+    return cli_fail_error (&err);
+  if (!cli_args_has (&args, "--length"))
+    return cli_fail ("--length is required: give the line length, e.g. --length \"250 m\".");
+  if (!parse_positive (&args, "--length", RG_QTY_LENGTH, FALSE, "250 m", &in.length_m, &err))
+    return cli_fail_error (&err);
+  if (cli_args_has (&args, "--elevation")
+      && !parse_quantity (&args, "--elevation", RG_QTY_LENGTH, &in.elevation_m, &err))
+    return cli_fail_error (&err);
+  if (cli_args_has (&args, "--k-sum"))
+    {
+      if (!cli_parse_number ("--k-sum", cli_args_get (&args, "--k-sum"), &k_extra, msg))
+        return cli_fail ("%s", msg->str);
+      if (!(k_extra >= 0.0 && k_extra <= 1.0e5))
+        return cli_fail ("--k-sum must lie between 0 and 100000.");
+    }
+  if (!parse_model (&args, &in.model, &err))
+    return cli_fail_error (&err);
+  if (cli_args_has (&args, "--re-laminar-max")
+      && !cli_parse_number ("--re-laminar-max", cli_args_get (&args, "--re-laminar-max"),
+                            &in.transition.re_laminar_max, msg))
+    return cli_fail ("%s", msg->str);
+  if (cli_args_has (&args, "--re-turbulent-min")
+      && !cli_parse_number ("--re-turbulent-min", cli_args_get (&args, "--re-turbulent-min"),
+                            &in.transition.re_turbulent_min, msg))
+    return cli_fail ("%s", msg->str);
+
+  /* Aging */
+  if (cli_args_has (&args, "--age") && !cli_args_has (&args, "--aging"))
+    return cli_fail ("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog materials') or a rate such as \"0.05 mm/yr\".");
+  if (cli_args_has (&args, "--age") && !parse_age (cli_args_get (&args, "--age"), &age, &err))
+    return cli_fail_error (&err);
+  if (cli_args_has (&args, "--aging") && !parse_aging (cli_args_get (&args, "--aging"), &rate, &err))
+    return cli_fail_error (&err);
+
+  /* Fluid */
+  if ((fluid = cli_args_get (&args, "--fluid")) == NULL)
+    return cli_fail ("--fluid is required: water, seawater, oil, air or custom.");
+  if (!fluid_from_args (&args, fluid, &spec, &err))
+    return cli_fail_error (&err);
+  if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
+    return cli_fail_error (&err);
+  in.density_kg_m3 = props.density_kg_m3;
+  in.viscosity_pa_s = props.dynamic_viscosity_pa_s;
+
+  /* Fittings: 3-K values depend on the Reynolds number, which does not
+   * depend on K, so a first evaluation gives Re for the fittings. */
+  GPtrArray *fittings = cli_args_get_all (&args, "--fitting");
+  for (guint i = 0; i < fittings->len; i++)
+    {
+      RgFittingUse use;
+      if (!parse_fitting (g_ptr_array_index (fittings, i), &use, &err))
+        return cli_fail_error (&err);
+      g_array_append_val (uses, use);
+    }
+  in.k_sum = k_extra;
+  if (uses->len > 0)
+    {
+      RgLineResult first;
+      if (rg_line_evaluate (&in, &first, &err) != RG_OK)
+        return cli_fail_error (&err);
+      if (rg_fittings_k_sum ((RgFittingUse *) uses->data, (int) uses->len,
+                             first.reynolds, in.diameter_m, &k_fittings, &err) != RG_OK)
+        return cli_fail_error (&err);
+      in.k_sum = k_extra + k_fittings;
+    }
+
+  if (rg_aging_evaluate (&in, rate, age, &aged, &err) != RG_OK)
+    return cli_fail_error (&err);
+
+  const RgLineResult *r = &aged.result;
+  range_warnings (in.model, r, &warnings);
+  if (spec.kind == RG_FLUID_AIR && r->pressure_drop_pa > 0.1 * spec.pressure_pa)
+    rg_warnings_add (&warnings,
+                     "The pressure drop is %.1f %% of the inlet pressure: above 10 %% the incompressible model no longer holds for a gas.",
+                     100.0 * r->pressure_drop_pa / spec.pressure_pa);
+
+  if (cli_args_has (&args, "--json"))
+    {
+      CliJson json;
+      const char *w[RG_WARNINGS_MAX];
+      for (int i = 0; i < warnings.count; i++)
+        w[i] = warnings.text[i];
+      cli_json_begin (&json, out);
+      cli_json_number (&json, "velocity_m_s", r->velocity_m_s);
+      cli_json_number (&json, "reynolds", r->reynolds);
+      cli_json_number (&json, "friction_factor", r->friction.f);
+      if (r->friction.has_laminar)
+        cli_json_number (&json, "friction_factor_laminar", r->friction.f_laminar);
+      cli_json_string (&json, "regime", rg_regime_id (r->friction.regime));
+      if (r->friction.regime == RG_REGIME_TURBULENT)
+        cli_json_string (&json, "roughness_zone", rg_roughness_zone_id (r->friction.zone));
+      cli_json_number (&json, "head_loss_major_m", r->head_loss_major_m);
+      cli_json_number (&json, "head_loss_minor_m", r->head_loss_minor_m);
+      cli_json_number (&json, "head_loss_total_m", r->head_loss_total_m);
+      cli_json_number (&json, "pressure_drop_Pa", r->pressure_drop_pa);
+      cli_json_number (&json, "gradient_m_per_100m", r->gradient_m_per_100m);
+      cli_json_number (&json, "wall_shear_Pa", r->wall_shear_pa);
+      cli_json_number (&json, "density_kg_m3", props.density_kg_m3);
+      cli_json_number (&json, "dynamic_viscosity_Pa_s", props.dynamic_viscosity_pa_s);
+      cli_json_number (&json, "roughness_elasticity", r->friction.roughness_elasticity);
+      cli_json_number (&json, "inner_diameter_m", in.diameter_m);
+      cli_json_number (&json, "roughness_m", aged.roughness_m);
+      cli_json_number (&json, "roughness_new_m", in.roughness_m);
+      cli_json_number (&json, "head_loss_ratio_to_new", aged.head_loss_ratio_to_new);
+      cli_json_number (&json, "minor_loss_k_total", in.k_sum);
+      cli_json_string_array (&json, "warnings", w, warnings.count);
+      cli_json_end (&json);
+    }
+  else
+    {
+      if (pipe != NULL)
+        cli_table_row (out, "pipe", pipe->designation, NULL);
+      if (material != NULL)
+        cli_table_row (out, "material", material->name, NULL);
+      cli_table_number (out, "inner diameter", in.diameter_m * 1e3, "mm");
+      cli_table_number (out, "roughness", aged.roughness_m * 1e3, "mm");
+      if (age > 0.0)
+        cli_table_number (out, "roughness when new", in.roughness_m * 1e3, "mm");
+      cli_table_number (out, "density", props.density_kg_m3, "kg/m³");
+      cli_table_number (out, "dynamic viscosity", props.dynamic_viscosity_pa_s, "Pa·s");
+      cli_table_number (out, "velocity", r->velocity_m_s, "m/s");
+      cli_table_number (out, "Reynolds number", r->reynolds, NULL);
+      cli_table_number (out, "relative roughness ε/D", r->relative_roughness, NULL);
+      cli_table_number (out, "friction factor (Darcy)", r->friction.f, NULL);
+      if (r->friction.has_laminar)
+        cli_table_number (out, "laminar value (64/Re)", r->friction.f_laminar, NULL);
+      cli_table_row (out, "regime", rg_regime_id (r->friction.regime), NULL);
+      if (r->friction.regime == RG_REGIME_TURBULENT)
+        cli_table_row (out, "roughness zone", rg_roughness_zone_id (r->friction.zone), NULL);
+      cli_table_number (out, "head loss, pipe friction", r->head_loss_major_m, "m");
+      cli_table_number (out, "head loss, fittings", r->head_loss_minor_m, "m");
+      cli_table_number (out, "head loss, total", r->head_loss_total_m, "m");
+      cli_table_number (out, "ΣK of fittings", in.k_sum, NULL);
+      cli_table_number (out, "pressure drop (with Δz)", r->pressure_drop_pa / 1e3, "kPa");
+      cli_table_number (out, "hydraulic gradient", r->gradient_m_per_100m, "m/100 m");
+      cli_table_number (out, "wall shear stress", r->wall_shear_pa, "Pa");
+      cli_table_number (out, "∂ln f/∂ln(ε/D)", r->friction.roughness_elasticity, NULL);
+      if (age > 0.0)
+        cli_table_number (out, "head loss relative to new", aged.head_loss_ratio_to_new, NULL);
+      for (int i = 0; i < warnings.count; i++)
+        g_string_append_printf (out, "warning: %s\n", warnings.text[i]);
+    }
+  return finish_output (out);
+}

@@ -1,0 +1,90 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* rugosa-cli internals: argument parsing, output and the commands. */
+#pragma once
+
+#include <glib.h>
+
+#include "core/status.h"
+
+/* Exit statuses: 0 success, 1 an internal failure (I/O), 2 bad input. */
+enum { CLI_EXIT_OK = 0, CLI_EXIT_FAILURE = 1, CLI_EXIT_USAGE = 2 };
+
+typedef struct {
+  const char *name;   /* "--flow", or "-o" */
+  gboolean has_value;
+  gboolean repeatable;
+} CliOption;
+
+typedef struct {
+  const char *command;
+  GHashTable *values;      /* option name -> GPtrArray of values ("" for flags) */
+  GPtrArray *positional;
+} CliArgs;
+
+/* Parses argv[first..argc) against `options`.  On failure fills `message`
+ * with one sentence and returns FALSE. */
+gboolean cli_args_parse (CliArgs *args, const char *command,
+                         const CliOption *options, int argc, char **argv,
+                         int first, GString *message);
+void cli_args_clear (CliArgs *args);
+G_DEFINE_AUTO_CLEANUP_CLEAR_FUNC (CliArgs, cli_args_clear)
+
+gboolean cli_args_has (const CliArgs *args, const char *name);
+/* The (last) value of an option, or NULL. */
+const char *cli_args_get (const CliArgs *args, const char *name);
+/* All values of a repeatable option (never NULL). */
+GPtrArray *cli_args_get_all (const CliArgs *args, const char *name);
+
+/* Reports a usage error: "rugosa-cli: <sentence>" on stderr. */
+int cli_fail (const char *fmt, ...) G_GNUC_PRINTF (1, 2);
+int cli_fail_error (const RgError *err);
+
+/* Required option: fails with a sentence naming it and `hint`. */
+const char *cli_require (const CliArgs *args, const char *name,
+                         const char *hint, GString *message);
+
+/* A dimensionless number written in the C locale ("1e5", "0.0001"); the
+ * whole text must be a finite number. */
+gboolean cli_parse_number (const char *what, const char *text, double *out,
+                           GString *message);
+
+/* JSON writer: an object of fixed keys, numbers in the C locale with 17
+ * significant digits (round-trip exact); NaN/inf are never written. */
+typedef struct {
+  GString *out;
+  int depth;
+  gboolean first;
+} CliJson;
+
+void cli_json_begin (CliJson *json, GString *out);
+void cli_json_number (CliJson *json, const char *key, double value);
+void cli_json_string (CliJson *json, const char *key, const char *value);
+void cli_json_string_array (CliJson *json, const char *key,
+                            const char *const *values, int n);
+void cli_json_end (CliJson *json);
+void cli_json_escape (GString *out, const char *s);
+
+/* "%.17g" in the C locale. */
+char *cli_format_exact (double value, char *buf, gsize len);
+/* "%.6g" in the C locale. */
+char *cli_format_short (double value, char *buf, gsize len);
+
+/* Appends text padded with spaces to `width` characters (not bytes). */
+void cli_pad (GString *out, const char *text, int width);
+
+/* Table writer: "label    value unit" lines. */
+void cli_table_row (GString *out, const char *label, const char *value,
+                    const char *unit);
+void cli_table_number (GString *out, const char *label, double value,
+                       const char *unit);
+
+int cli_cmd_friction (int argc, char **argv);
+int cli_cmd_fluid (int argc, char **argv);
+int cli_cmd_line (int argc, char **argv);
+int cli_cmd_catalog (int argc, char **argv);
+int cli_cmd_eval (int argc, char **argv);
+
+/* Shared by the project commands (cli-project.c). */
+typedef struct _RugosaProject RugosaProject;
+RugosaProject *cli_load_project (const CliArgs *args, const char *command);
+gboolean cli_parse_age_option (const CliArgs *args, double *age);

@@ -1,0 +1,18 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The RugosaProject struct, shared by rugosa-project*.c. */
+#pragma once
+
+#include "rugosa-model-private.h"
+
+struct _RugosaProject
+{
+  GObject parent_instance;
+
+  /* owned */
+  GPtrArray *lines;           /* of RugosaLine */
+  RugosaSettings *settings;
+  cJSON *extra;               /* unknown top-level file fields */
+  GHashTable *eval_cache;     /* RugosaLine* (not a ref) -> EvalEntry* */
+
+  guint64 evaluation_count;
+};

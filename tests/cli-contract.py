@@ -1,0 +1,245 @@
+#!/usr/bin/python3
+# SPDX-License-Identifier: GPL-3.0-or-later
+"""The rugosa-cli contract: output keys, exactness and bad input.
+
+Run: cli-contract.py PATH/TO/rugosa-cli
+Every expected value is computed here independently (mpmath for Colebrook,
+python3-iapws for water, the defining formulas for the line) or is a unit
+definition (NIST SP 811)."""
+import json
+import math
+import subprocess
+import sys
+
+import mpmath
+
+CLI = sys.argv[1]
+passed = 0
+failed = 0
+
+
+def run(*args):
+    p = subprocess.run([CLI, *args], capture_output=True, text=True,
+                       timeout=30, env={"LANG": "C.UTF-8", "PATH": "/usr/bin:/bin"})
+    return p.returncode, p.stdout, p.stderr
+
+
+def check(name, ok, detail=""):
+    global passed, failed
+    if ok:
+        passed += 1
+    else:
+        failed += 1
+        print(f"FAIL {name} {detail}")
+
+
+def close(a, b, rel):
+    return abs(a - b) <= rel * abs(b)
+
+
+mpmath.mp.dps = 40
+
+
+def colebrook_mp(re, rr):
+    """Colebrook (1939) solved with mpmath to 40 digits."""
+    re, rr = mpmath.mpf(re), mpmath.mpf(rr)
+    g = lambda x: x + 2 * mpmath.log10(rr / mpmath.mpf("3.7") + mpmath.mpf("2.51") * x / re)
+    x = mpmath.findroot(g, 8)
+    return float(1 / x**2)
+
+
+# --- friction -----------------------------------------------------------
+for re, rr in [(1e5, 1e-4), (4000, 0.0), (2.5e7, 0.05), (3000, 0.001), (1e8, 1e-6)]:
+    code, out, err = run("friction", "--re", repr(re), "--rr", repr(rr))
+    first = out.split()[0] if out.split() else ""
+    check(f"friction exit {re} {rr}", code == 0, err)
+    try:
+        f = float(first)
+    except ValueError:
+        f = float("nan")
+    # Source: mpmath, Colebrook solved to 40 digits (reference, not the code under test)
+    check(f"friction value {re} {rr}", close(f, colebrook_mp(re, rr), 1e-13), f"{first}")
+    mant = first.lower().split("e")[0].replace("-", "").replace(".", "").lstrip("0")
+    check(f"friction 17 digits {re} {rr}", len(mant) >= 15, first)
+
+# laminar: Source: Hagen–Poiseuille, f = 64/Re
+code, out, _ = run("friction", "--re", "1000", "--rr", "0.001")
+check("friction laminar", code == 0 and close(float(out.split()[0]), 0.064, 1e-15), out)
+
+code, out, _ = run("friction", "--re", "1e5", "--rr", "1e-4", "--json")
+doc = json.loads(out)
+check("friction json", code == 0 and close(doc["friction_factor"], colebrook_mp(1e5, 1e-4), 1e-13)
+      and doc["regime"] == "turbulent", out)
+
+# --- fluid ----------------------------------------------------------------
+from iapws import IAPWS97
+from iapws._iapws import _Viscosity
+
+code, out, err = run("fluid", "water", "--temperature", "20 C", "--json")
+check("fluid exit", code == 0, err)
+doc = json.loads(out) if code == 0 else {}
+check("fluid keys", set(doc) == {"density_kg_m3", "dynamic_viscosity_Pa_s", "kinematic_viscosity_m2_s"}, out)
+w = IAPWS97(T=293.15, P=0.101325)
+# Source: python3-iapws, IAPWS97(T, P).rho (IF97 region 1) and _Viscosity(rho, T) (R12-08)
+check("fluid density", close(doc.get("density_kg_m3", 0), w.rho, 1e-9), out)
+check("fluid viscosity", close(doc.get("dynamic_viscosity_Pa_s", 0), _Viscosity(w.rho, 293.15), 1e-7), out)
+check("fluid kinematic", close(doc.get("kinematic_viscosity_m2_s", 0),
+                               doc.get("dynamic_viscosity_Pa_s", 0) / doc.get("density_kg_m3", 1), 1e-15), out)
+
+# 68 °F is 20 °C exactly (Source: NIST SP 811, B.9: t/°C = (t/°F − 32)/1.8)
+code, out2, _ = run("fluid", "water", "--temperature", "68 F", "--json")
+check("fluid 68 F", code == 0 and close(json.loads(out2)["density_kg_m3"], doc.get("density_kg_m3", 0), 1e-14), out2)
+
+# --- line -------------------------------------------------------------------
+LINE_KEYS = {"velocity_m_s", "reynolds", "friction_factor", "regime", "roughness_zone",
+             "head_loss_major_m", "head_loss_minor_m", "head_loss_total_m", "pressure_drop_Pa",
+             "gradient_m_per_100m", "wall_shear_Pa", "density_kg_m3", "dynamic_viscosity_Pa_s",
+             "roughness_elasticity", "inner_diameter_m", "roughness_m", "roughness_new_m",
+             "head_loss_ratio_to_new", "minor_loss_k_total", "warnings"}
+G = 9.80665  # Source: standard gravity, CGPM 1901
+
+code, out, err = run("line", "--flow", "150 gpm", "--diameter", "4 in", "--length", "1000 ft",
+                     "--roughness", "0.045 mm", "--fluid", "water", "--temperature", "68 F",
+                     "--k-sum", "2.5", "--elevation", "3 m", "--json")
+check("line exit", code == 0, err)
+doc = json.loads(out) if code == 0 else {}
+check("line keys", set(doc) == LINE_KEYS, sorted(set(doc) ^ LINE_KEYS))
+if doc:
+    # Source: NIST SP 811 Appendix B: 1 gal (US) = 3.785411784e-3 m³, 1 in = 0.0254 m, 1 ft = 0.3048 m
+    q = 150 * 3.785411784e-3 / 60
+    d = 4 * 0.0254
+    length = 1000 * 0.3048
+    v = q / (math.pi * d * d / 4)
+    rho, mu = doc["density_kg_m3"], doc["dynamic_viscosity_Pa_s"]
+    re = rho * v * d / mu
+    f = colebrook_mp(re, 0.045e-3 / d)
+    hmaj = f * length / d * v * v / (2 * G)
+    hmin = 2.5 * v * v / (2 * G)
+    check("line velocity", close(doc["velocity_m_s"], v, 1e-14))
+    check("line reynolds", close(doc["reynolds"], re, 1e-13))
+    check("line f", close(doc["friction_factor"], f, 1e-13))
+    check("line h major", close(doc["head_loss_major_m"], hmaj, 1e-12))
+    check("line h minor", close(doc["head_loss_minor_m"], hmin, 1e-12))
+    check("line dp", close(doc["pressure_drop_Pa"], rho * G * (hmaj + hmin + 3.0), 1e-12))
+    check("line gradient", close(doc["gradient_m_per_100m"], 100 * hmaj / length, 1e-12))
+    check("line shear", close(doc["wall_shear_Pa"], f * rho * v * v / 8, 1e-12))
+    check("line regime", doc["regime"] == "turbulent")
+
+# custom fluid with kinematic viscosity: μ = ν·ρ
+code, out, err = run("line", "--flow", "0.2", "--diameter", "0.2", "--length", "500",
+                     "--roughness", "0.26 mm", "--fluid", "custom", "--density", "900",
+                     "--viscosity", "10 cSt", "--json")
+doc = json.loads(out) if code == 0 else {}
+check("line custom kinematic", code == 0 and close(doc["dynamic_viscosity_Pa_s"], 900 * 1e-5, 1e-14), err)
+
+# transitional: the laminar value is reported beside (Source: Hagen–Poiseuille 64/Re)
+code, out, err = run("line", "--flow", "0.1 L/s", "--diameter", "40 mm", "--length", "10 m",
+                     "--roughness", "0", "--fluid", "water", "--temperature", "20 C", "--json")
+doc = json.loads(out) if code == 0 else {}
+check("line transitional", code == 0 and doc.get("regime") == "transitional"
+      and close(doc["friction_factor_laminar"], 64 / doc["reynolds"], 1e-14)
+      and "roughness_zone" not in doc, out + err)
+
+# --- eval: the project path gives what the line command gives --------------
+import os
+demo = os.path.join(os.environ.get("RUGOSA_SOURCE_DIR", os.path.dirname(__file__) + "/.."), "data", "demo.rugosa")
+code, out, err = run("eval", demo, "--format", "json", "--age", "25")
+check("eval exit", code == 0, err)
+doc = json.loads(out) if code == 0 else {"results": []}
+project = json.load(open(demo))
+for line in project["lines"]:
+    rows = [r for r in doc["results"] if r["line"] == line["name"] and r["case"] == "design"]
+    check(f"eval row {line['name']}", len(rows) == 1)
+    if not rows:
+        continue
+    row = rows[0]
+    check(f"eval keys {line['name']}", LINE_KEYS <= set(row), sorted(LINE_KEYS - set(row)))
+    args = ["line", "--flow", repr(line["flow"]["design_m3_s"]), "--length", repr(line["length_m"]),
+            "--elevation", repr(line.get("elevation_change_m", 0.0)),
+            "--fluid", line["fluid"]["kind"], "--temperature", repr(line["fluid"]["temperature_K"]),
+            "--pressure", repr(line["fluid"]["pressure_Pa"]), "--json", "--age", "25"]
+    pipe = line["pipe"]
+    args += ["--pipe", pipe["designation"]] if "designation" in pipe else ["--diameter", repr(pipe["inner_diameter_m"])]
+    mat = line["material"]
+    args += ["--material", mat["catalog"]] if "catalog" in mat else ["--roughness", repr(mat["roughness_m"])]
+    args += ["--aging", "%r mm/yr" % (line["aging"]["rate_m_per_year"] * 1e3)]
+    for fit in line.get("fittings", []):
+        name = fit["catalog"] if "catalog" in fit else "K=%r" % fit["k"]
+        args += ["--fitting", "%s x%d" % (name, fit["count"])]
+    code, out, err = run(*args)
+    ref = json.loads(out) if code == 0 else {}
+    check(f"eval vs line exit {line['name']}", code == 0, err)
+    for key in ("velocity_m_s", "reynolds", "friction_factor", "head_loss_total_m", "pressure_drop_Pa",
+                "roughness_m", "head_loss_ratio_to_new", "minor_loss_k_total"):
+        check(f"eval vs line {line['name']} {key}", key in ref and close(row[key], ref[key], 1e-12),
+              f"{row.get(key)} vs {ref.get(key)}")
+
+code, out, err = run("eval", "/nonexistent/x.rugosa")
+check("eval missing file", code == 2 and out == "" and len(err.splitlines()) == 1, err)
+
+# --- bad input: exit 2, one sentence naming the option, nothing on stdout -----
+BASE = ["line", "--flow", "12 L/s", "--diameter", "100 mm", "--length", "250 m",
+        "--roughness", "0.045 mm", "--fluid", "water", "--temperature", "15 C"]
+
+
+def with_opt(opt, value):
+    args = list(BASE)
+    i = args.index(opt)
+    args[i + 1] = value
+    return args
+
+
+def without(opt):
+    args = list(BASE)
+    i = args.index(opt)
+    del args[i:i + 2]
+    return args
+
+
+bad = [
+    ("zero diameter", with_opt("--diameter", "0"), "--diameter"),
+    ("negative diameter", with_opt("--diameter", "-5 mm"), "--diameter"),
+    ("zero flow", with_opt("--flow", "0 L/s"), "--flow"),
+    ("negative flow", with_opt("--flow", "-3"), "--flow"),
+    ("zero length", with_opt("--length", "0 m"), "--length"),
+    ("negative length", with_opt("--length", "-1 km"), "--length"),
+    ("nan flow", with_opt("--flow", "nan"), "--flow"),
+    ("inf diameter", with_opt("--diameter", "inf"), "--diameter"),
+    ("nan length", with_opt("--length", "NaN m"), "--length"),
+    ("huge flow", with_opt("--flow", "1e999 L/s"), "--flow"),
+    ("unknown unit", with_opt("--flow", "12 furlongs"), "--flow"),
+    ("wrong kind", with_opt("--flow", "2 in"), "--flow"),
+    ("wrong kind diameter", with_opt("--diameter", "3 L/s"), "--diameter"),
+    ("wrong kind temperature", with_opt("--temperature", "3 bar"), "--temperature"),
+    ("temperature too hot", with_opt("--temperature", "200 C"), "temperature"),
+    ("temperature frozen", with_opt("--temperature", "-10 C"), "temperature"),
+    ("missing flow", without("--flow"), "--flow"),
+    ("missing length", without("--length"), "--length"),
+    ("missing diameter", without("--diameter"), "--diameter"),
+    ("missing fluid", without("--fluid"), "--fluid"),
+    ("missing temperature", without("--temperature"), "--temperature"),
+    ("empty flow", with_opt("--flow", ""), "--flow"),
+    ("negative roughness", with_opt("--roughness", "-1 mm"), "--roughness"),
+    ("unknown fluid", with_opt("--fluid", "lava"), "lava"),
+    ("bad model", BASE + ["--model", "guesswork"], "guesswork"),
+    ("friction nan", ["friction", "--re", "nan", "--rr", "0.001"], "--re"),
+    ("friction negative", ["friction", "--re", "-5", "--rr", "0.001"], "--re"),
+    ("friction rr", ["friction", "--re", "1e5", "--rr", "0.5"], "--rr"),
+    ("friction missing", ["friction", "--rr", "0.001"], "--re"),
+    ("friction inf", ["friction", "--re", "1e5", "--rr", "inf"], "--rr"),
+    ("fluid missing T", ["fluid", "water"], "--temperature"),
+    ("fluid bad T unit", ["fluid", "water", "--temperature", "20 Q"], "--temperature"),
+    ("fluid pressure too high", ["fluid", "water", "--temperature", "20 C", "--pressure", "50 MPa"], "pressure"),
+    ("unknown option", BASE + ["--colour", "red"], "--colour"),
+    ("unknown command", ["frobnicate"], "frobnicate"),
+]
+for name, args, needle in bad:
+    code, out, err = run(*args)
+    lines = [l for l in err.splitlines() if l.strip()]
+    check(f"bad {name}: exit 2", code == 2, f"exit {code} stderr {err!r}")
+    check(f"bad {name}: no stdout", out == "", repr(out))
+    check(f"bad {name}: one line", len(lines) == 1, repr(err))
+    check(f"bad {name}: names it", needle.lower() in err.lower(), repr(err))
+
+print(f"{passed} passed, {failed} failed")
+sys.exit(1 if failed else 0)

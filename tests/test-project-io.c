@@ -1,0 +1,422 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The project file: round trips, unknown fields kept, one test per class
+ * of bad file (each asserting the message and that the open document did
+ * not change), and atomic saving with injected failures. */
+#include "config.h"
+
+#include <errno.h>
+#include <string.h>
+
+#include <cjson/cJSON.h>
+#include <glib/gstdio.h>
+
+#include "model/rugosa-project.h"
+
+static char *
+source_path (const char *relative)
+{
+  const char *root = g_getenv ("RUGOSA_SOURCE_DIR");
+
+  return g_build_filename (root ? root : "..", relative, NULL);
+}
+
+static RugosaProject *
+load_demo (void)
+{
+  g_autofree char *path = source_path ("data/demo.rugosa");
+  g_autoptr (GError) error = NULL;
+  RugosaProject *project = rugosa_project_new ();
+
+  g_assert_true (rugosa_project_load (project, path, &error));
+  g_assert_no_error (error);
+  return project;
+}
+
+/* A project with every field away from its default. */
+static RugosaProject *
+full_project (void)
+{
+  RugosaProject *p = rugosa_project_new ();
+  RugosaSettings *s = rugosa_project_get_settings (p);
+  g_autoptr (RugosaLine) a = rugosa_line_new ("Ünïcode \"quoted\" name");
+  g_autoptr (RugosaLine) b = rugosa_line_new ("Second");
+
+  g_object_set (s, "unit-system", RUGOSA_UNIT_SYSTEM_US,
+                "unit-overrides", g_variant_new_parsed ("{'flow': 'L/s', 'head': 'ft'}"),
+                "friction-model", 3, "re-laminar-max", 2300.0,
+                "re-turbulent-min", 3500.0, "chart-re-min", 700.0,
+                "chart-re-max", 3e7, "chart-f-min", 0.007, "chart-f-max", 0.09,
+                "service-age", 17.5, "velocity-limit", 2.2,
+                "gradient-limit", 4.4, NULL);
+  g_object_set (a, "colour", "#A0b1C2", "note", "line one\nline two",
+                "fluid-kind", 3, "temperature", 301.5, "pressure", 4.5e5,
+                "salinity", 0.031, "density", 876.5, "viscosity", 0.0123,
+                "oil-t1", 310.0, "oil-nu1", 4.1e-5, "oil-t2", 360.0,
+                "oil-nu2", 7.7e-6, "oil-density-ref", 880.0,
+                "oil-t-ref", 290.0, "oil-expansion", 6.5e-4,
+                "material-id", "cast-iron", "roughness", 1.3e-4,
+                "aging-class-id", "moderate", "aging-rate", 3.3e-5,
+                "pipe-designation", "NPS 6 Sch 40", "inner-diameter", 0.1234,
+                "length", 1234.5, "elevation", -7.25,
+                "flow-design", 0.0321, "flow-minimum", 0.011,
+                "flow-maximum", 0.0456, NULL);
+  rugosa_line_set_fittings (a, g_variant_new_parsed (
+    "[('elbow-90-standard', 0.0, 4.0), ('', 0.35, 2.0), ('', 0.1, 0.0)]"));
+  /* 0.1 + 0.2 is not a short decimal: the number must survive exactly. */
+  g_object_set (b, "inner-diameter", 0.1 + 0.2, "length", 1.0 / 3.0,
+                "fluid-kind", 1, NULL);
+  rugosa_project_insert_line (p, 0, a);
+  rugosa_project_insert_line (p, 1, b);
+  return p;
+}
+
+static void
+test_round_trip (void)
+{
+  g_autoptr (RugosaProject) p = full_project ();
+  g_autoptr (RugosaProject) q = rugosa_project_new ();
+  g_autoptr (GError) error = NULL;
+  g_autofree char *dir = g_dir_make_tmp ("rugosa-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "full.rugosa", NULL);
+  g_autofree char *a = NULL, *b = NULL;
+
+  g_assert_true (rugosa_project_save (p, path, &error));
+  g_assert_no_error (error);
+  g_assert_true (rugosa_project_load (q, path, &error));
+  g_assert_no_error (error);
+  a = rugosa_project_to_data (p, NULL);
+  b = rugosa_project_to_data (q, NULL);
+  g_assert_cmpstr (a, ==, b);
+  g_assert_true (rugosa_project_equal (p, q));
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (q, 1), "inner-diameter"),
+                     ==, 0.1 + 0.2);
+
+  g_unlink (path);
+  g_rmdir (dir);
+}
+
+static void
+test_demo_round_trip (void)
+{
+  g_autoptr (RugosaProject) p = load_demo ();
+  g_autoptr (RugosaProject) q = NULL;
+  g_autoptr (GError) error = NULL;
+  g_autofree char *text = rugosa_project_to_data (p, NULL);
+
+  g_assert_cmpuint (rugosa_project_get_n_lines (p), >=, 5);
+  q = rugosa_project_new_from_data (text, strlen (text), &error);
+  g_assert_no_error (error);
+  g_assert_true (rugosa_project_equal (p, q));
+}
+
+static const char unknown_doc[] =
+  "{\"format\": \"rugosa-line-options\", \"version\": 1, \"x_top\": [1, {\"a\": null}],\n"
+  " \"settings\": {\"x_set\": true, \"units\": {\"overrides\": {\"x_quantity\": \"furlong\"}},\n"
+  "              \"chart\": {\"x_chart\": \"c\"}},\n"
+  " \"lines\": [{\"name\": \"L\", \"x_line\": {\"deep\": [2]}, \"material\": {\"roughness_m\": 0, \"x_mat\": 1},\n"
+  "   \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10,\n"
+  "   \"fluid\": {\"kind\": \"water\", \"x_fluid\": 3, \"oil\": {\"x_oil\": 4}},\n"
+  "   \"fittings\": [{\"k\": 1, \"count\": 1}, {\"k\": 2, \"count\": 1, \"x_fit\": 5}],\n"
+  "   \"flow\": {\"design_m3_s\": 0.01, \"x_flow\": 6}}]}";
+
+static void
+test_unknown_fields_kept (void)
+{
+  g_autoptr (GError) error = NULL;
+  g_autoptr (RugosaProject) p = rugosa_project_new_from_data (unknown_doc, strlen (unknown_doc), &error);
+  g_autoptr (RugosaProject) q = NULL;
+  g_autofree char *text = NULL;
+  cJSON *root, *line;
+
+  g_assert_no_error (error);
+  text = rugosa_project_to_data (p, NULL);
+  root = cJSON_Parse (text);
+  g_assert_nonnull (root);
+  line = cJSON_GetArrayItem (cJSON_GetObjectItem (root, "lines"), 0);
+#define AT(obj, key) cJSON_GetObjectItemCaseSensitive (obj, key)
+  g_assert_cmpint (cJSON_GetArraySize (AT (root, "x_top")), ==, 2);
+  g_assert_true (cJSON_IsTrue (AT (AT (root, "settings"), "x_set")));
+  g_assert_cmpstr (AT (AT (AT (AT (root, "settings"), "units"), "overrides"), "x_quantity")->valuestring, ==, "furlong");
+  g_assert_cmpstr (AT (AT (AT (root, "settings"), "chart"), "x_chart")->valuestring, ==, "c");
+  g_assert_nonnull (AT (AT (line, "x_line"), "deep"));
+  g_assert_nonnull (AT (AT (line, "material"), "x_mat"));
+  g_assert_nonnull (AT (AT (line, "fluid"), "x_fluid"));
+  g_assert_nonnull (AT (AT (AT (line, "fluid"), "oil"), "x_oil"));
+  g_assert_null (AT (cJSON_GetArrayItem (AT (line, "fittings"), 0), "x_fit"));
+  g_assert_nonnull (AT (cJSON_GetArrayItem (AT (line, "fittings"), 1), "x_fit"));
+  g_assert_nonnull (AT (AT (line, "flow"), "x_flow"));
+  /* Unknown fields never override known ones after an edit. */
+  g_assert_cmpfloat (AT (line, "length_m")->valuedouble, ==, 10.0);
+#undef AT
+  cJSON_Delete (root);
+
+  /* A duplicated line keeps them too, and a second round trip is stable. */
+  q = rugosa_project_new_from_data (text, strlen (text), &error);
+  g_assert_no_error (error);
+  {
+    g_autofree char *again = rugosa_project_to_data (q, NULL);
+    g_assert_cmpstr (again, ==, text);
+  }
+}
+
+/* ---- bad files ---- */
+
+/* Line and column in the expected messages are counted by hand in the
+ * input text beside them (columns in characters, from 1). */
+typedef struct {
+  const char *name;
+  const char *data;  /* NULL: built by the test */
+  gssize length;     /* -1: strlen */
+  int code;
+  const char *message;
+} BadFile;
+
+#define OK_LINE "{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"flow\": {\"design_m3_s\": 0.01}}"
+#define DOC(lines) "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": [" lines "]}"
+
+static const BadFile bad_files[] = {
+  { "empty", "", -1, RUGOSA_PROJECT_ERROR_ENCODING, "The file is empty." },
+  { "blank", " \n\t ", -1, RUGOSA_PROJECT_ERROR_ENCODING, "The file is empty." },
+  { "truncated", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": [{\"na", -1,
+    RUGOSA_PROJECT_ERROR_SYNTAX, "ends too early at line 1, column 63" },
+  { "not-json", "Line options:\n  main, 100 m\n", -1, RUGOSA_PROJECT_ERROR_SYNTAX,
+    "not valid JSON: unexpected text at line 1, column 1" },
+  { "syntax-position", "{\n  \"format\": ,\n}", -1, RUGOSA_PROJECT_ERROR_SYNTAX,
+    "line 2, column 13" },
+  { "trailing-garbage", DOC ("") " {}", -1, RUGOSA_PROJECT_ERROR_SYNTAX, "line 1, column 62" },
+  { "not-utf8", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": [], \"x\": \"\xff\"}", -1,
+    RUGOSA_PROJECT_ERROR_ENCODING, "not valid UTF-8 text (line 1, column 68)" },
+  { "nul-byte", "{\"format\"\0: 1}", 14, RUGOSA_PROJECT_ERROR_ENCODING,
+    "NUL byte at line 1, column 10" },
+  { "not-an-object", "[1, 2]", -1, RUGOSA_PROJECT_ERROR_FORMAT, "not a Rugosa project" },
+  { "wrong-format-name", "{\"format\": \"other\", \"version\": 1, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_FORMAT, "\"format\" must be \"rugosa-line-options\"" },
+  { "missing-version", "{\"format\": \"rugosa-line-options\", \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_FORMAT, "version: this required field is missing" },
+  { "fractional-version", "{\"format\": \"rugosa-line-options\", \"version\": 1.5, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_FORMAT, "version: expected a whole number" },
+  { "newer-version", "{\"format\": \"rugosa-line-options\", \"version\": 2, \"lines\": [], \"new\": 1}", -1,
+    RUGOSA_PROJECT_ERROR_VERSION,
+    "version 2 of the project format, which is newer than this Rugosa reads (version 1)" },
+  { "missing-lines", "{\"format\": \"rugosa-line-options\", \"version\": 1}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines: this required field is missing" },
+  { "wrong-type-number", DOC (OK_LINE ", {\"name\": \"M\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"flow\": {\"design_m3_s\": \"0.02\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[1].flow.design_m3_s: expected a number in m³/s, found a string" },
+  { "wrong-type-object", DOC ("{\"name\": \"L\", \"material\": 3}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].material: expected an object, found a number" },
+  { "wrong-type-string", DOC ("{\"name\": true}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].name: expected a string, found true or false" },
+  { "missing-flow", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].flow: this required field is missing" },
+  { "missing-pipe-values", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {}, \"length_m\": 10, \"flow\": {\"design_m3_s\": 0.01}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].pipe: give \"designation\" or \"inner_diameter_m\"" },
+  { "nan-literal", DOC ("{\"name\": \"L\", \"length_m\": NaN}"), -1,
+    RUGOSA_PROJECT_ERROR_SYNTAX, "line 1, column 85" },
+  { "huge-number", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 1e999}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].material.roughness_m: the number is too large to be a finite value" },
+  { "absurd-number", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 1e300, \"flow\": {\"design_m3_s\": 0.01}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].length_m: 1e+300 is out of range: expected 0.001 to 1e+07 m" },
+  { "negative-diameter", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": -0.1}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].pipe.inner_diameter_m: -0.1 is out of range" },
+  { "negative-flow", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"flow\": {\"design_m3_s\": -1}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].flow.design_m3_s: -1 is out of range: expected more than 0" },
+  { "negative-count", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"fittings\": [{\"k\": 1, \"count\": -2}]}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].fittings[0].count: -2 is out of range" },
+  { "minimum-above-design", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"flow\": {\"design_m3_s\": 0.01, \"minimum_m3_s\": 0.02}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].flow.minimum_m3_s: the minimum flow must not exceed the design flow" },
+  { "fitting-both", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"fittings\": [{\"k\": 1, \"catalog\": \"x\", \"count\": 1}]}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].fittings[0]: give either \"catalog\"" },
+  { "bad-colour", DOC ("{\"name\": \"L\", \"colour\": \"red\"}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].colour: expected a colour as \"#rrggbb\"" },
+  { "bad-fluid-kind", DOC ("{\"name\": \"L\", \"fluid\": {\"kind\": \"lava\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].fluid.kind: " },
+  { "bad-friction-model", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"friction_model\": \"guess\"}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.friction_model: " },
+  { "bad-transition-order", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"transition\": {\"re_laminar_max\": 5000}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.transition.re_turbulent_min: must be larger" },
+  { "bad-unit-system", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"units\": {\"system\": \"imperial\"}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.units.system: expected \"si\" or \"us\", found \"imperial\"" },
+  { "override-not-string", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"units\": {\"overrides\": {\"flow\": 3}}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.units.overrides.flow: expected a string, found a number" },
+  { "lines-not-array", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": {}}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines: expected an array, found an object" },
+  { "duplicate-key-top", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"version\": 2, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_FORMAT, "the key \"version\" appears more than once" },
+  { "duplicate-key-nested", DOC ("{\"name\": \"L\", \"flow\": {\"design_m3_s\": 1, \"design_m3_s\": 2}}"), -1,
+    RUGOSA_PROJECT_ERROR_FORMAT, "lines[0].flow: the key \"design_m3_s\" appears more than once" },
+  { "deep-nesting", NULL, -1, RUGOSA_PROJECT_ERROR_SYNTAX, "nested deeper than 32 levels at line 1, column 98" },
+  { "too-many-lines", NULL, -1, RUGOSA_PROJECT_ERROR_VALUE, "lines: more than 1000 line options" },
+  { "too-many-fittings", NULL, -1, RUGOSA_PROJECT_ERROR_VALUE, "lines[0].fittings: more than 200 fittings" },
+  { "long-name", NULL, -1, RUGOSA_PROJECT_ERROR_VALUE, "lines[0].name: the string is longer than 200 characters" },
+};
+
+static char *
+build_bad (const BadFile *bad, gsize *length)
+{
+  GString *s = g_string_new (NULL);
+
+  if (strcmp (bad->name, "deep-nesting") == 0)
+    {
+      g_string_append (s, "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": [], \"x\": ");
+      for (int i = 0; i < 40; i++)
+        g_string_append_c (s, '[');
+      for (int i = 0; i < 40; i++)
+        g_string_append_c (s, ']');
+      g_string_append_c (s, '}');
+    }
+  else if (strcmp (bad->name, "too-many-lines") == 0)
+    {
+      g_string_append (s, "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": [");
+      for (int i = 0; i < 1001; i++)
+        g_string_append (s, i ? ", {}" : "{}");
+      g_string_append (s, "]}");
+    }
+  else if (strcmp (bad->name, "too-many-fittings") == 0)
+    {
+      g_string_append (s, DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"fittings\": ["));
+      g_string_truncate (s, s->len - 2); /* drop the "]}" of DOC */
+      for (int i = 0; i < 201; i++)
+        g_string_append (s, i ? ", {\"k\": 1, \"count\": 1}" : "{\"k\": 1, \"count\": 1}");
+      g_string_append (s, "]}]}");
+    }
+  else if (strcmp (bad->name, "long-name") == 0)
+    {
+      g_string_append (s, "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": [{\"name\": \"");
+      for (int i = 0; i < 201; i++)
+        g_string_append (s, "é");
+      g_string_append (s, "\"}]}");
+    }
+  else
+    g_string_append_len (s, bad->data, bad->length >= 0 ? bad->length : (gssize) strlen (bad->data));
+  *length = s->len;
+  return g_string_free (s, FALSE);
+}
+
+static void
+test_bad_file (gconstpointer data)
+{
+  const BadFile *bad = data;
+  g_autoptr (RugosaProject) project = load_demo ();
+  g_autofree char *before = rugosa_project_to_data (project, NULL);
+  g_autofree char *after = NULL;
+  g_autofree char *dir = g_dir_make_tmp ("rugosa-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "bad.rugosa", NULL);
+  g_autofree char *content = NULL;
+  g_autoptr (GError) error = NULL;
+  guint n_before = rugosa_project_get_n_lines (project);
+  gsize length;
+
+  content = build_bad (bad, &length);
+  g_assert_true (g_file_set_contents (path, content, (gssize) length, NULL));
+
+  g_assert_false (rugosa_project_load (project, path, &error));
+  g_assert_error (error, RUGOSA_PROJECT_ERROR, bad->code);
+  if (strstr (error->message, bad->message) == NULL)
+    g_test_fail_printf ("message “%s” does not contain “%s”", error->message,
+                        bad->message);
+  g_assert_true (g_str_has_prefix (error->message, "bad.rugosa: "));
+
+  /* The open document is untouched. */
+  after = rugosa_project_to_data (project, NULL);
+  g_assert_cmpstr (after, ==, before);
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, n_before);
+
+  g_unlink (path);
+  g_rmdir (dir);
+}
+
+static void
+test_missing_file (void)
+{
+  g_autoptr (RugosaProject) project = rugosa_project_new ();
+  g_autoptr (GError) error = NULL;
+
+  g_assert_false (rugosa_project_load (project, "/nonexistent/dir/x.rugosa", &error));
+  g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_IO);
+  g_assert_nonnull (strstr (error->message, "Cannot read “x.rugosa”"));
+}
+
+/* ---- atomic save ---- */
+
+static int
+fail_at (RugosaSaveStep step, gpointer user_data)
+{
+  return (int) step == GPOINTER_TO_INT (user_data) ? ENOSPC : 0;
+}
+
+static void
+test_atomic_save (gconstpointer data)
+{
+  RugosaSaveStep step = GPOINTER_TO_INT (data);
+  g_autoptr (RugosaProject) p = load_demo ();
+  g_autoptr (GError) error = NULL;
+  g_autofree char *dir = g_dir_make_tmp ("rugosa-XXXXXX", NULL);
+  g_autofree char *path = g_build_filename (dir, "plant.rugosa", NULL);
+  g_autofree char *backup = g_strconcat (path, "~", NULL);
+  g_autofree char *original = NULL, *now = NULL, *saved = NULL;
+  GDir *d;
+  const char *entry;
+  int n_entries = 0;
+
+  g_assert_true (rugosa_project_save (p, path, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_get_contents (path, &original, NULL, NULL));
+  g_assert_false (g_file_test (backup, G_FILE_TEST_EXISTS));
+
+  rugosa_line_set_name (rugosa_project_get_line (p, 0), "Edited");
+  rugosa_project_set_save_fault_hook (fail_at, GINT_TO_POINTER (step));
+  g_assert_false (rugosa_project_save (p, path, &error));
+  rugosa_project_set_save_fault_hook (NULL, NULL);
+  g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_IO);
+  g_assert_nonnull (strstr (error->message, g_strerror (ENOSPC)));
+  g_assert_nonnull (strstr (error->message, "The previous file is unchanged."));
+  g_clear_error (&error);
+
+  /* The original is intact and no temporary file is left behind. */
+  g_assert_true (g_file_get_contents (path, &now, NULL, NULL));
+  g_assert_cmpstr (now, ==, original);
+  d = g_dir_open (dir, 0, NULL);
+  while ((entry = g_dir_read_name (d)) != NULL)
+    {
+      g_assert_false (g_str_has_prefix (entry, ".plant.rugosa."));
+      n_entries++;
+    }
+  g_dir_close (d);
+  /* plant.rugosa, and plant.rugosa~ when the failure came after the backup */
+  g_assert_cmpint (n_entries, ==, step == RUGOSA_SAVE_STEP_RENAME ? 2 : 1);
+
+  /* A save that works keeps the previous file as the backup. */
+  g_assert_true (rugosa_project_save (p, path, &error));
+  g_assert_no_error (error);
+  g_free (now);
+  g_assert_true (g_file_get_contents (backup, &now, NULL, NULL));
+  g_assert_cmpstr (now, ==, original);
+  g_assert_true (g_file_get_contents (path, &saved, NULL, NULL));
+  g_assert_nonnull (strstr (saved, "\"Edited\""));
+
+  g_unlink (path);
+  g_unlink (backup);
+  g_rmdir (dir);
+}
+
+int
+main (int argc, char **argv)
+{
+  g_test_init (&argc, &argv, NULL);
+  g_test_add_func ("/project/io/round-trip", test_round_trip);
+  g_test_add_func ("/project/io/demo-round-trip", test_demo_round_trip);
+  g_test_add_func ("/project/io/unknown-fields-kept", test_unknown_fields_kept);
+  g_test_add_func ("/project/io/missing-file", test_missing_file);
+  for (guint i = 0; i < G_N_ELEMENTS (bad_files); i++)
+    {
+      g_autofree char *name = g_strdup_printf ("/project/io/bad/%s", bad_files[i].name);
+      g_test_add_data_func (name, &bad_files[i], test_bad_file);
+    }
+  g_test_add_data_func ("/project/io/save/write-fails",
+                        GINT_TO_POINTER (RUGOSA_SAVE_STEP_WRITE), test_atomic_save);
+  g_test_add_data_func ("/project/io/save/fsync-fails",
+                        GINT_TO_POINTER (RUGOSA_SAVE_STEP_FSYNC), test_atomic_save);
+  g_test_add_data_func ("/project/io/save/rename-fails",
+                        GINT_TO_POINTER (RUGOSA_SAVE_STEP_RENAME), test_atomic_save);
+  return g_test_run ();
+}
