@@ -8,7 +8,12 @@
  *
  * Prints one JSON object per line with the median in milliseconds.  The
  * text layout cache is kept across frames in both cases (it is part of the
- * chart object, as in the app). */
+ * chart object, as in the app).
+ *
+ * Times are the drawing thread's CPU time (CLOCK_THREAD_CPUTIME_ID): the
+ * project builds and tests on two shared cores, where wall-clock medians
+ * measure the neighbours' load as much as the chart.  The work done per
+ * frame is the same either way; on an idle machine the two agree. */
 #include <stdlib.h>
 #include <string.h>
 #include <time.h>
@@ -19,7 +24,7 @@ static double
 now_ms (void)
 {
   struct timespec ts;
-  clock_gettime (CLOCK_MONOTONIC, &ts);
+  clock_gettime (CLOCK_THREAD_CPUTIME_ID, &ts);
   return ts.tv_sec * 1e3 + ts.tv_nsec * 1e-6;
 }
 
@@ -101,8 +106,10 @@ main (void)
       return 1;
     }
 
-  printf ("{\"bench\":\"chart_full\",\"ms_median\":%.3f}\n", median (t_full, FULL_RUNS));
-  printf ("{\"bench\":\"chart_overlay\",\"ms_median\":%.3f}\n", median (t_over, OVERLAY_RUNS));
+  printf ("{\"bench\":\"chart_full\",\"ms_median\":%.3f,\"clock\":\"thread-cpu\"}\n",
+          median (t_full, FULL_RUNS));
+  printf ("{\"bench\":\"chart_overlay\",\"ms_median\":%.3f,\"clock\":\"thread-cpu\"}\n",
+          median (t_over, OVERLAY_RUNS));
 
   cairo_destroy (cr);
   cairo_surface_destroy (target);

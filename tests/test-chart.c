@@ -507,7 +507,7 @@ test_cache (void)
   rugosa_chart_draw_direct (chart, cr);
   cairo_destroy (cr);
   cairo_surface_flush (d);
-  int worst = 0;
+  int worst = 0, wx = -1, wy = -1;
   for (int y = 0; y < 500; y += 1)
     for (int x = 0; x < 800; x += 1)
       {
@@ -515,8 +515,14 @@ test_cache (void)
         pixel (s, x, y, a);
         pixel (d, x, y, b);
         for (int c = 0; c < 3; c++)
-          worst = MAX (worst, abs (a[c] - b[c]));
+          if (abs (a[c] - b[c]) > worst)
+            {
+              worst = abs (a[c] - b[c]);
+              wx = x;
+              wy = y;
+            }
       }
+  g_test_message ("cached vs direct: worst difference %d at (%d, %d)", worst, wx, wy);
   /* Common practice (no single source): the same operations on the same
    * surface type give the same pixels; 1 level allows for rounding in the
    * blit of an opaque surface */

@@ -103,8 +103,9 @@ label_layout (RugosaChart *chart, size_t i, int compact, double *w, double *h)
   PangoLayout *l = _rugosa_chart_text (chart, text, chart->lay.font_label,
                                        compact ? TEXT_BOLD : TEXT_FIRST_BOLD, 0);
   _rugosa_chart_text_size (l, w, h);
-  *w += 2 * 5 * k + 13 * k; /* padding and the shape swatch */
-  *h += 2 * 3.5 * k;
+  /* padding and the shape swatch; whole pixels (see draw_label) */
+  *w = ceil (*w + 2 * 5 * k + 13 * k);
+  *h = ceil (*h + 2 * 3.5 * k);
   return l;
 }
 
@@ -112,6 +113,9 @@ typedef struct {
   const RugosaChartRect *bounds;
   RugosaChartRect *obst;
   size_t n_obst;
+  const RugosaChartRect *soft;     /* avoided while `strict` */
+  size_t n_soft;
+  int strict;
 } Space;
 
 static int
@@ -122,6 +126,10 @@ space_free (const Space *s, const RugosaChartRect *r)
   for (size_t i = 0; i < s->n_obst; i++)
     if (_rugosa_chart_rects_overlap (r, &s->obst[i]))
       return 0;
+  if (s->strict)
+    for (size_t i = 0; i < s->n_soft; i++)
+      if (_rugosa_chart_rects_overlap (r, &s->soft[i]))
+        return 0;
   return 1;
 }
 
@@ -143,8 +151,8 @@ try_rings (const Space *s, double ax, double ay, double mr, double w, double h,
           RugosaChartRect r;
           r.width = w;
           r.height = h;
-          r.x = dx > 0 ? ax + dd : dx < 0 ? ax - dd - w : ax - w / 2;
-          r.y = dy > 0 ? ay + dd : dy < 0 ? ay - dd - h : ay - h / 2;
+          r.x = round (dx > 0 ? ax + dd : dx < 0 ? ax - dd - w : ax - w / 2);
+          r.y = round (dy > 0 ? ay + dd : dy < 0 ? ay - dd - h : ay - h / 2);
           if (space_free (s, &r))
             {
               *out = r;
@@ -170,7 +178,7 @@ try_scan (const Space *s, double ax, double ay, double w, double h, double k,
         const double d = cx * cx + cy * cy;
         if (d >= best)
           continue;
-        RugosaChartRect r = { x, y, w, h };
+        RugosaChartRect r = { round (x), round (y), w, h };
         if (!space_free (s, &r))
           continue;
         best = d;
@@ -213,6 +221,11 @@ legend_geometry (RugosaChart *chart)
   if (r.x + r.width > pl->x + pl->width - 10 * k)
     r.x = pl->x + 10 * k;
   r.y = pl->y + pl->height - 10 * k - r.height;
+  /* whole pixels, so its cached image is copied rather than resampled */
+  r.x = round (r.x);
+  r.y = round (r.y);
+  r.width = ceil (r.width);
+  r.height = ceil (r.height);
   chart->legend = r;
 }
 
@@ -224,8 +237,13 @@ _rugosa_chart_place_labels (RugosaChart *chart)
   const size_t n = chart->n_lines;
   RugosaChartRect bounds = { lay->plot.x + 3, lay->plot.y + 3,
                              lay->plot.width - 6, lay->plot.height - 6 };
+  bounds.x = ceil (bounds.x);
+  bounds.y = ceil (bounds.y);
+  bounds.width = floor (bounds.width);
+  bounds.height = floor (bounds.height);
   RugosaChartRect *obst = g_new (RugosaChartRect, 2 * n + 1);
-  Space s = { &bounds, obst, 0 };
+  Space s = { &bounds, obst, 0, chart->bg_boxes,
+              chart->bg_boxes_valid ? chart->n_bg_boxes : 0, 0 };
 
   g_free (chart->labels);
   chart->labels = g_new0 (ChartLabel, n ? n : 1);
@@ -253,30 +271,35 @@ _rugosa_chart_place_labels (RugosaChart *chart)
           continue;
         const double mr = lb->info.marker.width / 2;
         const double half_bar = lb->info.marker.height / 2;
-        int placed = 0;
-        for (int attempt = 0; attempt < 4 && !placed; attempt++)
+        /* full label near the marker, clear of the background's labels;
+         * then allowed over them; then the name alone; then anywhere */
+        static const struct { int compact, scan, strict; } ATTEMPTS[] = {
+          { 0, 0, 1 }, { 0, 0, 0 }, { 1, 0, 1 }, { 1, 0, 0 }, { 0, 1, 0 }, { 1, 1, 0 },
+        };
+        for (size_t a = 0; a < G_N_ELEMENTS (ATTEMPTS); a++)
           {
-            const int compact = attempt == 1 || attempt == 3;
             double w, h;
-            PangoLayout *l = label_layout (chart, i, compact, &w, &h);
+            PangoLayout *l = label_layout (chart, i, ATTEMPTS[a].compact, &w, &h);
             RugosaChartRect r;
             int ring = 0;
-            int ok = attempt < 2
+            s.strict = ATTEMPTS[a].strict;
+            int ok = !ATTEMPTS[a].scan
                        ? try_rings (&s, lb->ax, lb->ay, fmax (mr, half_bar), w, h, k, &r, &ring)
                        : try_scan (&s, lb->ax, lb->ay, w, h, k, &r);
             if (ok != 0)
               continue;
             lb->info.visible = 1;
-            lb->info.compact = compact;
-            lb->info.has_leader = attempt >= 2 || ring > 0;
+            lb->info.compact = ATTEMPTS[a].compact;
+            lb->info.has_leader = ATTEMPTS[a].scan || ring > 0;
             lb->info.box = r;
             lb->layout = l;
             obst[s.n_obst++] = r;
-            placed = 1;
+            break;
           }
       }
   g_free (obst);
   chart->placement_valid = 1;
+  chart->placement_saw_bg_boxes = chart->bg_boxes_valid;
 }
 
 /* --- drawing --- */
@@ -371,9 +394,14 @@ draw_line_paths (RugosaChart *chart, cairo_t *cr, size_t i,
       const double re1 = l->has_flow_max ? l->flow_max.re : l->re;
       if (re0 > 0 && re1 > re0)
         {
-          enum { N = 18 };
+          enum { N = 10 };
           int prev_regime = -1;
-          band.a = 0.38 * l->colour.a;
+          /* an opaque tint of the line's colour over the plot colour: a
+           * translucent stroke costs Cairo a separate mask per line */
+          band.r = 0.42 * l->colour.r + 0.58 * p->plot.r;
+          band.g = 0.42 * l->colour.g + 0.58 * p->plot.g;
+          band.b = 0.42 * l->colour.b + 0.58 * p->plot.b;
+          band.a = 1;
           cairo_save (cr);
           cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
           cairo_set_line_width (cr, (l->selected ? 7.0 : 5.0) * k);
@@ -520,20 +548,17 @@ draw_label (RugosaChart *chart, cairo_t *cr, size_t i, const RugosaChartPalette 
         }
     }
 
-  const double rad = 3 * k;
-  cairo_new_sub_path (cr);
-  cairo_arc (cr, b->x + b->width - rad, b->y + rad, rad, -G_PI / 2, 0);
-  cairo_arc (cr, b->x + b->width - rad, b->y + b->height - rad, rad, 0, G_PI / 2);
-  cairo_arc (cr, b->x + rad, b->y + b->height - rad, rad, G_PI / 2, G_PI);
-  cairo_arc (cr, b->x + rad, b->y + rad, rad, G_PI, 1.5 * G_PI);
-  cairo_close_path (cr);
-  /* opaque: blending a translucent box costs more than it shows */
+  /* Square corners on whole pixels (placement rounds the boxes): Cairo
+   * fills pixel-aligned rectangles without scan conversion, so the border
+   * is the box in the line's colour with the plot colour inset. */
+  const double bw = round (fmax (1.0, 1.2 * k)) + (l->selected ? 1 : 0);
+  _rugosa_chart_set_rgba (cr, &l->colour);
+  cairo_rectangle (cr, b->x, b->y, b->width, b->height);
+  cairo_fill (cr);
   RugosaChartRgba bg = p->plot;
   _rugosa_chart_set_rgba (cr, &bg);
-  cairo_fill_preserve (cr);
-  _rugosa_chart_set_rgba (cr, &l->colour);
-  cairo_set_line_width (cr, (l->selected ? 2.4 : 1.2) * k);
-  cairo_stroke (cr);
+  cairo_rectangle (cr, b->x + bw, b->y + bw, b->width - 2 * bw, b->height - 2 * bw);
+  cairo_fill (cr);
 
   draw_marker (cr, (int) i, b->x + 5 * k + 4.5 * k, b->y + 3.5 * k + chart->lay.font_label * 0.62,
                3.6 * k, &l->colour, NULL, k, 0);
@@ -552,9 +577,11 @@ draw_legend (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
   const size_t rows = (size_t) floor ((r->height - 10 * k) / row + 0.5);
   RugosaChartRgba bg = p->plot, border = p->grid;
   border.a = fmin (1, border.a * 3);
+  /* everything inside the box, so its cached image is opaque */
   cairo_rectangle (cr, r->x, r->y, r->width, r->height);
   _rugosa_chart_set_rgba (cr, &bg);
-  cairo_fill_preserve (cr);
+  cairo_fill (cr);
+  cairo_rectangle (cr, r->x + 0.5, r->y + 0.5, r->width - 1, r->height - 1);
   _rugosa_chart_set_rgba (cr, &border);
   cairo_set_line_width (cr, 1.0);
   cairo_stroke (cr);
@@ -587,8 +614,53 @@ draw_legend (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
   cairo_restore (cr);
 }
 
+/* The legend changes only with the lines' names, colours and selection,
+ * not with their age or hover: keep it as pixels between frames. */
+static void
+draw_legend_cached (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
+{
+  const RugosaChartRect *r = &chart->legend;
+  if (r->width <= 0)
+    return;
+  GString *key = g_string_new (NULL);
+  g_string_append_printf (key, "%d|%.3f|%.3f|%g|%g|%g|%g", chart->spec.theme, chart->lay.k,
+                          chart->spec.scale, r->x, r->y, r->width, r->height);
+  for (size_t i = 0; i < chart->n_lines; i++)
+    {
+      const RugosaChartLine *l = &chart->lines[i].line;
+      g_string_append_printf (key, "|%s|%a|%a|%a|%a|%d", chart->lines[i].name, l->colour.r,
+                              l->colour.g, l->colour.b, l->colour.a, l->selected);
+    }
+  if (chart->legend_img == NULL || chart->legend_key == NULL
+      || !g_string_equal (key, chart->legend_key))
+    {
+      const double s = chart->spec.scale;
+      g_clear_pointer (&chart->legend_img, cairo_surface_destroy);
+      chart->legend_img = cairo_image_surface_create (CAIRO_FORMAT_ARGB32,
+                                                      (int) ceil (r->width * s),
+                                                      (int) ceil (r->height * s));
+      cairo_surface_set_device_scale (chart->legend_img, s, s);
+      cairo_t *lc = cairo_create (chart->legend_img);
+      cairo_translate (lc, -r->x, -r->y);
+      cairo_set_antialias (lc, CAIRO_ANTIALIAS_FAST); /* as in the overlay */
+      draw_legend (chart, lc, p);
+      cairo_destroy (lc);
+      if (chart->legend_key)
+        g_string_free (chart->legend_key, TRUE);
+      chart->legend_key = key;
+    }
+  else
+    g_string_free (key, TRUE);
+  cairo_save (cr);
+  cairo_set_source_surface (cr, chart->legend_img, r->x, r->y);
+  cairo_set_operator (cr, CAIRO_OPERATOR_SOURCE);
+  cairo_rectangle (cr, r->x, r->y, r->width, r->height);
+  cairo_fill (cr);
+  cairo_restore (cr);
+}
+
 void
-_rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr)
+_rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached)
 {
   const ChartLayout *lay = &chart->lay;
   RugosaChartPalette p;
@@ -601,6 +673,9 @@ _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr)
   cairo_save (cr);
   cairo_rectangle (cr, lay->plot.x, lay->plot.y, lay->plot.width, lay->plot.height);
   cairo_clip (cr);
+  /* Coarser edge sampling for the geometry (not the text): wide strokes
+   * and small circles cost several times less, and look the same. */
+  cairo_set_antialias (cr, CAIRO_ANTIALIAS_FAST);
   /* unselected lines under the selected one */
   for (int pass = 0; pass < 2; pass++)
     for (size_t i = 0; i < chart->n_lines; i++)
@@ -610,7 +685,10 @@ _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr)
     for (size_t i = 0; i < chart->n_lines; i++)
       if ((pass == 1) == (chart->lines[i].line.selected != 0))
         draw_line_marker (chart, cr, i, &p);
-  draw_legend (chart, cr, &p);
+  if (cached)
+    draw_legend_cached (chart, cr, &p);
+  else
+    draw_legend (chart, cr, &p);
   for (int pass = 0; pass < 2; pass++)
     for (size_t i = 0; i < chart->n_lines; i++)
       if ((pass == 1) == (chart->lines[i].line.selected != 0))

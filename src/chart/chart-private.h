@@ -49,6 +49,12 @@ struct RugosaChart {
   double user_rr[CHART_CURVES_MAX];
   cairo_surface_t *bg;
   unsigned bg_builds;
+  /* boxes of the background's own labels (curves, bands), which the
+   * overlay's labels avoid when they can */
+  RugosaChartRect bg_boxes[CHART_CURVES_MAX + 16];
+  size_t n_bg_boxes;
+  int bg_boxes_valid;
+  int placement_saw_bg_boxes;
 
   /* overlay */
   ChartLine *lines;
@@ -57,6 +63,8 @@ struct RugosaChart {
   int placement_valid;
   ChartLabel *labels;
   RugosaChartRect legend;
+  cairo_surface_t *legend_img;     /* the legend as pixels, and its key */
+  GString *legend_key;
 
   /* text */
   PangoContext *pango;
@@ -97,7 +105,7 @@ void _rugosa_chart_draw_background (RugosaChart *chart, cairo_t *cr);
 
 /* chart-overlay.c */
 void _rugosa_chart_place_labels (RugosaChart *chart);
-void _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr);
+void _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached);
 void _rugosa_chart_draw_footer (RugosaChart *chart, cairo_t *cr);
 
 static inline int

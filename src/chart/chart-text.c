@@ -12,6 +12,12 @@
  * Debian package fonts-dejavu-core. */
 #define CHART_FONT_FAMILY "DejaVu Sans"
 
+static GQuark
+size_quark (void)
+{
+  return g_quark_from_static_string ("rugosa-chart-text-size");
+}
+
 static void
 ensure_context (RugosaChart *chart)
 {
@@ -90,6 +96,15 @@ _rugosa_chart_text (RugosaChart *chart, const char *text, double size_px,
       pango_layout_set_wrap (layout, PANGO_WRAP_WORD);
     }
 
+  /* Its size, measured once: pango_layout_get_size walks the lines on
+   * every call, and label placement asks often. */
+  int pw, ph;
+  pango_layout_get_size (layout, &pw, &ph);
+  double *size = g_new (double, 2);
+  size[0] = (double) pw / PANGO_SCALE;
+  size[1] = (double) ph / PANGO_SCALE;
+  g_object_set_qdata_full (G_OBJECT (layout), size_quark (), size, g_free);
+
   g_hash_table_insert (chart->layouts,
                        key == stack_key ? g_strdup (key) : key, layout);
   return layout;
@@ -98,6 +113,13 @@ _rugosa_chart_text (RugosaChart *chart, const char *text, double size_px,
 void
 _rugosa_chart_text_size (PangoLayout *layout, double *w, double *h)
 {
+  const double *size = g_object_get_qdata (G_OBJECT (layout), size_quark ());
+  if (size != NULL)
+    {
+      *w = size[0];
+      *h = size[1];
+      return;
+    }
   int pw, ph;
   pango_layout_get_size (layout, &pw, &ph);
   *w = (double) pw / PANGO_SCALE;

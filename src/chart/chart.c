@@ -66,6 +66,9 @@ rugosa_chart_free (RugosaChart *chart)
   free_lines (chart);
   _rugosa_chart_free_curves (chart);
   g_clear_pointer (&chart->bg, cairo_surface_destroy);
+  g_clear_pointer (&chart->legend_img, cairo_surface_destroy);
+  if (chart->legend_key)
+    g_string_free (chart->legend_key, TRUE);
   g_free (chart->labels);
   if (chart->layouts)
     g_hash_table_destroy (chart->layouts);
@@ -77,6 +80,8 @@ static void
 invalidate_all (RugosaChart *chart)
 {
   _rugosa_chart_free_curves (chart);
+  chart->n_bg_boxes = 0;
+  chart->bg_boxes_valid = 0;
   g_clear_pointer (&chart->bg, cairo_surface_destroy);
   chart->placement_valid = 0;
 }
@@ -217,7 +222,9 @@ build_background (RugosaChart *chart)
   const double s = chart->spec.scale;
   const int w = (int) ceil (chart->spec.width * s);
   const int h = (int) ceil (chart->spec.height * s);
-  chart->bg = cairo_image_surface_create (CAIRO_FORMAT_RGB24, w, h);
+  /* ARGB32 like the surfaces GTK and the exports draw on, so the blit is
+   * a plain copy (an RGB24 source would need its alpha set per pixel). */
+  chart->bg = cairo_image_surface_create (CAIRO_FORMAT_ARGB32, w, h);
   cairo_surface_set_device_scale (chart->bg, s, s);
   cairo_t *cr = cairo_create (chart->bg);
   _rugosa_chart_draw_background (chart, cr);
@@ -236,9 +243,11 @@ rugosa_chart_draw (RugosaChart *chart, cairo_t *cr)
   cairo_rectangle (cr, 0, 0, chart->spec.width, chart->spec.height);
   cairo_clip (cr);
   cairo_set_source_surface (cr, chart->bg, 0, 0);
+  /* the background is opaque: copy it rather than blend it */
+  cairo_set_operator (cr, CAIRO_OPERATOR_SOURCE);
   cairo_paint (cr);
   cairo_restore (cr);
-  _rugosa_chart_draw_overlay (chart, cr);
+  _rugosa_chart_draw_overlay (chart, cr, 1);
 }
 
 void
@@ -250,7 +259,7 @@ rugosa_chart_draw_direct (RugosaChart *chart, cairo_t *cr)
   _rugosa_chart_draw_background (chart, cr);
   _rugosa_chart_draw_footer (chart, cr);
   cairo_restore (cr);
-  _rugosa_chart_draw_overlay (chart, cr);
+  _rugosa_chart_draw_overlay (chart, cr, 0);
 }
 
 RugosaChartRect
