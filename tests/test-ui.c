@@ -457,6 +457,62 @@ test_units_preference (void)
   close_window (win);
 }
 
+static gboolean
+file_starts_with (const char *path,
+                  const char *magic,
+                  gsize       n)
+{
+  g_autofree char *data = NULL;
+  gsize length = 0;
+
+  if (!g_file_get_contents (path, &data, &length, NULL))
+    return FALSE;
+  return length > n && memcmp (data, magic, n) == 0;
+}
+
+static void
+test_outputs (void)
+{
+  RugosaWindow *win = open_demo ();
+  g_autofree char *png = g_build_filename (tmpdir, "chart.png", NULL);
+  g_autofree char *svg = g_build_filename (tmpdir, "chart.svg", NULL);
+  g_autofree char *pdf = g_build_filename (tmpdir, "chart.pdf", NULL);
+  g_autofree char *printed = g_build_filename (tmpdir, "printed.pdf", NULL);
+  g_autofree char *csv = g_build_filename (tmpdir, "results.csv", NULL);
+  g_autofree char *csv_text = NULL;
+  g_autoptr (GError) error = NULL;
+  g_autoptr (GdkTexture) texture = NULL;
+  g_autoptr (GFile) png_file = g_file_new_for_path (png);
+  guint n = rugosa_project_get_n_lines (rugosa_window_get_project (win));
+  guint rows = 0;
+
+  g_assert_true (rugosa_window_export_chart_to (win, png, RUGOSA_CHART_FORMAT_PNG, 1280, 800, &error));
+  g_assert_no_error (error);
+  /* The chosen size is the size written. */
+  texture = gdk_texture_new_from_file (png_file, &error);
+  g_assert_no_error (error);
+  g_assert_cmpint (gdk_texture_get_width (texture), ==, 1280);
+  g_assert_cmpint (gdk_texture_get_height (texture), ==, 800);
+
+  g_assert_true (rugosa_window_export_chart_to (win, svg, RUGOSA_CHART_FORMAT_SVG, 960, 600, &error));
+  g_assert_true (file_starts_with (svg, "<?xml", 5));
+  g_assert_true (rugosa_window_export_chart_to (win, pdf, RUGOSA_CHART_FORMAT_PDF, 842, 595, &error));
+  g_assert_true (file_starts_with (pdf, "%PDF", 4));
+
+  /* Printing goes through GtkPrintOperation; its export path writes a PDF. */
+  g_assert_true (rugosa_window_print_to_pdf (win, printed, &error));
+  g_assert_no_error (error);
+  g_assert_true (file_starts_with (printed, "%PDF", 4));
+
+  /* The results table: one header line and one row a line option. */
+  g_assert_true (rugosa_window_export_csv_to (win, csv, &error));
+  g_assert_true (g_file_get_contents (csv, &csv_text, NULL, NULL));
+  for (const char *c = csv_text; *c; c++)
+    rows += *c == '\n';
+  g_assert_cmpuint (rows, >=, n + 1);
+  close_window (win);
+}
+
 static void
 test_screenshot (void)
 {
@@ -551,6 +607,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/files/autosave", test_autosave);
   g_test_add_func ("/ui/canvas/probe-and-keys", test_probe_and_keys);
   g_test_add_func ("/ui/preferences/flow-unit", test_units_preference);
+  g_test_add_func ("/ui/files/export-print-csv", test_outputs);
   g_test_add_func ("/ui/screenshot", test_screenshot);
 
   status = g_test_run ();

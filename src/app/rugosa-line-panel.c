@@ -693,6 +693,53 @@ _rugosa_line_panel_collect_entries (RugosaLinePanel *self,
     }
 }
 
+/* The closed drop-down shows an ellipsized name so the row keeps room for
+ * its title; the open list shows names whole. */
+static void
+_rugosa_line_panel_label_setup (GtkSignalListItemFactory *factory,
+                                GtkListItem              *item,
+                                gpointer                  user_data)
+{
+  GtkWidget *label = gtk_label_new (NULL);
+
+  gtk_label_set_xalign (GTK_LABEL (label), 0);
+  if (GPOINTER_TO_INT (user_data))
+    {
+      gtk_label_set_ellipsize (GTK_LABEL (label), PANGO_ELLIPSIZE_END);
+      gtk_label_set_max_width_chars (GTK_LABEL (label), 16);
+      gtk_label_set_width_chars (GTK_LABEL (label), 10);
+    }
+  gtk_list_item_set_child (item, label);
+}
+
+static void
+_rugosa_line_panel_label_bind (GtkSignalListItemFactory *factory,
+                               GtkListItem              *item,
+                               gpointer                  user_data)
+{
+  GtkStringObject *obj = gtk_list_item_get_item (item);
+  GtkWidget *label = gtk_list_item_get_child (item);
+
+  gtk_label_set_text (GTK_LABEL (label), gtk_string_object_get_string (obj));
+  gtk_widget_set_tooltip_text (label, gtk_string_object_get_string (obj));
+}
+
+static void
+_rugosa_line_panel_compact_dropdown (GtkDropDown *dropdown)
+{
+  GtkListItemFactory *button = gtk_signal_list_item_factory_new ();
+  GtkListItemFactory *list = gtk_signal_list_item_factory_new ();
+
+  g_signal_connect (button, "setup", G_CALLBACK (_rugosa_line_panel_label_setup), GINT_TO_POINTER (1));
+  g_signal_connect (button, "bind", G_CALLBACK (_rugosa_line_panel_label_bind), NULL);
+  g_signal_connect (list, "setup", G_CALLBACK (_rugosa_line_panel_label_setup), GINT_TO_POINTER (0));
+  g_signal_connect (list, "bind", G_CALLBACK (_rugosa_line_panel_label_bind), NULL);
+  gtk_drop_down_set_factory (dropdown, button);
+  gtk_drop_down_set_list_factory (dropdown, list);
+  g_object_unref (button);
+  g_object_unref (list);
+}
+
 static void
 _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
 {
@@ -710,7 +757,7 @@ _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
   gtk_string_list_append (materials, _("Custom roughness"));
   for (int i = 0; i < rg_material_count (); i++)
     gtk_string_list_append (materials, rg_material_at (i)->name);
-  gtk_string_list_append (agings, _("Custom growth rate"));
+  gtk_string_list_append (agings, _("Custom rate"));
   for (int i = 0; i < rg_aging_class_count (); i++)
     gtk_string_list_append (agings, rg_aging_class_at (i)->name);
   gtk_string_list_append (pipes, _("Custom bore"));
@@ -735,6 +782,11 @@ _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
   gtk_drop_down_set_expression (self->pipe_dropdown, expr);
   gtk_drop_down_set_expression (self->fitting_add_dropdown, expr);
   gtk_expression_unref (expr);
+
+  _rugosa_line_panel_compact_dropdown (self->material_dropdown);
+  _rugosa_line_panel_compact_dropdown (self->aging_dropdown);
+  _rugosa_line_panel_compact_dropdown (self->pipe_dropdown);
+  _rugosa_line_panel_compact_dropdown (self->fitting_add_dropdown);
 }
 
 static void

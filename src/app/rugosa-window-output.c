@@ -25,6 +25,36 @@ _rugosa_window_today (void)
   return g_date_time_format (now, "%Y-%m-%d");
 }
 
+gboolean
+rugosa_window_export_chart_to (RugosaWindow       *self,
+                               const char         *path,
+                               RugosaChartFormat   format,
+                               double              width,
+                               double              height,
+                               GError            **error)
+{
+  guint pos = gtk_single_selection_get_selected (self->selection);
+  g_autoptr (RugosaChartInput) input = NULL;
+  g_autofree char *date = _rugosa_window_today ();
+
+  input = rugosa_chart_input_new (self->project, self->settings,
+                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
+  return rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
+                              width, height, date, path, error);
+}
+
+gboolean
+rugosa_window_export_csv_to (RugosaWindow  *self,
+                             const char    *path,
+                             GError       **error)
+{
+  g_autoptr (GString) out = g_string_new (NULL);
+
+  if (!rugosa_project_format_eval (self->project, -1.0, RUGOSA_EVAL_FORMAT_CSV, out, error))
+    return FALSE;
+  return g_file_set_contents (path, out->str, out->len, error);
+}
+
 static void
 _rugosa_window_export_response (GtkNativeDialog *dialog,
                                 int              response,
@@ -32,13 +62,10 @@ _rugosa_window_export_response (GtkNativeDialog *dialog,
 {
   g_autoptr (GFile) file = NULL;
   g_autofree char *path = NULL;
-  g_autofree char *date = NULL;
   g_autoptr (GError) error = NULL;
-  g_autoptr (RugosaChartInput) input = NULL;
   const char *size_id, *format_id;
   RugosaChartFormat format = RUGOSA_CHART_FORMAT_PNG;
   double w = 960, h = 600;
-  guint pos;
 
   if (response != GTK_RESPONSE_ACCEPT)
     {
@@ -74,11 +101,7 @@ _rugosa_window_export_response (GtkNativeDialog *dialog,
       path = with;
     }
 
-  pos = gtk_single_selection_get_selected (self->selection);
-  input = rugosa_chart_input_new (self->project, self->settings,
-                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
-  date = _rugosa_window_today ();
-  if (!rugosa_chart_export (&input->spec, input->lines, input->n_lines, format, w, h, date, path, &error))
+  if (!rugosa_window_export_chart_to (self, path, format, w, h, &error))
     {
       GtkWidget *msg = adw_message_dialog_new (GTK_WINDOW (self), _("Could not export the chart"), error->message);
       adw_message_dialog_add_response (ADW_MESSAGE_DIALOG (msg), "close", _("_Close"));
@@ -130,11 +153,9 @@ _rugosa_window_csv_response (GtkNativeDialog *dialog,
     {
       g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
       g_autofree char *path = g_file_get_path (file);
-      g_autoptr (GString) out = g_string_new (NULL);
       g_autoptr (GError) error = NULL;
 
-      if (!rugosa_project_format_eval (self->project, -1.0, RUGOSA_EVAL_FORMAT_CSV, out, &error)
-          || !g_file_set_contents (path, out->str, out->len, &error))
+      if (!rugosa_window_export_csv_to (self, path, &error))
         {
           GtkWidget *msg = adw_message_dialog_new (GTK_WINDOW (self), _("Could not export the results"), error->message);
           adw_message_dialog_add_response (ADW_MESSAGE_DIALOG (msg), "close", _("_Close"));
@@ -197,15 +218,11 @@ _rugosa_window_draw_page (GtkPrintOperation *op,
   rugosa_chart_free (chart);
 }
 
-static void
-_rugosa_window_print (GtkWidget  *widget,
-                      const char *action_name,
-                      GVariant   *param)
+static GtkPrintOperation *
+_rugosa_window_print_operation (RugosaWindow *self)
 {
-  RugosaWindow *self = RUGOSA_WINDOW (widget);
-  g_autoptr (GtkPrintOperation) op = gtk_print_operation_new ();
+  GtkPrintOperation *op = gtk_print_operation_new ();
   g_autoptr (GtkPageSetup) setup = gtk_page_setup_new ();
-  g_autoptr (GError) error = NULL;
 
   gtk_page_setup_set_orientation (setup, GTK_PAGE_ORIENTATION_LANDSCAPE);
   gtk_print_operation_set_default_page_setup (op, setup);
@@ -213,6 +230,31 @@ _rugosa_window_print (GtkWidget  *widget,
   gtk_print_operation_set_job_name (op, _("Friction chart"));
   gtk_print_operation_set_embed_page_setup (op, TRUE);
   g_signal_connect (op, "draw-page", G_CALLBACK (_rugosa_window_draw_page), self);
+  return op;
+}
+
+gboolean
+rugosa_window_print_to_pdf (RugosaWindow  *self,
+                            const char    *path,
+                            GError       **error)
+{
+  g_autoptr (GtkPrintOperation) op = _rugosa_window_print_operation (self);
+
+  /* The same page as printing, written through GTK's print path. */
+  gtk_print_operation_set_export_filename (op, path);
+  return gtk_print_operation_run (op, GTK_PRINT_OPERATION_ACTION_EXPORT, GTK_WINDOW (self), error)
+         != GTK_PRINT_OPERATION_RESULT_ERROR;
+}
+
+static void
+_rugosa_window_print (GtkWidget  *widget,
+                      const char *action_name,
+                      GVariant   *param)
+{
+  RugosaWindow *self = RUGOSA_WINDOW (widget);
+  g_autoptr (GtkPrintOperation) op = _rugosa_window_print_operation (self);
+  g_autoptr (GError) error = NULL;
+
   if (gtk_print_operation_run (op, GTK_PRINT_OPERATION_ACTION_PRINT_DIALOG, GTK_WINDOW (self), &error)
       == GTK_PRINT_OPERATION_RESULT_ERROR)
     _rugosa_window_toast (self, error->message);

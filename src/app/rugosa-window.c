@@ -331,7 +331,7 @@ _rugosa_window_update_age_summary (RugosaWindow *self)
           g_autofree char *uh = g_settings_get_string (self->settings, "unit-head");
           g_autofree char *h = rugosa_display_format (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
           g_autofree char *change = rugosa_readout_change (p->head_loss_ratio_to_new);
-          g_autofree char *text = g_strdup_printf (_("%s: head loss %s, %s against new"),
+          g_autofree char *text = g_strdup_printf (_("%s: head loss %s, %s vs new"),
                                                    rugosa_line_get_name (line), h, change);
 
           gtk_label_set_text (self->age_change_label, text);

@@ -3,6 +3,7 @@
 
 #include <adwaita.h>
 
+#include "chart/rugosa-chart.h"
 #include "model/rugosa-history.h"
 #include "model/rugosa-project.h"
 #include "rugosa-application.h"
@@ -39,6 +40,20 @@ gboolean       rugosa_window_autosave_now   (RugosaWindow *self,
                                              GError      **error);
 /* Where the autosave copy of this window goes. */
 char          *rugosa_window_autosave_path  (RugosaWindow *self);
+
+/* Output without dialogs (the menu's dialogs end here; tests). */
+gboolean       rugosa_window_export_chart_to (RugosaWindow      *self,
+                                              const char        *path,
+                                              RugosaChartFormat  format,
+                                              double             width,
+                                              double             height,
+                                              GError           **error);
+gboolean       rugosa_window_export_csv_to   (RugosaWindow      *self,
+                                              const char        *path,
+                                              GError           **error);
+gboolean       rugosa_window_print_to_pdf    (RugosaWindow      *self,
+                                              const char        *path,
+                                              GError           **error);
 
 /* Pieces, for tests and the benchmark. */
 GtkWidget     *rugosa_window_get_canvas     (RugosaWindow *self);
