@@ -457,6 +457,128 @@ test_units_preference (void)
   close_window (win);
 }
 
+/* The message dialog a window has just presented, or NULL. */
+static AdwMessageDialog *
+find_message_dialog (GtkWindow *parent)
+{
+  GListModel *tops = gtk_window_get_toplevels ();  /* borrowed */
+
+  for (guint i = 0; i < g_list_model_get_n_items (tops); i++)
+    {
+      g_autoptr (GtkWindow) w = g_list_model_get_item (tops, i);
+      if (ADW_IS_MESSAGE_DIALOG (w) && gtk_window_get_transient_for (w) == parent
+          && gtk_widget_get_visible (GTK_WIDGET (w)))
+        return ADW_MESSAGE_DIALOG (w);
+    }
+  return NULL;
+}
+
+static void
+test_recovery (void)
+{
+  RugosaWindow *crashed = open_demo ();
+  RugosaWindow *fresh;
+  guint pos = find_line (crashed, -1, FALSE);
+  RugosaLinePanel *panel = select_line (crashed, pos);
+  g_autofree char *autosave = rugosa_window_autosave_path (crashed);
+  g_autofree char *kept = g_strconcat (autosave, ".kept", NULL);
+  g_autofree char *kept_origin = g_strconcat (autosave, ".origin.kept", NULL);
+  g_autofree char *origin = g_strconcat (autosave, ".origin", NULL);
+  g_autoptr (GError) error = NULL;
+  AdwMessageDialog *dialog;
+
+  /* A session with unsaved work, autosaved, that then "crashes": the copy
+   * is set aside before the window goes away and put back after. */
+  g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "777 m"));
+  drain ();
+  g_assert_true (rugosa_window_autosave_now (crashed, &error));
+  g_assert_no_error (error);
+  g_assert_cmpint (g_rename (autosave, kept), ==, 0);
+  g_assert_cmpint (g_rename (origin, kept_origin), ==, 0);
+  close_window (crashed);
+  g_assert_cmpint (g_rename (kept, autosave), ==, 0);
+  g_assert_cmpint (g_rename (kept_origin, origin), ==, 0);
+
+  fresh = rugosa_window_new (app);
+  gtk_window_present (GTK_WINDOW (fresh));
+  rugosa_window_offer_recovery (fresh);
+  drain ();
+  dialog = find_message_dialog (GTK_WINDOW (fresh));
+  g_assert_nonnull (dialog);
+  adw_message_dialog_response (dialog, "recover");
+  drain ();
+  /* Source: the value typed before the crash, 777 m. */
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (rugosa_window_get_project (fresh), pos),
+                                             "length"), ==, 777.0);
+  g_assert_true (rugosa_window_get_modified (fresh));
+  /* The file it came from is known again. */
+  g_assert_nonnull (rugosa_window_get_file (fresh));
+  g_assert_false (g_file_test (autosave, G_FILE_TEST_EXISTS));
+  close_window (fresh);
+}
+
+static void
+test_close_guard (void)
+{
+  RugosaWindow *win = open_demo ();
+  guint pos = find_line (win, -1, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  AdwMessageDialog *dialog;
+  g_autoptr (GtkWidget) keep = g_object_ref (GTK_WIDGET (win));
+
+  /* Unchanged: closes at once. */
+  g_assert_false (rugosa_window_get_modified (win));
+
+  g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "888 m"));
+  drain ();
+  gtk_window_close (GTK_WINDOW (win));
+  drain ();
+  /* Changed: the window stays and asks. */
+  g_assert_true (gtk_widget_get_visible (GTK_WIDGET (win)));
+  dialog = find_message_dialog (GTK_WINDOW (win));
+  g_assert_nonnull (dialog);
+  g_assert_true (adw_message_dialog_has_response (dialog, "save"));
+  g_assert_true (adw_message_dialog_has_response (dialog, "discard"));
+  g_assert_true (adw_message_dialog_has_response (dialog, "cancel"));
+
+  adw_message_dialog_response (dialog, "cancel");
+  drain ();
+  g_assert_true (gtk_widget_get_visible (GTK_WIDGET (win)));
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (rugosa_window_get_project (win), pos),
+                                             "length"), ==, 888.0);
+
+  gtk_window_close (GTK_WINDOW (win));
+  drain ();
+  dialog = find_message_dialog (GTK_WINDOW (win));
+  g_assert_nonnull (dialog);
+  adw_message_dialog_response (dialog, "discard");
+  drain ();
+  g_assert_false (gtk_widget_get_visible (GTK_WIDGET (win)));
+}
+
+static void
+test_open_from_command_line (void)
+{
+  g_autofree char *path = demo_path ();
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  GList *before = g_list_copy (gtk_application_get_windows (GTK_APPLICATION (app)));
+  GList *after;
+  RugosaWindow *opened = NULL;
+
+  /* What `rugosa FILE` does through G_APPLICATION_HANDLES_OPEN. */
+  g_application_open (G_APPLICATION (app), &file, 1, "");
+  drain ();
+  after = gtk_application_get_windows (GTK_APPLICATION (app));
+  for (GList *l = after; l; l = l->next)
+    if (!g_list_find (before, l->data) || (RUGOSA_IS_WINDOW (l->data) && rugosa_window_get_file (l->data)))
+      opened = l->data;
+  g_list_free (before);
+  g_assert_nonnull (opened);
+  g_assert_true (g_file_equal (rugosa_window_get_file (opened), file));
+  g_assert_cmpuint (rugosa_project_get_n_lines (rugosa_window_get_project (opened)), >=, 1);
+  close_window (opened);
+}
+
 static gboolean
 file_starts_with (const char *path,
                   const char *magic,
@@ -593,7 +715,7 @@ main (int argc, char *argv[])
 
   app = g_object_new (RUGOSA_TYPE_APPLICATION,
                       "application-id", "org.rugosa.Rugosa.Test",
-                      "flags", G_APPLICATION_NON_UNIQUE,
+                      "flags", G_APPLICATION_NON_UNIQUE | G_APPLICATION_HANDLES_OPEN,
                       "resource-base-path", "/org/rugosa/Rugosa",
                       NULL);
   g_assert_true (g_application_register (G_APPLICATION (app), NULL, NULL));
@@ -608,6 +730,9 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/canvas/probe-and-keys", test_probe_and_keys);
   g_test_add_func ("/ui/preferences/flow-unit", test_units_preference);
   g_test_add_func ("/ui/files/export-print-csv", test_outputs);
+  g_test_add_func ("/ui/files/recovery", test_recovery);
+  g_test_add_func ("/ui/files/close-guard", test_close_guard);
+  g_test_add_func ("/ui/files/open-command-line", test_open_from_command_line);
   g_test_add_func ("/ui/screenshot", test_screenshot);
 
   status = g_test_run ();

@@ -18,7 +18,6 @@ struct _RugosaPreferencesWindow
   GtkSpinButton       *laminar_spin;
   GtkSpinButton       *turbulent_spin;
   GtkSpinButton       *velocity_limit_spin;
-  GtkSpinButton       *velocity_floor_spin;
   GtkSpinButton       *gradient_limit_spin;
   GtkSpinButton       *age_max_spin;
   AdwComboRow         *color_scheme_row;
@@ -271,7 +270,6 @@ rugosa_preferences_window_new (GSettings *settings)
   _rugosa_prefs_bind_spin (settings, "laminar-limit", self->laminar_spin);
   _rugosa_prefs_bind_spin (settings, "turbulent-limit", self->turbulent_spin);
   _rugosa_prefs_bind_spin (settings, "velocity-limit", self->velocity_limit_spin);
-  _rugosa_prefs_bind_spin (settings, "velocity-floor", self->velocity_floor_spin);
   _rugosa_prefs_bind_spin (settings, "gradient-limit", self->gradient_limit_spin);
   _rugosa_prefs_bind_spin (settings, "service-age-max", self->age_max_spin);
 
@@ -309,7 +307,6 @@ rugosa_preferences_window_class_init (RugosaPreferencesWindowClass *klass)
   gtk_widget_class_bind_template_child (widget_class, RugosaPreferencesWindow, laminar_spin);
   gtk_widget_class_bind_template_child (widget_class, RugosaPreferencesWindow, turbulent_spin);
   gtk_widget_class_bind_template_child (widget_class, RugosaPreferencesWindow, velocity_limit_spin);
-  gtk_widget_class_bind_template_child (widget_class, RugosaPreferencesWindow, velocity_floor_spin);
   gtk_widget_class_bind_template_child (widget_class, RugosaPreferencesWindow, gradient_limit_spin);
   gtk_widget_class_bind_template_child (widget_class, RugosaPreferencesWindow, age_max_spin);
   gtk_widget_class_bind_template_child (widget_class, RugosaPreferencesWindow, color_scheme_row);
