@@ -340,11 +340,24 @@ _rugosa_line_panel_fitting_count (GtkSpinButton   *spin,
 }
 
 static void
-_rugosa_line_panel_fitting_k (GtkSpinButton   *spin,
+_rugosa_line_panel_fitting_k (GtkEntry        *entry,
                               RugosaLinePanel *self)
 {
-  guint index = GPOINTER_TO_UINT (g_object_get_data (G_OBJECT (spin), "index"));
-  _rugosa_line_panel_fitting_edit (self, index, FALSE, -1, gtk_spin_button_get_value (spin));
+  guint index = GPOINTER_TO_UINT (g_object_get_data (G_OBJECT (entry), "index"));
+  const char *text = gtk_editable_get_text (GTK_EDITABLE (entry));
+  char *end = NULL;
+  double k = g_ascii_strtod (text, &end);
+
+  /* A plain K is a bare number: no unit to parse. */
+  while (end && *end == ' ')
+    end++;
+  if (end == text || (end && *end != '\0') || !isfinite (k) || k < 0.0)
+    {
+      gtk_widget_add_css_class (GTK_WIDGET (entry), "error");
+      return;
+    }
+  gtk_widget_remove_css_class (GTK_WIDGET (entry), "error");
+  _rugosa_line_panel_fitting_edit (self, index, FALSE, -1, k);
 }
 
 static void
@@ -387,18 +400,21 @@ _rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
         adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), fitting->name);
       else
         {
-          GtkWidget *kspin = gtk_spin_button_new_with_range (0, 1000, 0.05);
+          GtkWidget *kentry = gtk_entry_new ();
+          char buf[G_ASCII_DTOSTR_BUF_SIZE];
 
-          adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), _("Other loss, K each"));
-          gtk_spin_button_set_digits (GTK_SPIN_BUTTON (kspin), 2);
-          gtk_spin_button_set_value (GTK_SPIN_BUTTON (kspin), k);
-          gtk_widget_set_valign (kspin, GTK_ALIGN_CENTER);
-          gtk_widget_set_tooltip_text (kspin, _("Loss coefficient K of one such loss"));
-          g_object_set_data (G_OBJECT (kspin), "index", GUINT_TO_POINTER (index));
-          g_signal_connect (kspin, "value-changed", G_CALLBACK (_rugosa_line_panel_fitting_k), self);
-          adw_action_row_add_suffix (ADW_ACTION_ROW (row), kspin);
+          adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), _("Other loss, K ="));
+          gtk_editable_set_text (GTK_EDITABLE (kentry), g_ascii_formatd (buf, sizeof buf, "%g", k));
+          gtk_editable_set_width_chars (GTK_EDITABLE (kentry), 5);
+          gtk_entry_set_alignment (GTK_ENTRY (kentry), 1.0);
+          gtk_widget_set_valign (kentry, GTK_ALIGN_CENTER);
+          gtk_widget_set_tooltip_text (kentry, _("Loss coefficient K of one such loss (a number ≥ 0)"));
+          g_object_set_data (G_OBJECT (kentry), "index", GUINT_TO_POINTER (index));
+          g_signal_connect (kentry, "activate", G_CALLBACK (_rugosa_line_panel_fitting_k), self);
+          adw_action_row_add_suffix (ADW_ACTION_ROW (row), kentry);
         }
       gtk_spin_button_set_value (GTK_SPIN_BUTTON (spin), count);
+      gtk_editable_set_width_chars (GTK_EDITABLE (spin), 2);
       gtk_widget_set_valign (spin, GTK_ALIGN_CENTER);
       gtk_widget_set_tooltip_text (spin, _("How many"));
       g_object_set_data (G_OBJECT (spin), "index", GUINT_TO_POINTER (index));
@@ -593,8 +609,21 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
           if (rugosa_quantity_entry_get_error_text (entry) == NULL)
             rugosa_quantity_entry_set_value (entry, v);
         }
-      gtk_editable_set_editable (rugosa_quantity_entry_get_editable (entry), !from_catalog);
-      gtk_widget_set_can_focus (GTK_WIDGET (entry), !from_catalog);
+      {
+        /* A catalog value is shown, greyed, with where it comes from;
+         * choosing "Custom …" above makes the field editable again. */
+        GtkWidget *row = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
+        const char *own = row ? g_object_get_data (G_OBJECT (row), "own-subtitle") : NULL;
+        const char *plain = from_catalog ? _("From the catalog entry chosen above") : own;
+
+        gtk_widget_set_sensitive (GTK_WIDGET (entry), !from_catalog);
+        if (row != NULL)
+          {
+            g_object_set_data_full (G_OBJECT (row), "plain-subtitle", g_strdup (plain), g_free);
+            if (rugosa_quantity_entry_get_error_text (entry) == NULL)
+              adw_action_row_set_subtitle (ADW_ACTION_ROW (row), plain ? plain : "");
+          }
+      }
     }
 
   if (res != NULL && res->ok)
@@ -683,6 +712,8 @@ _rugosa_line_panel_collect_entries (RugosaLinePanel *self,
           if (row)
             {
               g_object_set_data_full (G_OBJECT (row), "plain-subtitle",
+                                      g_strdup (adw_action_row_get_subtitle (ADW_ACTION_ROW (row))), g_free);
+              g_object_set_data_full (G_OBJECT (row), "own-subtitle",
                                       g_strdup (adw_action_row_get_subtitle (ADW_ACTION_ROW (row))), g_free);
               g_signal_connect_object (child, "notify::error-text",
                                        G_CALLBACK (_rugosa_line_panel_entry_error), row, 0);
