@@ -23,7 +23,7 @@ struct _RugosaResultsTable
   GSettings     *settings;
 
   /* owned references */
-  GPtrArray  *bound;   /* GtkLabel cells on screen */
+  GPtrArray  *bound;   /* GtkInscription cells on screen */
   GHashTable *units;   /* settings key -> unit, read once per change */
 };
 
@@ -152,9 +152,12 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
   return g_strdup ("");
 }
 
+/* Cells are GtkInscriptions: their size does not follow their text, so a
+ * slider move that changes every number repaints the table without laying
+ * out the window again. */
 static void
 _rugosa_results_table_update_label (RugosaResultsTable *self,
-                                    GtkLabel           *label)
+                                    GtkInscription     *label)
 {
   RugosaLine *line = g_object_get_data (G_OBJECT (label), "line");
   const char *column = g_object_get_data (G_OBJECT (label), "column");
@@ -163,8 +166,8 @@ _rugosa_results_table_update_label (RugosaResultsTable *self,
   if (line == NULL)
     return;
   text = rugosa_results_table_format_cell (self, line, column);
-  if (g_strcmp0 (gtk_label_get_text (label), text) != 0)
-    gtk_label_set_text (label, text);
+  if (g_strcmp0 (gtk_inscription_get_text (label), text) != 0)
+    gtk_inscription_set_text (label, text);
   if (g_strcmp0 (column, "warnings") == 0)
     {
       g_autofree char *all = self->project ? rugosa_readout_warnings (self->project, line) : NULL;
@@ -177,7 +180,7 @@ rugosa_results_table_refresh (RugosaResultsTable *self)
 {
   g_return_if_fail (RUGOSA_IS_RESULTS_TABLE (self));
   for (guint i = 0; i < self->bound->len; i++)
-    _rugosa_results_table_update_label (self, g_ptr_array_index (self->bound, i));
+    _rugosa_results_table_update_label (self, GTK_INSCRIPTION (g_ptr_array_index (self->bound, i)));
 }
 
 char *
@@ -192,10 +195,10 @@ rugosa_results_table_cell_text (RugosaResultsTable *self,
   line = rugosa_project_get_line (self->project, position);
   for (guint i = 0; i < self->bound->len; i++)
     {
-      GtkLabel *label = g_ptr_array_index (self->bound, i);
+      GtkInscription *label = g_ptr_array_index (self->bound, i);
       if (g_object_get_data (G_OBJECT (label), "line") == line
           && g_strcmp0 (g_object_get_data (G_OBJECT (label), "column"), column) == 0)
-        return g_strdup (gtk_label_get_text (label));
+        return g_strdup (gtk_inscription_get_text (label));
     }
   return NULL;
 }
@@ -206,22 +209,22 @@ _rugosa_results_table_setup (GtkSignalListItemFactory *factory,
                              RugosaResultsTable       *self)
 {
   const Column *col = g_object_get_data (G_OBJECT (factory), "column");
-  GtkWidget *label = gtk_label_new (NULL);
+  GtkWidget *label = gtk_inscription_new (NULL);
+  GtkInscription *ins = GTK_INSCRIPTION (label);
 
-  gtk_label_set_xalign (GTK_LABEL (label), col->numeric ? 1.0 : 0.0);
+  gtk_inscription_set_xalign (ins, col->numeric ? 1.0 : 0.0);
+  gtk_inscription_set_text_overflow (ins, GTK_INSCRIPTION_OVERFLOW_ELLIPSIZE_END);
+  gtk_inscription_set_min_chars (ins, col->numeric ? 6 : 8);
+  gtk_inscription_set_nat_chars (ins, col->numeric ? 9 : 14);
   if (col->numeric)
     gtk_widget_add_css_class (label, "numeric");
   if (g_strcmp0 (col->id, "warnings") == 0)
     {
-      gtk_label_set_ellipsize (GTK_LABEL (label), PANGO_ELLIPSIZE_END);
-      gtk_label_set_width_chars (GTK_LABEL (label), 24);
+      gtk_inscription_set_nat_chars (ins, 40);
       gtk_widget_add_css_class (label, "warning");
     }
-  if (g_strcmp0 (col->id, "name") == 0)
-    {
-      gtk_label_set_ellipsize (GTK_LABEL (label), PANGO_ELLIPSIZE_END);
-      gtk_label_set_width_chars (GTK_LABEL (label), 14);
-    }
+  if (g_strcmp0 (col->id, "zone") == 0)
+    gtk_inscription_set_nat_chars (ins, 20);
   g_object_set_data (G_OBJECT (label), "column", (gpointer) col->id);
   gtk_list_item_set_child (item, label);
 }
@@ -235,7 +238,7 @@ _rugosa_results_table_bind (GtkSignalListItemFactory *factory,
 
   g_object_set_data (G_OBJECT (label), "line", gtk_list_item_get_item (item));
   g_ptr_array_add (self->bound, label);
-  _rugosa_results_table_update_label (self, GTK_LABEL (label));
+  _rugosa_results_table_update_label (self, GTK_INSCRIPTION (label));
 }
 
 static void

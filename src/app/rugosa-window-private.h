@@ -23,8 +23,8 @@ struct _RugosaWindow
   GtkLabel           *probe_label;
   GtkScale           *age_scale;
   GtkAdjustment      *age_adjustment;
-  GtkLabel           *age_label;
-  GtkLabel           *age_change_label;
+  GtkInscription     *age_label;
+  GtkInscription     *age_change_label;
   RugosaResultsTable *results_table;
   RugosaLinePanel    *line_panel;
   GtkMenuButton      *primary_menu_button;

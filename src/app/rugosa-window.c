@@ -95,7 +95,8 @@ rugosa_window_get_selection (RugosaWindow *self)
 const char *
 rugosa_window_get_age_summary (RugosaWindow *self)
 {
-  return gtk_label_get_text (self->age_change_label);
+  const char *text = gtk_inscription_get_text (self->age_change_label);
+  return text ? text : "";
 }
 
 void
@@ -189,7 +190,8 @@ _rugosa_window_update_row (RugosaWindow *self,
     return;
   g_object_set_data (G_OBJECT (swatch), "line", line);
   gtk_widget_queue_draw (swatch);
-  gtk_label_set_text (GTK_LABEL (name), rugosa_line_get_name (line));
+  if (g_strcmp0 (gtk_label_get_text (GTK_LABEL (name)), rugosa_line_get_name (line)) != 0)
+    gtk_label_set_text (GTK_LABEL (name), rugosa_line_get_name (line));
 
   res = rugosa_readout_results (self->project, line);
   if (res && res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
@@ -204,10 +206,12 @@ _rugosa_window_update_row (RugosaWindow *self,
     }
   else
     sub = g_strdup (_("cannot be evaluated"));
-  gtk_label_set_text (GTK_LABEL (readout), sub);
+  if (g_strcmp0 (gtk_inscription_get_text (GTK_INSCRIPTION (readout)), sub) != 0)
+    gtk_inscription_set_text (GTK_INSCRIPTION (readout), sub);
 
   warnings = rugosa_readout_warnings (self->project, line);
-  gtk_widget_set_visible (warn, warnings != NULL);
+  if (gtk_widget_get_visible (warn) != (warnings != NULL))
+    gtk_widget_set_visible (warn, warnings != NULL);
   gtk_widget_set_tooltip_text (warn, warnings);
 }
 
@@ -220,7 +224,9 @@ _rugosa_window_row_setup (GtkSignalListItemFactory *factory,
   GtkWidget *swatch = gtk_drawing_area_new ();
   GtkWidget *texts = gtk_box_new (GTK_ORIENTATION_VERTICAL, 0);
   GtkWidget *name = gtk_label_new (NULL);
-  GtkWidget *readout = gtk_label_new (NULL);
+  /* An inscription: its text changes with every slider move, its size
+   * does not. */
+  GtkWidget *readout = gtk_inscription_new (NULL);
   GtkWidget *warn = gtk_image_new_from_icon_name ("dialog-warning-symbolic");
 
   gtk_drawing_area_set_content_width (GTK_DRAWING_AREA (swatch), 14);
@@ -229,8 +235,8 @@ _rugosa_window_row_setup (GtkSignalListItemFactory *factory,
   gtk_widget_set_valign (swatch, GTK_ALIGN_CENTER);
   gtk_label_set_xalign (GTK_LABEL (name), 0);
   gtk_label_set_ellipsize (GTK_LABEL (name), PANGO_ELLIPSIZE_END);
-  gtk_label_set_xalign (GTK_LABEL (readout), 0);
-  gtk_label_set_ellipsize (GTK_LABEL (readout), PANGO_ELLIPSIZE_END);
+  gtk_inscription_set_text_overflow (GTK_INSCRIPTION (readout), GTK_INSCRIPTION_OVERFLOW_ELLIPSIZE_END);
+  gtk_inscription_set_nat_chars (GTK_INSCRIPTION (readout), 24);
   gtk_widget_add_css_class (readout, "dim-label");
   gtk_widget_add_css_class (readout, "line-row-readout");
   gtk_widget_set_hexpand (texts, TRUE);
@@ -320,7 +326,7 @@ _rugosa_window_update_age_summary (RugosaWindow *self)
   g_autofree char *years = rugosa_display_significant (age, 3);
   g_autofree char *age_text = g_strdup_printf (ngettext ("%s year", "%s years", age == 1.0 ? 1 : 2), years);
 
-  gtk_label_set_text (self->age_label, age_text);
+  gtk_inscription_set_text (self->age_label, age_text);
   if (line != NULL)
     {
       const RugosaLineResults *res = rugosa_readout_results (self->project, line);
@@ -334,11 +340,11 @@ _rugosa_window_update_age_summary (RugosaWindow *self)
           g_autofree char *text = g_strdup_printf (_("%s: head loss %s, %s vs new"),
                                                    rugosa_line_get_name (line), h, change);
 
-          gtk_label_set_text (self->age_change_label, text);
+          gtk_inscription_set_text (self->age_change_label, text);
           return;
         }
     }
-  gtk_label_set_text (self->age_change_label, "");
+  gtk_inscription_set_text (self->age_change_label, "");
 }
 
 static void
