@@ -711,6 +711,10 @@ _rugosa_line_panel_collect_entries (RugosaLinePanel *self,
           g_hash_table_insert (self->entries, (gpointer) gtk_widget_get_name (child), child);
           if (row)
             {
+              /* Screen readers name the field after its row. */
+              gtk_accessible_update_property (GTK_ACCESSIBLE (rugosa_quantity_entry_get_editable (RUGOSA_QUANTITY_ENTRY (child))),
+                                              GTK_ACCESSIBLE_PROPERTY_LABEL,
+                                              adw_preferences_row_get_title (ADW_PREFERENCES_ROW (row)), -1);
               g_object_set_data_full (G_OBJECT (row), "plain-subtitle",
                                       g_strdup (adw_action_row_get_subtitle (ADW_ACTION_ROW (row))), g_free);
               g_object_set_data_full (G_OBJECT (row), "own-subtitle",

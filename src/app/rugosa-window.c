@@ -701,8 +701,7 @@ _rugosa_window_items_changed (RugosaWindow *self,
 /* --- preferences that change the document ------------------------------ */
 
 static void
-_rugosa_window_apply_preferences (RugosaWindow *self,
-                                  gboolean      only_defaults)
+_rugosa_window_apply_preferences (RugosaWindow *self)
 {
   RugosaSettings *ps = rugosa_project_get_settings (self->project);
   double lam = g_settings_get_double (self->settings, "laminar-limit");
@@ -727,7 +726,7 @@ _rugosa_window_settings_changed (GSettings    *settings,
   if (g_str_equal (key, "friction-model") || g_str_equal (key, "laminar-limit")
       || g_str_equal (key, "turbulent-limit") || g_str_equal (key, "velocity-limit")
       || g_str_equal (key, "gradient-limit"))
-    _rugosa_window_apply_preferences (self, FALSE);
+    _rugosa_window_apply_preferences (self);
   else if (g_str_has_prefix (key, "unit-"))
     _rugosa_window_refresh_all (self);
 }
@@ -738,7 +737,7 @@ _rugosa_window_fill_new_project (RugosaWindow *self)
   g_autoptr (RugosaLine) line = rugosa_line_new (_("Line option 1"));
 
   g_object_set (line, "colour", line_palette[0], NULL);
-  _rugosa_window_apply_preferences (self, TRUE);
+  _rugosa_window_apply_preferences (self);
   rugosa_project_insert_line (self->project, 0, line);
 }
 
