@@ -1,0 +1,387 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Chart geometry: the description's defaults and checks, the layout of one
+ * frame, the transforms between (Re, f) and device coordinates, and the
+ * curves of the background.
+ *
+ * Transforms: both axes are logarithmic,
+ *   x = plot.x + (log10 Re − log10 Re_min)/(log10 Re_max − log10 Re_min)·plot.w
+ *   y = plot.y + plot.h − (log10 f − log10 f_min)/(log10 f_max − log10 f_min)·plot.h
+ * and the inverse solves these for Re and f.
+ *
+ * Colebrook curves are sampled adaptively in device space: an interval of
+ * log Re is halved while its midpoint lies more than CURVE_TOL pixels from
+ * the chord, so flat parts of a curve cost few points.
+ *
+ * Inverse Colebrook (ε/D through a point (Re, f)): Colebrook (1939)
+ *   1/√f = −2·log10( (ε/D)/3.7 + 2.51/(Re·√f) )
+ * is linear in ε/D, so ε/D = 3.7·(10^(−1/(2√f)) − 2.51/(Re·√f)) exactly.
+ *
+ * Roughness-zone boundaries: on the locus ε⁺ = Re·(ε/D)·√(f/8) = c the
+ * product Re·√f equals c·√8/(ε/D), so the Colebrook equation along it reads
+ *   1/√f = −2·log10( (ε/D)·(1/3.7 + 2.51/(c·√8)) ),
+ * explicit in ε/D; then Re = c·√8/((ε/D)·√f).  The boundary curves are that
+ * locus parametrised by ε/D, with c = RG_EPS_PLUS_SMOOTH_MAX and
+ * RG_EPS_PLUS_FULLY_ROUGH_MIN from the core. */
+#include "chart-private.h"
+
+#include <math.h>
+#include <stdio.h>
+#include <stdlib.h>
+#include <string.h>
+
+#include "core/friction.h"
+
+/* Pixels a sampled curve may stray from the true one between samples. */
+static const double CURVE_TOL = 0.25;
+
+/* The standard family: smooth, then steps of 1–2–5 per decade over the
+ * relative roughness met in practice (drawn tubing to corroded cast iron). */
+static const double STANDARD_FAMILY[] = {
+  0.0, 1e-6, 5e-6, 1e-5, 2e-5, 5e-5, 1e-4, 2e-4, 5e-4,
+  1e-3, 2e-3, 5e-3, 1e-2, 2e-2, 5e-2,
+};
+
+size_t
+rugosa_chart_standard_family (double *out, size_t max)
+{
+  size_t n = G_N_ELEMENTS (STANDARD_FAMILY);
+  if (n > max)
+    n = max;
+  memcpy (out, STANDARD_FAMILY, n * sizeof *out);
+  return n;
+}
+
+void
+rugosa_chart_spec_init (RugosaChartSpec *spec)
+{
+  memset (spec, 0, sizeof *spec);
+  spec->width = 960;
+  spec->height = 600;
+  spec->scale = 1;
+  spec->theme = RUGOSA_CHART_THEME_LIGHT;
+  spec->re_min = 500;
+  spec->re_max = 1e8;
+  spec->f_min = 0.006;
+  spec->f_max = 0.1;
+  rg_transition_default (&spec->transition);
+  spec->n_family = rugosa_chart_standard_family (spec->family,
+                                                 RUGOSA_CHART_FAMILY_MAX);
+  spec->show = RUGOSA_CHART_SHOW_ALL;
+}
+
+RgStatus
+rugosa_chart_spec_check (const RugosaChartSpec *spec, RgError *err)
+{
+  if (!(spec->width >= 200 && spec->width <= 20000 && spec->height >= 150
+        && spec->height <= 20000))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The chart size must lie between 200 × 150 and 20000 × 20000 pixels.");
+  if (!(spec->scale >= 1 && spec->scale <= 4))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The chart scale factor must lie between 1 and 4.");
+  if (!(spec->re_min >= 1 && spec->re_max <= RG_FRICTION_RE_MAX
+        && spec->re_max >= spec->re_min * 10))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The Reynolds axis must span at least one decade between 1 and %g.",
+                         RG_FRICTION_RE_MAX);
+  if (!(spec->f_min >= 0.001 && spec->f_max <= 1
+        && spec->f_max >= spec->f_min * 1.5))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The friction axis must lie between 0.001 and 1 with its top at least 1.5 times its bottom.");
+  if (rg_transition_check (&spec->transition, err) != RG_OK)
+    return RG_ERR_DOMAIN;
+  if (spec->n_family > RUGOSA_CHART_FAMILY_MAX)
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The chart holds at most %d roughness curves.",
+                         RUGOSA_CHART_FAMILY_MAX);
+  for (size_t i = 0; i < spec->n_family; i++)
+    if (!(spec->family[i] >= 0 && spec->family[i] <= RG_FRICTION_RR_MAX))
+      return rg_error_set (err, RG_ERR_DOMAIN,
+                           "Each curve's relative roughness must lie between 0 and %g.",
+                           RG_FRICTION_RR_MAX);
+  return RG_OK;
+}
+
+void
+_rugosa_chart_layout (const RugosaChartSpec *spec, ChartLayout *lay)
+{
+  const double w = spec->width, h = spec->height;
+  double k = sqrt (w * h) / 1100.0;
+
+  k = fmin (fmax (k, 0.75), 1.6);
+  lay->width = w;
+  lay->height = h;
+  lay->k = k;
+  lay->font_tick = 12.0 * k;
+  lay->font_title = 13.0 * k;
+  lay->font_curve = 10.5 * k;
+  lay->font_band = 11.0 * k;
+  lay->font_label = 11.5 * k;
+  lay->font_footer = 10.0 * k;
+
+  lay->footer_h = 0;
+  if (spec->footer_date[0] != '\0')
+    {
+      /* The footer wraps; DejaVu Sans averages under 0.62 em per character. */
+      const double chars = strlen (RUGOSA_CHART_CAUTION) + 24.0;
+      const double per_line = fmax (1.0, (w - 32.0 * k) / (0.62 * lay->font_footer));
+      const double lines = ceil (chars / per_line);
+      lay->footer_h = lines * lay->font_footer * 1.3 + 12.0 * k;
+    }
+
+  const double left = 14 * k + lay->font_title * 1.5 + lay->font_tick * 3.6;
+  const double right = 20 * k;
+  const double top = 10 * k + lay->font_title * 1.5 + lay->font_tick * 1.5;
+  const double bottom = 10 * k + lay->font_tick * 1.9 + lay->font_title * 1.7
+                        + lay->footer_h;
+
+  lay->plot.x = round (left);
+  lay->plot.y = round (top);
+  lay->plot.width = round (w - left - right);
+  lay->plot.height = round (h - top - bottom);
+  lay->lx0 = log10 (spec->re_min);
+  lay->lx1 = log10 (spec->re_max);
+  lay->ly0 = log10 (spec->f_min);
+  lay->ly1 = log10 (spec->f_max);
+}
+
+void
+_rugosa_chart_xy (const ChartLayout *lay, double re, double f, double *x,
+                  double *y)
+{
+  *x = lay->plot.x + (log10 (re) - lay->lx0) / (lay->lx1 - lay->lx0) * lay->plot.width;
+  *y = lay->plot.y + lay->plot.height
+       - (log10 (f) - lay->ly0) / (lay->ly1 - lay->ly0) * lay->plot.height;
+}
+
+void
+_rugosa_chart_value (const ChartLayout *lay, double x, double y, double *re,
+                     double *f)
+{
+  *re = pow (10.0, lay->lx0 + (x - lay->plot.x) / lay->plot.width * (lay->lx1 - lay->lx0));
+  *f = pow (10.0, lay->ly0 + (lay->plot.y + lay->plot.height - y) / lay->plot.height
+                              * (lay->ly1 - lay->ly0));
+}
+
+RgStatus
+rugosa_chart_rr_through (double re, double f, double *rr, RgError *err)
+{
+  if (!(re >= RG_FRICTION_RE_MIN && re <= RG_FRICTION_RE_MAX))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The Reynolds number must lie between %g and %g for a Colebrook curve.",
+                         RG_FRICTION_RE_MIN, RG_FRICTION_RE_MAX);
+  if (!(f > 0 && f <= 1))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The friction factor must lie between 0 and 1.");
+  const double s = sqrt (f);
+  const double v = 3.7 * (pow (10.0, -0.5 / s) - 2.51 / (re * s));
+  if (v < 0)
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The point lies below the smooth-pipe Colebrook curve.");
+  if (v > RG_FRICTION_RR_MAX)
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The point lies above the Colebrook curve of relative roughness %g.",
+                         RG_FRICTION_RR_MAX);
+  *rr = v;
+  return RG_OK;
+}
+
+RgStatus
+rugosa_chart_zone_boundary (double eps_plus, double rr, double *re, double *f,
+                            RgError *err)
+{
+  if (!(eps_plus > 0 && eps_plus < 1e6))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The roughness Reynolds number must lie between 0 and 1e6.");
+  if (!(rr > 0 && rr <= RG_FRICTION_RR_MAX))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The relative roughness must lie above 0 and at most %g.",
+                         RG_FRICTION_RR_MAX);
+  const double root8 = sqrt (8.0);
+  const double kk = 1.0 / 3.7 + 2.51 / (eps_plus * root8);
+  const double inv_s = -2.0 * log10 (rr * kk);
+  if (!(inv_s > 0))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "No point of that curve has a roughness Reynolds number of %g.",
+                         eps_plus);
+  const double s = 1.0 / inv_s;
+  *f = s * s;
+  *re = eps_plus * root8 / (rr * s);
+  return RG_OK;
+}
+
+void
+_rugosa_chart_classify (const RugosaChartSpec *spec, const ChartLayout *lay,
+                        double x, double y, RugosaChartProbe *out)
+{
+  memset (out, 0, sizeof *out);
+  out->in_plot = x >= lay->plot.x && x <= lay->plot.x + lay->plot.width
+                 && y >= lay->plot.y && y <= lay->plot.y + lay->plot.height;
+  _rugosa_chart_value (lay, x, y, &out->re, &out->f);
+  out->regime = rg_regime_classify (&spec->transition, out->re);
+  out->zone = RG_ZONE_NONE;
+  if (rugosa_chart_rr_through (out->re, out->f, &out->rr, NULL) == RG_OK)
+    {
+      out->has_rr = 1;
+      if (out->regime == RG_REGIME_TURBULENT)
+        out->zone = rg_roughness_zone_classify (
+            rg_roughness_reynolds (out->re, out->rr, out->f));
+    }
+}
+
+void
+_rugosa_chart_format_rr (double rr, char *buf, size_t size)
+{
+  if (rr <= 0)
+    {
+      snprintf (buf, size, "smooth");
+      return;
+    }
+  /* Plain decimals with three significant digits at most, trailing zeros
+   * dropped: 0.00015, 0.002, 0.05. */
+  int decimals = (int) ceil (-log10 (rr) - 1e-9) + 2;
+  if (decimals < 1)
+    decimals = 1;
+  if (decimals > 12)
+    decimals = 12;
+  char tmp[48];
+  snprintf (tmp, sizeof tmp, "%.*f", decimals, rr);
+  size_t n = strlen (tmp);
+  while (n > 1 && tmp[n - 1] == '0')
+    tmp[--n] = '\0';
+  if (n > 0 && tmp[n - 1] == '.')
+    tmp[--n] = '\0';
+  snprintf (buf, size, "%s", tmp);
+}
+
+/* --- curves --- */
+
+typedef struct {
+  double *x, *y;
+  size_t n, cap;
+} PointBuf;
+
+static void
+push (PointBuf *b, double x, double y)
+{
+  if (b->n == b->cap)
+    {
+      b->cap = b->cap ? b->cap * 2 : 64;
+      b->x = g_renew (double, b->x, b->cap);
+      b->y = g_renew (double, b->y, b->cap);
+    }
+  b->x[b->n] = x;
+  b->y[b->n] = y;
+  b->n++;
+}
+
+static void
+eval_curve (const ChartLayout *lay, double rr, double lre, double *x, double *y)
+{
+  const double re = pow (10.0, lre);
+  double f = 0.02;
+  if (rg_friction_colebrook (re, rr, &f, NULL) != RG_OK)
+    f = 0.02; /* not reached: the Re range is clamped to the domain */
+  _rugosa_chart_xy (lay, re, f, x, y);
+}
+
+static void
+subdivide (const ChartLayout *lay, double rr, PointBuf *b, double u0,
+           double x0, double y0, double u1, double x1, double y1, int depth)
+{
+  const double um = 0.5 * (u0 + u1);
+  double xm, ym;
+  eval_curve (lay, rr, um, &xm, &ym);
+  const double dx = xm - 0.5 * (x0 + x1), dy = ym - 0.5 * (y0 + y1);
+  if (depth < 8 && dx * dx + dy * dy > CURVE_TOL * CURVE_TOL)
+    {
+      subdivide (lay, rr, b, u0, x0, y0, um, xm, ym, depth + 1);
+      subdivide (lay, rr, b, um, xm, ym, u1, x1, y1, depth + 1);
+    }
+  else
+    push (b, x1, y1);
+}
+
+static int
+cmp_double (const void *a, const void *b)
+{
+  const double x = *(const double *) a, y = *(const double *) b;
+  return (x > y) - (x < y);
+}
+
+void
+_rugosa_chart_free_curves (RugosaChart *chart)
+{
+  for (size_t i = 0; i < chart->n_curves; i++)
+    {
+      g_free (chart->curves[i].x);
+      g_free (chart->curves[i].y);
+    }
+  chart->n_curves = 0;
+  chart->geom_valid = 0;
+}
+
+void
+_rugosa_chart_build_curves (RugosaChart *chart)
+{
+  const RugosaChartSpec *spec = &chart->spec;
+  const ChartLayout *lay = &chart->lay;
+  /* (ε/D, is the user's) pairs, sorted by ε/D; a tie keeps one curve. */
+  double pairs[CHART_CURVES_MAX][2];
+  size_t n = 0;
+
+  _rugosa_chart_free_curves (chart);
+
+  for (size_t i = 0; i < spec->n_family; i++)
+    {
+      pairs[n][0] = spec->family[i];
+      pairs[n++][1] = 0;
+    }
+  for (size_t i = 0; i < chart->n_user_rr && n < CHART_CURVES_MAX; i++)
+    {
+      pairs[n][0] = chart->user_rr[i];
+      pairs[n++][1] = 1;
+    }
+  qsort (pairs, n, sizeof pairs[0], cmp_double);
+
+  const double u_lo = log10 (fmax (fmax (spec->re_min, spec->transition.re_turbulent_min),
+                                   RG_FRICTION_RE_MIN));
+  const double u_hi = log10 (spec->re_max);
+  for (size_t i = 0; i < n; i++)
+    {
+      const double rr = pairs[i][0];
+      if (chart->n_curves > 0)
+        {
+          ChartCurve *prev = &chart->curves[chart->n_curves - 1];
+          if (fabs (prev->rr - rr) <= 1e-9 * fmax (rr, 1e-12))
+            {
+              prev->is_user |= pairs[i][1] != 0;
+              continue;
+            }
+        }
+      ChartCurve *c = &chart->curves[chart->n_curves++];
+      PointBuf b = { 0 };
+      c->rr = rr;
+      c->is_user = pairs[i][1] != 0;
+      if (u_hi > u_lo)
+        {
+          /* Eight even steps first, so no feature hides between samples. */
+          enum { STEPS = 8 };
+          double x0, y0;
+          eval_curve (lay, rr, u_lo, &x0, &y0);
+          push (&b, x0, y0);
+          for (int s = 1; s <= STEPS; s++)
+            {
+              const double ua = u_lo + (u_hi - u_lo) * (s - 1) / STEPS;
+              const double ub = u_lo + (u_hi - u_lo) * s / STEPS;
+              double x1, y1;
+              eval_curve (lay, rr, ub, &x1, &y1);
+              subdivide (lay, rr, &b, ua, b.x[b.n - 1], b.y[b.n - 1], ub, x1, y1, 0);
+            }
+        }
+      c->n = b.n;
+      c->x = b.x;
+      c->y = b.y;
+    }
+  chart->geom_valid = 1;
+}

@@ -1,0 +1,715 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The overlay: the user's line options as markers with labels, their flow
+ * ranges and aging trails, the legend, and the caution footer.
+ *
+ * Label placement is greedy.  Labels are placed one by one (the selected
+ * line first); each tries candidate boxes on rings around its marker, in a
+ * fixed order of directions, and takes the first one that stays inside the
+ * plot and clears every marker, the legend and the labels already placed.
+ * A label put on an outer ring gets a leader line.  If no ring works the
+ * name alone is tried, then a scan of the whole plot for the free place
+ * nearest to the marker; failing that the label is left out (the legend
+ * still names the line).  Markers themselves never move: they are data. */
+#include "chart-private.h"
+
+#include <math.h>
+#include <stdio.h>
+#include <string.h>
+
+#include "core/friction.h"
+
+enum { SHAPES = 5 };
+
+static double
+marker_radius (const RugosaChart *chart, size_t i)
+{
+  const double k = chart->lay.k;
+  if (chart->lines[i].line.selected)
+    return 7.0 * k;
+  if ((int) i == chart->hover)
+    return 6.5 * k;
+  return 5.5 * k;
+}
+
+static int
+point_device (const RugosaChart *chart, double re, double f, double *x, double *y)
+{
+  if (!(re > 0 && f > 0 && isfinite (re) && isfinite (f)))
+    return 0;
+  _rugosa_chart_xy (&chart->lay, re, f, x, y);
+  return 1;
+}
+
+/* The marker's anchor and box; 0 when the point is off the plot. */
+static int
+marker_geometry (const RugosaChart *chart, size_t i, double *ax, double *ay,
+                 RugosaChartRect *box)
+{
+  const RugosaChartLine *l = &chart->lines[i].line;
+  const RugosaChartRect *pl = &chart->lay.plot;
+  const double r = marker_radius (chart, i) + 2.0 * chart->lay.k;
+  double x, y;
+
+  if (l->regime == RG_REGIME_TRANSITIONAL)
+    {
+      double y1, y2;
+      if (!point_device (chart, l->re, l->f_laminar, &x, &y1)
+          || !point_device (chart, l->re, l->f_turbulent, &x, &y2))
+        return 0;
+      const double top = fmin (y1, y2), bottom = fmax (y1, y2);
+      *ax = x;
+      *ay = 0.5 * (top + bottom);
+      box->x = x - r;
+      box->y = top - r;
+      box->width = 2 * r;
+      box->height = bottom - top + 2 * r;
+    }
+  else
+    {
+      if (!point_device (chart, l->re, l->f, &x, &y))
+        return 0;
+      *ax = x;
+      *ay = y;
+      box->x = x - r;
+      box->y = y - r;
+      box->width = 2 * r;
+      box->height = 2 * r;
+    }
+  return *ax >= pl->x && *ax <= pl->x + pl->width && *ay >= pl->y
+         && *ay <= pl->y + pl->height;
+}
+
+static void
+label_text (const ChartLine *cl, int compact, char *buf, size_t size)
+{
+  snprintf (buf, size, "%s", cl->name ? cl->name : "");
+  if (compact)
+    return;
+  const char *parts[] = { cl->velocity, cl->head100, cl->headtotal };
+  for (size_t i = 0; i < G_N_ELEMENTS (parts); i++)
+    if (parts[i] != NULL && parts[i][0] != '\0')
+      {
+        g_strlcat (buf, "\n", size);
+        g_strlcat (buf, parts[i], size);
+      }
+}
+
+static PangoLayout *
+label_layout (RugosaChart *chart, size_t i, int compact, double *w, double *h)
+{
+  char text[512];
+  const double k = chart->lay.k;
+  label_text (&chart->lines[i], compact, text, sizeof text);
+  PangoLayout *l = _rugosa_chart_text (chart, text, chart->lay.font_label,
+                                       compact ? TEXT_BOLD : TEXT_FIRST_BOLD, 0);
+  _rugosa_chart_text_size (l, w, h);
+  /* padding and the shape swatch; whole pixels (see draw_label) */
+  *w = ceil (*w + 2 * 5 * k + 13 * k);
+  *h = ceil (*h + 2 * 3.5 * k);
+  return l;
+}
+
+typedef struct {
+  const RugosaChartRect *bounds;
+  RugosaChartRect *obst;
+  size_t n_obst;
+  const RugosaChartRect *soft;     /* avoided while `strict` */
+  size_t n_soft;
+  int strict;
+} Space;
+
+static int
+space_free (const Space *s, const RugosaChartRect *r)
+{
+  if (!_rugosa_chart_rect_inside (r, s->bounds))
+    return 0;
+  for (size_t i = 0; i < s->n_obst; i++)
+    if (_rugosa_chart_rects_overlap (r, &s->obst[i]))
+      return 0;
+  if (s->strict)
+    for (size_t i = 0; i < s->n_soft; i++)
+      if (_rugosa_chart_rects_overlap (r, &s->soft[i]))
+        return 0;
+  return 1;
+}
+
+/* Candidate boxes on rings around the marker: 0 on success. */
+static int
+try_rings (const Space *s, double ax, double ay, double mr, double w, double h,
+           double k, RugosaChartRect *out, int *ring_out)
+{
+  static const int DIRS[8][2] = {
+    { 1, -1 }, { 1, 1 }, { -1, -1 }, { -1, 1 }, { 1, 0 }, { -1, 0 }, { 0, -1 }, { 0, 1 },
+  };
+  for (int ring = 0; ring < 5; ring++)
+    {
+      const double d = mr + 3 * k + ring * 16 * k;
+      for (int di = 0; di < 8; di++)
+        {
+          const int dx = DIRS[di][0], dy = DIRS[di][1];
+          const double dd = (dx != 0 && dy != 0) ? d * 0.72 : d;
+          RugosaChartRect r;
+          r.width = w;
+          r.height = h;
+          r.x = round (dx > 0 ? ax + dd : dx < 0 ? ax - dd - w : ax - w / 2);
+          r.y = round (dy > 0 ? ay + dd : dy < 0 ? ay - dd - h : ay - h / 2);
+          if (space_free (s, &r))
+            {
+              *out = r;
+              *ring_out = ring;
+              return 0;
+            }
+        }
+    }
+  return -1;
+}
+
+static int
+try_scan (const Space *s, double ax, double ay, double w, double h, double k,
+          RugosaChartRect *out)
+{
+  const RugosaChartRect *b = s->bounds;
+  const double step = 9 * k;
+  double best = INFINITY;
+  for (double y = b->y; y + h <= b->y + b->height; y += step)
+    for (double x = b->x; x + w <= b->x + b->width; x += step)
+      {
+        const double cx = x + w / 2 - ax, cy = y + h / 2 - ay;
+        const double d = cx * cx + cy * cy;
+        if (d >= best)
+          continue;
+        RugosaChartRect r = { round (x), round (y), w, h };
+        if (!space_free (s, &r))
+          continue;
+        best = d;
+        *out = r;
+      }
+  return isfinite (best) ? 0 : -1;
+}
+
+static void
+legend_geometry (RugosaChart *chart)
+{
+  const ChartLayout *lay = &chart->lay;
+  const RugosaChartRect *pl = &lay->plot;
+  const double k = lay->k;
+  RugosaChartRect r = { 0, 0, 0, 0 };
+
+  chart->legend = r;
+  if (!(chart->spec.show & RUGOSA_CHART_SHOW_LEGEND) || chart->n_lines == 0)
+    return;
+  const double row = lay->font_label * 1.45;
+  size_t max_rows = (size_t) fmax (1, floor (0.4 * pl->height / row));
+  size_t rows = chart->n_lines <= max_rows ? chart->n_lines : max_rows;
+  double wmax = 0;
+  for (size_t i = 0; i < chart->n_lines && i < rows; i++)
+    {
+      double w, h;
+      PangoLayout *l = _rugosa_chart_text (chart, chart->lines[i].name,
+                                           lay->font_label * 0.95, TEXT_PLAIN, 0);
+      _rugosa_chart_text_size (l, &w, &h);
+      wmax = fmax (wmax, w);
+    }
+  wmax = fmin (fmax (wmax, 70 * k), 0.3 * pl->width);
+  r.width = wmax + 30 * k;
+  r.height = rows * row + 10 * k;
+  /* Bottom left of the turbulent strip: on default axes that corner lies
+   * below the smooth-pipe curve, where no operating point can fall. */
+  double x, y;
+  _rugosa_chart_xy (lay, chart->spec.transition.re_turbulent_min, 0.02, &x, &y);
+  r.x = x + 10 * k;
+  if (r.x + r.width > pl->x + pl->width - 10 * k)
+    r.x = pl->x + 10 * k;
+  r.y = pl->y + pl->height - 10 * k - r.height;
+  /* whole pixels, so its cached image is copied rather than resampled */
+  r.x = round (r.x);
+  r.y = round (r.y);
+  r.width = ceil (r.width);
+  r.height = ceil (r.height);
+  chart->legend = r;
+}
+
+void
+_rugosa_chart_place_labels (RugosaChart *chart)
+{
+  const ChartLayout *lay = &chart->lay;
+  const double k = lay->k;
+  const size_t n = chart->n_lines;
+  RugosaChartRect bounds = { lay->plot.x + 3, lay->plot.y + 3,
+                             lay->plot.width - 6, lay->plot.height - 6 };
+  bounds.x = ceil (bounds.x);
+  bounds.y = ceil (bounds.y);
+  bounds.width = floor (bounds.width);
+  bounds.height = floor (bounds.height);
+  RugosaChartRect *obst = g_new (RugosaChartRect, 2 * n + 1);
+  Space s = { &bounds, obst, 0, chart->bg_boxes,
+              chart->bg_boxes_valid ? chart->n_bg_boxes : 0, 0 };
+
+  g_free (chart->labels);
+  chart->labels = g_new0 (ChartLabel, n ? n : 1);
+  legend_geometry (chart);
+  if (chart->legend.width > 0)
+    obst[s.n_obst++] = chart->legend;
+
+  for (size_t i = 0; i < n; i++)
+    {
+      ChartLabel *lb = &chart->labels[i];
+      if (marker_geometry (chart, i, &lb->ax, &lb->ay, &lb->info.marker))
+        obst[s.n_obst++] = lb->info.marker;
+      else
+        lb->info.marker = (RugosaChartRect) { 0, 0, 0, 0 };
+    }
+
+  /* The selected line's label first, then the others in order. */
+  for (int pass = 0; pass < 2; pass++)
+    for (size_t i = 0; i < n; i++)
+      {
+        ChartLabel *lb = &chart->labels[i];
+        if ((pass == 0) != (chart->lines[i].line.selected != 0))
+          continue;
+        if (lb->info.marker.width == 0)
+          continue;
+        const double mr = lb->info.marker.width / 2;
+        const double half_bar = lb->info.marker.height / 2;
+        /* full label near the marker, clear of the background's labels;
+         * then allowed over them; then the name alone; then anywhere */
+        static const struct { int compact, scan, strict; } ATTEMPTS[] = {
+          { 0, 0, 1 }, { 0, 0, 0 }, { 1, 0, 1 }, { 1, 0, 0 }, { 0, 1, 0 }, { 1, 1, 0 },
+        };
+        for (size_t a = 0; a < G_N_ELEMENTS (ATTEMPTS); a++)
+          {
+            double w, h;
+            PangoLayout *l = label_layout (chart, i, ATTEMPTS[a].compact, &w, &h);
+            RugosaChartRect r;
+            int ring = 0;
+            s.strict = ATTEMPTS[a].strict;
+            int ok = !ATTEMPTS[a].scan
+                       ? try_rings (&s, lb->ax, lb->ay, fmax (mr, half_bar), w, h, k, &r, &ring)
+                       : try_scan (&s, lb->ax, lb->ay, w, h, k, &r);
+            if (ok != 0)
+              continue;
+            lb->info.visible = 1;
+            lb->info.compact = ATTEMPTS[a].compact;
+            lb->info.has_leader = ATTEMPTS[a].scan || ring > 0;
+            lb->info.box = r;
+            lb->layout = l;
+            obst[s.n_obst++] = r;
+            break;
+          }
+      }
+  g_free (obst);
+  chart->placement_valid = 1;
+  chart->placement_saw_bg_boxes = chart->bg_boxes_valid;
+}
+
+/* --- drawing --- */
+
+static void
+shape_path (cairo_t *cr, int shape, double x, double y, double r)
+{
+  switch (shape % SHAPES)
+    {
+    case 0:
+      cairo_new_sub_path (cr);
+      cairo_arc (cr, x, y, r, 0, 2 * G_PI);
+      break;
+    case 1:
+      cairo_rectangle (cr, x - r * 0.88, y - r * 0.88, r * 1.76, r * 1.76);
+      break;
+    case 2:
+      cairo_move_to (cr, x, y - r * 1.2);
+      cairo_line_to (cr, x + r * 1.2, y);
+      cairo_line_to (cr, x, y + r * 1.2);
+      cairo_line_to (cr, x - r * 1.2, y);
+      cairo_close_path (cr);
+      break;
+    case 3:
+      cairo_move_to (cr, x, y - r * 1.25);
+      cairo_line_to (cr, x + r * 1.15, y + r * 0.8);
+      cairo_line_to (cr, x - r * 1.15, y + r * 0.8);
+      cairo_close_path (cr);
+      break;
+    default:
+      cairo_move_to (cr, x, y + r * 1.25);
+      cairo_line_to (cr, x + r * 1.15, y - r * 0.8);
+      cairo_line_to (cr, x - r * 1.15, y - r * 0.8);
+      cairo_close_path (cr);
+      break;
+    }
+}
+
+static void
+draw_marker (cairo_t *cr, int shape, double x, double y, double r,
+             const RugosaChartRgba *fill, const RugosaChartRgba *halo,
+             double k, int hollow)
+{
+  if (halo != NULL)
+    {
+      shape_path (cr, shape, x, y, r + 1.8 * k);
+      _rugosa_chart_set_rgba (cr, halo);
+      cairo_fill (cr);
+    }
+  shape_path (cr, shape, x, y, hollow ? r - 0.8 * k : r);
+  if (hollow)
+    {
+      _rugosa_chart_set_rgba (cr, fill);
+      cairo_set_line_width (cr, 1.8 * k);
+      cairo_stroke (cr);
+    }
+  else
+    {
+      _rugosa_chart_set_rgba (cr, fill);
+      cairo_fill (cr);
+    }
+}
+
+static double
+flow_f (const RugosaChartSpec *spec, double re, double rr, int *regime)
+{
+  double f = 0.02;
+  *regime = rg_regime_classify (&spec->transition, re);
+  if (*regime == RG_REGIME_LAMINAR)
+    return 64.0 / re;
+  if (rg_friction_colebrook (fmax (re, RG_FRICTION_RE_MIN), rr, &f, NULL) != RG_OK)
+    return 64.0 / re;
+  return f;
+}
+
+static void
+draw_line_paths (RugosaChart *chart, cairo_t *cr, size_t i,
+                 const RugosaChartPalette *p)
+{
+  const RugosaChartSpec *spec = &chart->spec;
+  const RugosaChartLine *l = &chart->lines[i].line;
+  const double k = chart->lay.k;
+  RugosaChartRgba band = l->colour;
+  double x, y;
+
+  /* Flow range: along the line's own Colebrook curve (at its present
+   * roughness); the transitional part is left open, since no single curve
+   * holds there. */
+  if (l->has_flow_min || l->has_flow_max)
+    {
+      const double re0 = l->has_flow_min ? l->flow_min.re : l->re;
+      const double re1 = l->has_flow_max ? l->flow_max.re : l->re;
+      if (re0 > 0 && re1 > re0)
+        {
+          enum { N = 10 };
+          int prev_regime = -1;
+          /* an opaque tint of the line's colour over the plot colour: a
+           * translucent stroke costs Cairo a separate mask per line */
+          band.r = 0.42 * l->colour.r + 0.58 * p->plot.r;
+          band.g = 0.42 * l->colour.g + 0.58 * p->plot.g;
+          band.b = 0.42 * l->colour.b + 0.58 * p->plot.b;
+          band.a = 1;
+          cairo_save (cr);
+          cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
+          cairo_set_line_width (cr, (l->selected ? 7.0 : 5.0) * k);
+          for (int s = 0; s < N; s++)
+            {
+              const double re = re0 * pow (re1 / re0, (double) s / (N - 1));
+              int regime;
+              const double f = flow_f (spec, re, l->rr_aged, &regime);
+              _rugosa_chart_xy (&chart->lay, re, f, &x, &y);
+              if (regime == RG_REGIME_TRANSITIONAL)
+                {
+                  prev_regime = regime;
+                  continue;
+                }
+              if (regime != prev_regime)
+                cairo_move_to (cr, x, y);
+              else
+                cairo_line_to (cr, x, y);
+              prev_regime = regime;
+            }
+          _rugosa_chart_set_rgba (cr, &band);
+          cairo_stroke (cr);
+          cairo_restore (cr);
+        }
+      /* the given end points as small dots, one fill for both */
+      const RugosaChartPoint *ends[2] = { l->has_flow_min ? &l->flow_min : NULL,
+                                          l->has_flow_max ? &l->flow_max : NULL };
+      for (int e = 0; e < 2; e++)
+        if (ends[e] != NULL && point_device (chart, ends[e]->re, ends[e]->f, &x, &y))
+          {
+            cairo_new_sub_path (cr);
+            cairo_arc (cr, x, y, 2.4 * k, 0, 2 * G_PI);
+          }
+      _rugosa_chart_set_rgba (cr, &l->colour);
+      cairo_fill (cr);
+    }
+
+  /* Aging trail: new (hollow ring) to the selected age. */
+  if (l->n_trail >= 2)
+    {
+      cairo_save (cr);
+      cairo_set_line_width (cr, 1.6 * k);
+      const double dash[] = { 3.5 * k, 2.5 * k };
+      cairo_set_dash (cr, dash, 2, 0);
+      int started = 0;
+      for (size_t t = 0; t < l->n_trail; t++)
+        {
+          if (!point_device (chart, l->trail[t].re, l->trail[t].f, &x, &y))
+            continue;
+          if (!started)
+            cairo_move_to (cr, x, y);
+          else
+            cairo_line_to (cr, x, y);
+          started = 1;
+        }
+      _rugosa_chart_set_rgba (cr, &l->colour);
+      cairo_stroke (cr);
+      cairo_restore (cr);
+      if (point_device (chart, l->trail[0].re, l->trail[0].f, &x, &y))
+        {
+          cairo_new_sub_path (cr);
+          cairo_arc (cr, x, y, 3.0 * k, 0, 2 * G_PI);
+          _rugosa_chart_set_rgba (cr, &l->colour);
+          cairo_set_line_width (cr, 1.5 * k);
+          cairo_stroke (cr);
+        }
+    }
+}
+
+static void
+draw_line_marker (RugosaChart *chart, cairo_t *cr, size_t i,
+                  const RugosaChartPalette *p)
+{
+  const RugosaChartLine *l = &chart->lines[i].line;
+  const ChartLabel *lb = &chart->labels[i];
+  const double k = chart->lay.k;
+  const double r = marker_radius (chart, i);
+  if (lb->info.marker.width == 0)
+    return;
+
+  if (l->selected)
+    {
+      /* a ring in the ink colour: selection reads without colour */
+      cairo_new_sub_path (cr);
+      if (l->regime == RG_REGIME_TRANSITIONAL)
+        {
+          const RugosaChartRect *m = &lb->info.marker;
+          cairo_rectangle (cr, m->x - 2 * k, m->y - 2 * k, m->width + 4 * k, m->height + 4 * k);
+        }
+      else
+        cairo_arc (cr, lb->ax, lb->ay, r + 5 * k, 0, 2 * G_PI);
+      _rugosa_chart_set_rgba (cr, &p->ink);
+      cairo_set_line_width (cr, 2.0 * k);
+      cairo_stroke (cr);
+    }
+
+  if (l->regime == RG_REGIME_TRANSITIONAL)
+    {
+      double x, y1, y2;
+      _rugosa_chart_xy (&chart->lay, l->re, l->f_laminar, &x, &y1);
+      _rugosa_chart_xy (&chart->lay, l->re, l->f_turbulent, &x, &y2);
+      cairo_save (cr);
+      cairo_set_line_cap (cr, CAIRO_LINE_CAP_BUTT);
+      cairo_move_to (cr, x, y1);
+      cairo_line_to (cr, x, y2);
+      _rugosa_chart_set_rgba (cr, &p->plot);
+      cairo_set_line_width (cr, 7 * k);
+      cairo_stroke_preserve (cr);
+      _rugosa_chart_set_rgba (cr, &l->colour);
+      cairo_set_line_width (cr, 3 * k);
+      cairo_stroke (cr);
+      cairo_restore (cr);
+      /* both ends hollow: a range, not a value */
+      draw_marker (cr, (int) i, x, y1, r * 0.8, &l->colour, &p->plot, k, 1);
+      draw_marker (cr, (int) i, x, y2, r * 0.8, &l->colour, &p->plot, k, 1);
+    }
+  else
+    draw_marker (cr, (int) i, lb->ax, lb->ay, r, &l->colour, &p->plot, k, 0);
+}
+
+static void
+draw_label (RugosaChart *chart, cairo_t *cr, size_t i, const RugosaChartPalette *p)
+{
+  const RugosaChartLine *l = &chart->lines[i].line;
+  const ChartLabel *lb = &chart->labels[i];
+  const double k = chart->lay.k;
+  const RugosaChartRect *b = &lb->info.box;
+  if (!lb->info.visible)
+    return;
+
+  if (lb->info.has_leader)
+    {
+      const double nx = fmin (fmax (lb->ax, b->x), b->x + b->width);
+      const double ny = fmin (fmax (lb->ay, b->y), b->y + b->height);
+      const double dx = nx - lb->ax, dy = ny - lb->ay, d = hypot (dx, dy);
+      const double r0 = marker_radius (chart, i) + 2.5 * k;
+      if (d > r0)
+        {
+          cairo_move_to (cr, lb->ax + dx / d * r0, lb->ay + dy / d * r0);
+          cairo_line_to (cr, nx, ny);
+          _rugosa_chart_set_rgba (cr, &l->colour);
+          cairo_set_line_width (cr, 1.2 * k);
+          cairo_stroke (cr);
+        }
+    }
+
+  /* Square corners on whole pixels (placement rounds the boxes): Cairo
+   * fills pixel-aligned rectangles without scan conversion, so the border
+   * is the box in the line's colour with the plot colour inset. */
+  const double bw = round (fmax (1.0, 1.2 * k)) + (l->selected ? 1 : 0);
+  _rugosa_chart_set_rgba (cr, &l->colour);
+  cairo_rectangle (cr, b->x, b->y, b->width, b->height);
+  cairo_fill (cr);
+  RugosaChartRgba bg = p->plot;
+  _rugosa_chart_set_rgba (cr, &bg);
+  cairo_rectangle (cr, b->x + bw, b->y + bw, b->width - 2 * bw, b->height - 2 * bw);
+  cairo_fill (cr);
+
+  draw_marker (cr, (int) i, b->x + 5 * k + 4.5 * k, b->y + 3.5 * k + chart->lay.font_label * 0.62,
+               3.6 * k, &l->colour, NULL, k, 0);
+  _rugosa_chart_show (cr, lb->layout, b->x + 5 * k + 13 * k, b->y + 3.5 * k, &p->ink, NULL, 0);
+}
+
+static void
+draw_legend (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
+{
+  const ChartLayout *lay = &chart->lay;
+  const RugosaChartRect *r = &chart->legend;
+  const double k = lay->k;
+  if (r->width <= 0)
+    return;
+  const double row = lay->font_label * 1.45;
+  const size_t rows = (size_t) floor ((r->height - 10 * k) / row + 0.5);
+  RugosaChartRgba bg = p->plot, border = p->grid;
+  border.a = fmin (1, border.a * 3);
+  /* everything inside the box, so its cached image is opaque */
+  cairo_rectangle (cr, r->x, r->y, r->width, r->height);
+  _rugosa_chart_set_rgba (cr, &bg);
+  cairo_fill (cr);
+  cairo_rectangle (cr, r->x + 0.5, r->y + 0.5, r->width - 1, r->height - 1);
+  _rugosa_chart_set_rgba (cr, &border);
+  cairo_set_line_width (cr, 1.0);
+  cairo_stroke (cr);
+
+  cairo_save (cr);
+  cairo_rectangle (cr, r->x, r->y, r->width - 4 * k, r->height);
+  cairo_clip (cr);
+  for (size_t i = 0; i < rows && i < chart->n_lines; i++)
+    {
+      const double y = r->y + 5 * k + i * row;
+      char more[64];
+      const char *name = chart->lines[i].name;
+      int is_more = i == rows - 1 && chart->n_lines > rows;
+      if (is_more)
+        {
+          snprintf (more, sizeof more, "+ %zu more", chart->n_lines - rows + 1);
+          name = more;
+        }
+      else
+        draw_marker (cr, (int) i, r->x + 11 * k, y + row / 2, 3.8 * k,
+                     &chart->lines[i].line.colour, NULL, k, 0);
+      PangoLayout *l = _rugosa_chart_text (chart, name, lay->font_label * 0.95,
+                                           !is_more && chart->lines[i].line.selected
+                                             ? TEXT_BOLD : TEXT_PLAIN, 0);
+      double w, h;
+      _rugosa_chart_text_size (l, &w, &h);
+      _rugosa_chart_show (cr, l, r->x + 22 * k, y + (row - h) / 2,
+                          is_more ? &p->muted : &p->ink, NULL, 0);
+    }
+  cairo_restore (cr);
+}
+
+/* The legend changes only with the lines' names, colours and selection,
+ * not with their age or hover: keep it as pixels between frames. */
+static void
+draw_legend_cached (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
+{
+  const RugosaChartRect *r = &chart->legend;
+  if (r->width <= 0)
+    return;
+  GString *key = g_string_new (NULL);
+  g_string_append_printf (key, "%d|%.3f|%.3f|%g|%g|%g|%g", chart->spec.theme, chart->lay.k,
+                          chart->spec.scale, r->x, r->y, r->width, r->height);
+  for (size_t i = 0; i < chart->n_lines; i++)
+    {
+      const RugosaChartLine *l = &chart->lines[i].line;
+      g_string_append_printf (key, "|%s|%a|%a|%a|%a|%d", chart->lines[i].name, l->colour.r,
+                              l->colour.g, l->colour.b, l->colour.a, l->selected);
+    }
+  if (chart->legend_img == NULL || chart->legend_key == NULL
+      || !g_string_equal (key, chart->legend_key))
+    {
+      const double s = chart->spec.scale;
+      g_clear_pointer (&chart->legend_img, cairo_surface_destroy);
+      chart->legend_img = cairo_image_surface_create (CAIRO_FORMAT_ARGB32,
+                                                      (int) ceil (r->width * s),
+                                                      (int) ceil (r->height * s));
+      cairo_surface_set_device_scale (chart->legend_img, s, s);
+      cairo_t *lc = cairo_create (chart->legend_img);
+      cairo_translate (lc, -r->x, -r->y);
+      cairo_set_antialias (lc, CAIRO_ANTIALIAS_FAST); /* as in the overlay */
+      draw_legend (chart, lc, p);
+      cairo_destroy (lc);
+      if (chart->legend_key)
+        g_string_free (chart->legend_key, TRUE);
+      chart->legend_key = key;
+    }
+  else
+    g_string_free (key, TRUE);
+  cairo_save (cr);
+  cairo_set_source_surface (cr, chart->legend_img, r->x, r->y);
+  cairo_set_operator (cr, CAIRO_OPERATOR_SOURCE);
+  cairo_rectangle (cr, r->x, r->y, r->width, r->height);
+  cairo_fill (cr);
+  cairo_restore (cr);
+}
+
+void
+_rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached)
+{
+  const ChartLayout *lay = &chart->lay;
+  RugosaChartPalette p;
+  if (chart->n_lines == 0)
+    return;
+  if (!chart->placement_valid)
+    _rugosa_chart_place_labels (chart);
+  rugosa_chart_palette (chart->spec.theme, &p);
+
+  cairo_save (cr);
+  cairo_rectangle (cr, lay->plot.x, lay->plot.y, lay->plot.width, lay->plot.height);
+  cairo_clip (cr);
+  /* Coarser edge sampling for the geometry (not the text): wide strokes
+   * and small circles cost several times less, and look the same. */
+  cairo_set_antialias (cr, CAIRO_ANTIALIAS_FAST);
+  /* unselected lines under the selected one */
+  for (int pass = 0; pass < 2; pass++)
+    for (size_t i = 0; i < chart->n_lines; i++)
+      if ((pass == 1) == (chart->lines[i].line.selected != 0))
+        draw_line_paths (chart, cr, i, &p);
+  for (int pass = 0; pass < 2; pass++)
+    for (size_t i = 0; i < chart->n_lines; i++)
+      if ((pass == 1) == (chart->lines[i].line.selected != 0))
+        draw_line_marker (chart, cr, i, &p);
+  if (cached)
+    draw_legend_cached (chart, cr, &p);
+  else
+    draw_legend (chart, cr, &p);
+  for (int pass = 0; pass < 2; pass++)
+    for (size_t i = 0; i < chart->n_lines; i++)
+      if ((pass == 1) == (chart->lines[i].line.selected != 0))
+        draw_label (chart, cr, i, &p);
+  cairo_restore (cr);
+}
+
+void
+_rugosa_chart_draw_footer (RugosaChart *chart, cairo_t *cr)
+{
+  const ChartLayout *lay = &chart->lay;
+  RugosaChartPalette p;
+  char text[512];
+  if (chart->spec.footer_date[0] == '\0')
+    return;
+  rugosa_chart_palette (chart->spec.theme, &p);
+  snprintf (text, sizeof text, "%s  ·  %s", RUGOSA_CHART_CAUTION,
+            chart->spec.footer_date);
+  const double k = lay->k;
+  PangoLayout *l = _rugosa_chart_text (chart, text, lay->font_footer, TEXT_PLAIN,
+                                       lay->width - 32 * k);
+  _rugosa_chart_show (cr, l, 16 * k, lay->height - lay->footer_h + 5 * k,
+                      &p.muted, NULL, 0);
+}

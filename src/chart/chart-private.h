@@ -1,0 +1,125 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* Internals shared by the chart's source files. */
+#pragma once
+
+#include <pango/pangocairo.h>
+
+#include "rugosa-chart.h"
+
+enum { CHART_CURVES_MAX = RUGOSA_CHART_FAMILY_MAX * 2 };
+
+/* Device-space geometry of one frame. */
+typedef struct {
+  double width, height;
+  double k;                        /* size factor for fonts and strokes */
+  RugosaChartRect plot;
+  double lx0, lx1, ly0, ly1;       /* log10 of the axis ranges */
+  double font_tick, font_title, font_curve, font_band, font_label, font_footer;
+  double footer_h;
+} ChartLayout;
+
+typedef struct {
+  double rr;
+  int is_user;                     /* the ε/D of one of the user's lines */
+  size_t n;
+  double *x, *y;                   /* device points, Re increasing */
+} ChartCurve;
+
+typedef struct {
+  char *name, *velocity, *head100, *headtotal;
+  RugosaChartLine line;            /* strings and trail point into this copy */
+  RugosaChartPoint *trail;
+} ChartLine;
+
+typedef struct {
+  RugosaChartLabelInfo info;
+  double ax, ay;                   /* anchor (marker centre) */
+  PangoLayout *layout;             /* borrowed from the text cache */
+} ChartLabel;
+
+struct RugosaChart {
+  RugosaChartSpec spec;
+  ChartLayout lay;
+
+  /* background: geometry and pixels, keyed by spec + user curves */
+  int geom_valid;
+  size_t n_curves;
+  ChartCurve curves[CHART_CURVES_MAX];
+  size_t n_user_rr;
+  double user_rr[CHART_CURVES_MAX];
+  cairo_surface_t *bg;
+  int bg_valid;
+  unsigned bg_builds;
+  /* boxes of the background's own labels (curves, bands), which the
+   * overlay's labels avoid when they can */
+  RugosaChartRect bg_boxes[CHART_CURVES_MAX + 16];
+  size_t n_bg_boxes;
+  int bg_boxes_valid;
+  int placement_saw_bg_boxes;
+
+  /* overlay */
+  ChartLine *lines;
+  size_t n_lines;
+  int hover;
+  int placement_valid;
+  ChartLabel *labels;
+  RugosaChartRect legend;
+  cairo_surface_t *legend_img;     /* the legend as pixels, and its key */
+  GString *legend_key;
+
+  /* text */
+  PangoContext *pango;
+  GHashTable *layouts;             /* key text → PangoLayout */
+};
+
+/* chart-geometry.c */
+void _rugosa_chart_layout (const RugosaChartSpec *spec, ChartLayout *lay);
+void _rugosa_chart_xy (const ChartLayout *lay, double re, double f,
+                       double *x, double *y);
+void _rugosa_chart_value (const ChartLayout *lay, double x, double y,
+                          double *re, double *f);
+void _rugosa_chart_classify (const RugosaChartSpec *spec,
+                             const ChartLayout *lay, double x, double y,
+                             RugosaChartProbe *out);
+void _rugosa_chart_build_curves (RugosaChart *chart);
+void _rugosa_chart_free_curves (RugosaChart *chart);
+void _rugosa_chart_format_rr (double rr, char *buf, size_t size);
+
+/* chart-text.c */
+typedef enum {
+  TEXT_PLAIN = 0,
+  TEXT_BOLD,
+  TEXT_CAPS,                       /* band names: semibold capitals */
+  TEXT_FIRST_BOLD                  /* label: first line bold */
+} ChartTextStyle;
+PangoLayout *_rugosa_chart_text (RugosaChart *chart, const char *text,
+                                 double size_px, ChartTextStyle style,
+                                 double wrap_width);
+void _rugosa_chart_text_size (PangoLayout *layout, double *w, double *h);
+void _rugosa_chart_show (cairo_t *cr, PangoLayout *layout, double x, double y,
+                         const RugosaChartRgba *ink,
+                         const RugosaChartRgba *halo, double halo_width);
+void _rugosa_chart_set_rgba (cairo_t *cr, const RugosaChartRgba *c);
+
+/* chart-background.c */
+void _rugosa_chart_draw_background (RugosaChart *chart, cairo_t *cr);
+
+/* chart-overlay.c */
+void _rugosa_chart_place_labels (RugosaChart *chart);
+void _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached);
+void _rugosa_chart_draw_footer (RugosaChart *chart, cairo_t *cr);
+
+static inline int
+_rugosa_chart_rects_overlap (const RugosaChartRect *a, const RugosaChartRect *b)
+{
+  return a->x < b->x + b->width && b->x < a->x + a->width
+         && a->y < b->y + b->height && b->y < a->y + a->height;
+}
+
+static inline int
+_rugosa_chart_rect_inside (const RugosaChartRect *in, const RugosaChartRect *out)
+{
+  return in->x >= out->x && in->y >= out->y
+         && in->x + in->width <= out->x + out->width
+         && in->y + in->height <= out->y + out->height;
+}

@@ -1,0 +1,198 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The friction chart: Darcy friction factor against Reynolds number on
+ * log–log axes, with the laminar line, a family of Colebrook curves, the
+ * regime bands and the user's line options as an overlay.
+ *
+ * Plain C over Cairo and PangoCairo; no GTK.  The caller (app or CLI) fills
+ * a RugosaChartSpec (what the background shows) and an array of
+ * RugosaChartLine (the overlay); the chart never computes hydraulics beyond
+ * the curves it draws.
+ *
+ * Coordinates: "device" coordinates are the caller's logical pixels, origin
+ * at the top left of the chart, y downwards (a widget's coordinates).  The
+ * scale factor only sets the resolution of the cached background. */
+#pragma once
+
+#include <cairo.h>
+#include <glib.h>
+#include <stddef.h>
+
+#include "core/regime.h"
+#include "core/status.h"
+
+typedef struct { double r, g, b, a; } RugosaChartRgba;
+typedef struct { double re, f; } RugosaChartPoint;
+typedef struct { double x, y, width, height; } RugosaChartRect;
+
+typedef enum {
+  RUGOSA_CHART_THEME_LIGHT = 0,
+  RUGOSA_CHART_THEME_DARK
+} RugosaChartTheme;
+
+/* What the background shows (bits of RugosaChartSpec.show). */
+typedef enum {
+  RUGOSA_CHART_SHOW_BANDS        = 1 << 0,
+  RUGOSA_CHART_SHOW_BAND_LABELS  = 1 << 1,
+  RUGOSA_CHART_SHOW_CURVES       = 1 << 2,
+  RUGOSA_CHART_SHOW_CURVE_LABELS = 1 << 3,
+  RUGOSA_CHART_SHOW_GRID         = 1 << 4,
+  RUGOSA_CHART_SHOW_LAMINAR      = 1 << 5,
+  RUGOSA_CHART_SHOW_LEGEND       = 1 << 6,
+  RUGOSA_CHART_SHOW_ALL          = (1 << 7) - 1
+} RugosaChartShow;
+
+enum {
+  RUGOSA_CHART_FAMILY_MAX = 64,
+  RUGOSA_CHART_DATE_MAX = 40
+};
+
+/* The background description.  Everything here is part of the background
+ * cache key: changing any field rebuilds the background. */
+typedef struct {
+  double width, height;          /* device (logical) pixels, ≥ 200 × 150 */
+  double scale;                  /* device scale factor of the cache, 1..4 */
+  RugosaChartTheme theme;
+  double re_min, re_max;         /* Reynolds axis, 1 ≤ re_min < re_max ≤ 1e10 */
+  double f_min, f_max;           /* friction axis, 0.001 ≤ f_min < f_max ≤ 1 */
+  RgTransition transition;       /* laminar / transitional / turbulent */
+  size_t n_family;               /* Colebrook curves; 0 in the family = smooth */
+  double family[RUGOSA_CHART_FAMILY_MAX];
+  unsigned show;                 /* RugosaChartShow bits */
+  /* Non-empty: a footer with the caution and this date (exports). */
+  char footer_date[RUGOSA_CHART_DATE_MAX];
+} RugosaChartSpec;
+
+/* One line option on the overlay.  Strings are copied by
+ * rugosa_chart_set_lines; NULL strings are left out of the label. */
+typedef struct {
+  const char *name;
+  RugosaChartRgba colour;
+  double rr_new;                 /* ε/D when new: its curve joins the background */
+  double rr_aged;                /* ε/D at the selected service age */
+  RgRegime regime;               /* of the design operating point */
+  double re;                     /* design operating point */
+  double f;                      /* design friction factor */
+  double f_laminar;              /* transitional range only: 64/Re */
+  double f_turbulent;            /* transitional range only: turbulent value */
+  int has_flow_min, has_flow_max;
+  RugosaChartPoint flow_min, flow_max;
+  const RugosaChartPoint *trail; /* from new to the selected age */
+  size_t n_trail;
+  const char *readout_velocity;  /* already formatted in display units */
+  const char *readout_head_per_100m;
+  const char *readout_head_total;
+  int selected;
+} RugosaChartLine;
+
+/* Colours of a theme (for tests and for an app that matches its panels). */
+typedef struct {
+  RugosaChartRgba page, plot, ink, muted, grid;
+  RugosaChartRgba band_laminar, band_transitional;
+  RugosaChartRgba band_smooth, band_transitionally_rough, band_fully_rough;
+  RugosaChartRgba laminar_line, curve, smooth_curve;
+} RugosaChartPalette;
+
+typedef struct RugosaChart RugosaChart;
+
+/* Defaults: 960 × 600, scale 1, light, Re 500–1e8, f 0.006–0.1,
+ * transition 2000–4000, the standard family, everything shown, no footer. */
+void rugosa_chart_spec_init (RugosaChartSpec *spec);
+/* The standard family of relative roughness values (smooth first). */
+size_t rugosa_chart_standard_family (double *out, size_t max);
+RgStatus rugosa_chart_spec_check (const RugosaChartSpec *spec, RgError *err);
+void rugosa_chart_palette (RugosaChartTheme theme, RugosaChartPalette *out);
+
+RugosaChart *rugosa_chart_new (void);
+void rugosa_chart_free (RugosaChart *chart);
+
+/* Background.  An identical spec keeps the cached background. */
+RgStatus rugosa_chart_set_spec (RugosaChart *chart, const RugosaChartSpec *spec,
+                                RgError *err);
+const RugosaChartSpec *rugosa_chart_get_spec (const RugosaChart *chart);
+/* Overlay: copied.  Only a change of the set of rr_new values touches the
+ * background (their curves are drawn there). */
+void rugosa_chart_set_lines (RugosaChart *chart, const RugosaChartLine *lines,
+                             size_t n_lines);
+/* Index of the hovered line, or -1. */
+void rugosa_chart_set_hover (RugosaChart *chart, int index);
+
+/* Paint the cached background (rebuilt only when stale) then the overlay.
+ * `cr` is in device coordinates. */
+void rugosa_chart_draw (RugosaChart *chart, cairo_t *cr);
+/* Same picture, the background stroked directly (vector outputs). */
+void rugosa_chart_draw_direct (RugosaChart *chart, cairo_t *cr);
+/* Drop the cached background and its geometry (benchmark, theme reload). */
+void rugosa_chart_invalidate_background (RugosaChart *chart);
+/* How many times the background has been computed and stroked. */
+unsigned rugosa_chart_background_builds (const RugosaChart *chart);
+
+/* Layout and transforms. */
+RugosaChartRect rugosa_chart_plot_area (RugosaChart *chart);
+void rugosa_chart_to_device (RugosaChart *chart, double re, double f,
+                             double *x, double *y);
+void rugosa_chart_from_device (RugosaChart *chart, double x, double y,
+                               double *re, double *f);
+
+/* The hover readout at a device point. */
+typedef struct {
+  int in_plot;
+  double re, f;
+  RgRegime regime;
+  RgRoughnessZone zone;    /* RG_ZONE_NONE unless turbulent and has_rr */
+  int has_rr;              /* 0 below the smooth-pipe curve or out of range */
+  double rr;               /* ε/D of the Colebrook curve through (re, f) */
+} RugosaChartProbe;
+void rugosa_chart_probe (RugosaChart *chart, double x, double y,
+                         RugosaChartProbe *out);
+
+/* ε/D of the Colebrook curve through (re, f), explicitly:
+ * ε/D = 3.7·(10^(−1/(2√f)) − 2.51/(Re·√f)).  RG_ERR_DOMAIN when the point
+ * lies below the smooth-pipe curve or outside 1e3 ≤ re ≤ 1e10. */
+RgStatus rugosa_chart_rr_through (double re, double f, double *rr,
+                                  RgError *err);
+/* The point of the Colebrook curve of relative roughness rr where the
+ * roughness Reynolds number equals eps_plus (explicit, see chart-geometry.c). */
+RgStatus rugosa_chart_zone_boundary (double eps_plus, double rr, double *re,
+                                     double *f, RgError *err);
+
+/* Hit testing: the line whose marker is nearest to (x, y) within `radius`
+ * device pixels, else the line whose label box holds (x, y), else -1. */
+int rugosa_chart_hit_test (RugosaChart *chart, double x, double y,
+                           double radius);
+
+/* Where the overlay put things (after a draw or a call to this function). */
+typedef struct {
+  int visible;             /* 0 when no free place was found */
+  int compact;             /* name only */
+  int has_leader;
+  RugosaChartRect box;
+  RugosaChartRect marker;  /* the marker's (or transitional bar's) box */
+} RugosaChartLabelInfo;
+size_t rugosa_chart_n_lines (const RugosaChart *chart);
+int rugosa_chart_get_label (RugosaChart *chart, size_t index,
+                            RugosaChartLabelInfo *out);
+/* The legend box (empty when hidden). */
+RugosaChartRect rugosa_chart_legend_box (RugosaChart *chart);
+
+/* Export: the same drawing code at width × height logical pixels (PNG at
+ * scale 1), with the caution footer carrying `date`. */
+typedef enum {
+  RUGOSA_CHART_FORMAT_PNG = 0,
+  RUGOSA_CHART_FORMAT_SVG,
+  RUGOSA_CHART_FORMAT_PDF
+} RugosaChartFormat;
+
+extern const char *const RUGOSA_CHART_CAUTION;
+
+#define RUGOSA_CHART_ERROR (rugosa_chart_error_quark ())
+typedef enum {
+  RUGOSA_CHART_ERROR_INVALID,    /* a size, range or date out of bounds */
+  RUGOSA_CHART_ERROR_WRITE       /* Cairo could not create or write the file */
+} RugosaChartError;
+GQuark rugosa_chart_error_quark (void);
+
+gboolean rugosa_chart_export (const RugosaChartSpec *spec,
+                              const RugosaChartLine *lines, size_t n_lines,
+                              RugosaChartFormat format, double width,
+                              double height, const char *date,
+                              const char *path, GError **error);
