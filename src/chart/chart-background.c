@@ -341,7 +341,7 @@ draw_bands (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
   /* The zone boundaries themselves, dotted. */
   RugosaChartRgba edge = p->muted;
   edge.a = 0.75;
-  const double dots[] = { 2.0 * lay->k, 3.0 * lay->k };
+  const double dots[] = { 5.0 * lay->k, 3.5 * lay->k };
   cairo_set_dash (cr, dots, 2, 0);
   cairo_set_line_width (cr, 1.3 * lay->k);
   _rugosa_chart_set_rgba (cr, &edge);
@@ -769,9 +769,8 @@ typedef struct {
 
 static int
 box_in_band (RugosaChart *chart, double cx, double cy, double w, double h,
-             double angle, const BandName *b)
+             double c, double s, const BandName *b)
 {
-  const double c = cos (angle), s = sin (angle);
   for (int i = -1; i <= 1; i++)
     for (int j = -1; j <= 1; j++)
       {
@@ -875,6 +874,8 @@ draw_band_labels (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p,
           angles[1] = atan2 (y2 - y1, x2 - x1);
         }
 
+      const double cs[2][2] = { { cos (angles[0]), sin (angles[0]) },
+                                { cos (angles[1]), sin (angles[1]) } };
       /* Search outwards from the preferred point, ring by ring, and stop
        * once a ring lies farther than the best place found. */
       const double step = 5 * lay->k;
@@ -896,9 +897,11 @@ draw_band_labels (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p,
               const double d = hypot (x - px, y - py) + (ai ? 12 * lay->k : 0);
               if (d >= best_d)
                 continue;
-              RugosaChartRect r = turned_box (x, y, w, h, angles[ai], 2);
+              const double bw = w * fabs (cs[ai][0]) + h * fabs (cs[ai][1]) + 4;
+              const double bh = w * fabs (cs[ai][1]) + h * fabs (cs[ai][0]) + 4;
+              RugosaChartRect r = { x - bw / 2, y - bh / 2, bw, bh };
               if (!_rugosa_chart_rect_inside (&r, pl) || !taken_free (taken, &r)
-                  || !box_in_band (chart, x, y, w, h, angles[ai], b))
+                  || !box_in_band (chart, x, y, w, h, cs[ai][0], cs[ai][1], b))
                 continue;
               best_d = d;
               bx = x;

@@ -48,6 +48,7 @@ struct RugosaChart {
   size_t n_user_rr;
   double user_rr[CHART_CURVES_MAX];
   cairo_surface_t *bg;
+  int bg_valid;
   unsigned bg_builds;
   /* boxes of the background's own labels (curves, bands), which the
    * overlay's labels avoid when they can */

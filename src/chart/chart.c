@@ -82,7 +82,9 @@ invalidate_all (RugosaChart *chart)
   _rugosa_chart_free_curves (chart);
   chart->n_bg_boxes = 0;
   chart->bg_boxes_valid = 0;
-  g_clear_pointer (&chart->bg, cairo_surface_destroy);
+  /* the surface itself is kept for reuse: a new 1600 × 1000 image costs
+   * as much as filling the bands */
+  chart->bg_valid = 0;
   chart->placement_valid = 0;
 }
 
@@ -224,20 +226,26 @@ build_background (RugosaChart *chart)
   const int h = (int) ceil (chart->spec.height * s);
   /* ARGB32 like the surfaces GTK and the exports draw on, so the blit is
    * a plain copy (an RGB24 source would need its alpha set per pixel). */
-  chart->bg = cairo_image_surface_create (CAIRO_FORMAT_ARGB32, w, h);
+  if (chart->bg != NULL
+      && (cairo_image_surface_get_width (chart->bg) != w
+          || cairo_image_surface_get_height (chart->bg) != h))
+    g_clear_pointer (&chart->bg, cairo_surface_destroy);
+  if (chart->bg == NULL)
+    chart->bg = cairo_image_surface_create (CAIRO_FORMAT_ARGB32, w, h);
   cairo_surface_set_device_scale (chart->bg, s, s);
   cairo_t *cr = cairo_create (chart->bg);
   _rugosa_chart_draw_background (chart, cr);
   _rugosa_chart_draw_footer (chart, cr);
   cairo_destroy (cr);
   cairo_surface_flush (chart->bg);
+  chart->bg_valid = 1;
   chart->bg_builds++;
 }
 
 void
 rugosa_chart_draw (RugosaChart *chart, cairo_t *cr)
 {
-  if (chart->bg == NULL)
+  if (!chart->bg_valid)
     build_background (chart);
   cairo_save (cr);
   cairo_rectangle (cr, 0, 0, chart->spec.width, chart->spec.height);
