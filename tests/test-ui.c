@@ -17,6 +17,7 @@
 #include "rugosa-application.h"
 #include "rugosa-canvas.h"
 #include "rugosa-line-panel.h"
+#include "rugosa-preferences-window.h"
 #include "rugosa-quantity-entry.h"
 #include "rugosa-readout.h"
 #include "rugosa-results-table.h"
@@ -430,6 +431,27 @@ test_probe_and_keys (void)
     g_assert_true (found);
   }
 
+  /* A click on a marker selects its line, and the panel follows. */
+  gtk_single_selection_set_selected (sel, pos == 0 ? 1 % n : 0);
+  drain ();
+  g_assert_true (rugosa_canvas_select_at (canvas, x, y));
+  drain ();
+  g_assert_cmpuint (gtk_single_selection_get_selected (sel), ==, pos);
+  g_assert_true (rugosa_line_panel_get_line (RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win)))
+                 == rugosa_project_get_line (rugosa_window_get_project (win), pos));
+
+  /* The marker's tooltip gives the full readout. */
+  {
+    g_autofree char *tip = rugosa_readout_line_full (rugosa_window_get_project (win),
+                                                     rugosa_project_get_line (rugosa_window_get_project (win), pos),
+                                                     rugosa_application_get_settings (app));
+    g_assert_nonnull (strstr (tip, "Reynolds number"));
+    g_assert_nonnull (strstr (tip, "Friction factor"));
+    g_assert_nonnull (strstr (tip, "Head loss"));
+    g_assert_nonnull (strstr (tip, "Velocity"));
+    g_assert_nonnull (strstr (tip, "m/s"));
+  }
+
   gtk_single_selection_set_selected (sel, 0);
   gtk_widget_activate_action (GTK_WIDGET (canvas), "canvas.step", "i", 1);
   g_assert_cmpuint (gtk_single_selection_get_selected (sel), ==, 1 % n);
@@ -636,6 +658,37 @@ test_outputs (void)
 }
 
 static void
+test_unit_system (void)
+{
+  GSettings *settings = rugosa_application_get_settings (app);
+  RugosaPreferencesWindow *prefs = rugosa_preferences_window_new (settings);
+  g_autofree char *flow = NULL, *temp = NULL, *system = NULL;
+
+  /* Choosing a system sets every quantity's unit to that system's. */
+  g_settings_set_string (settings, "unit-system", "us-customary");
+  drain ();
+  flow = g_settings_get_string (settings, "unit-flow");
+  temp = g_settings_get_string (settings, "unit-temperature");
+  g_assert_cmpstr (flow, ==, "gpm");
+  g_assert_cmpstr (temp, ==, "F");
+
+  /* Changing one unit by hand makes the system "chosen one by one". */
+  g_settings_set_string (settings, "unit-flow", "L/s");
+  drain ();
+  system = g_settings_get_string (settings, "unit-system");
+  g_assert_cmpstr (system, ==, "mixed");
+
+  gtk_window_destroy (GTK_WINDOW (prefs));
+  /* Back to SI for the tests that follow. */
+  rugosa_preferences_apply_unit_system (settings, "si");
+  g_settings_set_string (settings, "unit-system", "si");
+  drain ();
+  g_clear_pointer (&flow, g_free);
+  flow = g_settings_get_string (settings, "unit-flow");
+  g_assert_cmpstr (flow, ==, "L/s");
+}
+
+static void
 test_screenshot (void)
 {
   RugosaWindow *win = open_demo ();
@@ -729,6 +782,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/files/autosave", test_autosave);
   g_test_add_func ("/ui/canvas/probe-and-keys", test_probe_and_keys);
   g_test_add_func ("/ui/preferences/flow-unit", test_units_preference);
+  g_test_add_func ("/ui/preferences/unit-system", test_unit_system);
   g_test_add_func ("/ui/files/export-print-csv", test_outputs);
   g_test_add_func ("/ui/files/recovery", test_recovery);
   g_test_add_func ("/ui/files/close-guard", test_close_guard);

@@ -321,6 +321,22 @@ _rugosa_canvas_leave (GtkEventControllerMotion *motion,
   _rugosa_canvas_set_probe_text (self, NULL);
 }
 
+gboolean
+rugosa_canvas_select_at (RugosaCanvas *self,
+                         double        x,
+                         double        y)
+{
+  int hit;
+
+  g_return_val_if_fail (RUGOSA_IS_CANVAS (self), FALSE);
+  _rugosa_canvas_update_spec (self);
+  hit = rugosa_chart_hit_test (self->chart, x, y, HIT_RADIUS);
+  if (hit < 0 || self->selection == NULL || self->input == NULL || hit >= (int) self->input->n_lines)
+    return FALSE;
+  gtk_single_selection_set_selected (self->selection, self->input->line_index[hit]);
+  return TRUE;
+}
+
 static void
 _rugosa_canvas_pressed (GtkGestureClick *click,
                         int              n_press,
@@ -328,13 +344,8 @@ _rugosa_canvas_pressed (GtkGestureClick *click,
                         double           y,
                         RugosaCanvas    *self)
 {
-  int hit;
-
   gtk_widget_grab_focus (GTK_WIDGET (self));
-  _rugosa_canvas_update_spec (self);
-  hit = rugosa_chart_hit_test (self->chart, x, y, HIT_RADIUS);
-  if (hit >= 0 && self->selection && self->input && hit < (int) self->input->n_lines)
-    gtk_single_selection_set_selected (self->selection, self->input->line_index[hit]);
+  rugosa_canvas_select_at (self, x, y);
 }
 
 static gboolean

@@ -41,6 +41,11 @@ gboolean    rugosa_canvas_marker_position (RugosaCanvas *self,
                                            guint         position,
                                            double       *x,
                                            double       *y);
+/* What a click at (x, y) does: select the line whose marker or label is
+ * there.  FALSE when nothing is hit. */
+gboolean    rugosa_canvas_select_at       (RugosaCanvas *self,
+                                           double        x,
+                                           double        y);
 /* What a pointer at (x, y) would show (hover/probe), as if it moved there. */
 void        rugosa_canvas_pointer_at      (RugosaCanvas *self,
                                            double        x,
