@@ -95,3 +95,36 @@ rugosa_display_format (RgQuantity  q,
   /* The core's parser reads these symbols back (°C, m³/s, mPa·s, µm). */
   return g_strdup_printf ("%s %s", num, rugosa_display_unit_symbol (shown));
 }
+
+char *
+rugosa_display_scientific (double x,
+                           int    digits)
+{
+  static const char *const sup[] = { "⁰", "¹", "²", "³", "⁴", "⁵", "⁶", "⁷", "⁸", "⁹" };
+  GString *out;
+  char buf[G_ASCII_DTOSTR_BUF_SIZE];
+  char fmt[16];
+  double ax = fabs (x);
+  int e;
+  char digits_e[16];
+
+  if (!isfinite (x) || x == 0.0 || (ax >= 1e-3 && ax < 1e5))
+    return rugosa_display_significant (x, digits);
+  e = (int) floor (log10 (ax));
+  /* 9.995e5 rounds up to 10.0 × 10⁵: carry into the exponent. */
+  g_snprintf (fmt, sizeof fmt, "%%.%df", MAX (digits - 1, 0));
+  g_ascii_formatd (buf, sizeof buf, fmt, x / pow (10.0, e));
+  if (fabs (g_ascii_strtod (buf, NULL)) >= 10.0)
+    {
+      e++;
+      g_ascii_formatd (buf, sizeof buf, fmt, x / pow (10.0, e));
+    }
+  out = g_string_new (buf);
+  g_string_append (out, " × 10");
+  if (e < 0)
+    g_string_append (out, "⁻");
+  g_snprintf (digits_e, sizeof digits_e, "%d", ABS (e));
+  for (const char *c = digits_e; *c; c++)
+    g_string_append (out, sup[*c - '0']);
+  return g_string_free (out, FALSE);
+}

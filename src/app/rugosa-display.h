@@ -23,4 +23,8 @@ const char *rugosa_display_unit_symbol   (const char *unit);
 char       *rugosa_display_significant   (double      x,
                                           int         digits);
 
+/* "2.8 × 10⁶", "7.7 × 10⁻⁵" outside 1e-3 … 1e5; plain digits inside. */
+char       *rugosa_display_scientific    (double      x,
+                                          int         digits);
+
 G_END_DECLS
