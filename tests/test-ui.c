@@ -601,6 +601,45 @@ test_open_from_command_line (void)
   close_window (opened);
 }
 
+static void
+test_drop_file (void)
+{
+  RugosaWindow *win = rugosa_window_new (app);
+  g_autofree char *path = demo_path ();
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GListModel) controllers = NULL;
+  GtkDropTarget *target = NULL;
+  GValue value = G_VALUE_INIT;
+  GSList *files = g_slist_prepend (NULL, file);
+  gboolean accepted = FALSE;
+
+  gtk_window_present (GTK_WINDOW (win));
+  drain ();
+  g_assert_true (rugosa_window_is_pristine (win));
+  controllers = gtk_widget_observe_controllers (GTK_WIDGET (win));
+  for (guint i = 0; i < g_list_model_get_n_items (controllers) && target == NULL; i++)
+    {
+      g_autoptr (GObject) c = g_list_model_get_item (controllers, i);
+      if (GTK_IS_DROP_TARGET (c))
+        target = GTK_DROP_TARGET (c);
+    }
+  g_assert_nonnull (target);
+  g_assert_true (g_type_is_a (gtk_drop_target_get_gtypes (target, NULL)[0], GDK_TYPE_FILE_LIST));
+
+  /* What the drop target hands over when a project file is dropped. */
+  g_value_init (&value, GDK_TYPE_FILE_LIST);
+  g_value_set_boxed (&value, files);
+  g_signal_emit_by_name (target, "drop", &value, 100.0, 100.0, &accepted);
+  g_value_unset (&value);
+  g_slist_free (files);
+  drain ();
+  g_assert_true (accepted);
+  g_assert_nonnull (rugosa_window_get_file (win));
+  g_assert_true (g_file_equal (rugosa_window_get_file (win), file));
+  g_assert_cmpuint (rugosa_project_get_n_lines (rugosa_window_get_project (win)), >=, 2);
+  close_window (win);
+}
+
 static gboolean
 file_starts_with (const char *path,
                   const char *magic,
@@ -789,6 +828,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/files/recovery", test_recovery);
   g_test_add_func ("/ui/files/close-guard", test_close_guard);
   g_test_add_func ("/ui/files/open-command-line", test_open_from_command_line);
+  g_test_add_func ("/ui/files/drop", test_drop_file);
   g_test_add_func ("/ui/screenshot", test_screenshot);
 
   status = g_test_run ();
