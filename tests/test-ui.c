@@ -782,6 +782,21 @@ test_screenshot (void)
   close_window (win);
 }
 
+static void
+remove_tree (const char *path)
+{
+  g_autoptr (GDir) dir = g_dir_open (path, 0, NULL);
+  const char *name;
+
+  if (dir != NULL)
+    while ((name = g_dir_read_name (dir)) != NULL)
+      {
+        g_autofree char *child = g_build_filename (path, name, NULL);
+        remove_tree (child);
+      }
+  g_remove (path);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -833,5 +848,7 @@ main (int argc, char *argv[])
 
   status = g_test_run ();
   g_object_unref (app);
+  remove_tree (tmpdir);
+  g_free (tmpdir);
   return status;
 }
