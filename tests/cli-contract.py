@@ -177,6 +177,51 @@ for line in project["lines"]:
 code, out, err = run("eval", "/nonexistent/x.rugosa")
 check("eval missing file", code == 2 and out == "" and len(err.splitlines()) == 1, err)
 
+# --- render: the chart in three formats, with the caution footer ------------
+import shutil
+import tempfile
+tmp = tempfile.mkdtemp(prefix="rugosa-render-")
+env_date = {"SOURCE_DATE_EPOCH": "1764633600"}  # 2025-12-02, a fixed footer date
+
+
+def run_env(extra, *args):
+    env = {"LANG": "C.UTF-8", "PATH": "/usr/bin:/bin", **extra}
+    p = subprocess.run([CLI, *args], capture_output=True, text=True, timeout=60, env=env)
+    return p.returncode, p.stdout, p.stderr
+
+
+for ext, magic in (("png", b"\x89PNG"), ("svg", b"<?xml"), ("pdf", b"%PDF")):
+    path = os.path.join(tmp, "demo." + ext)
+    code, out, err = run_env(env_date, "render", demo, "-o", path, "--width", "1200", "--height", "800")
+    ok = code == 0 and out == "" and os.path.exists(path)
+    check(f"render {ext}", ok and open(path, "rb").read(5).startswith(magic), err)
+pdftotext = shutil.which("pdftotext")
+if pdftotext:
+    text = subprocess.run([pdftotext, os.path.join(tmp, "demo.pdf"), "-"], capture_output=True,
+                          text=True).stdout
+    # Common practice (no single source): an exported chart carries its axis
+    # titles, the line names and the caution with the date.
+    for needle in ("Reynolds number", "Darcy friction factor", "Steel NPS 6 Sch 40",
+                   "licensed engineer", "2025-12-02"):
+        check(f"render pdf text {needle}", needle in text, text[:200])
+a, b = os.path.join(tmp, "a.png"), os.path.join(tmp, "b.png")
+run_env(env_date, "render", demo, "-o", a, "--theme", "dark", "--age", "40")
+run_env(env_date, "render", demo, "-o", b, "--theme", "dark", "--age", "40")
+check("render reproducible", os.path.exists(a) and open(a, "rb").read() == open(b, "rb").read())
+for name, args, needle in [
+    ("no output", ["render", demo], "-o"),
+    ("bad extension", ["render", demo, "-o", os.path.join(tmp, "x.jpg")], "-o"),
+    ("tiny width", ["render", demo, "-o", a, "--width", "10"], "--width"),
+    ("nan height", ["render", demo, "-o", a, "--height", "nan"], "--height"),
+    ("bad theme", ["render", demo, "-o", a, "--theme", "sepia"], "--theme"),
+    ("bad age", ["render", demo, "-o", a, "--age", "-3"], "--age"),
+    ("missing project", ["render", "/nonexistent.rugosa", "-o", a], "nonexistent"),
+]:
+    code, out, err = run(*args)
+    check(f"render refuses {name}", code == 2 and out == "" and len(err.splitlines()) == 1
+          and needle in err, f"{code} {err!r}")
+shutil.rmtree(tmp)
+
 # --- bad input: exit 2, one sentence naming the option, nothing on stdout -----
 BASE = ["line", "--flow", "12 L/s", "--diameter", "100 mm", "--length", "250 m",
         "--roughness", "0.045 mm", "--fluid", "water", "--temperature", "15 C"]

@@ -8,7 +8,7 @@
 #include <math.h>
 
 #include "rugosa-canvas.h"
-#include "rugosa-display.h"
+#include "model/rugosa-display.h"
 #include "rugosa-readout.h"
 
 /* Pointer distance, in logical pixels, within which a marker counts as hit. */

@@ -4,7 +4,7 @@
 #include <gtk/gtk.h>
 
 #include "model/rugosa-project.h"
-#include "rugosa-chart-input.h"
+#include "chart/rugosa-chart-input.h"
 
 G_BEGIN_DECLS
 

@@ -10,7 +10,7 @@
 #include "core/catalog.h"
 #include "core/fittings.h"
 #include "core/fluid.h"
-#include "rugosa-display.h"
+#include "model/rugosa-display.h"
 #include "rugosa-line-panel.h"
 #include "rugosa-readout.h"
 

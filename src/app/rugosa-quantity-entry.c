@@ -6,7 +6,7 @@
 #include <glib/gi18n.h>
 
 #include "core/units.h"
-#include "rugosa-display.h"
+#include "model/rugosa-display.h"
 #include "rugosa-quantity-entry.h"
 
 struct _RugosaQuantityEntry

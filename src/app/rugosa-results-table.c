@@ -7,7 +7,7 @@
 #include <math.h>
 #include <string.h>
 
-#include "rugosa-display.h"
+#include "model/rugosa-display.h"
 #include "rugosa-readout.h"
 #include "rugosa-results-table.h"
 

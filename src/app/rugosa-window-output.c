@@ -5,7 +5,7 @@
 
 #include <glib/gi18n.h>
 
-#include "rugosa-chart-input.h"
+#include "chart/rugosa-chart-input.h"
 #include "rugosa-window-private.h"
 
 /* Sizes offered for an exported chart, logical pixels (PNG pixels; SVG and

@@ -6,7 +6,7 @@
 #include <glib/gi18n.h>
 #include <math.h>
 
-#include "rugosa-display.h"
+#include "model/rugosa-display.h"
 #include "rugosa-readout.h"
 #include "rugosa-window-private.h"
 

@@ -4,9 +4,11 @@
 
 #include "config.h"
 
+#include <math.h>
 #include <stdio.h>
 
 #include "cli.h"
+#include "chart/rugosa-chart-input.h"
 #include "model/rugosa-project.h"
 
 static const CliOption eval_options[] = {
@@ -91,4 +93,108 @@ cli_cmd_eval (int argc, char **argv)
     return cli_fail ("%s", error->message);
   fputs (out->str, stdout);
   return fflush (stdout) == 0 ? CLI_EXIT_OK : CLI_EXIT_FAILURE;
+}
+
+static const CliOption render_options[] = {
+  { "-o", TRUE, FALSE },
+  { "--output", TRUE, FALSE },
+  { "--width", TRUE, FALSE },
+  { "--height", TRUE, FALSE },
+  { "--age", TRUE, FALSE },
+  { "--theme", TRUE, FALSE },
+  { NULL, FALSE, FALSE },
+};
+
+/* The footer date: today, or SOURCE_DATE_EPOCH when set (reproducible
+ * output, as the reproducible-builds convention has it). */
+static char *
+footer_date (void)
+{
+  const char *epoch = g_getenv ("SOURCE_DATE_EPOCH");
+  g_autoptr (GDateTime) when = NULL;
+
+  if (epoch != NULL && *epoch != '\0')
+    when = g_date_time_new_from_unix_utc (g_ascii_strtoll (epoch, NULL, 10));
+  if (when == NULL)
+    when = g_date_time_new_now_local ();
+  return g_date_time_format (when, "%Y-%m-%d");
+}
+
+static gboolean
+parse_size (const CliArgs *args, const char *name, double fallback, double *out)
+{
+  g_autoptr (GString) msg = g_string_new (NULL);
+  const char *text = cli_args_get (args, name);
+
+  *out = fallback;
+  if (text == NULL)
+    return TRUE;
+  if (!cli_parse_number (name, text, out, msg))
+    {
+      cli_fail ("%s (pixels, or points for PDF and SVG)", msg->str);
+      return FALSE;
+    }
+  if (!(*out >= 200.0 && *out <= 10000.0) || *out != floor (*out))
+    {
+      cli_fail ("%s must be a whole number from 200 to 10000.", name);
+      return FALSE;
+    }
+  return TRUE;
+}
+
+int
+cli_cmd_render (int argc, char **argv)
+{
+  g_auto (CliArgs) args = { 0 };
+  g_autoptr (GString) msg = g_string_new (NULL);
+  g_autoptr (RugosaProject) project = NULL;
+  g_autoptr (RugosaChartInput) input = NULL;
+  g_autoptr (GError) error = NULL;
+  g_autofree char *date = NULL;
+  RugosaChartFormat format;
+  RugosaChartTheme theme = RUGOSA_CHART_THEME_LIGHT;
+  const char *path, *theme_text;
+  double age, width, height;
+
+  if (!cli_args_parse (&args, "render", render_options, argc, argv, 2, msg))
+    return cli_fail ("%s", msg->str);
+  path = cli_args_get (&args, "-o");
+  if (path == NULL)
+    path = cli_args_get (&args, "--output");
+  if (path == NULL || *path == '\0')
+    return cli_fail ("-o is required: the file to write, ending in .png, .svg or .pdf.");
+  if (g_str_has_suffix (path, ".png") || g_str_has_suffix (path, ".PNG"))
+    format = RUGOSA_CHART_FORMAT_PNG;
+  else if (g_str_has_suffix (path, ".svg") || g_str_has_suffix (path, ".SVG"))
+    format = RUGOSA_CHART_FORMAT_SVG;
+  else if (g_str_has_suffix (path, ".pdf") || g_str_has_suffix (path, ".PDF"))
+    format = RUGOSA_CHART_FORMAT_PDF;
+  else
+    return cli_fail ("-o must name a file ending in .png, .svg or .pdf, not \"%s\".", path);
+  if (!parse_size (&args, "--width", 1600.0, &width)
+      || !parse_size (&args, "--height", 1000.0, &height)
+      || !cli_parse_age_option (&args, &age))
+    return CLI_EXIT_USAGE;
+  theme_text = cli_args_get (&args, "--theme");
+  if (theme_text == NULL || g_str_equal (theme_text, "light"))
+    theme = RUGOSA_CHART_THEME_LIGHT;
+  else if (g_str_equal (theme_text, "dark"))
+    theme = RUGOSA_CHART_THEME_DARK;
+  else
+    return cli_fail ("--theme must be light or dark, not \"%s\".", theme_text);
+  if ((project = cli_load_project (&args, "render")) == NULL)
+    return CLI_EXIT_USAGE;
+  if (age >= 0.0)
+    g_object_set (rugosa_project_get_settings (project), "service-age", age, NULL);
+
+  input = rugosa_chart_input_new (project, NULL, -1, NULL);
+  input->spec.theme = theme;
+  date = footer_date ();
+  if (!rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
+                            width, height, date, path, &error))
+    {
+      fprintf (stderr, "rugosa-cli: %s\n", error->message);
+      return error->code == RUGOSA_CHART_ERROR_WRITE ? CLI_EXIT_FAILURE : CLI_EXIT_USAGE;
+    }
+  return CLI_EXIT_OK;
 }

@@ -83,6 +83,7 @@ int cli_cmd_fluid (int argc, char **argv);
 int cli_cmd_line (int argc, char **argv);
 int cli_cmd_catalog (int argc, char **argv);
 int cli_cmd_eval (int argc, char **argv);
+int cli_cmd_render (int argc, char **argv);
 
 /* Shared by the project commands (cli-project.c). */
 typedef struct _RugosaProject RugosaProject;

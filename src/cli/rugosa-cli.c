@@ -30,6 +30,9 @@ static const char usage_text[] =
   "             [--age YEARS --aging CLASS|RATE] [--model M] [--json]\n"
   "  eval       evaluate every line option of a project file\n"
   "             PROJECT [--age YEARS] [--format table|csv|json]\n"
+  "  render     draw the friction chart of a project file\n"
+  "             PROJECT -o FILE.png|.svg|.pdf [--width W] [--height H]\n"
+  "             [--age YEARS] [--theme light|dark]\n"
   "  catalog    list a catalog: materials, pipes, fittings, fluids or aging [--json]\n"
   "\n"
   "Values take units: \"12 L/s\", \"150 gpm\", \"4 in\", \"0.045 mm\", \"20 C\", \"68 F\".\n"
@@ -52,6 +55,7 @@ main (int argc, char **argv)
     { "line", cli_cmd_line },
     { "catalog", cli_cmd_catalog },
     { "eval", cli_cmd_eval },
+    { "render", cli_cmd_render },
   };
 
   /* Messages may be translated; numbers are always written and read in the

@@ -3,12 +3,14 @@
 
 #include "config.h"
 
+#include <glib/gi18n-lib.h>
+
 #include <math.h>
 #include <stdio.h>
 #include <string.h>
 
-#include "rugosa-chart-input.h"
-#include "rugosa-display.h"
+#include "chart/rugosa-chart-input.h"
+#include "model/rugosa-display.h"
 
 char *
 rugosa_chart_input_unit (GSettings  *settings,
@@ -279,17 +281,24 @@ rugosa_chart_input_new (RugosaProject    *project,
       g_ptr_array_add (input->owned, trail);
       cl->trail = trail;
 
-      cl->readout_velocity =
-        _rugosa_chart_input_keep (input, rugosa_display_format (RG_QTY_VELOCITY, design->result.velocity_m_s, u_vel));
+      {
+        g_autofree char *v = rugosa_display_format (RG_QTY_VELOCITY, design->result.velocity_m_s, u_vel);
+        /* TRANSLATORS: mean velocity readout on the chart, e.g. "V 1.42 m/s" */
+        cl->readout_velocity = _rugosa_chart_input_keep (input, g_strdup_printf (_("V %s"), v));
+      }
       {
         /* The gradient is a ratio: head per 100 of the same length unit. */
         g_autofree char *g = rugosa_display_format (RG_QTY_LENGTH, design->result.gradient_m_per_100m, u_head);
         cl->readout_head_per_100m =
-          _rugosa_chart_input_keep (input, g_strdup_printf ("%s/100 %s", g,
+          /* TRANSLATORS: hydraulic gradient readout, e.g. "loss 3.4 m/100 m" */
+          _rugosa_chart_input_keep (input, g_strdup_printf (_("loss %s/100 %s"), g,
                                                             g_strcmp0 (u_head, "ft") == 0 ? "ft" : "m"));
       }
-      cl->readout_head_total =
-        _rugosa_chart_input_keep (input, rugosa_display_format (RG_QTY_LENGTH, design->result.head_loss_total_m, u_head));
+      {
+        g_autofree char *h = rugosa_display_format (RG_QTY_LENGTH, design->result.head_loss_total_m, u_head);
+        /* TRANSLATORS: total head loss of the line (pipe and fittings) */
+        cl->readout_head_total = _rugosa_chart_input_keep (input, g_strdup_printf (_("total %s"), h));
+      }
       cl->selected = ((int) i == selected);
     }
   return input;
