@@ -18,9 +18,15 @@ passed = 0
 failed = 0
 
 
+import os
+
+# The caller's environment (sanitizer options among it), in a fixed locale.
+BASE_ENV = {**os.environ, "LANG": "C.UTF-8", "LC_ALL": "C.UTF-8"}
+
+
 def run(*args):
     p = subprocess.run([CLI, *args], capture_output=True, text=True,
-                       timeout=30, env={"LANG": "C.UTF-8", "PATH": "/usr/bin:/bin"})
+                       timeout=60, env=BASE_ENV)
     return p.returncode, p.stdout, p.stderr
 
 
@@ -185,7 +191,7 @@ env_date = {"SOURCE_DATE_EPOCH": "1764633600"}  # 2025-12-02, a fixed footer dat
 
 
 def run_env(extra, *args):
-    env = {"LANG": "C.UTF-8", "PATH": "/usr/bin:/bin", **extra}
+    env = {**BASE_ENV, **extra}
     p = subprocess.run([CLI, *args], capture_output=True, text=True, timeout=60, env=env)
     return p.returncode, p.stdout, p.stderr
 
