@@ -31,12 +31,31 @@ void
 _rugosa_project_eval_init (RugosaProject *self)
 {
   self->eval_cache = g_hash_table_new_full (NULL, NULL, NULL, g_free);
+  self->pipe_memo = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL);
 }
 
 void
 _rugosa_project_eval_finalize (RugosaProject *self)
 {
   g_clear_pointer (&self->eval_cache, g_hash_table_unref);
+  g_clear_pointer (&self->pipe_memo, g_hash_table_unref);
+}
+
+/* Parsing a designation compares it with every catalog entry; a slider drag
+ * evaluates each line many times with the same text, so remember what a
+ * text resolved to (the catalog is compiled in and never changes). */
+static RgStatus
+lookup_pipe (RugosaProject *self, const char *designation, const RgPipe **pipe,
+             RgError *err)
+{
+  RgStatus st;
+
+  *pipe = g_hash_table_lookup (self->pipe_memo, designation);
+  if (*pipe != NULL)
+    return RG_OK;
+  if ((st = rg_pipe_lookup (designation, pipe, err)) == RG_OK)
+    g_hash_table_insert (self->pipe_memo, g_strdup (designation), (gpointer) *pipe);
+  return st;
 }
 
 void
@@ -174,7 +193,7 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
     {
       const RgPipe *pipe;
 
-      if (rg_pipe_lookup (id, &pipe, &err) != RG_OK)
+      if (lookup_pipe (self, id, &pipe, &err) != RG_OK)
         return line_error (r, err.text);
       diameter = pipe->inner_diameter_m;
     }

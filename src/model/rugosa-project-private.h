@@ -13,6 +13,7 @@ struct _RugosaProject
   RugosaSettings *settings;
   cJSON *extra;               /* unknown top-level file fields */
   GHashTable *eval_cache;     /* RugosaLine* (not a ref) -> EvalEntry* */
+  GHashTable *pipe_memo;      /* designation text -> const RgPipe* (catalog) */
 
   guint64 evaluation_count;
 };
