@@ -35,6 +35,7 @@ C_MARK = re.compile(
     r'(?<![A-Za-z0-9_])(?:_|N_|C_|NC_|ngettext|g_dngettext|g_dpgettext2|g_dcgettext)'
     r'\s*\(\s*(?:[A-Za-z_][A-Za-z0-9_]*\s*,\s*)?"'
     # the core translates inside these (src/core/status.c; po/meson.build)
+    r'|(?<![A-Za-z0-9_])rg_gettext\s*\(\s*"'
     r'|(?<![A-Za-z0-9_])(?:rg_error_set\s*\([^,;()"]*,[^,;()"]*,|rg_warnings_add\s*\([^,;()"]*,)'
     r'\s*"')
 UI_MARK = re.compile(r'translatable\s*=\s*["\']yes["\']')
@@ -52,6 +53,7 @@ XGETTEXT_ARGS = [
     '--flag=g_set_error:4:c-format',
     # po/meson.build adds these for the core
     '--keyword=rg_error_set:3', '--keyword=rg_warnings_add:2',
+    '--keyword=rg_gettext',
 ]
 
 passed = 0

@@ -291,4 +291,5 @@ rugosa_application_init (RugosaApplication *self)
   g_application_add_main_option (G_APPLICATION (self), "version", 0,
                                  G_OPTION_FLAG_NONE, G_OPTION_ARG_NONE,
                                  _("Show the program version and quit"), NULL);
+  g_application_set_option_context_parameter_string (G_APPLICATION (self), _("[PROJECT…]"));
 }

@@ -22,6 +22,12 @@
 #define RG_TRANSLATE(fmt) (fmt)
 #endif
 
+const char *
+rg_gettext (const char *msgid)
+{
+  return RG_TRANSLATE (msgid);
+}
+
 RgStatus
 rg_error_set (RgError *err, RgStatus status, const char *fmt, ...)
 {
