@@ -23,6 +23,7 @@
 #include "rugosa-application.h"
 #include "rugosa-canvas.h"
 #include "rugosa-line-panel.h"
+#include "rugosa-preferences-window.h"
 #include "rugosa-quantity-entry.h"
 #include "rugosa-results-table.h"
 #include "rugosa-window.h"
@@ -224,6 +225,62 @@ test_entry_accepts_both (void)
   close_window (win);
 }
 
+/* Renders `widget` to build/NAME (for a look at the German layout). */
+static void
+save_png (GtkWidget *widget, const char *name)
+{
+  const char *build = g_getenv ("RUGOSA_BUILD_DIR");
+  g_autofree char *path = g_build_filename (build ? build : ".", name, NULL);
+  int w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
+  GdkPaintable *paintable = gtk_widget_paintable_new (widget);
+  GtkSnapshot *snapshot = gtk_snapshot_new ();
+  GskRenderNode *node;
+  GdkTexture *texture;
+
+  g_assert_cmpint (w, >, 0);
+  gdk_paintable_snapshot (paintable, snapshot, w, h);
+  node = gtk_snapshot_free_to_node (snapshot);
+  g_assert_nonnull (node);
+  texture = gsk_renderer_render_texture (gtk_native_get_renderer (gtk_widget_get_native (widget)),
+                                         node, &GRAPHENE_RECT_INIT (0, 0, w, h));
+  g_assert_true (gdk_texture_save_to_png (texture, path));
+  g_test_message ("screenshot: %s", path);
+  g_object_unref (texture);
+  gsk_render_node_unref (node);
+  g_object_unref (paintable);
+}
+
+static void
+test_preferences_german (void)
+{
+  RugosaPreferencesWindow *prefs =
+    rugosa_preferences_window_new (rugosa_application_get_settings (app));
+  g_autoptr (GPtrArray) labels = g_ptr_array_new ();
+  gboolean found = FALSE;
+
+  gtk_window_set_default_size (GTK_WINDOW (prefs), 640, 820);
+  gtk_window_present (GTK_WINDOW (prefs));
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (prefs));
+  drain ();
+  collect_labels (GTK_WIDGET (prefs), labels);
+  for (guint i = 0; i < labels->len; i++)
+    {
+      const char *text = gtk_label_get_label (g_ptr_array_index (labels, i));
+
+      if (text == NULL || *text == '\0')
+        continue;
+      if (g_strcmp0 (text, _("Design limits")) == 0)
+        found = TRUE;
+      if (strcmp (_(text), text) != 0)
+        g_test_fail_printf ("A visible label is still English: \"%s\"", text);
+    }
+  g_assert_cmpstr (_("Design limits"), ==, "Auslegungsgrenzen");
+  g_assert_true (found);
+  save_png (GTK_WIDGET (prefs), "rugosa-preferences-de.png");
+  gtk_window_destroy (GTK_WINDOW (prefs));
+  drain ();
+}
+
 static void
 test_screenshot (void)
 {
@@ -329,6 +386,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/l10n/ui/labels-german", test_labels_german);
   g_test_add_func ("/l10n/ui/results-decimal-comma", test_results_decimal_comma);
   g_test_add_func ("/l10n/ui/entry-accepts-both", test_entry_accepts_both);
+  g_test_add_func ("/l10n/ui/preferences-german", test_preferences_german);
   g_test_add_func ("/l10n/ui/screenshot", test_screenshot);
 
   status = g_test_run ();
