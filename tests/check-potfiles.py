@@ -14,7 +14,10 @@ trees, so a scanner that stopped seeing marks would fail here too.
 Marked strings:
   C sources under src/      _("…"), N_("…"), C_("…"), NC_("…"), ngettext ("…"),
                             g_dngettext, g_dpgettext2, g_dcgettext — outside
-                            comments, with or without a space before "("
+                            comments, with or without a space before "(";
+                            and the format of rg_error_set (err, STATUS, "…")
+                            and rg_warnings_add (w, "…"), which the core
+                            translates
   GtkBuilder files (ui/, src/)  translatable="yes"
   data/*.desktop.in         always (Name, GenericName, Comment, Keywords)
   data/*.metainfo.xml.in    always (name, summary, description)
@@ -30,7 +33,11 @@ import tempfile
 
 C_MARK = re.compile(
     r'(?<![A-Za-z0-9_])(?:_|N_|C_|NC_|ngettext|g_dngettext|g_dpgettext2|g_dcgettext)'
-    r'\s*\(\s*(?:[A-Za-z_][A-Za-z0-9_]*\s*,\s*)?"')
+    r'\s*\(\s*(?:[A-Za-z_][A-Za-z0-9_]*\s*,\s*)?"'
+    # the core translates inside these (src/core/status.c; po/meson.build)
+    r'|(?<![A-Za-z0-9_])rg_gettext\s*\(\s*"'
+    r'|(?<![A-Za-z0-9_])(?:rg_error_set\s*\([^,;()"]*,[^,;()"]*,|rg_warnings_add\s*\([^,;()"]*,)'
+    r'\s*"')
 UI_MARK = re.compile(r'translatable\s*=\s*["\']yes["\']')
 
 # The keywords of Meson's i18n 'glib' preset (mesonbuild/modules/i18n.py).
@@ -44,6 +51,9 @@ XGETTEXT_ARGS = [
     '--flag=g_strdup_printf:1:c-format', '--flag=g_string_printf:2:c-format',
     '--flag=g_string_append_printf:2:c-format', '--flag=g_error_new:3:c-format',
     '--flag=g_set_error:4:c-format',
+    # po/meson.build adds these for the core
+    '--keyword=rg_error_set:3', '--keyword=rg_warnings_add:2',
+    '--keyword=rg_gettext',
 ]
 
 passed = 0
@@ -179,6 +189,11 @@ def self_test():
             'src/model/m.c': 'static const char *k = N_("Water");\n',
             'src/cli/c.c': 'puts (C_("unit", "m"));\n',
         }, ['src/cli/c.c has strings marked', 'src/model/m.c has strings marked']),
+        ('core messages through rg_error_set and rg_warnings_add', {
+            'po/POTFILES.in': '',
+            'src/core/f.c': 'return rg_error_set (err, RG_ERR_DOMAIN,\n    "Re must be positive.");\n',
+            'src/core/g.c': 'rg_warnings_add (w, "Outside the range.");\n',
+        }, ['src/core/f.c has strings marked', 'src/core/g.c has strings marked']),
         ('marks inside comments only', {
             'po/POTFILES.in': '',
             'src/app/a.c': '/* wrap with _("…") */\n// N_("x")\nx = rg_foo_(1);\n',

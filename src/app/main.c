@@ -13,8 +13,12 @@ main (int argc, char *argv[])
 {
   g_autoptr (RugosaApplication) app = NULL;
 
+  const char *localedir = g_getenv ("RUGOSA_LOCALEDIR");
+
+  /* RUGOSA_LOCALEDIR: the build folder's po/ (tests, running uninstalled). */
   setlocale (LC_ALL, "");
-  bindtextdomain (GETTEXT_PACKAGE, LOCALEDIR);
+  bindtextdomain (GETTEXT_PACKAGE,
+                  localedir != NULL && *localedir != '\0' ? localedir : LOCALEDIR);
   bind_textdomain_codeset (GETTEXT_PACKAGE, "UTF-8");
   textdomain (GETTEXT_PACKAGE);
 

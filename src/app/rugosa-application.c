@@ -258,6 +258,18 @@ rugosa_application_dispose (GObject *object)
   G_OBJECT_CLASS (rugosa_application_parent_class)->dispose (object);
 }
 
+static int
+rugosa_application_handle_local_options (GApplication *app,
+                                         GVariantDict *options)
+{
+  if (g_variant_dict_contains (options, "version"))
+    {
+      g_print ("%s %s\n", PACKAGE_NAME, PACKAGE_VERSION);
+      return 0;
+    }
+  return G_APPLICATION_CLASS (rugosa_application_parent_class)->handle_local_options (app, options);
+}
+
 static void
 rugosa_application_class_init (RugosaApplicationClass *klass)
 {
@@ -268,6 +280,7 @@ rugosa_application_class_init (RugosaApplicationClass *klass)
   app_class->activate = rugosa_application_activate;
   app_class->open = rugosa_application_open;
   app_class->startup = rugosa_application_startup;
+  app_class->handle_local_options = rugosa_application_handle_local_options;
 }
 
 static void
@@ -275,4 +288,8 @@ rugosa_application_init (RugosaApplication *self)
 {
   g_action_map_add_action_entries (G_ACTION_MAP (self), app_entries,
                                    G_N_ELEMENTS (app_entries), self);
+  g_application_add_main_option (G_APPLICATION (self), "version", 0,
+                                 G_OPTION_FLAG_NONE, G_OPTION_ARG_NONE,
+                                 _("Show the program version and quit"), NULL);
+  g_application_set_option_context_parameter_string (G_APPLICATION (self), _("[PROJECT…]"));
 }

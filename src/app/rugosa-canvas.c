@@ -286,9 +286,9 @@ rugosa_canvas_pointer_at (RugosaCanvas *self,
       return;
     }
   {
-    g_autofree char *re = rugosa_display_scientific (probe.re, 2);
-    g_autofree char *f = rugosa_display_significant (probe.f, 3);
-    g_autofree char *rr = probe.has_rr ? rugosa_display_scientific (probe.rr, 2) : g_strdup ("—");
+    g_autofree char *re = rugosa_display_scientific_screen (probe.re, 2);
+    g_autofree char *f = rugosa_display_significant_screen (probe.f, 3);
+    g_autofree char *rr = probe.has_rr ? rugosa_display_scientific_screen (probe.rr, 2) : g_strdup ("—");
     const char *where = probe.regime == RG_REGIME_TURBULENT && probe.has_rr
                         ? rugosa_readout_zone (probe.zone)
                         : rugosa_readout_regime (probe.regime);

@@ -440,7 +440,7 @@ _rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
 
     if (res && res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
       {
-        g_autofree char *ksum = rugosa_display_significant (res->points[RUGOSA_FLOW_DESIGN].minor_loss_k_total, 3);
+        g_autofree char *ksum = rugosa_display_significant_screen (res->points[RUGOSA_FLOW_DESIGN].minor_loss_k_total, 3);
         sub = g_strdup_printf (ngettext ("%d item, ΣK %s at the design flow",
                                          "%d items, ΣK %s at the design flow", (int) total),
                                (int) total, ksum);
@@ -630,8 +630,8 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
     {
       g_autofree char *ud = self->settings ? g_settings_get_string (self->settings, "unit-density") : NULL;
       g_autofree char *uv = self->settings ? g_settings_get_string (self->settings, "unit-viscosity") : NULL;
-      g_autofree char *rho = rugosa_display_format (RG_QTY_DENSITY, res->density_kg_m3, ud);
-      g_autofree char *mu = rugosa_display_format (RG_QTY_DYN_VISCOSITY, res->dynamic_viscosity_pa_s, uv);
+      g_autofree char *rho = rugosa_display_format_screen (RG_QTY_DENSITY, res->density_kg_m3, ud);
+      g_autofree char *mu = rugosa_display_format_screen (RG_QTY_DYN_VISCOSITY, res->dynamic_viscosity_pa_s, uv);
       g_autofree char *text = g_strdup_printf (_("ρ = %s · μ = %s"), rho, mu);
 
       adw_action_row_set_subtitle (self->fluid_props_row, text);

@@ -60,7 +60,7 @@ _rugosa_quantity_entry_show (RugosaQuantityEntry *self)
       gtk_editable_set_text (GTK_EDITABLE (self->entry), "");
       return;
     }
-  text = rugosa_display_format (self->quantity, self->value, self->unit);
+  text = rugosa_display_format_screen (self->quantity, self->value, self->unit);
   gtk_editable_set_text (GTK_EDITABLE (self->entry), text);
 }
 
@@ -104,11 +104,13 @@ rugosa_quantity_entry_commit_text (RugosaQuantityEntry *self,
   RgError err = { 0 };
   double si = 0.0;
   g_autofree char *stripped = NULL;
+  g_autofree char *ascii = NULL;   /* "2,5 m" typed under de_DE: "2.5 m" */
 
   g_return_val_if_fail (RUGOSA_IS_QUANTITY_ENTRY (self), FALSE);
 
   stripped = g_strstrip (g_strdup (text ? text : ""));
-  if (rg_units_parse (self->quantity, NULL, stripped, &si, &err) != RG_OK)
+  ascii = rugosa_display_delocalize (stripped);
+  if (rg_units_parse (self->quantity, NULL, ascii, &si, &err) != RG_OK)
     {
       /* The last valid value stays in force; only the field is marked. */
       if (text != gtk_editable_get_text (GTK_EDITABLE (self->entry)))
@@ -147,7 +149,7 @@ _rugosa_quantity_entry_focus_leave (GtkEventControllerFocus *focus,
 
   /* Leaving an untouched field must not re-commit a rounded display value. */
   if (self->has_value)
-    shown = rugosa_display_format (self->quantity, self->value, self->unit);
+    shown = rugosa_display_format_screen (self->quantity, self->value, self->unit);
   if (g_strcmp0 (shown, text) == 0)
     return;
   rugosa_quantity_entry_commit_text (self, text);

@@ -51,7 +51,7 @@ rugosa_readout_change (double ratio_to_new)
   if (!isfinite (ratio_to_new) || ratio_to_new <= 0.0)
     return g_strdup ("—");
   g_ascii_formatd (buf, sizeof buf, "%+.1f", (ratio_to_new - 1.0) * 100.0);
-  return g_strdup_printf ("%s %%", buf);
+  return rugosa_display_localize (g_strdup_printf ("%s %%", buf));
 }
 
 static char *
@@ -89,18 +89,18 @@ rugosa_readout_line_full (RugosaProject *project,
       return g_string_free (s, FALSE);
     }
 
-  flow = rugosa_display_format (RG_QTY_FLOW, p->flow_m3_s, uf);
-  vel = rugosa_display_format (RG_QTY_VELOCITY, p->result.velocity_m_s, uv);
-  head = rugosa_display_format (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
-  newhead = rugosa_display_format (RG_QTY_LENGTH, p->result_new.head_loss_total_m, uh);
-  dp = rugosa_display_format (RG_QTY_PRESSURE, p->result.pressure_drop_pa, up);
-  grad = rugosa_display_significant (p->result.gradient_m_per_100m, 3);
-  re = rugosa_display_significant (p->result.reynolds, 4);
-  f = rugosa_display_significant (p->result.friction.f, 4);
-  rr = rugosa_display_significant (p->result.relative_roughness, 3);
+  flow = rugosa_display_format_screen (RG_QTY_FLOW, p->flow_m3_s, uf);
+  vel = rugosa_display_format_screen (RG_QTY_VELOCITY, p->result.velocity_m_s, uv);
+  head = rugosa_display_format_screen (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
+  newhead = rugosa_display_format_screen (RG_QTY_LENGTH, p->result_new.head_loss_total_m, uh);
+  dp = rugosa_display_format_screen (RG_QTY_PRESSURE, p->result.pressure_drop_pa, up);
+  grad = rugosa_display_significant_screen (p->result.gradient_m_per_100m, 3);
+  re = rugosa_display_significant_screen (p->result.reynolds, 4);
+  f = rugosa_display_significant_screen (p->result.friction.f, 4);
+  rr = rugosa_display_significant_screen (p->result.relative_roughness, 3);
   change = rugosa_readout_change (p->head_loss_ratio_to_new);
 
-  age = rugosa_display_significant (res->age_years, 3);
+  age = rugosa_display_significant_screen (res->age_years, 3);
   g_string_append_printf (s, _("Design flow %s after %s years of service\n"), flow, age);
   g_string_append_printf (s, _("Velocity %s\n"), vel);
   g_string_append_printf (s, _("Reynolds number %s, ε/D %s\n"), re, rr);

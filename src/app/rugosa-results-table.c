@@ -114,12 +114,12 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
   if (g_strcmp0 (column, "flow") == 0)
     {
       g_autofree char *u = _unit (self, "unit-flow");
-      return rugosa_display_number (RG_QTY_FLOW, p->flow_m3_s, u);
+      return rugosa_display_number_screen (RG_QTY_FLOW, p->flow_m3_s, u);
     }
   if (g_strcmp0 (column, "velocity") == 0)
     {
       g_autofree char *u = _unit (self, "unit-velocity");
-      return rugosa_display_number (RG_QTY_VELOCITY, r->velocity_m_s, u);
+      return rugosa_display_number_screen (RG_QTY_VELOCITY, r->velocity_m_s, u);
     }
   if (g_strcmp0 (column, "reynolds") == 0)
     {
@@ -127,7 +127,7 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
       return g_strdup (g_ascii_formatd (buf, sizeof buf, "%.0f", r->reynolds));
     }
   if (g_strcmp0 (column, "f") == 0)
-    return rugosa_display_significant (r->friction.f, 4);
+    return rugosa_display_significant_screen (r->friction.f, 4);
   if (g_strcmp0 (column, "regime") == 0)
     return g_strdup (rugosa_readout_regime (r->friction.regime));
   if (g_strcmp0 (column, "zone") == 0)
@@ -135,18 +135,18 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
   if (g_strcmp0 (column, "head-loss") == 0)
     {
       g_autofree char *u = _unit (self, "unit-head");
-      return rugosa_display_number (RG_QTY_LENGTH, r->head_loss_total_m, u);
+      return rugosa_display_number_screen (RG_QTY_LENGTH, r->head_loss_total_m, u);
     }
   if (g_strcmp0 (column, "pressure-drop") == 0)
     {
       g_autofree char *u = _unit (self, "unit-pressure");
-      return rugosa_display_number (RG_QTY_PRESSURE, r->pressure_drop_pa, u);
+      return rugosa_display_number_screen (RG_QTY_PRESSURE, r->pressure_drop_pa, u);
     }
   if (g_strcmp0 (column, "gradient") == 0)
     /* m per 100 m and ft per 100 ft are the same ratio. */
-    return rugosa_display_significant (r->gradient_m_per_100m, 3);
+    return rugosa_display_significant_screen (r->gradient_m_per_100m, 3);
   if (g_strcmp0 (column, "elasticity") == 0)
-    return rugosa_display_significant (r->friction.roughness_elasticity, 3);
+    return rugosa_display_significant_screen (r->friction.roughness_elasticity, 3);
   if (g_strcmp0 (column, "change") == 0)
     return rugosa_readout_change (p->head_loss_ratio_to_new);
   return g_strdup ("");

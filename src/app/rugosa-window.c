@@ -199,8 +199,8 @@ _rugosa_window_update_row (RugosaWindow *self,
       const RugosaOperatingPoint *p = &res->points[RUGOSA_FLOW_DESIGN];
       g_autofree char *uv = g_settings_get_string (self->settings, "unit-velocity");
       g_autofree char *uh = g_settings_get_string (self->settings, "unit-head");
-      g_autofree char *v = rugosa_display_format (RG_QTY_VELOCITY, p->result.velocity_m_s, uv);
-      g_autofree char *h = rugosa_display_format (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
+      g_autofree char *v = rugosa_display_format_screen (RG_QTY_VELOCITY, p->result.velocity_m_s, uv);
+      g_autofree char *h = rugosa_display_format_screen (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
 
       sub = g_strdup_printf (_("%s · loss %s"), v, h);
     }
@@ -323,7 +323,7 @@ _rugosa_window_update_age_summary (RugosaWindow *self)
   RugosaSettings *ps = rugosa_project_get_settings (self->project);
   double age = rugosa_settings_get_double (ps, "service-age");
   RugosaLine *line = _rugosa_window_selected_line (self);
-  g_autofree char *years = rugosa_display_significant (age, 3);
+  g_autofree char *years = rugosa_display_significant_screen (age, 3);
   g_autofree char *age_text = g_strdup_printf (ngettext ("%s year", "%s years", age == 1.0 ? 1 : 2), years);
 
   gtk_inscription_set_text (self->age_label, age_text);
@@ -335,7 +335,7 @@ _rugosa_window_update_age_summary (RugosaWindow *self)
         {
           const RugosaOperatingPoint *p = &res->points[RUGOSA_FLOW_DESIGN];
           g_autofree char *uh = g_settings_get_string (self->settings, "unit-head");
-          g_autofree char *h = rugosa_display_format (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
+          g_autofree char *h = rugosa_display_format_screen (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
           g_autofree char *change = rugosa_readout_change (p->head_loss_ratio_to_new);
           g_autofree char *text = g_strdup_printf (_("%s: head loss %s, %s vs new"),
                                                    rugosa_line_get_name (line), h, change);

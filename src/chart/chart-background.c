@@ -14,6 +14,7 @@
  * any common colour-vision deficiency and in greyscale print. */
 #include "chart-private.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 #include <stdio.h>
 #include <string.h>
@@ -529,12 +530,12 @@ draw_axes (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
       }
 
   /* Axis titles. */
-  PangoLayout *tx = _rugosa_chart_text (chart, "Reynolds number  Re = ρVD/μ  [–]",
+  PangoLayout *tx = _rugosa_chart_text (chart, _("Reynolds number  Re = ρVD/μ  [–]"),
                                         lay->font_title, TEXT_PLAIN, 0);
   _rugosa_chart_text_size (tx, &w, &h);
   _rugosa_chart_show (cr, tx, pl->x + (pl->width - w) / 2,
                       pl->y + pl->height + 7 * k + lay->font_tick * 1.35, &p->ink, NULL, 0);
-  PangoLayout *ty = _rugosa_chart_text (chart, "Darcy friction factor  f  [–]",
+  PangoLayout *ty = _rugosa_chart_text (chart, _("Darcy friction factor  f  [–]"),
                                         lay->font_title, TEXT_PLAIN, 0);
   _rugosa_chart_text_size (ty, &w, &h);
   show_turned (cr, ty, 8 * k + h / 2, pl->y + pl->height / 2, -G_PI / 2, &p->ink, NULL, 0);
@@ -542,8 +543,8 @@ draw_axes (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
   /* Caption: what the curves and zones are. */
   PangoLayout *cap = _rugosa_chart_text (
       chart,
-      "Colebrook (1939) curves by relative roughness ε/D  ·  "
-      "roughness zones where ε⁺ = Re·(ε/D)·√(f/8) crosses 5 and 70",
+      _("Colebrook (1939) curves by relative roughness ε/D  ·  "
+        "roughness zones where ε⁺ = Re·(ε/D)·√(f/8) crosses 5 and 70"),
       lay->font_tick, TEXT_PLAIN, 0);
   _rugosa_chart_text_size (cap, &w, &h);
   if (w < lay->width - pl->x - 160 * k)
@@ -662,10 +663,10 @@ draw_laminar (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p,
   _rugosa_chart_xy (lay, re_b, 64.0 / re_b, &x1, &y1);
   const double seg = hypot (x1 - x0, y1 - y0);
   const double angle = atan2 (y1 - y0, x1 - x0);
-  static const char *const TEXTS[] = { "laminar  f = 64/Re", "f = 64/Re" };
+  static const char *const TEXTS[] = { N_("laminar  f = 64/Re"), "f = 64/Re" };
   for (size_t i = 0; i < G_N_ELEMENTS (TEXTS); i++)
     {
-      PangoLayout *l = _rugosa_chart_text (chart, TEXTS[i], lay->font_curve, TEXT_PLAIN, 0);
+      PangoLayout *l = _rugosa_chart_text (chart, _(TEXTS[i]), lay->font_curve, TEXT_PLAIN, 0);
       double w, h;
       _rugosa_chart_text_size (l, &w, &h);
       if (w > 0.9 * seg)
@@ -703,7 +704,7 @@ draw_curve_labels (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p,
         char num[32], text[48];
         _rugosa_chart_format_rr (c->rr, num, sizeof num);
         if (c->rr == 0)
-          snprintf (text, sizeof text, "smooth pipe");
+          snprintf (text, sizeof text, "%s", _("smooth pipe"));
         else
           snprintf (text, sizeof text, "ε/D %s", num);
         PangoLayout *l = _rugosa_chart_text (chart, text, lay->font_curve,
@@ -804,11 +805,11 @@ draw_band_labels (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p,
   const ChartLayout *lay = &chart->lay;
   const RugosaChartRect *pl = &lay->plot;
   static const BandName BANDS[] = {
-    { "laminar", RG_REGIME_LAMINAR, RG_ZONE_NONE },
-    { "transitional", RG_REGIME_TRANSITIONAL, RG_ZONE_NONE },
-    { "fully rough", RG_REGIME_TURBULENT, RG_ZONE_FULLY_ROUGH },
-    { "transitionally rough", RG_REGIME_TURBULENT, RG_ZONE_TRANSITIONALLY_ROUGH },
-    { "hydraulically smooth", RG_REGIME_TURBULENT, RG_ZONE_SMOOTH },
+    { N_("laminar"), RG_REGIME_LAMINAR, RG_ZONE_NONE },
+    { N_("transitional"), RG_REGIME_TRANSITIONAL, RG_ZONE_NONE },
+    { N_("fully rough"), RG_REGIME_TURBULENT, RG_ZONE_FULLY_ROUGH },
+    { N_("transitionally rough"), RG_REGIME_TURBULENT, RG_ZONE_TRANSITIONALLY_ROUGH },
+    { N_("hydraulically smooth"), RG_REGIME_TURBULENT, RG_ZONE_SMOOTH },
   };
   double x_lam, x_turb;
   band_edges (chart, &x_lam, &x_turb);
@@ -818,7 +819,7 @@ draw_band_labels (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p,
   for (size_t bi = 0; bi < G_N_ELEMENTS (BANDS); bi++)
     {
       const BandName *b = &BANDS[bi];
-      PangoLayout *l = _rugosa_chart_text (chart, b->text, lay->font_band, TEXT_CAPS, 0);
+      PangoLayout *l = _rugosa_chart_text (chart, _(b->text), lay->font_band, TEXT_CAPS, 0);
       double w, h, px, py, yy;
       _rugosa_chart_text_size (l, &w, &h);
 

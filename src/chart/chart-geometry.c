@@ -24,6 +24,7 @@
  * RG_EPS_PLUS_FULLY_ROUGH_MIN from the core. */
 #include "chart-private.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 #include <stdio.h>
 #include <stdlib.h>
@@ -123,7 +124,7 @@ _rugosa_chart_layout (const RugosaChartSpec *spec, ChartLayout *lay)
   if (spec->footer_date[0] != '\0')
     {
       /* The footer wraps; DejaVu Sans averages under 0.62 em per character. */
-      const double chars = strlen (RUGOSA_CHART_CAUTION) + 24.0;
+      const double chars = g_utf8_strlen (_(RUGOSA_CHART_CAUTION), -1) + 24.0;
       const double per_line = fmax (1.0, (w - 32.0 * k) / (0.62 * lay->font_footer));
       const double lines = ceil (chars / per_line);
       lay->footer_h = lines * lay->font_footer * 1.3 + 12.0 * k;
@@ -234,7 +235,7 @@ _rugosa_chart_format_rr (double rr, char *buf, size_t size)
 {
   if (rr <= 0)
     {
-      snprintf (buf, size, "smooth");
+      snprintf (buf, size, "%s", _("smooth"));
       return;
     }
   /* Plain decimals with three significant digits at most, trailing zeros

@@ -12,6 +12,7 @@
  * still names the line).  Markers themselves never move: they are data. */
 #include "chart-private.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 #include <stdio.h>
 #include <string.h>
@@ -597,7 +598,7 @@ draw_legend (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
       int is_more = i == rows - 1 && chart->n_lines > rows;
       if (is_more)
         {
-          snprintf (more, sizeof more, "+ %zu more", chart->n_lines - rows + 1);
+          snprintf (more, sizeof more, _("+ %zu more"), chart->n_lines - rows + 1);
           name = more;
         }
       else
@@ -705,7 +706,7 @@ _rugosa_chart_draw_footer (RugosaChart *chart, cairo_t *cr)
   if (chart->spec.footer_date[0] == '\0')
     return;
   rugosa_chart_palette (chart->spec.theme, &p);
-  snprintf (text, sizeof text, "%s  ·  %s", RUGOSA_CHART_CAUTION,
+  snprintf (text, sizeof text, "%s  ·  %s", _(RUGOSA_CHART_CAUTION),
             chart->spec.footer_date);
   const double k = lay->k;
   PangoLayout *l = _rugosa_chart_text (chart, text, lay->font_footer, TEXT_PLAIN,

@@ -8,6 +8,7 @@
  * (age, selection, hover) blits that surface and redraws the overlay. */
 #include "chart-private.h"
 
+#include <glib/gi18n-lib.h>
 #include <math.h>
 #include <stdio.h>
 #include <stdlib.h>
@@ -16,10 +17,11 @@
 #include <cairo-pdf.h>
 #include <cairo-svg.h>
 
+/* Marked for translation; shown through _() where drawn. */
 const char *const RUGOSA_CHART_CAUTION =
-  "Estimates from published correlations, valid only inside their stated "
-  "ranges. Check designs against local codes and have them reviewed by a "
-  "qualified, licensed engineer.";
+  N_("Estimates from published correlations, valid only inside their stated "
+     "ranges. Check designs against local codes and have them reviewed by a "
+     "qualified, licensed engineer.");
 
 /* The text cache is dropped when it grows past this many layouts (an age
  * slider makes new readout strings at every step). */
@@ -395,7 +397,7 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
   if (s.footer_date[0] == '\0')
     {
       g_set_error (error, RUGOSA_CHART_ERROR, RUGOSA_CHART_ERROR_INVALID,
-                   "An exported chart needs a date for its footer.");
+                   _("An exported chart needs a date for its footer."));
       return FALSE;
     }
   if (rugosa_chart_spec_check (&s, &err) != RG_OK)
@@ -419,7 +421,7 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
       if (cairo_surface_status (surface) == CAIRO_STATUS_SUCCESS)
         {
           cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_TITLE,
-                                          "Friction chart");
+                                          _("Friction chart"));
           cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_CREATOR,
                                           "Rugosa");
           /* the caller's date, so that output is reproducible */
@@ -457,7 +459,7 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
   if (cst != CAIRO_STATUS_SUCCESS)
     {
       g_set_error (error, RUGOSA_CHART_ERROR, RUGOSA_CHART_ERROR_WRITE,
-                   "Could not write the chart to “%s”: %s.", path,
+                   _("Could not write the chart to “%s”: %s."), path,
                    cairo_status_to_string (cst));
       return FALSE;
     }

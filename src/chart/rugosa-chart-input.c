@@ -282,20 +282,21 @@ rugosa_chart_input_new (RugosaProject    *project,
       cl->trail = trail;
 
       {
-        g_autofree char *v = rugosa_display_format (RG_QTY_VELOCITY, design->result.velocity_m_s, u_vel);
-        /* TRANSLATORS: mean velocity readout on the chart, e.g. "V 1.42 m/s" */
+        g_autofree char *v = rugosa_display_format_screen (RG_QTY_VELOCITY, design->result.velocity_m_s, u_vel);
+        /* TRANSLATORS: mean velocity readout on the chart, e.g. "V 1.42 m/s"; the
+         * number follows the locale (the screen variant of rugosa-display) */
         cl->readout_velocity = _rugosa_chart_input_keep (input, g_strdup_printf (_("V %s"), v));
       }
       {
         /* The gradient is a ratio: head per 100 of the same length unit. */
-        g_autofree char *g = rugosa_display_format (RG_QTY_LENGTH, design->result.gradient_m_per_100m, u_head);
+        g_autofree char *g = rugosa_display_format_screen (RG_QTY_LENGTH, design->result.gradient_m_per_100m, u_head);
         cl->readout_head_per_100m =
           /* TRANSLATORS: hydraulic gradient readout, e.g. "loss 3.4 m/100 m" */
           _rugosa_chart_input_keep (input, g_strdup_printf (_("loss %s/100 %s"), g,
                                                             g_strcmp0 (u_head, "ft") == 0 ? "ft" : "m"));
       }
       {
-        g_autofree char *h = rugosa_display_format (RG_QTY_LENGTH, design->result.head_loss_total_m, u_head);
+        g_autofree char *h = rugosa_display_format_screen (RG_QTY_LENGTH, design->result.head_loss_total_m, u_head);
         /* TRANSLATORS: total head loss of the line (pipe and fittings) */
         cl->readout_head_total = _rugosa_chart_input_keep (input, g_strdup_printf (_("total %s"), h));
       }

@@ -53,7 +53,7 @@ cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
       if (opt == NULL)
         {
           g_string_printf (message,
-                           "Unknown option %s for '%s'; see 'rugosa-cli %s --help'.",
+                           _("Unknown option %s for '%s'; see 'rugosa-cli %s --help'."),
                            name, command, command);
           return FALSE;
         }
@@ -61,26 +61,26 @@ cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
         {
           if (i + 1 >= argc)
             {
-              g_string_printf (message, "Option %s needs a value.", name);
+              g_string_printf (message, _("Option %s needs a value."), name);
               return FALSE;
             }
           value = argv[++i];
         }
       else if (!opt->has_value && value != NULL)
         {
-          g_string_printf (message, "Option %s takes no value.", name);
+          g_string_printf (message, _("Option %s takes no value."), name);
           return FALSE;
         }
       if (value != NULL && !g_utf8_validate (value, -1, NULL))
         {
-          g_string_printf (message, "The value of %s is not valid UTF-8 text.", name);
+          g_string_printf (message, _("The value of %s is not valid UTF-8 text."), name);
           return FALSE;
         }
 
       GPtrArray *list = g_hash_table_lookup (args->values, name);
       if (list != NULL && !opt->repeatable)
         {
-          g_string_printf (message, "Option %s is given more than once.", name);
+          g_string_printf (message, _("Option %s is given more than once."), name);
           return FALSE;
         }
       if (list == NULL)
@@ -142,7 +142,7 @@ cli_fail (const char *fmt, ...)
 int
 cli_fail_error (const RgError *err)
 {
-  return cli_fail ("%s", err->text[0] != '\0' ? err->text : "The computation failed.");
+  return cli_fail ("%s", err->text[0] != '\0' ? err->text : _("The computation failed."));
 }
 
 const char *
@@ -152,7 +152,7 @@ cli_require (const CliArgs *args, const char *name, const char *hint,
   const char *v = cli_args_get (args, name);
 
   if (v == NULL)
-    g_string_printf (message, "%s is required: %s.", name, hint);
+    g_string_printf (message, _("%s is required: %s."), name, hint);
   return v;
 }
 
@@ -167,7 +167,7 @@ cli_parse_number (const char *what, const char *text, double *out,
     text++;
   if (*text == '\0')
     {
-      g_string_printf (message, "%s needs a number; the value is empty.", what);
+      g_string_printf (message, _("%s needs a number; the value is empty."), what);
       return FALSE;
     }
   v = g_ascii_strtod (text, &end);
@@ -175,12 +175,12 @@ cli_parse_number (const char *what, const char *text, double *out,
     end++;
   if (end == text || (end != NULL && *end != '\0'))
     {
-      g_string_printf (message, "%s needs a plain number, not \"%s\".", what, text);
+      g_string_printf (message, _("%s needs a plain number, not \"%s\"."), what, text);
       return FALSE;
     }
   if (!isfinite (v))
     {
-      g_string_printf (message, "%s must be a finite number, not \"%s\".", what, text);
+      g_string_printf (message, _("%s must be a finite number, not \"%s\"."), what, text);
       return FALSE;
     }
   *out = v;

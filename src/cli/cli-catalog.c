@@ -156,7 +156,7 @@ fittings (GString *out, gboolean json)
         }
     }
   if (!json)
-    g_string_append (out, "\nUse --fitting NAME[xCOUNT]; a plain coefficient as --fitting \"K=0.8x2\".\n");
+    g_string_append (out, _("\nUse --fitting NAME[xCOUNT]; a plain coefficient as --fitting \"K=0.8x2\".\n"));
   list_end (out, json);
 }
 
@@ -242,7 +242,7 @@ cli_cmd_catalog (int argc, char **argv)
   if (!cli_args_parse (&args, "catalog", catalog_options, argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len != 1)
-    return cli_fail ("'catalog' needs one of: materials, pipes, fittings, fluids, aging.");
+    return cli_fail (_("'catalog' needs one of: materials, pipes, fittings, fluids, aging."));
 
   const char *which = g_ptr_array_index (args.positional, 0);
   for (gsize i = 0; i < G_N_ELEMENTS (lists); i++)
@@ -252,5 +252,5 @@ cli_cmd_catalog (int argc, char **argv)
         fputs (out->str, stdout);
         return fflush (stdout) == 0 ? CLI_EXIT_OK : CLI_EXIT_FAILURE;
       }
-  return cli_fail ("Unknown catalog \"%s\": use materials, pipes, fittings, fluids or aging.", which);
+  return cli_fail (_("Unknown catalog \"%s\": use materials, pipes, fittings, fluids or aging."), which);
 }

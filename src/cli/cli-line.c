@@ -44,7 +44,7 @@ parse_positive (const CliArgs *args, const char *name, RgQuantity q,
   if (allow_zero ? *si < 0.0 : *si <= 0.0)
     {
       rg_error_set (err, RG_ERR_DOMAIN, "%s must be %s, e.g. %s \"%s\".", name,
-                    allow_zero ? "zero or greater" : "greater than zero", name, example);
+                    allow_zero ? _("zero or greater") : _("greater than zero"), name, example);
       return FALSE;
     }
   return TRUE;
@@ -86,18 +86,18 @@ cli_cmd_friction (int argc, char **argv)
   if (!cli_args_parse (&args, "friction", friction_options, argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len > 0)
-    return cli_fail ("Unexpected argument \"%s\" for 'friction'.",
+    return cli_fail (_("Unexpected argument \"%s\" for 'friction'."),
                      (char *) g_ptr_array_index (args.positional, 0));
-  if ((re_text = cli_require (&args, "--re", "give the Reynolds number, e.g. --re 1e5", msg)) == NULL
-      || (rr_text = cli_require (&args, "--rr", "give the relative roughness ε/D, e.g. --rr 0.0002", msg)) == NULL)
+  if ((re_text = cli_require (&args, "--re", _("give the Reynolds number, e.g. --re 1e5"), msg)) == NULL
+      || (rr_text = cli_require (&args, "--rr", _("give the relative roughness ε/D, e.g. --rr 0.0002"), msg)) == NULL)
     return cli_fail ("%s", msg->str);
   if (!cli_parse_number ("--re", re_text, &re, msg)
       || !cli_parse_number ("--rr", rr_text, &rr, msg))
     return cli_fail ("%s", msg->str);
   if (!(re > 0.0 && re <= RG_FRICTION_RE_MAX))
-    return cli_fail ("--re must lie between 0 (exclusive) and %g.", RG_FRICTION_RE_MAX);
+    return cli_fail (_("--re must lie between 0 (exclusive) and %g."), RG_FRICTION_RE_MAX);
   if (!(rr >= 0.0 && rr <= RG_FRICTION_RR_MAX))
-    return cli_fail ("--rr must lie between 0 and %g.", RG_FRICTION_RR_MAX);
+    return cli_fail (_("--rr must lie between 0 and %g."), RG_FRICTION_RR_MAX);
   if (!parse_model (&args, &model, &err))
     return cli_fail_error (&err);
   if (rg_friction_point (model, NULL, re, rr, &pt, &err) != RG_OK)
@@ -127,16 +127,16 @@ cli_cmd_friction (int argc, char **argv)
       char buf[G_ASCII_DTOSTR_BUF_SIZE];
       /* f first, alone on the first line, with 17 significant digits */
       g_string_append_printf (out, "%s\n", cli_format_exact (pt.f, buf, sizeof buf));
-      cli_table_row (out, "model", rg_friction_model_title (model), NULL);
-      cli_table_row (out, "regime", rg_regime_id (pt.regime), NULL);
+      cli_table_row (out, _("model"), rg_friction_model_title (model), NULL);
+      cli_table_row (out, _("regime"), rg_regime_id (pt.regime), NULL);
       if (pt.has_laminar)
-        cli_table_number (out, "laminar value (64/Re)", pt.f_laminar, NULL);
+        cli_table_number (out, _("laminar value (64/Re)"), pt.f_laminar, NULL);
       if (pt.regime == RG_REGIME_TURBULENT)
         {
-          cli_table_row (out, "roughness zone", rg_roughness_zone_id (pt.zone), NULL);
-          cli_table_number (out, "roughness Reynolds ε⁺", pt.eps_plus, NULL);
+          cli_table_row (out, _("roughness zone"), rg_roughness_zone_id (pt.zone), NULL);
+          cli_table_number (out, _("roughness Reynolds ε⁺"), pt.eps_plus, NULL);
         }
-      cli_table_number (out, "∂ln f/∂ln(ε/D)", pt.roughness_elasticity, NULL);
+      cli_table_number (out, _("∂ln f/∂ln(ε/D)"), pt.roughness_elasticity, NULL);
     }
   return finish_output (out);
 }
@@ -312,7 +312,7 @@ cli_cmd_fluid (int argc, char **argv)
   if (!cli_args_parse (&args, "fluid", fluid_options, argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len != 1)
-    return cli_fail ("'fluid' needs exactly one fluid name: water, seawater, oil, air or custom.");
+    return cli_fail (_("'fluid' needs exactly one fluid name: water, seawater, oil, air or custom."));
   if (!fluid_from_args (&args, g_ptr_array_index (args.positional, 0), &spec, &err))
     return cli_fail_error (&err);
   rg_warnings_clear (&warnings);
@@ -335,11 +335,11 @@ cli_cmd_fluid (int argc, char **argv)
     }
   else
     {
-      cli_table_number (out, "density", props.density_kg_m3, "kg/m³");
-      cli_table_number (out, "dynamic viscosity", props.dynamic_viscosity_pa_s, "Pa·s");
-      cli_table_number (out, "kinematic viscosity", props.kinematic_viscosity_m2_s, "m²/s");
+      cli_table_number (out, _("density"), props.density_kg_m3, "kg/m³");
+      cli_table_number (out, _("dynamic viscosity"), props.dynamic_viscosity_pa_s, "Pa·s");
+      cli_table_number (out, _("kinematic viscosity"), props.kinematic_viscosity_m2_s, "m²/s");
       for (int i = 0; i < warnings.count; i++)
-        g_string_append_printf (out, "warning: %s\n", warnings.text[i]);
+        g_string_append_printf (out, _("warning: %s\n"), warnings.text[i]);
     }
   return finish_output (out);
 }
@@ -529,12 +529,12 @@ cli_cmd_line (int argc, char **argv)
   if (!cli_args_parse (&args, "line", line_options, argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len > 0)
-    return cli_fail ("Unexpected argument \"%s\" for 'line'.",
+    return cli_fail (_("Unexpected argument \"%s\" for 'line'."),
                      (char *) g_ptr_array_index (args.positional, 0));
 
   /* Pipe: catalog designation or inner diameter (not both). */
   if (cli_args_has (&args, "--pipe") && cli_args_has (&args, "--diameter"))
-    return cli_fail ("Give either --pipe (a catalog designation) or --diameter (an inner diameter), not both.");
+    return cli_fail (_("Give either --pipe (a catalog designation) or --diameter (an inner diameter), not both."));
   if (cli_args_has (&args, "--pipe"))
     {
       if (rg_pipe_lookup (cli_args_get (&args, "--pipe"), &pipe, &err) != RG_OK)
@@ -542,13 +542,13 @@ cli_cmd_line (int argc, char **argv)
       in.diameter_m = pipe->inner_diameter_m;
     }
   else if (!cli_args_has (&args, "--diameter"))
-    return cli_fail ("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\".");
+    return cli_fail (_("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\"."));
   else if (!parse_positive (&args, "--diameter", RG_QTY_LENGTH, FALSE, "102.3 mm", &in.diameter_m, &err))
     return cli_fail_error (&err);
 
   /* Roughness: a value, a material, or the pipe's usual material. */
   if (cli_args_has (&args, "--roughness") && cli_args_has (&args, "--material"))
-    return cli_fail ("Give either --roughness (a value) or --material (a catalog name), not both.");
+    return cli_fail (_("Give either --roughness (a value) or --material (a catalog name), not both."));
   if (cli_args_has (&args, "--roughness"))
     {
       if (!parse_positive (&args, "--roughness", RG_QTY_ROUGHNESS, TRUE, "0.045 mm", &in.roughness_m, &err))
@@ -560,18 +560,18 @@ cli_cmd_line (int argc, char **argv)
       if (name == NULL && pipe != NULL)
         name = pipe->material_id;
       if (name == NULL)
-        return cli_fail ("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material.");
+        return cli_fail (_("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material."));
       if (rg_material_lookup (name, &material, &err) != RG_OK)
         return cli_fail_error (&err);
       in.roughness_m = material->roughness_m;
     }
 
   if (!cli_args_has (&args, "--flow"))
-    return cli_fail ("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\".");
+    return cli_fail (_("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\"."));
   if (!parse_positive (&args, "--flow", RG_QTY_FLOW, FALSE, "12 L/s", &in.flow_m3_s, &err))
     return cli_fail_error (&err);
   if (!cli_args_has (&args, "--length"))
-    return cli_fail ("--length is required: give the line length, e.g. --length \"250 m\".");
+    return cli_fail (_("--length is required: give the line length, e.g. --length \"250 m\"."));
   if (!parse_positive (&args, "--length", RG_QTY_LENGTH, FALSE, "250 m", &in.length_m, &err))
     return cli_fail_error (&err);
   if (cli_args_has (&args, "--elevation")
@@ -582,7 +582,7 @@ cli_cmd_line (int argc, char **argv)
       if (!cli_parse_number ("--k-sum", cli_args_get (&args, "--k-sum"), &k_extra, msg))
         return cli_fail ("%s", msg->str);
       if (!(k_extra >= 0.0 && k_extra <= 1.0e5))
-        return cli_fail ("--k-sum must lie between 0 and 100000.");
+        return cli_fail (_("--k-sum must lie between 0 and 100000."));
     }
   if (!parse_model (&args, &in.model, &err))
     return cli_fail_error (&err);
@@ -597,7 +597,7 @@ cli_cmd_line (int argc, char **argv)
 
   /* Aging */
   if (cli_args_has (&args, "--age") && !cli_args_has (&args, "--aging"))
-    return cli_fail ("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog materials') or a rate such as \"0.05 mm/yr\".");
+    return cli_fail (_("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog materials') or a rate such as \"0.05 mm/yr\"."));
   if (cli_args_has (&args, "--age") && !parse_age (cli_args_get (&args, "--age"), &age, &err))
     return cli_fail_error (&err);
   if (cli_args_has (&args, "--aging") && !parse_aging (cli_args_get (&args, "--aging"), &rate, &err))
@@ -605,7 +605,7 @@ cli_cmd_line (int argc, char **argv)
 
   /* Fluid */
   if ((fluid = cli_args_get (&args, "--fluid")) == NULL)
-    return cli_fail ("--fluid is required: water, seawater, oil, air or custom.");
+    return cli_fail (_("--fluid is required: water, seawater, oil, air or custom."));
   if (!fluid_from_args (&args, fluid, &spec, &err))
     return cli_fail_error (&err);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
@@ -680,36 +680,36 @@ cli_cmd_line (int argc, char **argv)
   else
     {
       if (pipe != NULL)
-        cli_table_row (out, "pipe", pipe->designation, NULL);
+        cli_table_row (out, _("pipe"), pipe->designation, NULL);
       if (material != NULL)
-        cli_table_row (out, "material", material->name, NULL);
-      cli_table_number (out, "inner diameter", in.diameter_m * 1e3, "mm");
-      cli_table_number (out, "roughness", aged.roughness_m * 1e3, "mm");
+        cli_table_row (out, _("material"), material->name, NULL);
+      cli_table_number (out, _("inner diameter"), in.diameter_m * 1e3, "mm");
+      cli_table_number (out, _("roughness"), aged.roughness_m * 1e3, "mm");
       if (age > 0.0)
-        cli_table_number (out, "roughness when new", in.roughness_m * 1e3, "mm");
-      cli_table_number (out, "density", props.density_kg_m3, "kg/m³");
-      cli_table_number (out, "dynamic viscosity", props.dynamic_viscosity_pa_s, "Pa·s");
-      cli_table_number (out, "velocity", r->velocity_m_s, "m/s");
-      cli_table_number (out, "Reynolds number", r->reynolds, NULL);
-      cli_table_number (out, "relative roughness ε/D", r->relative_roughness, NULL);
-      cli_table_number (out, "friction factor (Darcy)", r->friction.f, NULL);
+        cli_table_number (out, _("roughness when new"), in.roughness_m * 1e3, "mm");
+      cli_table_number (out, _("density"), props.density_kg_m3, "kg/m³");
+      cli_table_number (out, _("dynamic viscosity"), props.dynamic_viscosity_pa_s, "Pa·s");
+      cli_table_number (out, _("velocity"), r->velocity_m_s, "m/s");
+      cli_table_number (out, _("Reynolds number"), r->reynolds, NULL);
+      cli_table_number (out, _("relative roughness ε/D"), r->relative_roughness, NULL);
+      cli_table_number (out, _("friction factor (Darcy)"), r->friction.f, NULL);
       if (r->friction.has_laminar)
-        cli_table_number (out, "laminar value (64/Re)", r->friction.f_laminar, NULL);
-      cli_table_row (out, "regime", rg_regime_id (r->friction.regime), NULL);
+        cli_table_number (out, _("laminar value (64/Re)"), r->friction.f_laminar, NULL);
+      cli_table_row (out, _("regime"), rg_regime_id (r->friction.regime), NULL);
       if (r->friction.regime == RG_REGIME_TURBULENT)
-        cli_table_row (out, "roughness zone", rg_roughness_zone_id (r->friction.zone), NULL);
-      cli_table_number (out, "head loss, pipe friction", r->head_loss_major_m, "m");
-      cli_table_number (out, "head loss, fittings", r->head_loss_minor_m, "m");
-      cli_table_number (out, "head loss, total", r->head_loss_total_m, "m");
-      cli_table_number (out, "ΣK of fittings", in.k_sum, NULL);
-      cli_table_number (out, "pressure drop (with Δz)", r->pressure_drop_pa / 1e3, "kPa");
-      cli_table_number (out, "hydraulic gradient", r->gradient_m_per_100m, "m/100 m");
-      cli_table_number (out, "wall shear stress", r->wall_shear_pa, "Pa");
-      cli_table_number (out, "∂ln f/∂ln(ε/D)", r->friction.roughness_elasticity, NULL);
+        cli_table_row (out, _("roughness zone"), rg_roughness_zone_id (r->friction.zone), NULL);
+      cli_table_number (out, _("head loss, pipe friction"), r->head_loss_major_m, "m");
+      cli_table_number (out, _("head loss, fittings"), r->head_loss_minor_m, "m");
+      cli_table_number (out, _("head loss, total"), r->head_loss_total_m, "m");
+      cli_table_number (out, _("ΣK of fittings"), in.k_sum, NULL);
+      cli_table_number (out, _("pressure drop (with Δz)"), r->pressure_drop_pa / 1e3, "kPa");
+      cli_table_number (out, _("hydraulic gradient"), r->gradient_m_per_100m, "m/100 m");
+      cli_table_number (out, _("wall shear stress"), r->wall_shear_pa, "Pa");
+      cli_table_number (out, _("∂ln f/∂ln(ε/D)"), r->friction.roughness_elasticity, NULL);
       if (age > 0.0)
-        cli_table_number (out, "head loss relative to new", aged.head_loss_ratio_to_new, NULL);
+        cli_table_number (out, _("head loss relative to new"), aged.head_loss_ratio_to_new, NULL);
       for (int i = 0; i < warnings.count; i++)
-        g_string_append_printf (out, "warning: %s\n", warnings.text[i]);
+        g_string_append_printf (out, _("warning: %s\n"), warnings.text[i]);
     }
   return finish_output (out);
 }

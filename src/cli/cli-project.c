@@ -26,7 +26,7 @@ cli_load_project (const CliArgs *args, const char *command)
 
   if (args->positional->len != 1)
     {
-      cli_fail ("'%s' needs one project file, e.g. 'rugosa-cli %s lines.rugosa'.",
+      cli_fail (_("'%s' needs one project file, e.g. 'rugosa-cli %s lines.rugosa'."),
                 command, command);
       return NULL;
     }
@@ -51,12 +51,12 @@ cli_parse_age_option (const CliArgs *args, double *age)
     return TRUE;
   if (!cli_parse_number ("--age", text, age, msg))
     {
-      cli_fail ("%s (years)", msg->str);
+      cli_fail (_("%s (years)"), msg->str);
       return FALSE;
     }
   if (!(*age >= 0.0 && *age <= 200.0))
     {
-      cli_fail ("--age must lie between 0 and 200 years.");
+      cli_fail (_("--age must lie between 0 and 200 years."));
       return FALSE;
     }
   return TRUE;
@@ -86,7 +86,7 @@ cli_cmd_eval (int argc, char **argv)
   else if (g_str_equal (format_text, "json"))
     format = RUGOSA_EVAL_FORMAT_JSON;
   else
-    return cli_fail ("--format must be table, csv or json, not \"%s\".", format_text);
+    return cli_fail (_("--format must be table, csv or json, not \"%s\"."), format_text);
   if ((project = cli_load_project (&args, "eval")) == NULL)
     return CLI_EXIT_USAGE;
   if (!rugosa_project_format_eval (project, age, format, out, &error))
@@ -131,12 +131,12 @@ parse_size (const CliArgs *args, const char *name, double fallback, double *out)
     return TRUE;
   if (!cli_parse_number (name, text, out, msg))
     {
-      cli_fail ("%s (pixels, or points for PDF and SVG)", msg->str);
+      cli_fail (_("%s (pixels, or points for PDF and SVG)"), msg->str);
       return FALSE;
     }
   if (!(*out >= 200.0 && *out <= 10000.0) || *out != floor (*out))
     {
-      cli_fail ("%s must be a whole number from 200 to 10000.", name);
+      cli_fail (_("%s must be a whole number from 200 to 10000."), name);
       return FALSE;
     }
   return TRUE;
@@ -162,7 +162,7 @@ cli_cmd_render (int argc, char **argv)
   if (path == NULL)
     path = cli_args_get (&args, "--output");
   if (path == NULL || *path == '\0')
-    return cli_fail ("-o is required: the file to write, ending in .png, .svg or .pdf.");
+    return cli_fail (_("-o is required: the file to write, ending in .png, .svg or .pdf."));
   if (g_str_has_suffix (path, ".png") || g_str_has_suffix (path, ".PNG"))
     format = RUGOSA_CHART_FORMAT_PNG;
   else if (g_str_has_suffix (path, ".svg") || g_str_has_suffix (path, ".SVG"))
@@ -170,7 +170,7 @@ cli_cmd_render (int argc, char **argv)
   else if (g_str_has_suffix (path, ".pdf") || g_str_has_suffix (path, ".PDF"))
     format = RUGOSA_CHART_FORMAT_PDF;
   else
-    return cli_fail ("-o must name a file ending in .png, .svg or .pdf, not \"%s\".", path);
+    return cli_fail (_("-o must name a file ending in .png, .svg or .pdf, not \"%s\"."), path);
   if (!parse_size (&args, "--width", 1600.0, &width)
       || !parse_size (&args, "--height", 1000.0, &height)
       || !cli_parse_age_option (&args, &age))
@@ -181,7 +181,7 @@ cli_cmd_render (int argc, char **argv)
   else if (g_str_equal (theme_text, "dark"))
     theme = RUGOSA_CHART_THEME_DARK;
   else
-    return cli_fail ("--theme must be light or dark, not \"%s\".", theme_text);
+    return cli_fail (_("--theme must be light or dark, not \"%s\"."), theme_text);
   if ((project = cli_load_project (&args, "render")) == NULL)
     return CLI_EXIT_USAGE;
   if (age >= 0.0)

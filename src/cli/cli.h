@@ -3,6 +3,7 @@
 #pragma once
 
 #include <glib.h>
+#include <glib/gi18n.h>
 
 #include "core/status.h"
 

@@ -4,13 +4,14 @@
 
 #include "config.h"
 
+#include <glib/gi18n.h>
 #include <locale.h>
 #include <stdio.h>
 #include <string.h>
 
 #include "cli.h"
 
-static const char usage_text[] =
+static const char usage_text[] = N_(
   "Usage: rugosa-cli COMMAND [OPTIONS]\n"
   "\n"
   "Commands:\n"
@@ -40,7 +41,19 @@ static const char usage_text[] =
   "\n"
   "Results are estimates from published correlations, valid only inside their\n"
   "stated ranges. Check designs against the applicable local codes and have\n"
-  "them reviewed by a qualified, licensed engineer.\n";
+  "them reviewed by a qualified, licensed engineer.\n");
+
+/* True when the command writes machine-readable output (JSON or CSV). */
+static gboolean
+machine_output (int argc, char **argv)
+{
+  for (int i = 2; i < argc; i++)
+    if (g_str_equal (argv[i], "--json")
+        || (g_str_equal (argv[i], "--format") && i + 1 < argc
+            && !g_str_equal (argv[i + 1], "table")))
+      return TRUE;
+  return FALSE;
+}
 
 int
 main (int argc, char **argv)
@@ -62,16 +75,29 @@ main (int argc, char **argv)
    * C locale (g_ascii_*), so the output does not depend on LC_NUMERIC. */
   setlocale (LC_ALL, "");
   setlocale (LC_NUMERIC, "C");
+  /* JSON and CSV are for scripts: their text (warnings, notes) stays in
+   * English, byte for byte the same under any locale.  In the C locale of
+   * LC_MESSAGES gettext ignores LANGUAGE too. */
+  if (machine_output (argc, argv))
+    setlocale (LC_MESSAGES, "C");
+  {
+    /* RUGOSA_LOCALEDIR: the build folder's po/ (tests, running uninstalled). */
+    const char *localedir = g_getenv ("RUGOSA_LOCALEDIR");
+    bindtextdomain (GETTEXT_PACKAGE,
+                    localedir != NULL && *localedir != '\0' ? localedir : LOCALEDIR);
+    bind_textdomain_codeset (GETTEXT_PACKAGE, "UTF-8");
+    textdomain (GETTEXT_PACKAGE);
+  }
 
   if (argc < 2)
     {
-      fputs (usage_text, stderr);
+      fputs (_(usage_text), stderr);
       return CLI_EXIT_USAGE;
     }
   if (g_str_equal (argv[1], "--help") || g_str_equal (argv[1], "-h")
       || g_str_equal (argv[1], "help"))
     {
-      fputs (usage_text, stdout);
+      fputs (_(usage_text), stdout);
       return CLI_EXIT_OK;
     }
   if (g_str_equal (argv[1], "--version"))
@@ -85,10 +111,10 @@ main (int argc, char **argv)
         for (int j = 2; j < argc; j++)
           if (g_str_equal (argv[j], "--help") || g_str_equal (argv[j], "-h"))
             {
-              fputs (usage_text, stdout);
+              fputs (_(usage_text), stdout);
               return CLI_EXIT_OK;
             }
         return commands[i].run (argc, argv);
       }
-  return cli_fail ("Unknown command \"%s\"; see 'rugosa-cli --help'.", argv[1]);
+  return cli_fail (_("Unknown command \"%s\"; see 'rugosa-cli --help'."), argv[1]);
 }

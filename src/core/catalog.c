@@ -122,7 +122,9 @@ format_closest (const int best[3], const char *(*name_at) (int), char *buf,
   for (int k = 0; k < n; k++)
     {
       size_t used = strlen (buf);
-      const char *sep = k == 0 ? "" : (k == n - 1 ? " or " : ", ");
+      /* TRANSLATORS: joins the last two names of a suggestion list,
+       * as in "glass, pvc or pe"; keep the spaces. */
+      const char *sep = k == 0 ? "" : (k == n - 1 ? rg_gettext (" or ") : ", ");
       snprintf (buf + used, len - used, "%s%s", sep, name_at (best[k]));
     }
 }

@@ -25,7 +25,13 @@ typedef struct {
   char text[RG_ERROR_TEXT_MAX];
 } RgError;
 
-/* Fill `err` (if not NULL) and return `status`. */
+/* The translation of a short text of the core in the "rugosa" catalog
+ * (dgettext when built with RG_ENABLE_NLS), else `msgid` itself.
+ * rg_error_set and rg_warnings_add look their format up the same way. */
+const char *rg_gettext (const char *msgid);
+
+/* Fill `err` (if not NULL) and return `status`; the format is translated
+ * (rg_gettext) before formatting. */
 RgStatus rg_error_set (RgError *err, RgStatus status, const char *fmt, ...)
   __attribute__ ((format (printf, 3, 4)));
 

@@ -3,6 +3,7 @@
 
 #include "config.h"
 
+#include <locale.h>
 #include <math.h>
 #include <string.h>
 
@@ -127,4 +128,92 @@ rugosa_display_scientific (double x,
   for (const char *c = digits_e; *c; c++)
     g_string_append (out, sup[*c - '0']);
   return g_string_free (out, FALSE);
+}
+
+/* The decimal separator of LC_NUMERIC as set by the program (setlocale). */
+static const char *
+screen_decimal_point (void)
+{
+  const struct lconv *lc = localeconv ();
+
+  if (lc == NULL || lc->decimal_point == NULL || lc->decimal_point[0] == '\0')
+    return ".";
+  return lc->decimal_point;
+}
+
+char *
+rugosa_display_localize (char *text)
+{
+  const char *dp = screen_decimal_point ();
+  GString *out;
+
+  if (text == NULL || strcmp (dp, ".") == 0 || strchr (text, '.') == NULL)
+    return text;
+  out = g_string_sized_new (strlen (text) + 4);
+  for (const char *c = text; *c != '\0'; c++)
+    {
+      if (*c == '.' && c > text && g_ascii_isdigit (c[-1]) && g_ascii_isdigit (c[1]))
+        g_string_append (out, dp);
+      else
+        g_string_append_c (out, *c);
+    }
+  g_free (text);
+  return g_string_free (out, FALSE);
+}
+
+char *
+rugosa_display_delocalize (const char *text)
+{
+  const char *dp = screen_decimal_point ();
+  const size_t n = strlen (dp);
+  GString *out;
+
+  if (text == NULL)
+    return NULL;
+  if (strcmp (dp, ".") == 0)
+    return g_strdup (text);
+  out = g_string_sized_new (strlen (text));
+  for (const char *c = text; *c != '\0'; c++)
+    {
+      const gboolean before_ok = c == text || g_ascii_isdigit (c[-1])
+                                 || c[-1] == ' ' || c[-1] == '-' || c[-1] == '+';
+      if (strncmp (c, dp, n) == 0 && g_ascii_isdigit (c[n]) && before_ok)
+        {
+          g_string_append_c (out, '.');
+          c += n - 1;
+        }
+      else
+        g_string_append_c (out, *c);
+    }
+  return g_string_free (out, FALSE);
+}
+
+char *
+rugosa_display_format_screen (RgQuantity  q,
+                              double      si,
+                              const char *unit)
+{
+  return rugosa_display_localize (rugosa_display_format (q, si, unit));
+}
+
+char *
+rugosa_display_number_screen (RgQuantity  q,
+                              double      si,
+                              const char *unit)
+{
+  return rugosa_display_localize (rugosa_display_number (q, si, unit));
+}
+
+char *
+rugosa_display_significant_screen (double x,
+                                   int    digits)
+{
+  return rugosa_display_localize (rugosa_display_significant (x, digits));
+}
+
+char *
+rugosa_display_scientific_screen (double x,
+                                  int    digits)
+{
+  return rugosa_display_localize (rugosa_display_scientific (x, digits));
 }

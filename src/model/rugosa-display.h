@@ -27,4 +27,28 @@ char       *rugosa_display_significant   (double      x,
 char       *rugosa_display_scientific    (double      x,
                                           int         digits);
 
+/* The same for the screen: the number's decimal point becomes the decimal
+ * separator of the current LC_NUMERIC locale ("1,861 m/s" under de_DE); no
+ * digit grouping.  Files (JSON, CSV, the project) keep the ASCII forms
+ * above. */
+char       *rugosa_display_format_screen      (RgQuantity  q,
+                                               double      si,
+                                               const char *unit);
+char       *rugosa_display_number_screen      (RgQuantity  q,
+                                               double      si,
+                                               const char *unit);
+char       *rugosa_display_significant_screen (double      x,
+                                               int         digits);
+char       *rugosa_display_scientific_screen  (double      x,
+                                               int         digits);
+/* An ASCII display text (or any text) for the screen: each '.' between two
+ * digits becomes the locale's decimal separator.  Takes `text`. */
+char       *rugosa_display_localize           (char       *text);
+/* Text typed on the screen, made readable for the core's parser (which
+ * refuses commas on purpose): where the locale's decimal separator is not
+ * '.', each separator between two digits (or before a digit at the start)
+ * becomes '.'.  Only the decimal separator is converted; '.' is accepted as
+ * it is, so "2.5 m" and "2,5 m" both read as 2.5 m under de_DE. */
+char       *rugosa_display_delocalize         (const char *text);
+
 G_END_DECLS

@@ -10,6 +10,8 @@
 
 #include "config.h"
 
+#include <glib/gi18n-lib.h>
+
 #include <math.h>
 #include <string.h>
 
@@ -270,7 +272,7 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
       p->flow_m3_s = q;
       if (!(q > 0.0))
         {
-          set_text (p->error, "The design flow must be a positive number (m³/s).");
+          set_text (p->error, _("The design flow must be a positive number (m³/s)."));
           continue;
         }
 
@@ -664,7 +666,7 @@ rugosa_project_format_eval (RugosaProject *self, double age_years,
   if (!isfinite (age_years) || age_years > 200.0)
     {
       g_set_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_VALUE,
-                   "The service age must lie between 0 and 200 years.");
+                   _("The service age must lie between 0 and 200 years."));
       return FALSE;
     }
 
@@ -681,7 +683,7 @@ rugosa_project_format_eval (RugosaProject *self, double age_years,
       return TRUE;
     default:
       g_set_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_VALUE,
-                   "Unknown output format %d: use table, CSV or JSON.",
+                   _("Unknown output format %d: use table, CSV or JSON."),
                    (int) format);
       return FALSE;
     }

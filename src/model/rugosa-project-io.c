@@ -15,6 +15,8 @@
 
 #include "config.h"
 
+#include <glib/gi18n-lib.h>
+
 #include <errno.h>
 #include <fcntl.h>
 #include <math.h>
@@ -158,7 +160,7 @@ check_duplicates (Ctx *ctx, const cJSON *node)
         {
           if (!g_hash_table_add (seen, m->string))
             return fail (ctx, RUGOSA_PROJECT_ERROR_FORMAT,
-                         "the key \"%s\" appears more than once", m->string);
+                         _("the key \"%s\" appears more than once"), m->string);
           gsize len = push_key (ctx, m->string);
           if (!check_duplicates (ctx, m))
             return FALSE;
@@ -198,7 +200,7 @@ expect_object (Ctx *ctx, const cJSON *v)
 {
   if (!cJSON_IsObject (v))
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "expected an object, found %s", type_name (v));
+                 _("expected an object, found %s"), type_name (v));
   return TRUE;
 }
 
@@ -249,15 +251,15 @@ get_number (Ctx *ctx, const cJSON *obj, const char *key, gboolean *present,
           return TRUE;
         }
       return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                   "this required field is missing (a number in %s)", unit);
+                   _("this required field is missing (a number in %s)"), unit);
     }
   if (!cJSON_IsNumber (v))
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "expected a number in %s, found %s", unit, type_name (v));
+                 _("expected a number in %s, found %s"), unit, type_name (v));
   x = v->valuedouble;
   if (!isfinite (x))
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "the number is too large to be a finite value (%s)", unit);
+                 _("the number is too large to be a finite value (%s)"), unit);
   if ((min_open ? !(x > min) : !(x >= min)) || !(x <= max))
     {
       char a[G_ASCII_DTOSTR_BUF_SIZE], b[G_ASCII_DTOSTR_BUF_SIZE],
@@ -268,10 +270,10 @@ get_number (Ctx *ctx, const cJSON *obj, const char *key, gboolean *present,
       g_ascii_formatd (c, sizeof c, "%g", max);
       if (min_open)
         return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                     "%s is out of range: expected more than %s and at most %s %s",
+                     _("%s is out of range: expected more than %s and at most %s %s"),
                      a, b, c, unit);
       return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                   "%s is out of range: expected %s to %s %s", a, b, c, unit);
+                   _("%s is out of range: expected %s to %s %s"), a, b, c, unit);
     }
   *out = x;
   pop (ctx, len);
@@ -295,19 +297,19 @@ get_string (Ctx *ctx, const cJSON *obj, const char *key, gboolean *present,
           return TRUE;
         }
       return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                   "this required field is missing (a string)");
+                   _("this required field is missing (a string)"));
     }
   if (!cJSON_IsString (v))
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "expected a string, found %s", type_name (v));
+                 _("expected a string, found %s"), type_name (v));
   /* cJSON decodes \u0000 as the end of the string, and a lone surrogate
    * escape as bytes that are not UTF-8: refuse both. */
   if (!g_utf8_validate (v->valuestring, -1, NULL))
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "the string is not valid UTF-8");
+                 _("the string is not valid UTF-8"));
   if (g_utf8_strlen (v->valuestring, -1) > max_chars)
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "the string is longer than %ld characters", max_chars);
+                 _("the string is longer than %ld characters"), max_chars);
   *out = v->valuestring;
   pop (ctx, len);
   return TRUE;
@@ -326,7 +328,7 @@ get_object (Ctx *ctx, const cJSON *obj, const char *key, gboolean required,
     {
       if (required)
         return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                     "this required field is missing (an object)");
+                     _("this required field is missing (an object)"));
       pop (ctx, len);
       return TRUE;
     }
@@ -396,7 +398,7 @@ load_settings (Ctx *ctx, const cJSON *obj, RugosaSettings *settings)
             {
               push_key (ctx, "system");
               fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                    "expected \"si\" or \"us\", found \"%s\"", s);
+                    _("expected \"si\" or \"us\", found \"%s\""), s);
               goto error_sub;
             }
           g_object_set (target, "unit-system",
@@ -514,7 +516,7 @@ load_settings (Ctx *ctx, const cJSON *obj, RugosaSettings *settings)
       {
         push_key (ctx, orders[i].path);
         fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-              "must be larger than the lower bound of its range");
+              _("must be larger than the lower bound of its range"));
         goto error;
       }
 
@@ -542,13 +544,13 @@ load_fittings (Ctx *ctx, const cJSON *arr, RugosaLine *line, cJSON **extra)
     {
       cJSON_Delete (extras);
       return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                   "expected an array, found %s", type_name (arr));
+                   _("expected an array, found %s"), type_name (arr));
     }
   if (cJSON_GetArraySize (arr) > MAX_FITTINGS)
     {
       cJSON_Delete (extras);
       return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                   "more than %d fittings", MAX_FITTINGS);
+                   _("more than %d fittings"), MAX_FITTINGS);
     }
   g_variant_builder_init (&b, G_VARIANT_TYPE (RUGOSA_LINE_FITTINGS_TYPE));
   for (const cJSON *e = arr->child; e != NULL; e = e->next, i++)
@@ -567,13 +569,13 @@ load_fittings (Ctx *ctx, const cJSON *arr, RugosaLine *line, cJSON **extra)
       if (has_id == has_k || (has_id && *id == '\0'))
         {
           fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                "give either \"catalog\" (a fitting id) or \"k\" (a plain loss coefficient), not both or neither");
+                _("give either \"catalog\" (a fitting id) or \"k\" (a plain loss coefficient), not both or neither"));
           goto error;
         }
       if (count != floor (count))
         {
           push_key (ctx, "count");
-          fail (ctx, RUGOSA_PROJECT_ERROR_VALUE, "expected a whole number");
+          fail (ctx, RUGOSA_PROJECT_ERROR_VALUE, _("expected a whole number"));
           goto error;
         }
       collect_unknown (e, known, &e_extra);
@@ -654,12 +656,12 @@ load_choice (Ctx *ctx, const cJSON *line_obj, const char *group,
     return FALSE;
   if (!has_id && !has_value)
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "give \"%s\" or \"%s\" (or both)", id_key, value->key);
+                 _("give \"%s\" or \"%s\" (or both)"), id_key, value->key);
   if (has_id && *id == '\0')
     {
       push_key (ctx, id_key);
       return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                   "expected a catalog name, found an empty string");
+                   _("expected a catalog name, found an empty string"));
     }
   g_object_set (target, id_prop, has_id ? id : NULL, NULL);
   if (has_value)
@@ -735,7 +737,7 @@ load_line (Ctx *ctx, const cJSON *obj, RugosaLine *line)
         {
           push_key (ctx, "colour");
           fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                "expected a colour as \"#rrggbb\", found \"%s\"", s);
+                _("expected a colour as \"#rrggbb\", found \"%s\""), s);
           goto error;
         }
       g_object_set (target, "colour", s, NULL);
@@ -832,14 +834,14 @@ load_line (Ctx *ctx, const cJSON *obj, RugosaLine *line)
       {
         push_key (ctx, "minimum_m3_s");
         fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-              "the minimum flow must not exceed the design flow");
+              _("the minimum flow must not exceed the design flow"));
         goto error;
       }
     if (has_hi && hi < design)
       {
         push_key (ctx, "maximum_m3_s");
         fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-              "the maximum flow must not be below the design flow");
+              _("the maximum flow must not be below the design flow"));
         goto error;
       }
     g_object_set (target, "flow-design", design,
@@ -870,28 +872,28 @@ load_root (Ctx *ctx, const cJSON *root, RugosaProject *project)
 
   if (!cJSON_IsObject (root))
     return fail (ctx, RUGOSA_PROJECT_ERROR_FORMAT,
-                 "This is JSON but not a Rugosa project: expected an object with \"format\": \"%s\".",
+                 _("This is JSON but not a Rugosa project: expected an object with \"format\": \"%s\"."),
                  RUGOSA_PROJECT_FORMAT_NAME);
   v = cJSON_GetObjectItemCaseSensitive (root, "format");
   if (!cJSON_IsString (v) || strcmp (v->valuestring, RUGOSA_PROJECT_FORMAT_NAME) != 0)
     return fail (ctx, RUGOSA_PROJECT_ERROR_FORMAT,
-                 "This is JSON but not a Rugosa project: \"format\" must be \"%s\".",
+                 _("This is JSON but not a Rugosa project: \"format\" must be \"%s\"."),
                  RUGOSA_PROJECT_FORMAT_NAME);
   v = cJSON_GetObjectItemCaseSensitive (root, "version");
   push_key (ctx, "version");
   if (v == NULL)
     return fail (ctx, RUGOSA_PROJECT_ERROR_FORMAT,
-                 "this required field is missing (a whole number)");
+                 _("this required field is missing (a whole number)"));
   if (!cJSON_IsNumber (v) || !isfinite (v->valuedouble)
       || v->valuedouble != floor (v->valuedouble) || v->valuedouble < 1.0)
     return fail (ctx, RUGOSA_PROJECT_ERROR_FORMAT,
-                 "expected a whole number of 1 or more");
+                 _("expected a whole number of 1 or more"));
   version = v->valuedouble;
   if (version > RUGOSA_PROJECT_FORMAT_VERSION)
     {
       g_string_truncate (ctx->path, 0);
       return fail (ctx, RUGOSA_PROJECT_ERROR_VERSION,
-                   "This file uses version %.0f of the project format, which is newer than this Rugosa reads (version %d): open it with a newer Rugosa.",
+                   _("This file uses version %.0f of the project format, which is newer than this Rugosa reads (version %d): open it with a newer Rugosa."),
                    MIN (version, 1e15), RUGOSA_PROJECT_FORMAT_VERSION);
     }
   g_string_truncate (ctx->path, 0);
@@ -909,13 +911,13 @@ load_root (Ctx *ctx, const cJSON *root, RugosaProject *project)
   push_key (ctx, "lines");
   if (lines == NULL)
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "this required field is missing (an array of line options)");
+                 _("this required field is missing (an array of line options)"));
   if (!cJSON_IsArray (lines))
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "expected an array, found %s", type_name (lines));
+                 _("expected an array, found %s"), type_name (lines));
   if (cJSON_GetArraySize (lines) > MAX_LINES)
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 "more than %d line options", MAX_LINES);
+                 _("more than %d line options"), MAX_LINES);
   for (const cJSON *e = lines->child; e != NULL; e = e->next, i++)
     {
       g_autoptr (RugosaLine) line = rugosa_line_new (NULL);
@@ -958,7 +960,7 @@ rugosa_project_new_from_data (const char *data, gsize length, GError **error)
   if (length > MAX_FILE_BYTES)
     {
       fail (&ctx, RUGOSA_PROJECT_ERROR_ENCODING,
-            "The file is larger than %d MiB: it is not a Rugosa project.",
+            _("The file is larger than %d MiB: it is not a Rugosa project."),
             MAX_FILE_BYTES / (1024 * 1024));
       return NULL;
     }
@@ -967,7 +969,7 @@ rugosa_project_new_from_data (const char *data, gsize length, GError **error)
     blank++;
   if (blank == length)
     {
-      fail (&ctx, RUGOSA_PROJECT_ERROR_ENCODING, "The file is empty.");
+      fail (&ctx, RUGOSA_PROJECT_ERROR_ENCODING, _("The file is empty."));
       return NULL;
     }
   if (!g_utf8_validate (text, (gssize) length, &bad))
@@ -975,8 +977,8 @@ rugosa_project_new_from_data (const char *data, gsize length, GError **error)
       line_column (text, (gsize) (bad - text), &line, &column);
       fail (&ctx, RUGOSA_PROJECT_ERROR_ENCODING,
             *bad == '\0'
-              ? "The file holds a NUL byte at line %d, column %d: it is not a text file."
-              : "The file is not valid UTF-8 text (line %d, column %d).",
+              ? _("The file holds a NUL byte at line %d, column %d: it is not a text file.")
+              : _("The file is not valid UTF-8 text (line %d, column %d)."),
             line, column);
       return NULL;
     }
@@ -984,7 +986,7 @@ rugosa_project_new_from_data (const char *data, gsize length, GError **error)
     {
       line_column (text, where, &line, &column);
       fail (&ctx, RUGOSA_PROJECT_ERROR_SYNTAX,
-            "The JSON is nested deeper than %d levels at line %d, column %d.",
+            _("The JSON is nested deeper than %d levels at line %d, column %d."),
             MAX_DEPTH, line, column);
       return NULL;
     }
@@ -1004,11 +1006,11 @@ rugosa_project_new_from_data (const char *data, gsize length, GError **error)
       line_column (copy, MIN (offset, length), &line, &column);
       if (offset >= length)
         fail (&ctx, RUGOSA_PROJECT_ERROR_SYNTAX,
-              "The JSON text ends too early at line %d, column %d (is the file truncated?).",
+              _("The JSON text ends too early at line %d, column %d (is the file truncated?)."),
               line, column);
       else
         fail (&ctx, RUGOSA_PROJECT_ERROR_SYNTAX,
-              "The file is not valid JSON: unexpected text at line %d, column %d.",
+              _("The file is not valid JSON: unexpected text at line %d, column %d."),
               line, column);
       return NULL;
     }
@@ -1039,7 +1041,7 @@ rugosa_project_load (RugosaProject *self, const char *path, GError **error)
   if (!g_file_get_contents (path, &data, &length, &local))
     {
       g_set_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_IO,
-                   "Cannot read “%s”: %s", display, local->message);
+                   _("Cannot read “%s”: %s"), display, local->message);
       return FALSE;
     }
   loaded = rugosa_project_new_from_data (data, length, &local);
@@ -1254,7 +1256,7 @@ io_error (GError **error, int errsv, const char *what, const char *path)
   g_autofree char *display = g_filename_display_name (path);
 
   g_set_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_IO,
-               "Cannot save “%s”: %s failed (%s). The previous file is unchanged.",
+               _("Cannot save “%s”: %s failed (%s). The previous file is unchanged."),
                display, what, g_strerror (errsv));
   return FALSE;
 }

@@ -1,0 +1,397 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The desktop application in German, driven in-process under Xvfb: the
+ * visible labels come from po/de.po, numbers on screen carry a decimal
+ * comma, the quantity entries accept "2,5 m" and "2.5 m", and the project
+ * file stays locale-independent.  Saves a screenshot (rugosa-window-de.png in
+ * the build folder) for a look at the German layout.
+ *
+ * Environment (tests/meson.build): LANGUAGE=de, LANG=de_DE.UTF-8, LOCPATH at
+ * the de_DE.UTF-8 locale built into the build folder, RUGOSA_LOCALEDIR at
+ * the build folder's po/ (po/de/LC_MESSAGES/rugosa.mo).  Without that locale
+ * or without a display the program reports a TAP skip. */
+#define G_LOG_DOMAIN "test-l10n-ui"
+
+#include "config.h"
+
+#include <adwaita.h>
+#include <glib/gi18n.h>
+#include <glib/gstdio.h>
+#include <locale.h>
+#include <string.h>
+
+#include "model/rugosa-display.h"
+#include "rugosa-application.h"
+#include "rugosa-canvas.h"
+#include "rugosa-line-panel.h"
+#include "rugosa-preferences-window.h"
+#include "rugosa-quantity-entry.h"
+#include "rugosa-results-table.h"
+#include "rugosa-window.h"
+
+static RugosaApplication *app;
+static char *tmpdir;
+
+static void
+drain (void)
+{
+  while (g_main_context_pending (NULL))
+    g_main_context_iteration (NULL, FALSE);
+}
+
+static RugosaWindow *
+open_demo (void)
+{
+  RugosaWindow *win = rugosa_window_new (app);
+  const char *src = g_getenv ("RUGOSA_SOURCE_DIR");
+  g_autofree char *path = NULL;
+  g_autoptr (GFile) file = NULL;
+  g_autoptr (GError) error = NULL;
+
+  g_assert_nonnull (src);
+  path = g_build_filename (src, "data", "demo.rugosa", NULL);
+  file = g_file_new_for_path (path);
+  gtk_window_set_default_size (GTK_WINDOW (win), 1400, 900);
+  gtk_window_present (GTK_WINDOW (win));
+  g_assert_true (rugosa_window_load_file_sync (win, file, &error));
+  g_assert_no_error (error);
+  drain ();
+  return win;
+}
+
+static void
+close_window (RugosaWindow *win)
+{
+  gtk_window_destroy (GTK_WINDOW (win));
+  drain ();
+}
+
+/* Every GtkLabel under `w`. */
+static void
+collect_labels (GtkWidget *w, GPtrArray *out)
+{
+  if (GTK_IS_LABEL (w))
+    g_ptr_array_add (out, w);
+  for (GtkWidget *c = gtk_widget_get_first_child (w); c != NULL;
+       c = gtk_widget_get_next_sibling (c))
+    collect_labels (c, out);
+}
+
+/* The first line that evaluates. */
+static guint
+first_ok_line (RugosaWindow *win)
+{
+  RugosaProject *project = rugosa_window_get_project (win);
+
+  for (guint i = 0; i < rugosa_project_get_n_lines (project); i++)
+    {
+      const RugosaLineResults *res =
+        rugosa_project_get_results (project, rugosa_project_get_line (project, i));
+      if (res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
+        return i;
+    }
+  g_test_fail_printf ("The demo project has no line that evaluates.");
+  return 0;
+}
+
+static void
+test_labels_german (void)
+{
+  RugosaWindow *win = open_demo ();
+  g_autoptr (GPtrArray) labels = g_ptr_array_new ();
+  gboolean found = FALSE;
+
+  /* The catalog is in use: a message of the window's template reads German. */
+  g_assert_cmpstr (_("Service age"), ==, "Betriebsalter");
+
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
+  collect_labels (GTK_WIDGET (win), labels);
+  g_assert_cmpuint (labels->len, >, 10);
+  for (guint i = 0; i < labels->len; i++)
+    {
+      GtkLabel *label = g_ptr_array_index (labels, i);
+      const char *text = gtk_label_get_label (label);
+
+      if (text == NULL || *text == '\0')
+        continue;
+      if (g_strcmp0 (text, "Betriebsalter") == 0)
+        found = TRUE;
+      /* A label that still shows an English message of the catalog (one
+       * whose German text differs) was not translated on its way. */
+      if (strcmp (_(text), text) != 0)
+        g_test_fail_printf ("A visible label is still English: \"%s\" (German: \"%s\")",
+                            text, _(text));
+    }
+  g_assert_true (found);
+  close_window (win);
+}
+
+static void
+test_results_decimal_comma (void)
+{
+  RugosaWindow *win = open_demo ();
+  RugosaResultsTable *table = RUGOSA_RESULTS_TABLE (rugosa_window_get_results (win));
+  RugosaProject *project = rugosa_window_get_project (win);
+  guint pos = first_ok_line (win);
+  RugosaLine *line = rugosa_project_get_line (project, pos);
+  g_autofree char *cell = NULL;
+  g_autofree char *f_cell = NULL;
+  g_autofree char *ascii = NULL;
+  g_autofree char *expect = NULL;
+
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
+  drain ();
+  cell = rugosa_results_table_format_cell (table, line, "f");
+  /* The Darcy friction factor lies between 0.006 and 0.1 on the chart, so it
+   * always has a fractional part: 4 significant figures, "0,01910". */
+  ascii = rugosa_display_significant (rugosa_project_get_results (project, line)
+                                        ->points[RUGOSA_FLOW_DESIGN].result.friction.f, 4);
+  g_assert_nonnull (strchr (ascii, '.'));
+  expect = g_strdelimit (g_strdup (ascii), ".", ',');
+  g_assert_cmpstr (cell, ==, expect);
+  g_assert_null (strchr (cell, '.'));
+
+  /* The cell as it is on screen, when its row is shown. */
+  f_cell = rugosa_results_table_cell_text (table, pos, "f");
+  if (f_cell != NULL)
+    g_assert_cmpstr (f_cell, ==, expect);
+  close_window (win);
+}
+
+static void
+test_entry_accepts_both (void)
+{
+  RugosaWindow *win = open_demo ();
+  RugosaLinePanel *panel;
+  RugosaQuantityEntry *length;
+  const char *error_text;
+  g_autofree char *saved = NULL;
+  g_autofree char *contents = NULL;
+  g_autoptr (GFile) file = NULL;
+  g_autoptr (GError) error = NULL;
+
+  gtk_single_selection_set_selected (rugosa_window_get_selection (win), first_ok_line (win));
+  drain ();
+  panel = RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win));
+  length = rugosa_line_panel_get_entry (panel, "length");
+  g_assert_nonnull (length);
+
+  g_assert_true (rugosa_quantity_entry_commit_text (length, "2,5 m"));
+  /* 2.5 is exact in binary: "2,5 m" must read as exactly 2.5 m. */
+  g_assert_cmpfloat (rugosa_quantity_entry_get_value (length), ==, 2.5);
+  {
+    /* Shown back in the German form (the entry is the widget's child). */
+    GtkWidget *child = gtk_widget_get_first_child (GTK_WIDGET (length));
+    g_assert_true (GTK_IS_EDITABLE (child));
+    g_assert_cmpstr (gtk_editable_get_text (GTK_EDITABLE (child)), ==, "2,5 m");
+  }
+  g_assert_true (rugosa_quantity_entry_commit_text (length, "0,75 km"));
+  g_assert_cmpfloat_with_epsilon (rugosa_quantity_entry_get_value (length), 750.0, 1e-9);
+  g_assert_true (rugosa_quantity_entry_commit_text (length, "1234.5 m"));
+  g_assert_cmpfloat (rugosa_quantity_entry_get_value (length), ==, 1234.5);
+  /* 1234.25 is exact in binary too; shown back with the comma. */
+  g_assert_true (rugosa_quantity_entry_commit_text (length, "1234,25 m"));
+  g_assert_cmpfloat (rugosa_quantity_entry_get_value (length), ==, 1234.25);
+
+  /* A refusal from the core arrives in German. */
+  g_assert_false (rugosa_quantity_entry_commit_text (length, "viel"));
+  error_text = rugosa_quantity_entry_get_error_text (length);
+  g_assert_nonnull (error_text);
+  g_test_message ("refusal: %s", error_text);
+  g_assert_nonnull (strstr (error_text, "keine Zahl"));
+  g_assert_cmpfloat (rugosa_quantity_entry_get_value (length), ==, 1234.25);
+
+  /* The project file keeps the C locale: 1234.25 m is written with a
+   * point and reads back as the same value. */
+  saved = g_build_filename (tmpdir, "de.rugosa", NULL);
+  file = g_file_new_for_path (saved);
+  g_assert_true (rugosa_window_save_file_sync (win, file, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_get_contents (saved, &contents, NULL, NULL));
+  g_assert_true (g_regex_match_simple ("\"length_m\":\\s*1234\\.25[,\\s]", contents, 0, 0));
+  g_assert_null (strstr (contents, "1234,25"));
+  {
+    RugosaWindow *again = rugosa_window_new (app);
+    RugosaProject *p2;
+    RugosaProject *p1 = rugosa_window_get_project (win);
+    guint pos = first_ok_line (win);
+
+    g_assert_true (rugosa_window_load_file_sync (again, file, &error));
+    g_assert_no_error (error);
+    p2 = rugosa_window_get_project (again);
+    g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (p2, pos), "length"),
+                       ==, rugosa_line_get_double (rugosa_project_get_line (p1, pos), "length"));
+    close_window (again);
+  }
+  close_window (win);
+}
+
+/* Renders `widget` to build/NAME (for a look at the German layout). */
+static void
+save_png (GtkWidget *widget, const char *name)
+{
+  const char *build = g_getenv ("RUGOSA_BUILD_DIR");
+  g_autofree char *path = g_build_filename (build ? build : ".", name, NULL);
+  int w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
+  GdkPaintable *paintable = gtk_widget_paintable_new (widget);
+  GtkSnapshot *snapshot = gtk_snapshot_new ();
+  GskRenderNode *node;
+  GdkTexture *texture;
+
+  g_assert_cmpint (w, >, 0);
+  gdk_paintable_snapshot (paintable, snapshot, w, h);
+  node = gtk_snapshot_free_to_node (snapshot);
+  g_assert_nonnull (node);
+  texture = gsk_renderer_render_texture (gtk_native_get_renderer (gtk_widget_get_native (widget)),
+                                         node, &GRAPHENE_RECT_INIT (0, 0, w, h));
+  g_assert_true (gdk_texture_save_to_png (texture, path));
+  g_test_message ("screenshot: %s", path);
+  g_object_unref (texture);
+  gsk_render_node_unref (node);
+  g_object_unref (paintable);
+}
+
+static void
+test_preferences_german (void)
+{
+  RugosaPreferencesWindow *prefs =
+    rugosa_preferences_window_new (rugosa_application_get_settings (app));
+  g_autoptr (GPtrArray) labels = g_ptr_array_new ();
+  gboolean found = FALSE;
+
+  gtk_window_set_default_size (GTK_WINDOW (prefs), 640, 820);
+  gtk_window_present (GTK_WINDOW (prefs));
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (prefs));
+  drain ();
+  collect_labels (GTK_WIDGET (prefs), labels);
+  for (guint i = 0; i < labels->len; i++)
+    {
+      const char *text = gtk_label_get_label (g_ptr_array_index (labels, i));
+
+      if (text == NULL || *text == '\0')
+        continue;
+      if (g_strcmp0 (text, _("Design limits")) == 0)
+        found = TRUE;
+      if (strcmp (_(text), text) != 0)
+        g_test_fail_printf ("A visible label is still English: \"%s\"", text);
+    }
+  g_assert_cmpstr (_("Design limits"), ==, "Auslegungsgrenzen");
+  g_assert_true (found);
+  save_png (GTK_WIDGET (prefs), "rugosa-preferences-de.png");
+  gtk_window_destroy (GTK_WINDOW (prefs));
+  drain ();
+}
+
+static void
+test_screenshot (void)
+{
+  RugosaWindow *win = open_demo ();
+  const char *build = g_getenv ("RUGOSA_BUILD_DIR");
+  g_autofree char *path = NULL;
+  GdkPaintable *paintable;
+  GtkSnapshot *snapshot;
+  GskRenderNode *node;
+  GdkTexture *texture;
+  int w, h;
+
+  gtk_single_selection_set_selected (rugosa_window_get_selection (win), first_ok_line (win));
+  gtk_range_set_value (rugosa_window_get_age_scale (win), 25.0);
+  rugosa_canvas_pointer_at (RUGOSA_CANVAS (rugosa_window_get_canvas (win)), -100, -100);
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
+  drain ();
+  w = gtk_widget_get_width (GTK_WIDGET (win));
+  h = gtk_widget_get_height (GTK_WIDGET (win));
+  g_assert_cmpint (w, >, 0);
+
+  paintable = gtk_widget_paintable_new (GTK_WIDGET (win));
+  snapshot = gtk_snapshot_new ();
+  gdk_paintable_snapshot (paintable, snapshot, w, h);
+  node = gtk_snapshot_free_to_node (snapshot);
+  g_assert_nonnull (node);
+  texture = gsk_renderer_render_texture (gtk_native_get_renderer (GTK_NATIVE (win)), node,
+                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
+  path = g_build_filename (build ? build : ".", "rugosa-window-de.png", NULL);
+  g_assert_true (gdk_texture_save_to_png (texture, path));
+  g_test_message ("screenshot: %s", path);
+
+  g_object_unref (texture);
+  gsk_render_node_unref (node);
+  g_object_unref (paintable);
+  close_window (win);
+}
+
+static void
+remove_tree (const char *path)
+{
+  g_autoptr (GDir) dir = g_dir_open (path, 0, NULL);
+  const char *name;
+
+  if (dir != NULL)
+    while ((name = g_dir_read_name (dir)) != NULL)
+      {
+        g_autofree char *child = g_build_filename (path, name, NULL);
+        remove_tree (child);
+      }
+  g_remove (path);
+}
+
+int
+main (int argc, char *argv[])
+{
+  const char *localedir = g_getenv ("RUGOSA_LOCALEDIR");
+  int status;
+
+  g_test_init (&argc, &argv, NULL);
+  /* The program's own set-up (src/app/main.c), with the test's catalog. */
+  if (setlocale (LC_ALL, "") == NULL
+      || strcmp (localeconv ()->decimal_point, ",") != 0)
+    {
+      g_print ("1..0 # SKIP the de_DE.UTF-8 locale is not available\n");
+      return 0;
+    }
+  if (localedir == NULL)
+    {
+      g_print ("1..0 # SKIP RUGOSA_LOCALEDIR is not set\n");
+      return 0;
+    }
+  bindtextdomain (GETTEXT_PACKAGE, localedir);
+  bind_textdomain_codeset (GETTEXT_PACKAGE, "UTF-8");
+  textdomain (GETTEXT_PACKAGE);
+
+  tmpdir = g_dir_make_tmp ("rugosa-test-l10n-ui-XXXXXX", NULL);
+  {
+    g_autofree char *state = g_build_filename (tmpdir, "state", NULL);
+    g_autofree char *data = g_build_filename (tmpdir, "data", NULL);
+    g_setenv ("XDG_STATE_HOME", state, TRUE);
+    g_setenv ("XDG_DATA_HOME", data, TRUE);
+  }
+  g_setenv ("GSETTINGS_BACKEND", "memory", TRUE);
+  g_setenv ("GSK_RENDERER", "cairo", FALSE);
+
+  gtk_disable_setlocale ();
+  if (!gtk_init_check ())
+    {
+      g_print ("1..0 # SKIP no display\n");
+      remove_tree (tmpdir);
+      return 0;
+    }
+  adw_init ();
+
+  app = g_object_new (RUGOSA_TYPE_APPLICATION,
+                      "application-id", "org.rugosa.Rugosa.TestL10n",
+                      "flags", G_APPLICATION_NON_UNIQUE | G_APPLICATION_HANDLES_OPEN,
+                      "resource-base-path", "/org/rugosa/Rugosa",
+                      NULL);
+  g_assert_true (g_application_register (G_APPLICATION (app), NULL, NULL));
+
+  g_test_add_func ("/l10n/ui/labels-german", test_labels_german);
+  g_test_add_func ("/l10n/ui/results-decimal-comma", test_results_decimal_comma);
+  g_test_add_func ("/l10n/ui/entry-accepts-both", test_entry_accepts_both);
+  g_test_add_func ("/l10n/ui/preferences-german", test_preferences_german);
+  g_test_add_func ("/l10n/ui/screenshot", test_screenshot);
+
+  status = g_test_run ();
+  g_clear_object (&app);
+  remove_tree (tmpdir);
+  g_free (tmpdir);
+  return status;
+}
