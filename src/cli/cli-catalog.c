@@ -252,5 +252,6 @@ cli_cmd_catalog (int argc, char **argv)
         fputs (out->str, stdout);
         return fflush (stdout) == 0 ? CLI_EXIT_OK : CLI_EXIT_FAILURE;
       }
-  return cli_fail ("Unknown catalog \"%s\": use materials, pipes, fittings, fluids or aging.", which);
+  g_autofree char *shown = cli_echo (which);
+  return cli_fail ("Unknown catalog \"%s\": use materials, pipes, fittings, fluids or aging.", shown);
 }

@@ -35,6 +35,11 @@ const char *cli_args_get (const CliArgs *args, const char *name);
 /* All values of a repeatable option (never NULL). */
 GPtrArray *cli_args_get_all (const CliArgs *args, const char *name);
 
+/* User text quoted in a message, made safe for one line: at most 40
+ * characters (then "…"), broken UTF-8 and control characters shown as '?'.
+ * Free with g_free. */
+char *cli_echo (const char *text);
+
 /* Reports a usage error: "rugosa-cli: <sentence>" on stderr. */
 int cli_fail (const char *fmt, ...) G_GNUC_PRINTF (1, 2);
 int cli_fail_error (const RgError *err);

@@ -83,5 +83,6 @@ main (int argc, char **argv)
             }
         return commands[i].run (argc, argv);
       }
-  return cli_fail ("Unknown command \"%s\"; see 'rugosa-cli --help'.", argv[1]);
+  g_autofree char *shown = cli_echo (argv[1]);
+  return cli_fail ("Unknown command \"%s\"; see 'rugosa-cli --help'.", shown);
 }
