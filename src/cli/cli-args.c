@@ -97,8 +97,9 @@ cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
 void
 cli_args_clear (CliArgs *args)
 {
-  g_clear_pointer (&args->values, g_hash_table_unref);
-  g_clear_pointer (&args->positional, g_ptr_array_unref);
+  /* GLib's g_clear_pointer asserts sizeof *pp == sizeof (gpointer) */
+  g_clear_pointer (&args->values, g_hash_table_unref); /* NOLINT(bugprone-sizeof-expression) */
+  g_clear_pointer (&args->positional, g_ptr_array_unref); /* NOLINT(bugprone-sizeof-expression) */
 }
 
 gboolean
@@ -166,7 +167,8 @@ cli_fail (const char *fmt, ...)
   for (char *p = text; *p != '\0'; p++)
     if ((unsigned char) *p < 0x20 || *p == 0x7F)
       *p = '?';
-  fprintf (stderr, "rugosa-cli: %s\n", text);
+  /* nowhere left to report a failure to write to stderr */
+  (void) fprintf (stderr, "rugosa-cli: %s\n", text);
   return CLI_EXIT_USAGE;
 }
 

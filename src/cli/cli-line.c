@@ -19,8 +19,10 @@
 static int
 finish_output (GString *out)
 {
-  fputs (out->str, stdout);
-  return fflush (stdout) == 0 ? CLI_EXIT_OK : CLI_EXIT_FAILURE;
+  /* a full disk or a closed pipe is a failure, not a result */
+  if (fputs (out->str, stdout) == EOF || fflush (stdout) != 0)
+    return CLI_EXIT_FAILURE;
+  return CLI_EXIT_OK;
 }
 
 static gboolean
@@ -270,13 +272,13 @@ fluid_from_args (const CliArgs *args, const char *kind_text, RgFluidSpec *spec,
       }
     case RG_FLUID_OIL:
       {
-        static const struct { const char *name; RgQuantity q; gsize offset; gboolean required; } oil[] = {
-          { "--oil-nu1", RG_QTY_KIN_VISCOSITY, G_STRUCT_OFFSET (RgFluidSpec, oil_nu1_m2_s), TRUE },
-          { "--oil-t1", RG_QTY_TEMPERATURE, G_STRUCT_OFFSET (RgFluidSpec, oil_t1_k), TRUE },
-          { "--oil-nu2", RG_QTY_KIN_VISCOSITY, G_STRUCT_OFFSET (RgFluidSpec, oil_nu2_m2_s), TRUE },
-          { "--oil-t2", RG_QTY_TEMPERATURE, G_STRUCT_OFFSET (RgFluidSpec, oil_t2_k), TRUE },
-          { "--oil-density", RG_QTY_DENSITY, G_STRUCT_OFFSET (RgFluidSpec, oil_density_ref_kg_m3), TRUE },
-          { "--oil-density-t", RG_QTY_TEMPERATURE, G_STRUCT_OFFSET (RgFluidSpec, oil_t_ref_k), FALSE },
+        static const struct { const char *name; RgQuantity q; gboolean required; gsize offset; } oil[] = {
+          { "--oil-nu1", RG_QTY_KIN_VISCOSITY, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_nu1_m2_s) },
+          { "--oil-t1", RG_QTY_TEMPERATURE, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_t1_k) },
+          { "--oil-nu2", RG_QTY_KIN_VISCOSITY, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_nu2_m2_s) },
+          { "--oil-t2", RG_QTY_TEMPERATURE, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_t2_k) },
+          { "--oil-density", RG_QTY_DENSITY, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_density_ref_kg_m3) },
+          { "--oil-density-t", RG_QTY_TEMPERATURE, FALSE, G_STRUCT_OFFSET (RgFluidSpec, oil_t_ref_k) },
         };
         for (gsize i = 0; i < G_N_ELEMENTS (oil); i++)
           {

@@ -53,24 +53,25 @@ main (int argc, char **argv)
 
   /* Messages may be translated; numbers are always written and read in the
    * C locale (g_ascii_*), so the output does not depend on LC_NUMERIC. */
-  setlocale (LC_ALL, "");
-  setlocale (LC_NUMERIC, "C");
+  /* without the user's locale, messages stay untranslated: not an error */
+  (void) setlocale (LC_ALL, "");
+  (void) setlocale (LC_NUMERIC, "C");
 
   if (argc < 2)
     {
-      fputs (usage_text, stderr);
+      (void) fputs (usage_text, stderr);
       return CLI_EXIT_USAGE;
     }
   if (g_str_equal (argv[1], "--help") || g_str_equal (argv[1], "-h")
       || g_str_equal (argv[1], "help"))
     {
-      fputs (usage_text, stdout);
-      return CLI_EXIT_OK;
+      return fputs (usage_text, stdout) == EOF || fflush (stdout) != 0
+             ? CLI_EXIT_FAILURE : CLI_EXIT_OK;
     }
   if (g_str_equal (argv[1], "--version"))
     {
-      printf ("rugosa-cli %s\n", PACKAGE_VERSION);
-      return CLI_EXIT_OK;
+      return printf ("rugosa-cli %s\n", PACKAGE_VERSION) < 0 || fflush (stdout) != 0
+             ? CLI_EXIT_FAILURE : CLI_EXIT_OK;
     }
   for (gsize i = 0; i < G_N_ELEMENTS (commands); i++)
     if (g_str_equal (argv[1], commands[i].name))
@@ -78,8 +79,8 @@ main (int argc, char **argv)
         for (int j = 2; j < argc; j++)
           if (g_str_equal (argv[j], "--help") || g_str_equal (argv[j], "-h"))
             {
-              fputs (usage_text, stdout);
-              return CLI_EXIT_OK;
+              return fputs (usage_text, stdout) == EOF || fflush (stdout) != 0
+                     ? CLI_EXIT_FAILURE : CLI_EXIT_OK;
             }
         return commands[i].run (argc, argv);
       }

@@ -153,7 +153,7 @@ rg_aging_evaluate (const RgLineInput *in, double rate_m_per_year,
                    double age_years, RgAgingResult *out, RgError *err)
 {
   RgLineInput aged;
-  double eps, slope;
+  double eps = 0.0, slope = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st;
 
   if ((st = rg_aging_roughness (in->roughness_m, rate_m_per_year, age_years,

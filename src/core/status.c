@@ -70,7 +70,8 @@ rg_error_set (RgError *err, RgStatus status, const char *fmt, ...)
     return status;
   err->status = status;
   va_start (ap, fmt);
-  vsnprintf (err->text, sizeof err->text, fmt, ap);
+  /* a longer text is cut; make_one_line repairs a cut character */
+  (void) vsnprintf (err->text, sizeof err->text, fmt, ap);
   va_end (ap);
   make_one_line (err->text);
   return status;
@@ -100,7 +101,7 @@ rg_warnings_add (RgWarnings *w, const char *fmt, ...)
   if (w == NULL || w->count >= RG_WARNINGS_MAX)
     return;
   va_start (ap, fmt);
-  vsnprintf (w->text[w->count], RG_WARNING_TEXT_MAX, fmt, ap);
+  (void) vsnprintf (w->text[w->count], RG_WARNING_TEXT_MAX, fmt, ap);
   va_end (ap);
   make_one_line (w->text[w->count]);
   w->count++;
