@@ -257,6 +257,11 @@ def markdown(results):
           "air at 2 bar, a custom fluid of 998 kg/m³ and 1 cP, and an oil of "
           "100 cSt at 40 °C and 10 cSt at 100 °C (870 kg/m³) where the option "
           "needs them.\n")
+    print("Output that cannot be written (stdout on `/dev/full`, a closed "
+          "pipe): exit status 1 and one line on stderr, \"The result could not "
+          "be written to the standard output: …\", for every command and for "
+          "`--help` and `--version` (checked as the row \"output to a full "
+          "disk\").\n")
     current = None
     for (opt, cls, base, value, expect), problems, err in results:
         if opt != current:
@@ -271,6 +276,21 @@ def markdown(results):
         print(f"| {cls} | {shown(value)} | {status} | {msg if expect == 'refuse' else ''} |")
 
 
+def full_disk():
+    """Output that cannot be written (stdout on /dev/full): exit status 1 and
+    one line on stderr, for every command and for --help and --version."""
+    problems = []
+    for args in (FRICTION, WATER, ["fluid", "water", "--temperature", "20 C"],
+                 ["catalog", "pipes"], ["--help"], ["--version"]):
+        with open("/dev/full", "w") as full:
+            p = subprocess.run([CLI] + args, stdout=full, stderr=subprocess.PIPE,
+                               timeout=60, env={"LANG": "C.UTF-8", "PATH": "/usr/bin:/bin"})
+        err = p.stderr.decode("utf-8", "replace")
+        if p.returncode != 1 or err.count("\n") != 1 or "written" not in err:
+            problems.append(f"{args[0]}: exit {p.returncode}, stderr {err.strip()!r}")
+    return problems
+
+
 def main():
     all_rows = rows()
     with concurrent.futures.ThreadPoolExecutor(2) as pool:
@@ -279,13 +299,17 @@ def main():
         markdown(results)
         return 0
     failed = 0
+    disk = full_disk()
+    if disk:
+        failed += 1
+        print("FAIL output to a full disk: " + "; ".join(disk))
     for (opt, cls, base, value, expect), problems, err in results:
         if problems:
             failed += 1
             v = shown(value)
             print(f"FAIL {opt} / {cls} {v[:60]}: expected {expect}: "
                   + "; ".join(problems) + (f" [{err[:200]}]" if err else ""))
-    print(f"{len(results) - failed} passed, {failed} failed")
+    print(f"{len(results) + 1 - failed} passed, {failed} failed")
     return 1 if failed else 0
 
 

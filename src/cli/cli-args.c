@@ -3,6 +3,7 @@
 
 #include "config.h"
 
+#include <errno.h>
 #include <math.h>
 #include <stdio.h>
 #include <string.h>
@@ -152,6 +153,17 @@ cli_echo (const char *text)
         g_string_append_unichar (out, c);
     }
   return g_string_free (out, FALSE);
+}
+
+int
+cli_write_stdout (const char *out)
+{
+  if (fputs (out, stdout) != EOF && fflush (stdout) == 0)
+    return CLI_EXIT_OK;
+  /* nowhere left to report a failure to write to stderr */
+  (void) fprintf (stderr, "rugosa-cli: The result could not be written to "
+                  "the standard output: %s.\n", g_strerror (errno));
+  return CLI_EXIT_FAILURE;
 }
 
 int

@@ -249,9 +249,7 @@ cli_cmd_catalog (int argc, char **argv)
     if (g_str_equal (which, lists[i].name))
       {
         lists[i].list (out, cli_args_has (&args, "--json"));
-        if (fputs (out->str, stdout) == EOF || fflush (stdout) != 0)
-          return CLI_EXIT_FAILURE;
-        return CLI_EXIT_OK;
+        return cli_write_stdout (out->str);
       }
   g_autofree char *shown = cli_echo (which);
   return cli_fail ("Unknown catalog \"%s\": use materials, pipes, fittings, fluids or aging.", shown);

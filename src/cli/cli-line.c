@@ -19,10 +19,7 @@
 static int
 finish_output (GString *out)
 {
-  /* a full disk or a closed pipe is a failure, not a result */
-  if (fputs (out->str, stdout) == EOF || fflush (stdout) != 0)
-    return CLI_EXIT_FAILURE;
-  return CLI_EXIT_OK;
+  return cli_write_stdout (out->str);
 }
 
 static gboolean

@@ -40,6 +40,11 @@ GPtrArray *cli_args_get_all (const CliArgs *args, const char *name);
  * Free with g_free. */
 char *cli_echo (const char *text);
 
+/* Writes `out` to stdout and flushes it: CLI_EXIT_OK, or CLI_EXIT_FAILURE
+ * with a sentence on stderr when the output cannot be written (a full disk,
+ * a closed pipe). */
+int cli_write_stdout (const char *out);
+
 /* Reports a usage error: "rugosa-cli: <sentence>" on stderr. */
 int cli_fail (const char *fmt, ...) G_GNUC_PRINTF (1, 2);
 int cli_fail_error (const RgError *err);

@@ -65,13 +65,11 @@ main (int argc, char **argv)
   if (g_str_equal (argv[1], "--help") || g_str_equal (argv[1], "-h")
       || g_str_equal (argv[1], "help"))
     {
-      return fputs (usage_text, stdout) == EOF || fflush (stdout) != 0
-             ? CLI_EXIT_FAILURE : CLI_EXIT_OK;
+      return cli_write_stdout (usage_text);
     }
   if (g_str_equal (argv[1], "--version"))
     {
-      return printf ("rugosa-cli %s\n", PACKAGE_VERSION) < 0 || fflush (stdout) != 0
-             ? CLI_EXIT_FAILURE : CLI_EXIT_OK;
+      return cli_write_stdout ("rugosa-cli " PACKAGE_VERSION "\n");
     }
   for (gsize i = 0; i < G_N_ELEMENTS (commands); i++)
     if (g_str_equal (argv[1], commands[i].name))
@@ -79,8 +77,7 @@ main (int argc, char **argv)
         for (int j = 2; j < argc; j++)
           if (g_str_equal (argv[j], "--help") || g_str_equal (argv[j], "-h"))
             {
-              return fputs (usage_text, stdout) == EOF || fflush (stdout) != 0
-                     ? CLI_EXIT_FAILURE : CLI_EXIT_OK;
+              return cli_write_stdout (usage_text);
             }
         return commands[i].run (argc, argv);
       }
