@@ -171,6 +171,15 @@ test_laminar (void)
   g_assert_cmpint (rg_aging_evaluate (&in, 0.2e-3, 30.0, &r, NULL), ==, RG_OK);
   g_assert_cmpfloat (r.head_loss_ratio_to_new, ==, 1.0);
   g_assert_cmpfloat (r.head_loss_rate_m_per_year, ==, 0.0);
+
+  /* Found by tests/cli-bad-input.py (--flow "1e-300 L/s"): v² underflows to
+   * zero, both head losses are 0 and their ratio was 0/0, refused as "could
+   * not be computed".  Source: Hagen–Poiseuille again, the laminar ratio
+   * is 1 for any flow. */
+  in.flow_m3_s = 1.0e-303;
+  g_assert_cmpint (rg_aging_evaluate (&in, 0.2e-3, 30.0, &r, NULL), ==, RG_OK);
+  g_assert_cmpfloat (r.head_loss_ratio_to_new, ==, 1.0);
+  g_assert_true (isfinite (r.head_loss_rate_m_per_year));
 }
 
 static void

@@ -1,7 +1,9 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Materials and pipe catalogs: contents, designation parser, closest-match
  * messages. */
+#include "core/aging.h"
 #include "core/catalog.h"
+#include "core/fittings.h"
 
 #include <glib.h>
 #include <math.h>
@@ -213,6 +215,48 @@ test_pipes_unknown (void)
   g_assert_cmpint ((int) strlen (err.text), <, RG_ERROR_TEXT_MAX);
 }
 
+/* An error sentence must print on one line as valid UTF-8. */
+static void
+assert_one_line (const RgError *err)
+{
+  g_assert_cmpuint (strlen (err->text), >, 0);
+  g_assert_true (g_utf8_validate (err->text, -1, NULL));
+  for (const char *p = err->text; *p != '\0'; p++)
+    g_assert_cmpint ((unsigned char) *p, >=, 0x20);
+}
+
+/* The lookups quote the name they did not find: the quote must keep the
+ * sentence on one line and in valid UTF-8 (invariants of
+ * tests/fuzz/fuzz-pipe-designation.c; the same bytes as its seed corpus). */
+static void
+test_unknown_one_line (void)
+{
+  const RgPipe *p = NULL;
+  const RgMaterial *m = NULL;
+  const RgFitting *f = NULL;
+  const RgAgingClass *a = NULL;
+  RgError err;
+  /* 39 ASCII bytes, then "é": "%.40s" cuts the two-byte sequence */
+  const char *cut = "NPS 2 Sch 41 and some more words of tex\xc3\xa9";
+
+  g_assert_cmpint (rg_pipe_lookup ("\xff\xfe NPS 2 Sch 41", &p, &err), ==,
+                   RG_ERR_NOT_FOUND);
+  assert_one_line (&err);
+  g_assert_cmpint (rg_pipe_lookup ("DN 110 SDR 11\nrm", &p, &err), ==,
+                   RG_ERR_NOT_FOUND);
+  assert_one_line (&err);
+  g_assert_cmpint (rg_pipe_lookup (cut, &p, &err), ==, RG_ERR_NOT_FOUND);
+  assert_one_line (&err);
+  g_assert_cmpint (rg_material_lookup ("steel\t\x80", &m, &err), ==,
+                   RG_ERR_NOT_FOUND);
+  assert_one_line (&err);
+  g_assert_cmpint (rg_fitting_lookup (cut, &f, &err), ==, RG_ERR_NOT_FOUND);
+  assert_one_line (&err);
+  g_assert_cmpint (rg_aging_class_lookup ("\x1b[31mmoderate", &a, &err), ==,
+                   RG_ERR_NOT_FOUND);
+  assert_one_line (&err);
+}
+
 int
 main (int argc, char **argv)
 {
@@ -224,5 +268,6 @@ main (int argc, char **argv)
   g_test_add_func ("/catalog/pipes/every-designation", test_pipes_every_designation);
   g_test_add_func ("/catalog/pipes/coverage", test_pipes_coverage);
   g_test_add_func ("/catalog/pipes/unknown", test_pipes_unknown);
+  g_test_add_func ("/catalog/unknown/one-line", test_unknown_one_line);
   return g_test_run ();
 }

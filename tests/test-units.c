@@ -554,6 +554,40 @@ test_locale (void)
   g_free (saved);
 }
 
+/* An error sentence must print on one line as valid UTF-8. */
+static void
+assert_one_line (const RgError *err)
+{
+  g_assert_cmpuint (strlen (err->text), >, 0);
+  g_assert_true (g_utf8_validate (err->text, -1, NULL));
+  for (const char *p = err->text; *p != '\0'; p++)
+    g_assert_cmpint ((unsigned char) *p, >=, 0x20);
+}
+
+/* Inputs found by tests/fuzz/fuzz-units.c (libFuzzer), kept as regressions. */
+static void
+test_fuzz_regressions (void)
+{
+  RgError err;
+  double v = 0.0;
+
+  /* From the fuzzer: bytes that are not UTF-8 before the number were echoed
+   * as they were, so the sentence was not valid UTF-8. */
+  g_assert_cmpint (rg_units_parse (RG_QTY_FLOW, "--fuzz", "\xff\xfe 2 m", &v,
+                                   &err), ==, RG_ERR_PARSE);
+  assert_one_line (&err);
+  /* the same through the unit text and a conversion unit name */
+  g_assert_cmpint (rg_units_parse (RG_QTY_LENGTH, NULL, "2 \xc3(m", &v, &err),
+                   ==, RG_ERR_UNIT);
+  assert_one_line (&err);
+  g_assert_cmpint (rg_units_to_si (RG_QTY_LENGTH, 1.0, "\xe2\x82 m\n", &v,
+                                   &err), ==, RG_ERR_UNIT);
+  assert_one_line (&err);
+  g_assert_cmpint (rg_units_parse_viscosity ("--viscosity", "\xf0\x9f 1 cP",
+                                             &v, NULL, &err), ==, RG_ERR_PARSE);
+  assert_one_line (&err);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -566,5 +600,6 @@ main (int argc, char *argv[])
   g_test_add_func ("/units/parse/viscosity", test_viscosity);
   g_test_add_func ("/units/convert/errors", test_conversion_errors);
   g_test_add_func ("/units/parse/locale", test_locale);
+  g_test_add_func ("/units/parse/fuzz-regressions", test_fuzz_regressions);
   return g_test_run ();
 }

@@ -50,7 +50,7 @@ _rugosa_chart_input_colour (const char *hex)
   return c;
 }
 
-struct _RugosaTrailCache
+struct RugosaTrailCache
 {
   GHashTable *entries;   /* RugosaLine (ref held) -> TrailEntry */
 };

@@ -29,7 +29,7 @@ typedef struct {
 /* Aging trails sampled once a year of service and kept per line until the
  * line or the friction settings change, so a slider move asks the model
  * for one new point a line instead of a whole trail. */
-typedef struct _RugosaTrailCache RugosaTrailCache;
+typedef struct RugosaTrailCache RugosaTrailCache;
 RugosaTrailCache *rugosa_trail_cache_new  (void);
 void              rugosa_trail_cache_free (RugosaTrailCache *cache);
 

@@ -3,6 +3,7 @@
 
 #include "config.h"
 
+#include <errno.h>
 #include <math.h>
 #include <stdio.h>
 #include <string.h>
@@ -52,9 +53,10 @@ cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
       opt = find_option (options, name);
       if (opt == NULL)
         {
+          g_autofree char *shown = cli_echo (name);
           g_string_printf (message,
                            _("Unknown option %s for '%s'; see 'rugosa-cli %s --help'."),
-                           name, command, command);
+                           shown, command, command);
           return FALSE;
         }
       if (opt->has_value && value == NULL)
@@ -96,8 +98,9 @@ cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
 void
 cli_args_clear (CliArgs *args)
 {
-  g_clear_pointer (&args->values, g_hash_table_unref);
-  g_clear_pointer (&args->positional, g_ptr_array_unref);
+  /* GLib's g_clear_pointer asserts sizeof *pp == sizeof (gpointer) */
+  g_clear_pointer (&args->values, g_hash_table_unref); /* NOLINT(bugprone-sizeof-expression) */
+  g_clear_pointer (&args->positional, g_ptr_array_unref); /* NOLINT(bugprone-sizeof-expression) */
 }
 
 gboolean
@@ -126,6 +129,43 @@ cli_args_get_all (const CliArgs *args, const char *name)
   return empty;
 }
 
+char *
+cli_echo (const char *text)
+{
+  enum { ECHO_CHARS = 40 };
+  g_autofree char *valid = g_utf8_make_valid (text, -1);
+  GString *out = g_string_new (NULL);
+  int n = 0;
+
+  for (const char *p = valid; *p != '\0'; p = g_utf8_next_char (p), n++)
+    {
+      gunichar c = g_utf8_get_char (p);
+
+      if (n == ECHO_CHARS)
+        {
+          g_string_append (out, "…");
+          break;
+        }
+      /* g_utf8_make_valid shows broken bytes as U+FFFD: a plain '?' here */
+      if (g_unichar_iscntrl (c) || c == 0xFFFD)
+        g_string_append_c (out, '?');
+      else
+        g_string_append_unichar (out, c);
+    }
+  return g_string_free (out, FALSE);
+}
+
+int
+cli_write_stdout (const char *out)
+{
+  if (fputs (out, stdout) != EOF && fflush (stdout) == 0)
+    return CLI_EXIT_OK;
+  /* nowhere left to report a failure to write to stderr */
+  (void) fprintf (stderr, "rugosa-cli: The result could not be written to "
+                  "the standard output: %s.\n", g_strerror (errno));
+  return CLI_EXIT_FAILURE;
+}
+
 int
 cli_fail (const char *fmt, ...)
 {
@@ -135,7 +175,12 @@ cli_fail (const char *fmt, ...)
   va_start (ap, fmt);
   text = g_strdup_vprintf (fmt, ap);
   va_end (ap);
-  fprintf (stderr, "rugosa-cli: %s\n", text);
+  /* one line on stderr, whatever a message quoted */
+  for (char *p = text; *p != '\0'; p++)
+    if ((unsigned char) *p < 0x20 || *p == 0x7F)
+      *p = '?';
+  /* nowhere left to report a failure to write to stderr */
+  (void) fprintf (stderr, "rugosa-cli: %s\n", text);
   return CLI_EXIT_USAGE;
 }
 
@@ -175,12 +220,14 @@ cli_parse_number (const char *what, const char *text, double *out,
     end++;
   if (end == text || (end != NULL && *end != '\0'))
     {
-      g_string_printf (message, _("%s needs a plain number, not \"%s\"."), what, text);
+      g_autofree char *shown = cli_echo (text);
+      g_string_printf (message, _("%s needs a plain number, not \"%s\"."), what, shown);
       return FALSE;
     }
   if (!isfinite (v))
     {
-      g_string_printf (message, _("%s must be a finite number, not \"%s\"."), what, text);
+      g_autofree char *shown = cli_echo (text);
+      g_string_printf (message, _("%s must be a finite number, not \"%s\"."), what, shown);
       return FALSE;
     }
   *out = v;

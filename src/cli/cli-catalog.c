@@ -249,8 +249,8 @@ cli_cmd_catalog (int argc, char **argv)
     if (g_str_equal (which, lists[i].name))
       {
         lists[i].list (out, cli_args_has (&args, "--json"));
-        fputs (out->str, stdout);
-        return fflush (stdout) == 0 ? CLI_EXIT_OK : CLI_EXIT_FAILURE;
+        return cli_write_stdout (out->str);
       }
-  return cli_fail (_("Unknown catalog \"%s\": use materials, pipes, fittings, fluids or aging."), which);
+  g_autofree char *shown = cli_echo (which);
+  return cli_fail (_("Unknown catalog \"%s\": use materials, pipes, fittings, fluids or aging."), shown);
 }

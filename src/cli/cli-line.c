@@ -19,8 +19,7 @@
 static int
 finish_output (GString *out)
 {
-  fputs (out->str, stdout);
-  return fflush (stdout) == 0 ? CLI_EXIT_OK : CLI_EXIT_FAILURE;
+  return cli_write_stdout (out->str);
 }
 
 static gboolean
@@ -48,6 +47,54 @@ parse_positive (const CliArgs *args, const char *name, RgQuantity q,
       return FALSE;
     }
   return TRUE;
+}
+
+/* The core's sentences name a quantity ("the salinity"), not the option
+ * that set it: add the option, so the user knows what to change.  The
+ * first entry whose words occur in the sentence wins. */
+static const char *const ERROR_OPTIONS[][2] = {
+  { "Unknown pipe designation", "--pipe" },
+  { "Unknown pipe material", "--material" },
+  { "Unknown fitting", "--fitting" },
+  { "Unknown fluid", "--fluid" },
+  { "aggressiveness class", "--aging" },
+  { "friction model", "--model" },
+  { "transition limits", "--re-laminar-max and --re-turbulent-min" },
+  { "After ", "--age and --aging" },
+  { "aged head loss", "--flow, --length, --age and --aging" },
+  { "head loss is too large", "--flow, --length and --k-sum" },
+  { "relative roughness", "--roughness and --diameter" },
+  { "Reynolds number", "--flow, --diameter and the fluid" },
+  { "velocity that cannot", "--flow and --diameter" },
+  { "boils", "--temperature and --pressure" },
+  { "lower of the two", "--oil-nu1 and --oil-nu2 at --oil-t1 and --oil-t2" },
+  { "two temperatures", "--oil-t1 and --oil-t2" },
+  { "first temperature", "--oil-t1" },
+  { "second temperature", "--oil-t2" },
+  { "reference temperature", "--oil-density-t" },
+  { "kinematic viscosities", "--oil-nu1 and --oil-nu2" },
+  { "reference density", "--oil-density" },
+  { "expansion", "--oil-expansion" },
+  { "salinity", "--salinity" },
+  { "custom fluid's density", "--density" },
+  { "custom fluid's dynamic viscosity", "--viscosity" },
+  { "pressure", "--pressure" },
+  { "temperature", "--temperature" },
+};
+
+static int
+fail_naming_option (const RgError *err)
+{
+  const char *text = err->text;
+  size_t len = strlen (text);
+
+  for (gsize i = 0; i < G_N_ELEMENTS (ERROR_OPTIONS); i++)
+    if (strstr (text, ERROR_OPTIONS[i][0]) != NULL
+        && strstr (text, ERROR_OPTIONS[i][1]) == NULL && len > 0
+        && text[len - 1] == '.')
+      return cli_fail (_("%.*s; check %s."), (int) (len - 1), text,
+                       ERROR_OPTIONS[i][1]);
+  return cli_fail_error (err);
 }
 
 static gboolean
@@ -86,8 +133,10 @@ cli_cmd_friction (int argc, char **argv)
   if (!cli_args_parse (&args, "friction", friction_options, argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len > 0)
-    return cli_fail (_("Unexpected argument \"%s\" for 'friction'."),
-                     (char *) g_ptr_array_index (args.positional, 0));
+    {
+      g_autofree char *shown = cli_echo (g_ptr_array_index (args.positional, 0));
+      return cli_fail (_("Unexpected argument \"%s\" for 'friction'."), shown);
+    }
   if ((re_text = cli_require (&args, "--re", _("give the Reynolds number, e.g. --re 1e5"), msg)) == NULL
       || (rr_text = cli_require (&args, "--rr", _("give the relative roughness ε/D, e.g. --rr 0.0002"), msg)) == NULL)
     return cli_fail ("%s", msg->str);
@@ -99,7 +148,7 @@ cli_cmd_friction (int argc, char **argv)
   if (!(rr >= 0.0 && rr <= RG_FRICTION_RR_MAX))
     return cli_fail (_("--rr must lie between 0 and %g."), RG_FRICTION_RR_MAX);
   if (!parse_model (&args, &model, &err))
-    return cli_fail_error (&err);
+    return fail_naming_option (&err);
   if (rg_friction_point (model, NULL, re, rr, &pt, &err) != RG_OK)
     return cli_fail_error (&err);
 
@@ -220,13 +269,13 @@ fluid_from_args (const CliArgs *args, const char *kind_text, RgFluidSpec *spec,
       }
     case RG_FLUID_OIL:
       {
-        static const struct { const char *name; RgQuantity q; gsize offset; gboolean required; } oil[] = {
-          { "--oil-nu1", RG_QTY_KIN_VISCOSITY, G_STRUCT_OFFSET (RgFluidSpec, oil_nu1_m2_s), TRUE },
-          { "--oil-t1", RG_QTY_TEMPERATURE, G_STRUCT_OFFSET (RgFluidSpec, oil_t1_k), TRUE },
-          { "--oil-nu2", RG_QTY_KIN_VISCOSITY, G_STRUCT_OFFSET (RgFluidSpec, oil_nu2_m2_s), TRUE },
-          { "--oil-t2", RG_QTY_TEMPERATURE, G_STRUCT_OFFSET (RgFluidSpec, oil_t2_k), TRUE },
-          { "--oil-density", RG_QTY_DENSITY, G_STRUCT_OFFSET (RgFluidSpec, oil_density_ref_kg_m3), TRUE },
-          { "--oil-density-t", RG_QTY_TEMPERATURE, G_STRUCT_OFFSET (RgFluidSpec, oil_t_ref_k), FALSE },
+        static const struct { const char *name; RgQuantity q; gboolean required; gsize offset; } oil[] = {
+          { "--oil-nu1", RG_QTY_KIN_VISCOSITY, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_nu1_m2_s) },
+          { "--oil-t1", RG_QTY_TEMPERATURE, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_t1_k) },
+          { "--oil-nu2", RG_QTY_KIN_VISCOSITY, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_nu2_m2_s) },
+          { "--oil-t2", RG_QTY_TEMPERATURE, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_t2_k) },
+          { "--oil-density", RG_QTY_DENSITY, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_density_ref_kg_m3) },
+          { "--oil-density-t", RG_QTY_TEMPERATURE, FALSE, G_STRUCT_OFFSET (RgFluidSpec, oil_t_ref_k) },
         };
         for (gsize i = 0; i < G_N_ELEMENTS (oil); i++)
           {
@@ -246,10 +295,11 @@ fluid_from_args (const CliArgs *args, const char *kind_text, RgFluidSpec *spec,
         if (cli_args_has (args, "--oil-expansion"))
           {
             g_autoptr (GString) m = g_string_new (NULL);
-            if (!cli_parse_number ("--oil-expansion", cli_args_get (args, "--oil-expansion"),
+            if (!cli_parse_number ("--oil-expansion (per kelvin, e.g. 0.00064)",
+                                   cli_args_get (args, "--oil-expansion"),
                                    &spec->oil_expansion_per_k, m))
               {
-                rg_error_set (err, RG_ERR_PARSE, "%s (per kelvin, e.g. 0.00064)", m->str);
+                rg_error_set (err, RG_ERR_PARSE, "%s", m->str);
                 return FALSE;
               }
           }
@@ -314,10 +364,10 @@ cli_cmd_fluid (int argc, char **argv)
   if (args.positional->len != 1)
     return cli_fail (_("'fluid' needs exactly one fluid name: water, seawater, oil, air or custom."));
   if (!fluid_from_args (&args, g_ptr_array_index (args.positional, 0), &spec, &err))
-    return cli_fail_error (&err);
+    return fail_naming_option (&err);
   rg_warnings_clear (&warnings);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
-    return cli_fail_error (&err);
+    return fail_naming_option (&err);
 
   if (cli_args_has (&args, "--json"))
     {
@@ -395,8 +445,9 @@ parse_fitting (const char *text, RgFittingUse *use, RgError *err)
         }
       if (!(count >= 1.0 && count <= 10000.0 && count == floor (count)))
         {
+          g_autofree char *shown = cli_echo (text);
           rg_error_set (err, RG_ERR_DOMAIN,
-                        "--fitting \"%s\": the count must be a whole number from 1 to 10000.", text);
+                        "--fitting \"%s\": the count must be a whole number from 1 to 10000.", shown);
           return FALSE;
         }
       name = g_strstrip (g_strndup (s, (gsize) (sep - s)));
@@ -417,8 +468,9 @@ parse_fitting (const char *text, RgFittingUse *use, RgError *err)
         }
       if (!(use->k_plain >= 0.0 && use->k_plain <= 1.0e4))
         {
+          g_autofree char *shown = cli_echo (text);
           rg_error_set (err, RG_ERR_DOMAIN,
-                        "--fitting \"%s\": a plain K must lie between 0 and 10000.", text);
+                        "--fitting \"%s\": a plain K must lie between 0 and 10000.", shown);
           return FALSE;
         }
       return TRUE;
@@ -441,7 +493,7 @@ parse_age (const char *text, double *years, RgError *err)
     return FALSE;
   if (!(*years >= 0.0 && *years <= 200.0))
     {
-      rg_error_set (err, RG_ERR_DOMAIN, "--age must lie between 0 and 200 years.");
+      rg_error_set (err, RG_ERR_DOMAIN, "%s", _("--age must lie between 0 and 200 years."));
       return FALSE;
     }
   return TRUE;
@@ -470,7 +522,7 @@ parse_aging (const char *text, double *rate_m_per_year, RgError *err)
     return FALSE;
   if (rg_units_from_si (RG_QTY_ROUGHNESS_RATE, si, "mm/yr", rate_m_per_year, err) != RG_OK)
     return FALSE;
-  *rate_m_per_year *= 1e-3;
+  *rate_m_per_year *= 1.0e-3; /* mm -> m */
   if (!(*rate_m_per_year >= 0.0 && *rate_m_per_year <= 0.01))
     {
       rg_error_set (err, RG_ERR_DOMAIN,
@@ -529,8 +581,10 @@ cli_cmd_line (int argc, char **argv)
   if (!cli_args_parse (&args, "line", line_options, argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len > 0)
-    return cli_fail (_("Unexpected argument \"%s\" for 'line'."),
-                     (char *) g_ptr_array_index (args.positional, 0));
+    {
+      g_autofree char *shown = cli_echo (g_ptr_array_index (args.positional, 0));
+      return cli_fail (_("Unexpected argument \"%s\" for 'line'."), shown);
+    }
 
   /* Pipe: catalog designation or inner diameter (not both). */
   if (cli_args_has (&args, "--pipe") && cli_args_has (&args, "--diameter"))
@@ -538,7 +592,7 @@ cli_cmd_line (int argc, char **argv)
   if (cli_args_has (&args, "--pipe"))
     {
       if (rg_pipe_lookup (cli_args_get (&args, "--pipe"), &pipe, &err) != RG_OK)
-        return cli_fail_error (&err);
+        return fail_naming_option (&err);
       in.diameter_m = pipe->inner_diameter_m;
     }
   else if (!cli_args_has (&args, "--diameter"))
@@ -562,7 +616,7 @@ cli_cmd_line (int argc, char **argv)
       if (name == NULL)
         return cli_fail (_("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material."));
       if (rg_material_lookup (name, &material, &err) != RG_OK)
-        return cli_fail_error (&err);
+        return fail_naming_option (&err);
       in.roughness_m = material->roughness_m;
     }
 
@@ -574,9 +628,17 @@ cli_cmd_line (int argc, char **argv)
     return cli_fail (_("--length is required: give the line length, e.g. --length \"250 m\"."));
   if (!parse_positive (&args, "--length", RG_QTY_LENGTH, FALSE, "250 m", &in.length_m, &err))
     return cli_fail_error (&err);
+  /* Common practice (no single source): the longest pipelines run a few
+   * thousand kilometres; a longer line is a typo or a wrong unit. */
+  if (!(in.length_m <= 1.0e7))
+    return cli_fail ("%s", _("--length must lie between 0 (exclusive) and 10000 km."));
   if (cli_args_has (&args, "--elevation")
       && !parse_quantity (&args, "--elevation", RG_QTY_LENGTH, &in.elevation_m, &err))
     return cli_fail_error (&err);
+  /* Common practice (no single source): no pipeline rises or falls more
+   * than the height of the highest mountain; a larger value is a typo. */
+  if (!(fabs (in.elevation_m) <= 1.0e4))
+    return cli_fail ("%s", _("--elevation must lie between -10000 m and 10000 m (outlet height minus inlet height)."));
   if (cli_args_has (&args, "--k-sum"))
     {
       if (!cli_parse_number ("--k-sum", cli_args_get (&args, "--k-sum"), &k_extra, msg))
@@ -585,7 +647,7 @@ cli_cmd_line (int argc, char **argv)
         return cli_fail (_("--k-sum must lie between 0 and 100000."));
     }
   if (!parse_model (&args, &in.model, &err))
-    return cli_fail_error (&err);
+    return fail_naming_option (&err);
   if (cli_args_has (&args, "--re-laminar-max")
       && !cli_parse_number ("--re-laminar-max", cli_args_get (&args, "--re-laminar-max"),
                             &in.transition.re_laminar_max, msg))
@@ -597,19 +659,19 @@ cli_cmd_line (int argc, char **argv)
 
   /* Aging */
   if (cli_args_has (&args, "--age") && !cli_args_has (&args, "--aging"))
-    return cli_fail (_("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog materials') or a rate such as \"0.05 mm/yr\"."));
+    return cli_fail (_("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog aging') or a rate such as \"0.05 mm/yr\"."));
   if (cli_args_has (&args, "--age") && !parse_age (cli_args_get (&args, "--age"), &age, &err))
     return cli_fail_error (&err);
   if (cli_args_has (&args, "--aging") && !parse_aging (cli_args_get (&args, "--aging"), &rate, &err))
-    return cli_fail_error (&err);
+    return fail_naming_option (&err);
 
   /* Fluid */
   if ((fluid = cli_args_get (&args, "--fluid")) == NULL)
     return cli_fail (_("--fluid is required: water, seawater, oil, air or custom."));
   if (!fluid_from_args (&args, fluid, &spec, &err))
-    return cli_fail_error (&err);
+    return fail_naming_option (&err);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
-    return cli_fail_error (&err);
+    return fail_naming_option (&err);
   in.density_kg_m3 = props.density_kg_m3;
   in.viscosity_pa_s = props.dynamic_viscosity_pa_s;
 
@@ -620,7 +682,7 @@ cli_cmd_line (int argc, char **argv)
     {
       RgFittingUse use;
       if (!parse_fitting (g_ptr_array_index (fittings, i), &use, &err))
-        return cli_fail_error (&err);
+        return fail_naming_option (&err);
       g_array_append_val (uses, use);
     }
   in.k_sum = k_extra;
@@ -628,7 +690,7 @@ cli_cmd_line (int argc, char **argv)
     {
       RgLineResult first;
       if (rg_line_evaluate (&in, &first, &err) != RG_OK)
-        return cli_fail_error (&err);
+        return fail_naming_option (&err);
       if (rg_fittings_k_sum ((RgFittingUse *) uses->data, (int) uses->len,
                              first.reynolds, in.diameter_m, &k_fittings, &err) != RG_OK)
         return cli_fail_error (&err);
@@ -636,7 +698,7 @@ cli_cmd_line (int argc, char **argv)
     }
 
   if (rg_aging_evaluate (&in, rate, age, &aged, &err) != RG_OK)
-    return cli_fail_error (&err);
+    return fail_naming_option (&err);
 
   const RgLineResult *r = &aged.result;
   range_warnings (in.model, r, &warnings);

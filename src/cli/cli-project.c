@@ -91,8 +91,7 @@ cli_cmd_eval (int argc, char **argv)
     return CLI_EXIT_USAGE;
   if (!rugosa_project_format_eval (project, age, format, out, &error))
     return cli_fail ("%s", error->message);
-  fputs (out->str, stdout);
-  return fflush (stdout) == 0 ? CLI_EXIT_OK : CLI_EXIT_FAILURE;
+  return cli_write_stdout (out->str);
 }
 
 static const CliOption render_options[] = {
@@ -193,7 +192,7 @@ cli_cmd_render (int argc, char **argv)
   if (!rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
                             width, height, date, path, &error))
     {
-      fprintf (stderr, "rugosa-cli: %s\n", error->message);
+      (void) fprintf (stderr, "rugosa-cli: %s\n", error->message);
       return error->code == RUGOSA_CHART_ERROR_WRITE ? CLI_EXIT_FAILURE : CLI_EXIT_USAGE;
     }
   return CLI_EXIT_OK;

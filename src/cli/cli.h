@@ -6,6 +6,7 @@
 #include <glib/gi18n.h>
 
 #include "core/status.h"
+#include "model/rugosa-project.h"
 
 /* Exit statuses: 0 success, 1 an internal failure (I/O), 2 bad input. */
 enum { CLI_EXIT_OK = 0, CLI_EXIT_FAILURE = 1, CLI_EXIT_USAGE = 2 };
@@ -35,6 +36,16 @@ gboolean cli_args_has (const CliArgs *args, const char *name);
 const char *cli_args_get (const CliArgs *args, const char *name);
 /* All values of a repeatable option (never NULL). */
 GPtrArray *cli_args_get_all (const CliArgs *args, const char *name);
+
+/* User text quoted in a message, made safe for one line: at most 40
+ * characters (then "…"), broken UTF-8 and control characters shown as '?'.
+ * Free with g_free. */
+char *cli_echo (const char *text);
+
+/* Writes `out` to stdout and flushes it: CLI_EXIT_OK, or CLI_EXIT_FAILURE
+ * with a sentence on stderr when the output cannot be written (a full disk,
+ * a closed pipe). */
+int cli_write_stdout (const char *out);
 
 /* Reports a usage error: "rugosa-cli: <sentence>" on stderr. */
 int cli_fail (const char *fmt, ...) G_GNUC_PRINTF (1, 2);
@@ -87,6 +98,5 @@ int cli_cmd_eval (int argc, char **argv);
 int cli_cmd_render (int argc, char **argv);
 
 /* Shared by the project commands (cli-project.c). */
-typedef struct _RugosaProject RugosaProject;
 RugosaProject *cli_load_project (const CliArgs *args, const char *command);
 gboolean cli_parse_age_option (const CliArgs *args, double *age);

@@ -73,13 +73,14 @@ main (int argc, char **argv)
 
   /* Messages may be translated; numbers are always written and read in the
    * C locale (g_ascii_*), so the output does not depend on LC_NUMERIC. */
-  setlocale (LC_ALL, "");
-  setlocale (LC_NUMERIC, "C");
+  /* without the user's locale, messages stay untranslated: not an error */
+  (void) setlocale (LC_ALL, "");
+  (void) setlocale (LC_NUMERIC, "C");
   /* JSON and CSV are for scripts: their text (warnings, notes) stays in
    * English, byte for byte the same under any locale.  In the C locale of
    * LC_MESSAGES gettext ignores LANGUAGE too. */
   if (machine_output (argc, argv))
-    setlocale (LC_MESSAGES, "C");
+    (void) setlocale (LC_MESSAGES, "C");
   {
     /* RUGOSA_LOCALEDIR: the build folder's po/ (tests, running uninstalled). */
     const char *localedir = g_getenv ("RUGOSA_LOCALEDIR");
@@ -91,19 +92,17 @@ main (int argc, char **argv)
 
   if (argc < 2)
     {
-      fputs (_(usage_text), stderr);
+      (void) fputs (_(usage_text), stderr);
       return CLI_EXIT_USAGE;
     }
   if (g_str_equal (argv[1], "--help") || g_str_equal (argv[1], "-h")
       || g_str_equal (argv[1], "help"))
     {
-      fputs (_(usage_text), stdout);
-      return CLI_EXIT_OK;
+      return cli_write_stdout (_(usage_text));
     }
   if (g_str_equal (argv[1], "--version"))
     {
-      printf ("rugosa-cli %s\n", PACKAGE_VERSION);
-      return CLI_EXIT_OK;
+      return cli_write_stdout ("rugosa-cli " PACKAGE_VERSION "\n");
     }
   for (gsize i = 0; i < G_N_ELEMENTS (commands); i++)
     if (g_str_equal (argv[1], commands[i].name))
@@ -111,10 +110,10 @@ main (int argc, char **argv)
         for (int j = 2; j < argc; j++)
           if (g_str_equal (argv[j], "--help") || g_str_equal (argv[j], "-h"))
             {
-              fputs (_(usage_text), stdout);
-              return CLI_EXIT_OK;
+              return cli_write_stdout (_(usage_text));
             }
         return commands[i].run (argc, argv);
       }
-  return cli_fail (_("Unknown command \"%s\"; see 'rugosa-cli --help'."), argv[1]);
+  g_autofree char *shown = cli_echo (argv[1]);
+  return cli_fail (_("Unknown command \"%s\"; see 'rugosa-cli --help'."), shown);
 }

@@ -153,7 +153,7 @@ rg_aging_evaluate (const RgLineInput *in, double rate_m_per_year,
                    double age_years, RgAgingResult *out, RgError *err)
 {
   RgLineInput aged;
-  double eps, slope;
+  double eps = 0.0, slope = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st;
 
   if ((st = rg_aging_roughness (in->roughness_m, rate_m_per_year, age_years,
@@ -175,8 +175,15 @@ rg_aging_evaluate (const RgLineInput *in, double rate_m_per_year,
     return st;
 
   out->roughness_m = eps;
-  out->head_loss_ratio_to_new = out->result.head_loss_total_m
-                                / out->result_new.head_loss_total_m;
+  /* A flow so small that v² underflows gives no head loss at either age;
+   * the limit of the ratio for a vanishing (laminar) flow is 1, as the
+   * laminar loss does not depend on the roughness. */
+  if (out->result.head_loss_total_m == 0.0
+      && out->result_new.head_loss_total_m == 0.0)
+    out->head_loss_ratio_to_new = 1.0;
+  else
+    out->head_loss_ratio_to_new = out->result.head_loss_total_m
+                                  / out->result_new.head_loss_total_m;
   out->head_loss_rate_m_per_year = out->result.head_loss_major_m * slope
                                    * rate_m_per_year / in->diameter_m;
   if (!isfinite (out->head_loss_ratio_to_new)

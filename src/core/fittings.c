@@ -118,7 +118,7 @@ rg_fittings_k_sum (const RgFittingUse *uses, int n, double re,
   for (int i = 0; i < n; i++)
     {
       const RgFittingUse *u = &uses[i];
-      double k;
+      double k = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
 
       if (!isfinite (u->count) || u->count < 0.0)
         return rg_error_set (err, RG_ERR_DOMAIN,

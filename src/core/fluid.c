@@ -131,7 +131,7 @@ RgStatus
 rg_fluid_properties (const RgFluidSpec *spec, RgFluidProps *out,
                      RgWarnings *warnings, RgError *err)
 {
-  RgFluidProps p;
+  RgFluidProps p = { 0 }; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st;
 
   if (spec == NULL || out == NULL)

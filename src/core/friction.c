@@ -285,6 +285,6 @@ rg_friction_model_from_id (const char *id, RgFrictionModel *model, RgError *err)
         return RG_OK;
       }
   return rg_error_set (err, RG_ERR_PARSE,
-                       "Unknown friction model \"%s\"; use colebrook, haaland, swamee-jain or churchill.",
+                       "Unknown friction model \"%.40s\"; use colebrook, haaland, swamee-jain or churchill.",
                        id != NULL ? id : "");
 }

@@ -131,7 +131,7 @@ static RgStatus
 loss_at_flow (const RgLineInput *in, double q, double *h, RgError *err)
 {
   RgLineInput t = *in;
-  RgLineResult r;
+  RgLineResult r = { 0 }; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st;
 
   t.flow_m3_s = q;
@@ -145,7 +145,7 @@ static RgStatus
 loss_at_diameter (const RgLineInput *in, double d, double *h, RgError *err)
 {
   RgLineInput t = *in;
-  RgLineResult r;
+  RgLineResult r = { 0 }; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st;
 
   t.diameter_m = d;
@@ -246,7 +246,7 @@ rg_line_diameter_for_head_loss (const RgLineInput *in, double head_loss_m,
   if (!(dmin < dmax))
     return rg_error_set (err, RG_ERR_DOMAIN,
                          "No diameter within the computable range suits this flow.");
-  double root;
+  double root = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
   /* h falls as D grows: solve on the loss at each diameter, then take the
    * side of the bracket within the allowed loss (the larger diameter). */
   if ((st = solve_log (loss_at_diameter, in, head_loss_m, log (dmin),

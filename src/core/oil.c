@@ -125,7 +125,7 @@ rg_oil_properties (const RgOilSpec *o, double t_k, RgFluidProps *out,
                    RgWarnings *warnings, RgError *err)
 {
   RgStatus st;
-  double rho, nu;
+  double rho = 0.0, nu = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
 
   if ((st = rg_oil_density (o, t_k, &rho, err)) != RG_OK)
     return st;

@@ -3,7 +3,9 @@
  *
  * A core function that can fail returns an RgStatus and, when `err` is not
  * NULL, fills it with one sentence a person can act on (which value, which
- * range).  The core never hands back NaN or infinity: a non-finite result is
+ * range), on one line and in valid UTF-8 (rg_error_set turns control
+ * characters and bytes of broken UTF-8 into '?').  The core never hands
+ * back NaN or infinity: a non-finite result is
  * reported as RG_ERR_NUMERIC instead. */
 #pragma once
 

@@ -286,7 +286,9 @@ is_space (char c)
 static char
 lower (char c)
 {
-  return (c >= 'A' && c <= 'Z') ? (char) (c - 'A' + 'a') : c;
+  if (c >= 'A' && c <= 'Z')
+    return (char) (c - 'A' + 'a');
+  return c;
 }
 
 /* prefix is lower case */
@@ -401,7 +403,8 @@ normalise_unit (const char *s, size_t len, char out[UNIT_MAX])
           size_t rl = strlen (rep);
           if (n + rl >= UNIT_MAX)
             return -1;
-          memcpy (tmp + n, rep, rl);
+          /* tmp is a byte buffer, not a string: out is terminated below */
+          memcpy (tmp + n, rep, rl); /* NOLINT(bugprone-not-null-terminated-result) */
           n += rl;
         }
       else
@@ -692,7 +695,12 @@ echo_text (const char *s, size_t len, char out[ECHO_MAX + 4])
         len--;
     }
   for (size_t i = 0; i < len; i++)
-    out[n++] = ((unsigned char) s[i] < 0x20 || s[i] == 0x7F) ? '?' : s[i];
+    {
+      char c = s[i];
+      if ((unsigned char) c < 0x20 || c == 0x7F)
+        c = '?';
+      out[n++] = c;
+    }
   if ((size_t) (end - s) > len)
     {
       memcpy (out + n, "\xE2\x80\xA6", 3); /* … */
@@ -863,7 +871,7 @@ rg_units_parse_viscosity (const char *what, const char *text, double *si,
   static const RgQuantity qs[2] = { RG_QTY_DYN_VISCOSITY,
                                     RG_QTY_KIN_VISCOSITY };
   RgQuantity found = RG_QTY_DYN_VISCOSITY;
-  double v;
+  double v = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st = parse_as (qs, 2, what, text,
                           "Pa·s, mPa·s, cP (dynamic) or m²/s, mm²/s, cSt "
                           "(kinematic)",
@@ -931,7 +939,7 @@ RgStatus
 rg_units_to_si (RgQuantity q, double value, const char *unit, double *si,
                 RgError *err)
 {
-  double factor, offset, v;
+  double factor = 1.0, offset = 0.0, v; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st = conversion_unit (q, unit, &factor, &offset, err);
 
   if (st != RG_OK)
@@ -959,7 +967,7 @@ RgStatus
 rg_units_from_si (RgQuantity q, double si, const char *unit, double *value,
                   RgError *err)
 {
-  double factor, offset, v;
+  double factor = 1.0, offset = 0.0, v; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st = conversion_unit (q, unit, &factor, &offset, err);
 
   if (st != RG_OK)

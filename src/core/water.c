@@ -266,7 +266,7 @@ RgStatus
 rg_water_properties (double t_k, double p_pa, double *rho, double *mu,
                      RgError *err)
 {
-  double r, m;
+  double r = 0.0, m = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st = rg_water_density (t_k, p_pa, &r, err);
 
   if (st != RG_OK)

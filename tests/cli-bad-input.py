@@ -1,0 +1,317 @@
+#!/usr/bin/python3
+# SPDX-License-Identifier: GPL-3.0-or-later
+"""The rugosa-cli bad-input matrix: every input option against every class of
+bad value, and values outside each correlation's stated range.
+
+Run: cli-bad-input.py PATH/TO/rugosa-cli           (checks every row)
+     cli-bad-input.py --markdown PATH/TO/rugosa-cli (prints docs/bad-input.md)
+
+Each row names an option, a class, the value given and what must happen:
+  refuse  exit status 2, nothing on stdout, exactly one line on stderr that
+          names the option (and, for a number, the accepted range or units);
+  warn    exit status 0, JSON on stdout that parses, one or more entries in
+          "warnings";
+  accept  exit status 0, JSON on stdout that parses, no warning.
+No stdout may ever hold "nan" or "inf".  The expectations are the program's
+contract (docs/bad-input.md), not measurements: a row fails when the program
+does something else."""
+import concurrent.futures
+import json
+import re
+import subprocess
+import sys
+
+MARKDOWN = len(sys.argv) > 2 and sys.argv[1] == "--markdown"
+CLI = sys.argv[-1]
+LONG = "9" * 100_000  # 100 kB, below the 128 kB limit of one argv string
+
+FRICTION = ["friction", "--re", "1e5", "--rr", "1e-4", "--json"]
+WATER = ["line", "--flow", "12 L/s", "--diameter", "100 mm", "--length",
+         "100 m", "--roughness", "0.045 mm", "--fluid", "water",
+         "--temperature", "20 C", "--json"]
+
+
+def replace(base, drop=(), add=()):
+    """base without the options in drop, then the pairs in add."""
+    out, i = [], 0
+    while i < len(base):
+        if base[i] in drop:
+            i += 2
+            continue
+        out.append(base[i])
+        i += 1
+    return out + list(add)
+
+
+SEA = replace(WATER, ["--fluid"], ["--fluid", "seawater", "--salinity", "35 g/kg"])
+AIR = replace(WATER, ["--fluid", "--flow"], ["--fluid", "air", "--flow", "0.1 m3/s",
+                                            "--pressure", "2 bar"])
+CUSTOM = replace(WATER, ["--fluid", "--temperature"],
+                 ["--fluid", "custom", "--density", "998 kg/m3", "--viscosity", "1 cP"])
+# An invented lubricating oil: 100 cSt at 40 °C, 10 cSt at 100 °C.
+OIL = replace(WATER, ["--fluid", "--temperature"],
+              ["--fluid", "oil", "--temperature", "60 C", "--oil-nu1", "100 cSt",
+               "--oil-t1", "40 C", "--oil-nu2", "10 cSt", "--oil-t2", "100 C",
+               "--oil-density", "870 kg/m3", "--oil-density-t", "15 C",
+               "--oil-expansion", "0.00064"])
+AGED = WATER + ["--age", "10", "--aging", "moderate"]
+PIPE = replace(WATER, ["--diameter"], ["--pipe", "NPS 4 Sch 40"])
+MATERIAL = replace(WATER, ["--roughness"], ["--material", "commercial-steel"])
+
+# option -> (base command, unit of a good value, unit of another kind,
+#            expectations of the generic classes that differ from "refuse")
+# A unit of "" means a plain number (or a name, for the catalog options).
+OPTIONS = {
+    "--re": (FRICTION, "", "m", {"tiny": "accept"}),
+    "--rr": (FRICTION, "", "mm", {"zero": "accept", "tiny": "accept"}),
+    "--model": (WATER, "name", "", {}),
+    # 1e-300 L/s: v² underflows, no head loss at all (ratio to new 1)
+    "--flow": (WATER, "L/s", "m", {"tiny": "accept"}),
+    "--diameter": (WATER, "mm", "L/s", {}),
+    "--pipe": (PIPE, "name", "", {}),
+    "--length": (WATER, "m", "gpm", {"tiny": "accept"}),
+    "--roughness": (WATER, "mm", "bar", {"zero": "accept", "tiny": "accept"}),
+    "--material": (MATERIAL, "name", "", {}),
+    "--age": (AGED, "", "m", {"zero": "accept", "tiny": "accept"}),
+    "--aging": (AGED, "mm/yr", "m", {"zero": "accept", "tiny": "accept"}),
+    "--fitting": (WATER, "name", "", {}),
+    "--k-sum": (WATER, "", "m", {"zero": "accept", "tiny": "accept"}),
+    "--elevation": (WATER, "m", "kPa", {"zero": "accept", "negative": "accept",
+                                        "tiny": "accept"}),
+    "--fluid": (WATER, "name", "", {}),
+    # 0 °C lies below the water model's 0.01 °C (the triple point)
+    "--temperature": (WATER, "C", "bar", {}),
+    "--pressure": (WATER, "bar", "C", {}),
+    "--salinity": (SEA, "g/kg", "kg/m3", {"zero": "accept", "tiny": "accept"}),
+    "--density": (CUSTOM, "kg/m3", "cP", {}),
+    "--viscosity": (CUSTOM, "cP", "kg/m3", {}),
+    "--oil-nu1": (OIL, "cSt", "kg/m3", {}),
+    "--oil-t1": (OIL, "C", "cSt", {"zero": "accept", "negative": "accept",
+                                   "tiny": "accept"}),
+    "--oil-nu2": (OIL, "cSt", "kg/m3", {}),
+    "--oil-t2": (OIL, "C", "cSt", {}),
+    "--oil-density": (OIL, "kg/m3", "cSt", {}),
+    "--oil-density-t": (OIL, "C", "cSt", {"zero": "accept", "negative": "accept",
+                                          "tiny": "accept"}),
+    "--oil-expansion": (OIL, "", "m", {"zero": "accept", "tiny": "accept"}),
+    "--re-laminar-max": (WATER, "", "m", {}),
+    "--re-turbulent-min": (WATER, "", "m", {}),
+}
+
+# Values outside (or at the edge of) each correlation's stated range:
+# option -> [(label, base, value, expectation)]
+RANGE = {
+    "--re": [("above the largest Reynolds number", FRICTION, "1e12", "refuse")],
+    "--rr": [("relative roughness above the largest", FRICTION, "0.5", "refuse")],
+    "--model": [("Swamee-Jain beyond its ε/D ≤ 0.01",
+                 replace(WATER, ["--roughness"], ["--roughness", "2 mm"]), "swamee-jain",
+                 "warn")],
+    "--flow": [("transitional Reynolds number (about 3000)", WATER, "0.24 L/s", "warn"),
+               ("laminar flow (Re about 250)", WATER, "0.02 L/s", "accept"),
+               ("Re about 2.5e8, above Colebrook's stated 1e8", WATER, "20 m3/s", "warn")],
+    "--diameter": [("ε/D above 0.1 (0.045 mm in 0.1 mm)", WATER, "0.1 mm", "refuse")],
+    "--pipe": [("a designation not in the catalog", PIPE, "NPS 2 Sch 41", "refuse")],
+    "--length": [("a length beyond 1e7 m", WATER, "1e9 m", "refuse")],
+    "--roughness": [("ε/D 0.06, above Colebrook's stated 0.05", WATER, "6 mm", "warn")],
+    "--material": [("a name not in the catalog", MATERIAL, "unobtainium", "refuse")],
+    "--age": [("older than 200 years", AGED, "300", "refuse"),
+              ("age as a time", AGED, "25 yr", "accept")],
+    "--aging": [("faster than 10 mm/yr", AGED, "20 mm/yr", "refuse"),
+                ("an unknown class", AGED, "corrosive", "refuse")],
+    "--fitting": [("count 0", WATER, "elbow-90-standard x0", "refuse"),
+                  ("plain K above 10000", WATER, "K=2e4", "refuse"),
+                  ("a known fitting three times", WATER, "elbow-90-standard x3", "accept")],
+    "--k-sum": [("above 100000", WATER, "2e5", "refuse")],
+    "--elevation": [("beyond 10 km", WATER, "2e4 m", "refuse")],
+    "--fluid": [("a fluid that is not offered", WATER, "mercury", "refuse")],
+    "--temperature": [("water above its model's range", WATER, "400 C", "refuse"),
+                      ("water boiling at the given pressure",
+                       WATER + ["--pressure", "1 bar"], "150 C", "refuse"),
+                      ("air below its range", AIR, "-200 C", "refuse"),
+                      ("oil outside its two viscosity points (extrapolated)", OIL,
+                       "20 C", "warn")],
+    "--pressure": [("water above 10 MPa", WATER, "20 MPa", "refuse"),
+                   ("air above 1 MPa (ideal gas off by more than 0.5 %)", AIR,
+                    "1.5 MPa", "warn")],
+    "--salinity": [("above 150 g/kg", SEA, "160 g/kg", "refuse")],
+    "--density": [("above any plausible fluid", CUSTOM, "1e5 kg/m3", "refuse")],
+    "--viscosity": [("above any plausible fluid", CUSTOM, "1e9 Pa.s", "refuse"),
+                    ("kinematic", CUSTOM, "1 cSt", "accept")],
+    "--oil-nu1": [("below 2 cSt (ASTM D341)", OIL, "1 cSt", "refuse"),
+                  ("lower than at the higher temperature", OIL, "5 cSt", "refuse")],
+    "--oil-t1": [("equal to --oil-t2", OIL, "100 C", "refuse")],
+    "--oil-nu2": [("above 1e6 cSt", OIL, "2e6 cSt", "refuse")],
+    "--oil-t2": [("above the oil model's range", OIL, "1000 C", "refuse")],
+    "--oil-density": [("above 1200 kg/m3", OIL, "1500 kg/m3", "refuse")],
+    "--oil-density-t": [("above the oil model's range", OIL, "1000 C", "refuse")],
+    "--oil-expansion": [("above the largest coefficient", OIL, "0.1", "refuse")],
+    "--re-laminar-max": [("above --re-turbulent-min", WATER, "5000", "refuse"),
+                         ("below 500", WATER, "100", "refuse"),
+                         ("inside the range", WATER, "2300", "accept")],
+    "--re-turbulent-min": [("above 100000", WATER, "2e5", "refuse"),
+                           ("inside the range", WATER, "3000", "accept")],
+}
+
+CLASSES = ["zero", "negative", "NaN", "inf", "huge", "tiny", "empty",
+           "wrong unit", "unit of the wrong kind", "non-ASCII", "100 kB"]
+
+
+def generic_value(cls, unit, other):
+    u = "" if unit in ("", "name") else " " + unit
+    return {
+        "zero": "0" + u,
+        "negative": "-1" + u,
+        "NaN": "nan" + u,
+        "inf": "inf" + u,
+        "huge": "1e300" + u,
+        "tiny": "1e-300" + u,
+        "empty": "",
+        "wrong unit": "5 furlongs",
+        "unit of the wrong kind": "5 " + (other or "m"),
+        "non-ASCII": "\uff15" + u + " \u6c34",  # fullwidth 5, a CJK letter
+        "100 kB": LONG,
+    }[cls]
+
+
+def rows():
+    out = []
+    for opt, (base, unit, other, special) in OPTIONS.items():
+        for cls in CLASSES:
+            if unit == "name" and cls == "unit of the wrong kind":
+                continue  # a name has no unit
+            value = generic_value(cls, unit, other)
+            out.append((opt, cls, base, value, special.get(cls, "refuse")))
+        for label, b, value, expect in RANGE.get(opt, []):
+            out.append((opt, "range: " + label, b, value, expect))
+    return out
+
+
+NONFINITE = re.compile(r"(?i)(?<![a-z])-?(nan|inf|infinity)(?![a-z])")
+
+
+def run_row(row):
+    opt, cls, base, value, expect = row
+    argv = [CLI] + replace(base, [opt], [opt, value]) if opt != "--fitting" \
+        else [CLI] + base + [opt, value]
+    p = subprocess.run(argv, capture_output=True, timeout=60,
+                       env={"LANG": "C.UTF-8", "PATH": "/usr/bin:/bin"})
+    out = p.stdout.decode("utf-8", "replace")
+    err = p.stderr.decode("utf-8", "replace")
+    problems = []
+    if NONFINITE.search(out):
+        problems.append("stdout holds nan or inf")
+    if expect == "refuse":
+        if p.returncode != 2:
+            problems.append(f"exit {p.returncode}, not 2")
+        if out:
+            problems.append("stdout is not empty")
+        if err.count("\n") != 1 or not err.endswith("\n"):
+            problems.append(f"stderr is {err.count(chr(10))} lines, not one")
+        if opt not in err:
+            problems.append("stderr does not name " + opt)
+        if len(err) > 600:
+            problems.append(f"stderr is {len(err)} bytes long")
+        try:
+            p.stderr.decode("utf-8")
+        except UnicodeDecodeError:
+            problems.append("stderr is not UTF-8")
+    else:
+        if p.returncode != 0:
+            problems.append(f"exit {p.returncode}, not 0")
+        if err:
+            problems.append("stderr is not empty")
+        try:
+            doc = json.loads(out)
+            warnings = doc.get("warnings", [])
+            if expect == "warn" and not warnings:
+                problems.append("no warning")
+            if expect == "accept" and warnings:
+                problems.append("unexpected warning: " + "; ".join(warnings))
+        except ValueError:
+            problems.append("stdout is not JSON")
+    return row, problems, err.strip()
+
+
+def shown(value):
+    if value == LONG:
+        return "`9…9` (100 000 digits)"
+    if value == "":
+        return "(empty)"
+    return "`" + value.replace("|", "\\|") + "`"
+
+
+def markdown(results):
+    print("# rugosa-cli: bad input\n")
+    print("What `rugosa-cli` does with every class of bad value for each of its "
+          "inputs. Generated by `tests/cli-bad-input.py --markdown "
+          "build/src/cli/rugosa-cli`; the same rows are checked by the test "
+          "`cli-bad-input` (`meson test -C build cli-bad-input`), whose row "
+          "names are the first two columns.\n")
+    print("**refuse**: exit status 2, nothing on stdout, one line on stderr "
+          "naming the option and the accepted range or units. "
+          "**warn**: exit status 0, the result, and a sentence in `warnings`. "
+          "**accept**: exit status 0, the result, no warning. "
+          "No output ever holds `nan` or `inf`.\n")
+    print("The other options of each row are a working line: 12 L/s of water "
+          "at 20 °C through 100 m of 100 mm pipe with 0.045 mm roughness "
+          "(the friction rows: Re 1e5, ε/D 1e-4); seawater with 35 g/kg, "
+          "air at 2 bar, a custom fluid of 998 kg/m³ and 1 cP, and an oil of "
+          "100 cSt at 40 °C and 10 cSt at 100 °C (870 kg/m³) where the option "
+          "needs them.\n")
+    print("Output that cannot be written (stdout on `/dev/full`, a closed "
+          "pipe): exit status 1 and one line on stderr, \"The result could not "
+          "be written to the standard output: …\", for every command and for "
+          "`--help` and `--version` (checked as the row \"output to a full "
+          "disk\").\n")
+    current = None
+    for (opt, cls, base, value, expect), problems, err in results:
+        if opt != current:
+            current = opt
+            print(f"\n## `{opt}`\n")
+            print("| class | value | expected | message (refusals) |")
+            print("|---|---|---|---|")
+        msg = err.replace("rugosa-cli: ", "").replace("|", "\\|")
+        if len(msg) > 160:
+            msg = msg[:157] + "…"
+        status = expect if not problems else expect + " (FAILS: " + "; ".join(problems) + ")"
+        print(f"| {cls} | {shown(value)} | {status} | {msg if expect == 'refuse' else ''} |")
+
+
+def full_disk():
+    """Output that cannot be written (stdout on /dev/full): exit status 1 and
+    one line on stderr, for every command and for --help and --version."""
+    problems = []
+    for args in (FRICTION, WATER, ["fluid", "water", "--temperature", "20 C"],
+                 ["catalog", "pipes"], ["--help"], ["--version"]):
+        with open("/dev/full", "w") as full:
+            p = subprocess.run([CLI] + args, stdout=full, stderr=subprocess.PIPE,
+                               timeout=60, env={"LANG": "C.UTF-8", "PATH": "/usr/bin:/bin"})
+        err = p.stderr.decode("utf-8", "replace")
+        if p.returncode != 1 or err.count("\n") != 1 or "written" not in err:
+            problems.append(f"{args[0]}: exit {p.returncode}, stderr {err.strip()!r}")
+    return problems
+
+
+def main():
+    all_rows = rows()
+    with concurrent.futures.ThreadPoolExecutor(2) as pool:
+        results = list(pool.map(run_row, all_rows))
+    if MARKDOWN:
+        markdown(results)
+        return 0
+    failed = 0
+    disk = full_disk()
+    if disk:
+        failed += 1
+        print("FAIL output to a full disk: " + "; ".join(disk))
+    for (opt, cls, base, value, expect), problems, err in results:
+        if problems:
+            failed += 1
+            v = shown(value)
+            print(f"FAIL {opt} / {cls} {v[:60]}: expected {expect}: "
+                  + "; ".join(problems) + (f" [{err[:200]}]" if err else ""))
+    print(f"{len(results) + 1 - failed} passed, {failed} failed")
+    return 1 if failed else 0
+
+
+sys.exit(main())
