@@ -528,6 +528,14 @@ _rugosa_window_recovery_response (AdwMessageDialog *dialog,
     }
 }
 
+gboolean
+rugosa_window_recovery_pending (void)
+{
+  g_autofree char *path = _rugosa_window_find_leftover ();
+
+  return path != NULL;
+}
+
 void
 rugosa_window_offer_recovery (RugosaWindow *self)
 {
