@@ -43,9 +43,15 @@ def fail(message):
     sys.exit(1)
 
 
+RUNNING = []  # the rugosa process expected to stay up while waiting
+
+
 def wait_for(what, predicate, timeout=TIMEOUT_S):
     end = time.monotonic() + timeout
     while time.monotonic() < end:
+        for p in RUNNING:
+            if p.poll() is not None:
+                fail("rugosa exited (status %d) while waiting for %s" % (p.returncode, what))
         value = predicate()
         if value:
             return value
@@ -118,6 +124,7 @@ def scenario(binary, source, top, restart_with_file, procs):
     # 1-2. Open, add a line.
     first = start(binary, env, project)
     procs.append(first)
+    RUNNING[:] = [first]
     wid = wait_for("the window of plant.rugosa",
                    lambda: window_named(first, "plant.rugosa"))
     press(wid, "ctrl+equal")
@@ -136,6 +143,7 @@ def scenario(binary, source, top, restart_with_file, procs):
             fail("the recovery copy does not name plant.rugosa as its origin")
 
     # 4. Kill without warning.
+    RUNNING[:] = []
     first.send_signal(signal.SIGKILL)
     first.wait(timeout=TIMEOUT_S)
     with open(project, "rb") as f:
@@ -147,6 +155,7 @@ def scenario(binary, source, top, restart_with_file, procs):
     # 5. Start again: the recovery is offered; accept it with Enter.
     second = start(binary, env, *([project] if restart_with_file else []))
     procs.append(second)
+    RUNNING[:] = [second]
     if restart_with_file:
         # The file opens as it is on disk, unchanged, beside the offer.
         wait_for("the window of plant.rugosa",
@@ -173,6 +182,7 @@ def scenario(binary, source, top, restart_with_file, procs):
              lambda: window_named(second, "plant.rugosa"))
 
     # A clean quit: nothing is left to recover.
+    RUNNING[:] = []
     press(wid, "ctrl+q")
     second.wait(timeout=TIMEOUT_S)
     if recovery_copies(state):
