@@ -541,6 +541,80 @@ test_recovery (void)
   close_window (fresh);
 }
 
+/* Earlier tests close windows without the close guard and so leave
+ * recovery copies behind; a test that needs one copy clears them. */
+static void
+clear_recovery_dir (void)
+{
+  g_autofree char *dir = g_build_filename (g_get_user_state_dir (), "rugosa", "recovery", NULL);
+  GDir *d = g_dir_open (dir, 0, NULL);
+  const char *name;
+
+  if (d == NULL)
+    return;
+  while ((name = g_dir_read_name (d)) != NULL)
+    {
+      g_autofree char *path = g_build_filename (dir, name, NULL);
+      g_unlink (path);
+    }
+  g_dir_close (d);
+}
+
+/* Recovering rewrites the copy as the window's own autosave; when that
+ * write fails, the old copy is the only one on disk and must stay. */
+static void
+test_recovery_keeps_copy (void)
+{
+  RugosaWindow *crashed = open_demo ();
+  RugosaWindow *fresh;
+  guint pos = find_line (crashed, -1, FALSE);
+  RugosaLinePanel *panel = select_line (crashed, pos);
+  g_autofree char *autosave = rugosa_window_autosave_path (crashed);
+  g_autofree char *origin = g_strconcat (autosave, ".origin", NULL);
+  g_autofree char *kept = g_strconcat (autosave, ".kept", NULL);
+  g_autofree char *kept_origin = g_strconcat (origin, ".kept", NULL);
+  g_autofree char *blocker = NULL;
+  g_autoptr (RugosaProject) copy = rugosa_project_new ();
+  g_autoptr (GError) error = NULL;
+  AdwMessageDialog *dialog;
+
+  clear_recovery_dir ();
+  g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "444 m"));
+  drain ();
+  g_assert_true (rugosa_window_autosave_now (crashed, &error));
+  g_assert_no_error (error);
+  g_assert_cmpint (g_rename (autosave, kept), ==, 0);
+  g_assert_cmpint (g_rename (origin, kept_origin), ==, 0);
+  close_window (crashed);
+  g_assert_cmpint (g_rename (kept, autosave), ==, 0);
+  g_assert_cmpint (g_rename (kept_origin, origin), ==, 0);
+
+  fresh = rugosa_window_new (app);
+  gtk_window_present (GTK_WINDOW (fresh));
+  /* A folder where the new copy would go makes writing it fail. */
+  blocker = rugosa_window_autosave_path (fresh);
+  g_assert_cmpint (g_mkdir (blocker, 0700), ==, 0);
+  rugosa_window_offer_recovery (fresh);
+  drain ();
+  dialog = find_message_dialog (GTK_WINDOW (fresh));
+  g_assert_nonnull (dialog);
+  adw_message_dialog_response (dialog, "recover");
+  drain ();
+  /* Source: the value typed before the crash, 444 m. */
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (rugosa_window_get_project (fresh), pos),
+                                             "length"), ==, 444.0);
+  g_assert_true (rugosa_window_get_modified (fresh));
+  g_assert_true (rugosa_project_load (copy, autosave, &error));
+  g_assert_no_error (error);
+  g_assert_true (rugosa_project_equal (copy, rugosa_window_get_project (fresh)));
+  g_assert_true (g_file_test (origin, G_FILE_TEST_EXISTS));
+
+  g_assert_cmpint (g_rmdir (blocker), ==, 0);
+  g_unlink (autosave);
+  g_unlink (origin);
+  close_window (fresh);
+}
+
 static void
 test_close_guard (void)
 {
@@ -1013,6 +1087,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/preferences/unit-system", test_unit_system);
   g_test_add_func ("/ui/files/export-print-csv", test_outputs);
   g_test_add_func ("/ui/files/recovery", test_recovery);
+  g_test_add_func ("/ui/files/recovery-keeps-copy", test_recovery_keeps_copy);
   g_test_add_func ("/ui/files/close-guard", test_close_guard);
   g_test_add_func ("/ui/files/save-fails-keeps-dirty", test_save_fails_keeps_dirty);
   g_test_add_func ("/ui/files/newer-version-refused", test_newer_version_refused);
