@@ -622,7 +622,7 @@ test_close_guard (void)
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   AdwMessageDialog *dialog;
-  g_autoptr (GtkWidget) keep = g_object_ref (GTK_WIDGET (win));
+  g_autoptr (GtkWidget) keep G_GNUC_UNUSED = g_object_ref (GTK_WIDGET (win));
 
   /* Unchanged: closes at once. */
   g_assert_false (rugosa_window_get_modified (win));
@@ -695,7 +695,6 @@ test_save_fails_keeps_dirty (void)
   g_autoptr (GError) error = NULL;
   g_autofree char *before = NULL, *now = NULL;
   g_autoptr (RugosaProject) copy = rugosa_project_new ();
-  g_autoptr (GtkWidget) keep = g_object_ref (GTK_WIDGET (win));
   g_autofree char *autosave = rugosa_window_autosave_path (win);
   AdwMessageDialog *dialog;
 

@@ -367,7 +367,7 @@ static double
 flow_f (const RugosaChartSpec *spec, double re, double rr, int *regime)
 {
   double f = 0.02;
-  *regime = rg_regime_classify (&spec->transition, re);
+  *regime = (int) rg_regime_classify (&spec->transition, re);
   if (*regime == RG_REGIME_LAMINAR)
     return 64.0 / re;
   if (rg_friction_colebrook (fmax (re, RG_FRICTION_RE_MIN), rr, &f, NULL) != RG_OK)

@@ -1118,7 +1118,7 @@ settings_to_json (RugosaSettings *s)
   while (g_variant_iter_next (&iter, "{&s&s}", &q, &u))
     cJSON_AddStringToObject (ov, q, u);
   cJSON_AddStringToObject (o, "friction_model",
-                           rg_friction_model_id (rugosa_settings_get_friction_model (s)));
+                           rg_friction_model_id ((RgFrictionModel) rugosa_settings_get_friction_model (s)));
   g = cJSON_AddObjectToObject (o, "transition");
   add_number (g, "re_laminar_max", get_d (s, "re-laminar-max"));
   add_number (g, "re_turbulent_min", get_d (s, "re-turbulent-min"));
@@ -1149,7 +1149,7 @@ line_to_json (RugosaLine *l)
   cJSON_AddStringToObject (o, "note", rugosa_line_get_note (l));
 
   g = cJSON_AddObjectToObject (o, "fluid");
-  cJSON_AddStringToObject (g, "kind", rg_fluid_kind_id (rugosa_line_get_fluid_kind (l)));
+  cJSON_AddStringToObject (g, "kind", rg_fluid_kind_id ((RgFluidKind) rugosa_line_get_fluid_kind (l)));
   add_number (g, "temperature_K", get_d (l, "temperature"));
   add_number (g, "pressure_Pa", get_d (l, "pressure"));
   add_number (g, "salinity_kg_kg", get_d (l, "salinity"));
