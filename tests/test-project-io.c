@@ -1,7 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The project file: round trips, unknown fields kept, one test per class
  * of bad file (each asserting the message and that the open document did
- * not change), and atomic saving with injected failures. */
+ * not change).  Saving under failures: tests/test-data-safety.c. */
 #include "config.h"
 
 #include <errno.h>
@@ -336,69 +336,6 @@ test_missing_file (void)
   g_assert_nonnull (strstr (error->message, "Cannot read “x.rugosa”"));
 }
 
-/* ---- atomic save ---- */
-
-static int
-fail_at (RugosaSaveStep step, gpointer user_data)
-{
-  return (int) step == GPOINTER_TO_INT (user_data) ? ENOSPC : 0;
-}
-
-static void
-test_atomic_save (gconstpointer data)
-{
-  RugosaSaveStep step = GPOINTER_TO_INT (data);
-  g_autoptr (RugosaProject) p = load_demo ();
-  g_autoptr (GError) error = NULL;
-  g_autofree char *dir = g_dir_make_tmp ("rugosa-XXXXXX", NULL);
-  g_autofree char *path = g_build_filename (dir, "plant.rugosa", NULL);
-  g_autofree char *backup = g_strconcat (path, "~", NULL);
-  g_autofree char *original = NULL, *now = NULL, *saved = NULL;
-  GDir *d;
-  const char *entry;
-  int n_entries = 0;
-
-  g_assert_true (rugosa_project_save (p, path, &error));
-  g_assert_no_error (error);
-  g_assert_true (g_file_get_contents (path, &original, NULL, NULL));
-  g_assert_false (g_file_test (backup, G_FILE_TEST_EXISTS));
-
-  rugosa_line_set_name (rugosa_project_get_line (p, 0), "Edited");
-  rugosa_project_set_save_fault_hook (fail_at, GINT_TO_POINTER (step));
-  g_assert_false (rugosa_project_save (p, path, &error));
-  rugosa_project_set_save_fault_hook (NULL, NULL);
-  g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_IO);
-  g_assert_nonnull (strstr (error->message, g_strerror (ENOSPC)));
-  g_assert_nonnull (strstr (error->message, "The previous file is unchanged."));
-  g_clear_error (&error);
-
-  /* The original is intact and no temporary file is left behind. */
-  g_assert_true (g_file_get_contents (path, &now, NULL, NULL));
-  g_assert_cmpstr (now, ==, original);
-  d = g_dir_open (dir, 0, NULL);
-  while ((entry = g_dir_read_name (d)) != NULL)
-    {
-      g_assert_false (g_str_has_prefix (entry, ".plant.rugosa."));
-      n_entries++;
-    }
-  g_dir_close (d);
-  /* plant.rugosa, and plant.rugosa~ when the failure came after the backup */
-  g_assert_cmpint (n_entries, ==, step == RUGOSA_SAVE_STEP_RENAME ? 2 : 1);
-
-  /* A save that works keeps the previous file as the backup. */
-  g_assert_true (rugosa_project_save (p, path, &error));
-  g_assert_no_error (error);
-  g_free (now);
-  g_assert_true (g_file_get_contents (backup, &now, NULL, NULL));
-  g_assert_cmpstr (now, ==, original);
-  g_assert_true (g_file_get_contents (path, &saved, NULL, NULL));
-  g_assert_nonnull (strstr (saved, "\"Edited\""));
-
-  g_unlink (path);
-  g_unlink (backup);
-  g_rmdir (dir);
-}
-
 int
 main (int argc, char **argv)
 {
@@ -412,11 +349,5 @@ main (int argc, char **argv)
       g_autofree char *name = g_strdup_printf ("/project/io/bad/%s", bad_files[i].name);
       g_test_add_data_func (name, &bad_files[i], test_bad_file);
     }
-  g_test_add_data_func ("/project/io/save/write-fails",
-                        GINT_TO_POINTER (RUGOSA_SAVE_STEP_WRITE), test_atomic_save);
-  g_test_add_data_func ("/project/io/save/fsync-fails",
-                        GINT_TO_POINTER (RUGOSA_SAVE_STEP_FSYNC), test_atomic_save);
-  g_test_add_data_func ("/project/io/save/rename-fails",
-                        GINT_TO_POINTER (RUGOSA_SAVE_STEP_RENAME), test_atomic_save);
   return g_test_run ();
 }

@@ -1,7 +1,8 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The desktop application, driven in-process under Xvfb: the demo project,
  * editing through the side panel, the service-age slider, refused input,
- * files, undo and redo, autosave, and a screenshot of the main window.
+ * files, undo and redo, autosave, failed saves and refused files, and a
+ * screenshot of the main window.
  *
  * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
  * display the program reports a skip. */
@@ -10,6 +11,7 @@
 #include "config.h"
 
 #include <adwaita.h>
+#include <errno.h>
 #include <glib/gstdio.h>
 #include <math.h>
 #include <string.h>
@@ -539,6 +541,80 @@ test_recovery (void)
   close_window (fresh);
 }
 
+/* Earlier tests close windows without the close guard and so leave
+ * recovery copies behind; a test that needs one copy clears them. */
+static void
+clear_recovery_dir (void)
+{
+  g_autofree char *dir = g_build_filename (g_get_user_state_dir (), "rugosa", "recovery", NULL);
+  GDir *d = g_dir_open (dir, 0, NULL);
+  const char *name;
+
+  if (d == NULL)
+    return;
+  while ((name = g_dir_read_name (d)) != NULL)
+    {
+      g_autofree char *path = g_build_filename (dir, name, NULL);
+      g_unlink (path);
+    }
+  g_dir_close (d);
+}
+
+/* Recovering rewrites the copy as the window's own autosave; when that
+ * write fails, the old copy is the only one on disk and must stay. */
+static void
+test_recovery_keeps_copy (void)
+{
+  RugosaWindow *crashed = open_demo ();
+  RugosaWindow *fresh;
+  guint pos = find_line (crashed, -1, FALSE);
+  RugosaLinePanel *panel = select_line (crashed, pos);
+  g_autofree char *autosave = rugosa_window_autosave_path (crashed);
+  g_autofree char *origin = g_strconcat (autosave, ".origin", NULL);
+  g_autofree char *kept = g_strconcat (autosave, ".kept", NULL);
+  g_autofree char *kept_origin = g_strconcat (origin, ".kept", NULL);
+  g_autofree char *blocker = NULL;
+  g_autoptr (RugosaProject) copy = rugosa_project_new ();
+  g_autoptr (GError) error = NULL;
+  AdwMessageDialog *dialog;
+
+  clear_recovery_dir ();
+  g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "444 m"));
+  drain ();
+  g_assert_true (rugosa_window_autosave_now (crashed, &error));
+  g_assert_no_error (error);
+  g_assert_cmpint (g_rename (autosave, kept), ==, 0);
+  g_assert_cmpint (g_rename (origin, kept_origin), ==, 0);
+  close_window (crashed);
+  g_assert_cmpint (g_rename (kept, autosave), ==, 0);
+  g_assert_cmpint (g_rename (kept_origin, origin), ==, 0);
+
+  fresh = rugosa_window_new (app);
+  gtk_window_present (GTK_WINDOW (fresh));
+  /* A folder where the new copy would go makes writing it fail. */
+  blocker = rugosa_window_autosave_path (fresh);
+  g_assert_cmpint (g_mkdir (blocker, 0700), ==, 0);
+  rugosa_window_offer_recovery (fresh);
+  drain ();
+  dialog = find_message_dialog (GTK_WINDOW (fresh));
+  g_assert_nonnull (dialog);
+  adw_message_dialog_response (dialog, "recover");
+  drain ();
+  /* Source: the value typed before the crash, 444 m. */
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (rugosa_window_get_project (fresh), pos),
+                                             "length"), ==, 444.0);
+  g_assert_true (rugosa_window_get_modified (fresh));
+  g_assert_true (rugosa_project_load (copy, autosave, &error));
+  g_assert_no_error (error);
+  g_assert_true (rugosa_project_equal (copy, rugosa_window_get_project (fresh)));
+  g_assert_true (g_file_test (origin, G_FILE_TEST_EXISTS));
+
+  g_assert_cmpint (g_rmdir (blocker), ==, 0);
+  g_unlink (autosave);
+  g_unlink (origin);
+  close_window (fresh);
+}
+
 static void
 test_close_guard (void)
 {
@@ -546,7 +622,7 @@ test_close_guard (void)
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   AdwMessageDialog *dialog;
-  g_autoptr (GtkWidget) keep = g_object_ref (GTK_WIDGET (win));
+  g_autoptr (GtkWidget) keep G_GNUC_UNUSED = g_object_ref (GTK_WIDGET (win));
 
   /* Unchanged: closes at once. */
   g_assert_false (rugosa_window_get_modified (win));
@@ -576,6 +652,175 @@ test_close_guard (void)
   adw_message_dialog_response (dialog, "discard");
   drain ();
   g_assert_false (gtk_widget_get_visible (GTK_WIDGET (win)));
+}
+
+/* ---- data safety: failed saves and refused files ---- */
+
+static int
+full_disk (RugosaSaveStep step,
+           gpointer       user_data)
+{
+  return step == RUGOSA_SAVE_STEP_WRITE ? ENOSPC : 0;
+}
+
+/* The error dialog: one sentence, naming the reason. */
+static void
+assert_save_error_dialog (RugosaWindow *win)
+{
+  AdwMessageDialog *dialog = find_message_dialog (GTK_WINDOW (win));
+  const char *body;
+
+  g_assert_nonnull (dialog);
+  g_assert_true (g_str_has_prefix (adw_message_dialog_get_heading (dialog), "Could not save “"));
+  body = adw_message_dialog_get_body (dialog);
+  g_assert_true (g_str_has_suffix (body, "because the disk is full; the previous file is unchanged."));
+  g_assert_null (strstr (body, ". "));
+  g_assert_null (strchr (body, '\n'));
+  adw_message_dialog_response (dialog, "close");
+  drain ();
+}
+
+/* A save that fails (here: a full disk, injected) keeps the document
+ * dirty and its autosave going, leaves the file as it was, and does not
+ * close a window whose close asked to save first. */
+static void
+test_save_fails_keeps_dirty (void)
+{
+  RugosaWindow *win = open_demo ();
+  guint pos = find_line (win, -1, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  g_autofree char *path = g_build_filename (tmpdir, "full-disk.rugosa", NULL);
+  g_autofree char *backup = g_strconcat (path, "~", NULL);
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+  g_autofree char *before = NULL, *now = NULL;
+  g_autoptr (RugosaProject) copy = rugosa_project_new ();
+  g_autofree char *autosave = rugosa_window_autosave_path (win);
+  AdwMessageDialog *dialog;
+
+  g_assert_true (rugosa_window_save_file_sync (win, file, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_get_contents (path, &before, NULL, NULL));
+  g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "555 m"));
+  drain ();
+
+  rugosa_project_set_save_fault_hook (full_disk, NULL);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.save", NULL);
+  drain ();
+  assert_save_error_dialog (win);
+  g_assert_true (rugosa_window_get_modified (win));
+  g_assert_true (g_str_has_prefix (gtk_window_get_title (GTK_WINDOW (win)), "• "));
+  g_assert_true (g_file_get_contents (path, &now, NULL, NULL));
+  g_assert_cmpstr (now, ==, before);
+  /* The unsaved change still reaches the recovery copy. */
+  g_assert_true (rugosa_window_autosave_now (win, &error));
+  g_assert_no_error (error);
+  g_assert_true (rugosa_project_load (copy, autosave, &error));
+  g_assert_true (rugosa_project_equal (copy, rugosa_window_get_project (win)));
+
+  /* Close, answer "Save": the save fails, so the window must stay. */
+  gtk_window_close (GTK_WINDOW (win));
+  drain ();
+  dialog = find_message_dialog (GTK_WINDOW (win));
+  g_assert_nonnull (dialog);
+  adw_message_dialog_response (dialog, "save");
+  drain ();
+  assert_save_error_dialog (win);
+  g_assert_true (gtk_widget_get_visible (GTK_WIDGET (win)));
+  g_assert_true (rugosa_window_get_modified (win));
+  rugosa_project_set_save_fault_hook (NULL, NULL);
+
+  /* With room on the disk again the same save works and keeps a backup. */
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.save", NULL);
+  drain ();
+  g_assert_false (rugosa_window_get_modified (win));
+  g_assert_false (g_file_test (autosave, G_FILE_TEST_EXISTS));
+  g_free (now);
+  g_assert_true (g_file_get_contents (backup, &now, NULL, NULL));
+  g_assert_cmpstr (now, ==, before);
+  close_window (win);
+}
+
+/* A file written by a newer Rugosa is refused, and nothing is ever
+ * written over it: the window keeps its document, file and unsaved
+ * state; its saves and autosaves go where they went before. */
+static void
+test_newer_version_refused (void)
+{
+  RugosaWindow *win = open_demo ();
+  RugosaWindow *pristine;
+  guint pos = find_line (win, -1, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  g_autofree char *current = g_build_filename (tmpdir, "current.rugosa", NULL);
+  g_autofree char *future = g_build_filename (tmpdir, "future.rugosa", NULL);
+  g_autoptr (GFile) current_file = g_file_new_for_path (current);
+  g_autoptr (GFile) future_file = g_file_new_for_path (future);
+  g_autofree char *text = g_strdup_printf ("{\"format\": \"%s\", \"version\": %d, \"lines\": []}\n",
+                                           RUGOSA_PROJECT_FORMAT_NAME,
+                                           RUGOSA_PROJECT_FORMAT_VERSION + 1);
+  g_autofree char *doc_before = NULL, *doc_after = NULL, *now = NULL, *origin = NULL;
+  g_autofree char *autosave = rugosa_window_autosave_path (win);
+  g_autofree char *autosave_origin = g_strconcat (autosave, ".origin", NULL);
+  g_autoptr (GError) error = NULL;
+  GList *windows_before, *l;
+  AdwMessageDialog *dialog;
+
+  g_assert_true (rugosa_window_save_file_sync (win, current_file, &error));
+  g_assert_no_error (error);
+  g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "666 m"));
+  drain ();
+  g_assert_true (g_file_set_contents (future, text, -1, NULL));
+  doc_before = rugosa_project_to_data (rugosa_window_get_project (win), NULL);
+
+  rugosa_window_load_file (win, future_file);
+  drain ();
+  dialog = find_message_dialog (GTK_WINDOW (win));
+  g_assert_nonnull (dialog);
+  g_assert_nonnull (strstr (adw_message_dialog_get_body (dialog), "future.rugosa"));
+  adw_message_dialog_response (dialog, "close");
+  drain ();
+  doc_after = rugosa_project_to_data (rugosa_window_get_project (win), NULL);
+  g_assert_cmpstr (doc_after, ==, doc_before);
+  g_assert_true (g_file_equal (rugosa_window_get_file (win), current_file));
+  g_assert_true (rugosa_window_get_modified (win));
+
+  /* Autosave names the window's own file as the origin, and Save writes
+   * that file; the newer file keeps its bytes. */
+  g_assert_true (rugosa_window_autosave_now (win, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_get_contents (autosave_origin, &origin, NULL, NULL));
+  g_assert_cmpstr (origin, ==, current);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.save", NULL);
+  drain ();
+  g_assert_false (rugosa_window_get_modified (win));
+  g_assert_true (g_file_get_contents (future, &now, NULL, NULL));
+  g_assert_cmpstr (now, ==, text);
+
+  /* An empty window that is refused the file stays empty and unnamed. */
+  pristine = rugosa_window_new (app);
+  gtk_window_present (GTK_WINDOW (pristine));
+  g_assert_false (rugosa_window_load_file_sync (pristine, future_file, &error));
+  g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_VERSION);
+  g_clear_error (&error);
+  g_assert_true (rugosa_window_is_pristine (pristine));
+  g_assert_null (rugosa_window_get_file (pristine));
+  close_window (pristine);
+
+  /* `rugosa future.rugosa`: no window takes the file as its own. */
+  windows_before = g_list_copy (gtk_application_get_windows (GTK_APPLICATION (app)));
+  g_application_open (G_APPLICATION (app), &future_file, 1, "");
+  drain ();
+  for (l = gtk_application_get_windows (GTK_APPLICATION (app)); l; l = l->next)
+    if (RUGOSA_IS_WINDOW (l->data) && rugosa_window_get_file (l->data))
+      g_assert_false (g_file_equal (rugosa_window_get_file (l->data), future_file));
+  for (l = g_list_copy (gtk_application_get_windows (GTK_APPLICATION (app))); l; l = g_list_delete_link (l, l))
+    if (RUGOSA_IS_WINDOW (l->data) && !g_list_find (windows_before, l->data))
+      close_window (l->data);
+  g_list_free (windows_before);
+  g_free (now);
+  g_assert_true (g_file_get_contents (future, &now, NULL, NULL));
+  g_assert_cmpstr (now, ==, text);
+  close_window (win);
 }
 
 static void
@@ -841,7 +1086,10 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/preferences/unit-system", test_unit_system);
   g_test_add_func ("/ui/files/export-print-csv", test_outputs);
   g_test_add_func ("/ui/files/recovery", test_recovery);
+  g_test_add_func ("/ui/files/recovery-keeps-copy", test_recovery_keeps_copy);
   g_test_add_func ("/ui/files/close-guard", test_close_guard);
+  g_test_add_func ("/ui/files/save-fails-keeps-dirty", test_save_fails_keeps_dirty);
+  g_test_add_func ("/ui/files/newer-version-refused", test_newer_version_refused);
   g_test_add_func ("/ui/files/open-command-line", test_open_from_command_line);
   g_test_add_func ("/ui/files/drop", test_drop_file);
   g_test_add_func ("/ui/screenshot", test_screenshot);

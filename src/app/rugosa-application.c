@@ -97,12 +97,22 @@ rugosa_application_open (GApplication  *app,
                          const char    *hint)
 {
   RugosaApplication *self = RUGOSA_APPLICATION (app);
+  gboolean starting = gtk_application_get_windows (GTK_APPLICATION (app)) == NULL;
 
   for (int i = 0; i < n_files; i++)
     {
       RugosaWindow *w = _rugosa_application_reusable_window (self);
       rugosa_window_load_file (w, files[i]);
       gtk_window_present (GTK_WINDOW (w));
+    }
+  /* Started with files after a session that did not end cleanly: offer
+   * the unsaved work too, in a window of its own so that the files just
+   * opened stay as they are. */
+  if (starting && rugosa_window_recovery_pending ())
+    {
+      RugosaWindow *w = _rugosa_application_new_window (self);
+      gtk_window_present (GTK_WINDOW (w));
+      rugosa_window_offer_recovery (w);
     }
 }
 

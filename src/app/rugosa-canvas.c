@@ -187,7 +187,7 @@ rugosa_canvas_snapshot (GtkWidget   *widget,
   if (w <= 0 || h <= 0)
     return;
   _rugosa_canvas_update_spec (self);
-  cr = gtk_snapshot_append_cairo (snapshot, &GRAPHENE_RECT_INIT (0, 0, w, h));
+  cr = gtk_snapshot_append_cairo (snapshot, &GRAPHENE_RECT_INIT (0.f, 0.f, (float) w, (float) h));
   rugosa_chart_draw (self->chart, cr);
   cairo_destroy (cr);
   self->last_draw_us = g_get_monotonic_time () - t0;
@@ -201,8 +201,8 @@ _rugosa_canvas_after_paint (GdkFrameClock *clock,
 
   if (self->frame_log && self->dirty_since_us != 0)
     g_printerr ("{\"event\":\"rugosa-frame\",\"draw_ms\":%.3f,\"frame_ms\":%.3f,\"lines\":%u}\n",
-                self->last_draw_us / 1000.0,
-                (now - self->dirty_since_us) / 1000.0,
+                (double) self->last_draw_us / 1000.0,
+                (double) (now - self->dirty_since_us) / 1000.0,
                 self->input ? (guint) self->input->n_lines : 0u);
   self->dirty_since_us = 0;
 }
@@ -372,7 +372,7 @@ rugosa_canvas_query_tooltip (GtkWidget  *widget,
       int sel = _rugosa_canvas_selected (self);
       for (size_t i = 0; i < self->input->n_lines; i++)
         if ((int) self->input->line_index[i] == sel)
-          hit = i;
+          hit = (int) i;
     }
   if (hit < 0 || hit >= (int) self->input->n_lines)
     return FALSE;

@@ -490,7 +490,12 @@ _rugosa_window_find_leftover (void)
     return NULL;
   while ((name = g_dir_read_name (d)) != NULL)
     if (g_str_has_suffix (name, PROJECT_SUFFIX))
-      return g_build_filename (dir, name, NULL);
+      {
+        char *path = g_build_filename (dir, name, NULL);
+        if (g_file_test (path, G_FILE_TEST_IS_REGULAR))
+          return path;
+        g_free (path);
+      }
   return NULL;
 }
 
@@ -518,14 +523,28 @@ _rugosa_window_recovery_response (AdwMessageDialog *dialog,
           _rugosa_window_set_file (self, file);
         }
       _rugosa_window_mark_modified (self);
-      /* The copy now belongs to this window's own autosave. */
-      rugosa_window_autosave_now (self, NULL);
+      /* The copy becomes this window's own autosave.  The old one goes
+       * only once the new one is written: until then it is the only copy
+       * on disk. */
+      if (!rugosa_window_autosave_now (self, &error))
+        {
+          g_message ("The recovered work stays in %s: %s", path, error->message);
+          return;
+        }
     }
   if (!g_str_equal (response, "later"))
     {
       g_unlink (path);
       g_unlink (meta);
     }
+}
+
+gboolean
+rugosa_window_recovery_pending (void)
+{
+  g_autofree char *path = _rugosa_window_find_leftover ();
+
+  return path != NULL;
 }
 
 void

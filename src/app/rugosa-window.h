@@ -35,6 +35,8 @@ gboolean       rugosa_window_save_file_sync (RugosaWindow *self,
 /* On start: if an autosaved copy of unsaved work is left over from a
  * session that did not end cleanly, ask whether to recover it. */
 void           rugosa_window_offer_recovery (RugosaWindow *self);
+/* Whether such a copy is there. */
+gboolean       rugosa_window_recovery_pending (void);
 /* Write the autosave copy now (tests; normally on a coalesced timeout). */
 gboolean       rugosa_window_autosave_now   (RugosaWindow *self,
                                              GError      **error);

@@ -124,7 +124,7 @@ _rugosa_chart_layout (const RugosaChartSpec *spec, ChartLayout *lay)
   if (spec->footer_date[0] != '\0')
     {
       /* The footer wraps; DejaVu Sans averages under 0.62 em per character. */
-      const double chars = g_utf8_strlen (_(RUGOSA_CHART_CAUTION), -1) + 24.0;
+      const double chars = (double) g_utf8_strlen (_(RUGOSA_CHART_CAUTION), -1) + 24.0;
       const double per_line = fmax (1.0, (w - 32.0 * k) / (0.62 * lay->font_footer));
       const double lines = ceil (chars / per_line);
       lay->footer_h = lines * lay->font_footer * 1.3 + 12.0 * k;

@@ -213,7 +213,7 @@ legend_geometry (RugosaChart *chart)
     }
   wmax = fmin (fmax (wmax, 70 * k), 0.3 * pl->width);
   r.width = wmax + 30 * k;
-  r.height = rows * row + 10 * k;
+  r.height = (double) rows * row + 10 * k;
   /* Bottom left of the turbulent strip: on default axes that corner lies
    * below the smooth-pipe curve, where no operating point can fall. */
   double x, y;
@@ -368,7 +368,7 @@ static double
 flow_f (const RugosaChartSpec *spec, double re, double rr, int *regime)
 {
   double f = 0.02;
-  *regime = rg_regime_classify (&spec->transition, re);
+  *regime = (int) rg_regime_classify (&spec->transition, re);
   if (*regime == RG_REGIME_LAMINAR)
     return 64.0 / re;
   if (rg_friction_colebrook (fmax (re, RG_FRICTION_RE_MIN), rr, &f, NULL) != RG_OK)
@@ -592,7 +592,7 @@ draw_legend (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
   cairo_clip (cr);
   for (size_t i = 0; i < rows && i < chart->n_lines; i++)
     {
-      const double y = r->y + 5 * k + i * row;
+      const double y = r->y + 5 * k + (double) i * row;
       char more[64];
       const char *name = chart->lines[i].name;
       int is_more = i == rows - 1 && chart->n_lines > rows;

@@ -254,7 +254,7 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
     }
   r->ok = TRUE;
 
-  for (int c = 0; c < RUGOSA_N_FLOWS; c++)
+  for (RugosaFlowCase c = 0; c < RUGOSA_N_FLOWS; c++)
     {
       static const char *const flow_props[RUGOSA_N_FLOWS] = {
         "flow-design", "flow-minimum", "flow-maximum"
@@ -470,7 +470,7 @@ format_json (RugosaProject *self, double age, GString *out)
       RugosaLine *line = g_ptr_array_index (self->lines, i);
       const RugosaLineResults *r = rugosa_project_get_results_at (self, line, age);
 
-      for (int c = 0; c < RUGOSA_N_FLOWS; c++)
+      for (RugosaFlowCase c = 0; c < RUGOSA_N_FLOWS; c++)
         {
           const RugosaOperatingPoint *p = &r->points[c];
 
@@ -494,7 +494,7 @@ format_json (RugosaProject *self, double age, GString *out)
               g_string_append_c (out, '}');
               continue;
             }
-          for (int k = 0; k < N_KEYS; k++)
+          for (Key k = 0; k < N_KEYS; k++)
             {
               if (k == K_F_LAMINAR && !p->result.friction.has_laminar)
                 continue;
@@ -527,7 +527,7 @@ static void
 format_csv (RugosaProject *self, double age, GString *out)
 {
   g_string_append (out, "line,case,flow_m3_s");
-  for (int k = 0; k < N_KEYS; k++)
+  for (Key k = 0; k < N_KEYS; k++)
     g_string_append_printf (out, ",%s", key_names[k]);
   g_string_append (out, ",error\r\n");
 
@@ -536,7 +536,7 @@ format_csv (RugosaProject *self, double age, GString *out)
       RugosaLine *line = g_ptr_array_index (self->lines, i);
       const RugosaLineResults *r = rugosa_project_get_results_at (self, line, age);
 
-      for (int c = 0; c < RUGOSA_N_FLOWS; c++)
+      for (RugosaFlowCase c = 0; c < RUGOSA_N_FLOWS; c++)
         {
           const RugosaOperatingPoint *p = &r->points[c];
           gboolean ok = r->ok && p->ok;
@@ -547,7 +547,7 @@ format_csv (RugosaProject *self, double age, GString *out)
           g_string_append_printf (out, ",%s,", rugosa_flow_case_id (c));
           append_number (out, p->flow_m3_s > 0.0 ? p->flow_m3_s
                          : rugosa_line_get_double (line, "flow-design"));
-          for (int k = 0; k < N_KEYS; k++)
+          for (Key k = 0; k < N_KEYS; k++)
             {
               g_string_append_c (out, ',');
               if (!ok || (k == K_F_LAMINAR && !p->result.friction.has_laminar))
@@ -590,7 +590,7 @@ append_cell (GString *out, const char *text, int width)
 static void
 format_table (RugosaProject *self, double age, GString *out)
 {
-  static const struct { const char *title; int key; int width; } cols[] = {
+  static const struct { const char *title; Key key; int width; } cols[] = {
     { "V m/s", K_VELOCITY, 9 }, { "Re", K_REYNOLDS, 10 },
     { "f", K_F, 9 }, { "regime", K_REGIME, 13 },
     { "h_major m", K_H_MAJOR, 10 }, { "h_minor m", K_H_MINOR, 10 },
@@ -620,7 +620,7 @@ format_table (RugosaProject *self, double age, GString *out)
       RugosaLine *line = g_ptr_array_index (self->lines, i);
       const RugosaLineResults *r = rugosa_project_get_results_at (self, line, age);
 
-      for (int c = 0; c < RUGOSA_N_FLOWS; c++)
+      for (RugosaFlowCase c = 0; c < RUGOSA_N_FLOWS; c++)
         {
           const RugosaOperatingPoint *p = &r->points[c];
 

@@ -1120,7 +1120,7 @@ settings_to_json (RugosaSettings *s)
   while (g_variant_iter_next (&iter, "{&s&s}", &q, &u))
     cJSON_AddStringToObject (ov, q, u);
   cJSON_AddStringToObject (o, "friction_model",
-                           rg_friction_model_id (rugosa_settings_get_friction_model (s)));
+                           rg_friction_model_id ((RgFrictionModel) rugosa_settings_get_friction_model (s)));
   g = cJSON_AddObjectToObject (o, "transition");
   add_number (g, "re_laminar_max", get_d (s, "re-laminar-max"));
   add_number (g, "re_turbulent_min", get_d (s, "re-turbulent-min"));
@@ -1151,7 +1151,7 @@ line_to_json (RugosaLine *l)
   cJSON_AddStringToObject (o, "note", rugosa_line_get_note (l));
 
   g = cJSON_AddObjectToObject (o, "fluid");
-  cJSON_AddStringToObject (g, "kind", rg_fluid_kind_id (rugosa_line_get_fluid_kind (l)));
+  cJSON_AddStringToObject (g, "kind", rg_fluid_kind_id ((RgFluidKind) rugosa_line_get_fluid_kind (l)));
   add_number (g, "temperature_K", get_d (l, "temperature"));
   add_number (g, "pressure_Pa", get_d (l, "pressure"));
   add_number (g, "salinity_kg_kg", get_d (l, "salinity"));
@@ -1250,32 +1250,65 @@ injected (RugosaSaveStep step)
   return fault_hook != NULL ? fault_hook (step, fault_hook_data) : 0;
 }
 
+/* The reason a save failed, in words a user can act on. */
+static char *
+io_reason (int errsv, const char *what)
+{
+  switch (errsv)
+    {
+    case ENOSPC:
+#ifdef EDQUOT
+    case EDQUOT:
+#endif
+      return g_strdup (_("the disk is full"));
+    case EFBIG:
+      return g_strdup (_("the file is too large for the disk"));
+    case EACCES:
+    case EPERM:
+      return g_strdup (_("you are not allowed to write in its folder"));
+    case EROFS:
+      return g_strdup (_("the disk is read-only"));
+    default:
+      return g_strdup_printf (_("%s failed (%s)"), what, g_strerror (errsv));
+    }
+}
+
+/* One sentence: which file, why, and that nothing on disk was harmed. */
 static gboolean
-io_error (GError **error, int errsv, const char *what, const char *path)
+io_error (GError **error, int errsv, const char *what, const char *path,
+          gboolean existed)
 {
   g_autofree char *display = g_filename_display_name (path);
+  g_autofree char *reason = io_reason (errsv, what);
 
   g_set_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_IO,
-               _("Cannot save “%s”: %s failed (%s). The previous file is unchanged."),
-               display, what, g_strerror (errsv));
+               _("Cannot save “%s” because %s; %s."), display, reason,
+               existed ? _("the previous file is unchanged") : _("no file was created"));
   return FALSE;
 }
 
-/* Keep the current file as `backup`: a hard link where the file system
- * has them, a copy otherwise. */
+/* Keep the current file under the name `fresh`, to become the backup once
+ * the new file is in place: a hard link where the file system has them, a
+ * copy otherwise.  Nothing visible changes until the renames. */
 static gboolean
-keep_backup (const char *path, const char *backup, GError **error)
+stage_backup (const char *path, const char *fresh, GError **error)
 {
   g_autofree char *old = NULL;
   gsize n;
+  int errsv;
 
-  if (g_unlink (backup) != 0 && errno != ENOENT)
-    return io_error (error, errno, "removing the old backup", path);
-  if (link (path, backup) == 0)
+  if ((errsv = injected (RUGOSA_SAVE_STEP_BACKUP)) != 0)
+    return io_error (error, errsv, "keeping a backup", path, TRUE);
+  if (g_unlink (fresh) != 0 && errno != ENOENT)
+    return io_error (error, errno, "keeping a backup", path, TRUE);
+  if (link (path, fresh) == 0)
     return TRUE;
   if (!g_file_get_contents (path, &old, &n, NULL)
-      || !g_file_set_contents (backup, old, (gssize) n, NULL))
-    return io_error (error, EIO, "keeping a backup", path);
+      || !g_file_set_contents (fresh, old, (gssize) n, NULL))
+    {
+      g_unlink (fresh);
+      return io_error (error, EIO, "keeping a backup", path, TRUE);
+    }
   return TRUE;
 }
 
@@ -1287,8 +1320,10 @@ rugosa_project_save (RugosaProject *self, const char *path, GError **error)
   g_autofree char *base = NULL;
   g_autofree char *tmp = NULL;
   g_autofree char *backup = NULL;
+  g_autofree char *fresh = NULL;
   gsize length, done = 0;
   struct stat st;
+  gboolean existed;
   int fd, errsv;
 
   g_return_val_if_fail (RUGOSA_IS_PROJECT (self), FALSE);
@@ -1299,26 +1334,38 @@ rugosa_project_save (RugosaProject *self, const char *path, GError **error)
   base = g_path_get_basename (path);
   tmp = g_strdup_printf ("%s/.%s.XXXXXX", dir, base);
   backup = g_strconcat (path, RUGOSA_PROJECT_BACKUP_SUFFIX, NULL);
+  fresh = g_strdup_printf ("%s/.%s%s.new", dir, base, RUGOSA_PROJECT_BACKUP_SUFFIX);
+  existed = stat (path, &st) == 0;
 
   fd = g_mkstemp_full (tmp, O_WRONLY | O_CLOEXEC, 0644);
   if (fd < 0)
-    return io_error (error, errno, "creating a temporary file", path);
+    return io_error (error, errno, "creating a temporary file", path, existed);
   /* Keep the permissions of the file being replaced. */
-  if (stat (path, &st) == 0)
+  if (existed)
     (void) fchmod (fd, st.st_mode & 07777);
 
   while (done < length)
     {
+      gsize chunk = length - done;
+      int cap;
       ssize_t w;
 
       if ((errsv = injected (RUGOSA_SAVE_STEP_WRITE)) != 0)
         goto failed_write;
-      w = write (fd, data + done, length - done);
+      if ((cap = injected (RUGOSA_SAVE_STEP_SHORT_WRITE)) > 0)
+        chunk = MIN (chunk, (gsize) cap);
+      w = write (fd, data + done, chunk);
       if (w < 0)
         {
           if (errno == EINTR)
             continue;
           errsv = errno;
+          goto failed_write;
+        }
+      /* A regular file that takes nothing is as good as full. */
+      if (w == 0)
+        {
+          errsv = ENOSPC;
           goto failed_write;
         }
       done += (gsize) w;
@@ -1328,16 +1375,26 @@ rugosa_project_save (RugosaProject *self, const char *path, GError **error)
     {
       close (fd);
       g_unlink (tmp);
-      return io_error (error, errsv, "flushing to disk (fsync)", path);
+      return io_error (error, errsv, "flushing to disk (fsync)", path, existed);
+    }
+  /* Some file systems (NFS, quotas) report a failed write only here. */
+  if ((errsv = injected (RUGOSA_SAVE_STEP_CLOSE)) != 0)
+    {
+      close (fd);
+      g_unlink (tmp);
+      return io_error (error, errsv, "closing the temporary file", path, existed);
     }
   if (close (fd) != 0)
     {
       errsv = errno;
       g_unlink (tmp);
-      return io_error (error, errsv, "closing the temporary file", path);
+      return io_error (error, errsv, "closing the temporary file", path, existed);
     }
 
-  if (g_file_test (path, G_FILE_TEST_EXISTS) && !keep_backup (path, backup, error))
+  /* The file and its backup change only now, each by one rename: the new
+   * file over the old, then the old over the backup.  A failure before
+   * the first rename leaves both as they were. */
+  if (existed && !stage_backup (path, fresh, error))
     {
       g_unlink (tmp);
       return FALSE;
@@ -1346,7 +1403,16 @@ rugosa_project_save (RugosaProject *self, const char *path, GError **error)
       || (g_rename (tmp, path) != 0 && (errsv = errno) != 0))
     {
       g_unlink (tmp);
-      return io_error (error, errsv, "renaming the temporary file", path);
+      if (existed)
+        g_unlink (fresh);
+      return io_error (error, errsv, "renaming the temporary file", path, existed);
+    }
+  /* The save is done; should this rename fail, the backup is merely one
+   * generation older. */
+  if (existed && g_rename (fresh, backup) != 0)
+    {
+      g_debug ("Cannot update the backup %s: %s", backup, g_strerror (errno));
+      g_unlink (fresh);
     }
 
   /* Make the rename itself durable. */
@@ -1360,5 +1426,5 @@ rugosa_project_save (RugosaProject *self, const char *path, GError **error)
 failed_write:
   close (fd);
   g_unlink (tmp);
-  return io_error (error, errsv, "writing", path);
+  return io_error (error, errsv, "writing", path, existed);
 }

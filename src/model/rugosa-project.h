@@ -70,11 +70,17 @@ gboolean rugosa_project_save (RugosaProject *self, const char *path,
 gboolean rugosa_project_equal (RugosaProject *a, RugosaProject *b);
 
 /* Test hook: called before each step of a save; returning an errno value
- * makes that step fail with it.  NULL restores normal saving. */
+ * makes that step fail with it.  For RUGOSA_SAVE_STEP_SHORT_WRITE (asked
+ * before every write ()) a positive return is no error but the most bytes
+ * that write may take, as a signal or a nearly full disk can cause.
+ * NULL restores normal saving. */
 typedef enum {
   RUGOSA_SAVE_STEP_WRITE,
   RUGOSA_SAVE_STEP_FSYNC,
   RUGOSA_SAVE_STEP_RENAME,
+  RUGOSA_SAVE_STEP_CLOSE,
+  RUGOSA_SAVE_STEP_BACKUP,
+  RUGOSA_SAVE_STEP_SHORT_WRITE,
 } RugosaSaveStep;
 typedef int (*RugosaSaveFaultHook) (RugosaSaveStep step, gpointer user_data);
 void rugosa_project_set_save_fault_hook (RugosaSaveFaultHook hook,

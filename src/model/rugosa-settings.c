@@ -236,7 +236,7 @@ RugosaUnitSystem
 rugosa_settings_get_unit_system (RugosaSettings *self)
 {
   g_return_val_if_fail (RUGOSA_IS_SETTINGS (self), RUGOSA_UNIT_SYSTEM_SI);
-  return self->unit_system;
+  return (RugosaUnitSystem) self->unit_system;
 }
 
 GVariant *
