@@ -585,6 +585,8 @@ append_cell (GString *out, const char *text, int width)
   g_string_append (out, text);
   for (glong i = n; i < width; i++)
     g_string_append_c (out, ' ');
+  if (n >= width)
+    g_string_append_c (out, ' '); /* a wide value still leaves a gap */
 }
 
 static void
