@@ -7,6 +7,7 @@
 #include <string.h>
 
 #include "core/fluid.h"
+#include "rugosa-double-props.h"
 #include "rugosa-model-private.h"
 
 struct _RugosaLine
@@ -55,15 +56,9 @@ static GParamSpec *properties[N_PROPS];
  * the "absurd value" limits of the file format (docs/file-format.md); the
  * defaults are only a starting point for a new line (fresh water at room
  * temperature in a 100 m run of 100 mm bore). */
-typedef struct {
-  const char *name;
-  const char *blurb;
-  gsize offset;
-  double min, max, dflt;
-} DoubleProp;
 
 #define F(field) G_STRUCT_OFFSET (RugosaLine, field)
-static const DoubleProp double_props[] = {
+static const RugosaDoubleProp double_props[] = {
   { "temperature", "Fluid temperature, K", F (temperature), 1.0, 2000.0, 293.15 },
   { "pressure", "Absolute pressure, Pa", F (pressure), 1.0, 1.0e9, 101325.0 },
   { "salinity", "Seawater salinity, kg/kg", F (salinity), 0.0, 0.3, 0.035 },
@@ -92,7 +87,7 @@ G_STATIC_ASSERT (G_N_ELEMENTS (double_props) == N_PROPS - PROP_FIRST_DOUBLE);
 static double *
 double_field (RugosaLine *self, guint index)
 {
-  return (double *) G_STRUCT_MEMBER_P (self, double_props[index].offset);
+  return _rugosa_double_props_field (double_props, self, index);
 }
 
 static char **
@@ -270,11 +265,8 @@ rugosa_line_class_init (RugosaLineClass *klass)
   properties[PROP_FLUID_KIND] =
     g_param_spec_int ("fluid-kind", NULL, "An RgFluidKind", 0,
                       RG_FLUID_N_KINDS - 1, RG_FLUID_WATER, flags);
-  for (guint i = 0; i < G_N_ELEMENTS (double_props); i++)
-    properties[PROP_FIRST_DOUBLE + i] =
-      g_param_spec_double (double_props[i].name, NULL, double_props[i].blurb,
-                           double_props[i].min, double_props[i].max,
-                           double_props[i].dflt, flags);
+  _rugosa_double_props_install (double_props, G_N_ELEMENTS (double_props),
+                                properties, PROP_FIRST_DOUBLE, flags);
 
   g_object_class_install_properties (object_class, N_PROPS, properties);
 }
@@ -288,8 +280,7 @@ rugosa_line_init (RugosaLine *self)
   self->fittings = g_variant_ref_sink (
     g_variant_new_array (G_VARIANT_TYPE ("(sdd)"), NULL, 0));
   self->fluid_kind = RG_FLUID_WATER;
-  for (guint i = 0; i < G_N_ELEMENTS (double_props); i++)
-    *double_field (self, i) = double_props[i].dflt;
+  _rugosa_double_props_init (double_props, G_N_ELEMENTS (double_props), self);
 }
 
 RugosaLine *
@@ -398,10 +389,7 @@ rugosa_line_get_note (RugosaLine *self)
 static int
 double_index (const char *property)
 {
-  for (guint i = 0; i < G_N_ELEMENTS (double_props); i++)
-    if (strcmp (double_props[i].name, property) == 0)
-      return (int) i;
-  return -1;
+  return _rugosa_double_props_find (double_props, G_N_ELEMENTS (double_props), property);
 }
 
 double

@@ -6,6 +6,7 @@
 #include <string.h>
 
 #include "core/friction.h"
+#include "rugosa-double-props.h"
 #include "rugosa-model-private.h"
 
 struct _RugosaSettings
@@ -38,19 +39,13 @@ enum {
 
 static GParamSpec *properties[N_PROPS];
 
-typedef struct {
-  const char *name;
-  const char *blurb;
-  gsize offset;
-  double min, max, dflt;
-} DoubleProp;
 
 /* Defaults: the transition range 2000–4000 is the common textbook choice
  * (Common practice (no single source)); the chart range spans the usual
  * friction-chart window; 3 m/s and 5 m per 100 m are rule-of-thumb limits
  * for water mains that a user is expected to change. */
 #define F(field) G_STRUCT_OFFSET (RugosaSettings, field)
-static const DoubleProp double_props[] = {
+static const RugosaDoubleProp double_props[] = {
   { "re-laminar-max", "Upper Reynolds number of laminar flow", F (re_laminar_max), 1.0, 1.0e6, 2000.0 },
   { "re-turbulent-min", "Lower Reynolds number of turbulent flow", F (re_turbulent_min), 1.0, 1.0e6, 4000.0 },
   { "chart-re-min", "Chart: smallest Reynolds number", F (chart_re_min), 1.0, 1.0e12, 500.0 },
@@ -80,7 +75,7 @@ rugosa_settings_unit_quantities (void)
 static double *
 double_field (RugosaSettings *self, guint index)
 {
-  return (double *) G_STRUCT_MEMBER_P (self, double_props[index].offset);
+  return _rugosa_double_props_field (double_props, self, index);
 }
 
 static void
@@ -207,11 +202,8 @@ rugosa_settings_class_init (RugosaSettingsClass *klass)
   properties[PROP_FRICTION_MODEL] =
     g_param_spec_int ("friction-model", NULL, "An RgFrictionModel", 0,
                       RG_FRICTION_N_MODELS - 1, RG_FRICTION_COLEBROOK, flags);
-  for (guint i = 0; i < G_N_ELEMENTS (double_props); i++)
-    properties[PROP_FIRST_DOUBLE + i] =
-      g_param_spec_double (double_props[i].name, NULL, double_props[i].blurb,
-                           double_props[i].min, double_props[i].max,
-                           double_props[i].dflt, flags);
+  _rugosa_double_props_install (double_props, G_N_ELEMENTS (double_props),
+                                properties, PROP_FIRST_DOUBLE, flags);
   g_object_class_install_properties (object_class, N_PROPS, properties);
 }
 
@@ -222,8 +214,7 @@ rugosa_settings_init (RugosaSettings *self)
     g_variant_new_array (G_VARIANT_TYPE ("{ss}"), NULL, 0));
   self->unit_system = RUGOSA_UNIT_SYSTEM_SI;
   self->friction_model = RG_FRICTION_COLEBROOK;
-  for (guint i = 0; i < G_N_ELEMENTS (double_props); i++)
-    *double_field (self, i) = double_props[i].dflt;
+  _rugosa_double_props_init (double_props, G_N_ELEMENTS (double_props), self);
 }
 
 RugosaSettings *
@@ -267,11 +258,12 @@ rugosa_settings_get_friction_model (RugosaSettings *self)
 double
 rugosa_settings_get_double (RugosaSettings *self, const char *property)
 {
+  int i;
+
   g_return_val_if_fail (RUGOSA_IS_SETTINGS (self), 0.0);
-  for (guint i = 0; i < G_N_ELEMENTS (double_props); i++)
-    if (strcmp (double_props[i].name, property) == 0)
-      return *double_field (self, i);
-  g_return_val_if_reached (0.0);
+  i = _rugosa_double_props_find (double_props, G_N_ELEMENTS (double_props), property);
+  g_return_val_if_fail (i >= 0, 0.0);
+  return *double_field (self, (guint) i);
 }
 
 gboolean
