@@ -128,6 +128,62 @@ def pipes(doc, files_by_name, material_ids):
     return rows
 
 
+FITTING_METHODS = {'3k': 'RG_FITTING_METHOD_3K', 'crane-ft': 'RG_FITTING_METHOD_CRANE_FT'}
+FITTING_BANDS_MAX = 4  # RG_FITTING_BANDS_MAX in src/core/fittings.h
+
+
+def fitting(f, doc, ids):
+    """Check one row of fittings.json; a Crane row gets k1 = ki = kd = 0."""
+    if f['id'] in ids:
+        raise CatalogError('fitting %s listed twice' % f['id'])
+    ids.add(f['id'])
+    if f['source'] not in doc['sources']:
+        raise CatalogError('fitting %s: unknown source %s' % (f['id'], f['source']))
+    method = f.get('method', '3k')
+    if method not in FITTING_METHODS:
+        raise CatalogError('fitting %s: unknown method %s' % (f['id'], method))
+    if method == '3k':
+        if 'bands' in f or 'min_bore_in' in f:
+            raise CatalogError('fitting %s: size bands belong to method crane-ft' % f['id'])
+        if min(f['k1'], f['ki'], f['kd']) < 0:
+            raise CatalogError('fitting %s: negative constant' % f['id'])
+        return
+    if any(k in f for k in ('k1', 'ki', 'kd')):
+        raise CatalogError('fitting %s: 3-K constants in a crane-ft row' % f['id'])
+    f['k1'] = f['ki'] = f['kd'] = 0
+    bands = f['bands']
+    if not 1 <= len(bands) <= FITTING_BANDS_MAX:
+        raise CatalogError('fitting %s: %d size bands, 1 to %d allowed'
+                           % (f['id'], len(bands), FITTING_BANDS_MAX))
+    lower = f['min_bore_in']
+    for b in bands:
+        if not (b['max_bore_in'] > lower > 0):
+            raise CatalogError('fitting %s: band %s does not lie above %g in'
+                               % (f['id'], b['nominal'], lower))
+        if not (math.isfinite(b['n']) and b['n'] > 0):
+            raise CatalogError('fitting %s: band %s: n must be positive' % (f['id'], b['nominal']))
+        lower = b['max_bore_in']
+
+
+def fitting_c(f, doc):
+    src = doc['sources'][f['source']]
+    method = f.get('method', '3k')
+    row = ('  { .id = %s, .name = %s, .k1 = %s, .ki = %s, .kd = %s, .source = %s,'
+           ' .method = %s'
+           % (c_str(f['id']), c_str(f['name']), c_num(f['k1']), c_num(f['ki']),
+              c_num(f['kd']), c_str('From memory of ' + src + '; not checked against the document'),
+              FITTING_METHODS[method]))
+    if method == 'crane-ft':
+        bands = f['bands']
+        row += (',\n    .n_bands = %d, .min_bore_m = %s,\n    .band_nominal = { %s },'
+                '\n    .band_max_bore_m = { %s },\n    .band_n = { %s }'
+                % (len(bands), c_num(f['min_bore_in'] * INCH_M),
+                   ', '.join(c_str(b['nominal']) for b in bands),
+                   ', '.join(c_num(b['max_bore_in'] * INCH_M) for b in bands),
+                   ', '.join(c_num(b['n']) for b in bands)))
+    return row + ' },'
+
+
 def main(argv):
     outdir = argv[1]
     docs = {}
@@ -151,13 +207,7 @@ def main(argv):
 
     fit_ids = set()
     for f in fit_doc['fittings']:
-        if f['id'] in fit_ids:
-            raise CatalogError('fitting %s listed twice' % f['id'])
-        fit_ids.add(f['id'])
-        if f['source'] not in fit_doc['sources']:
-            raise CatalogError('fitting %s: unknown source %s' % (f['id'], f['source']))
-        if min(f['k1'], f['ki'], f['kd']) < 0:
-            raise CatalogError('fitting %s: negative constant' % f['id'])
+        fitting(f, fit_doc, fit_ids)
 
     for c in aging_doc['classes']:
         lo, hi = c['range_mm_per_year']
@@ -209,10 +259,7 @@ def main(argv):
 
     c.append('const RgFitting rg_catalog_fittings[] = {')
     for f in fit_doc['fittings']:
-        src = fit_doc['sources'][f['source']]
-        c.append('  { .id = %s, .name = %s, .k1 = %s, .ki = %s, .kd = %s, .source = %s },'
-                 % (c_str(f['id']), c_str(f['name']), c_num(f['k1']), c_num(f['ki']),
-                    c_num(f['kd']), c_str('From memory of ' + src + '; not checked against the document')))
+        c.append(fitting_c(f, fit_doc))
     c.append('};')
     c.append('const int rg_catalog_fittings_count = %d;' % len(fit_doc['fittings']))
     c.append('')

@@ -128,19 +128,33 @@ fittings (GString *out, gboolean json)
 
   list_begin (out, json);
   if (!json)
-    g_string_append_printf (out, "%-30s %-50s %8s %8s %8s\n", "id", "fitting", "K1", "Ki", "Kd");
+    g_string_append_printf (out, "%-30s %-50s %-6s %8s %8s %8s\n", "id", "fitting", "method",
+                            "K1", "Ki", "Kd");
   for (int i = 0; i < rg_fitting_count (); i++)
     {
       const RgFitting *f = rg_fitting_at (i);
+      const gboolean crane = f->method == RG_FITTING_METHOD_CRANE_FT;
       if (json)
         {
           CliJson j;
           item_begin (&j, out, i);
           cli_json_string (&j, "id", f->id);
           cli_json_string (&j, "name", f->name);
-          cli_json_number (&j, "k1", f->k1);
-          cli_json_number (&j, "ki", f->ki);
-          cli_json_number (&j, "kd", f->kd);
+          cli_json_string (&j, "method", crane ? "crane-ft" : "3k");
+          if (crane)
+            {
+              /* No k1/ki/kd here: zeros would read as a lossless fitting. */
+              cli_json_number (&j, "min_bore_m", f->min_bore_m);
+              cli_json_string_array (&j, "band_nominal", f->band_nominal, f->n_bands);
+              cli_json_number_array (&j, "band_max_bore_m", f->band_max_bore_m, f->n_bands);
+              cli_json_number_array (&j, "band_n", f->band_n, f->n_bands);
+            }
+          else
+            {
+              cli_json_number (&j, "k1", f->k1);
+              cli_json_number (&j, "ki", f->ki);
+              cli_json_number (&j, "kd", f->kd);
+            }
           cli_json_string (&j, "source", f->source);
           item_end (&j, out);
         }
@@ -149,14 +163,28 @@ fittings (GString *out, gboolean json)
           cli_pad (out, f->id, 30);
           g_string_append_c (out, ' ');
           cli_pad (out, f->name, 50);
-          g_string_append_printf (out, " %8s %8s %8s\n",
-                                cli_format_short (f->k1, a, sizeof a),
-                                cli_format_short (f->ki, b, sizeof b),
-                                cli_format_short (f->kd, c, sizeof c));
+          if (crane)
+            {
+              g_string_append (out, " Crane  n·f_T, n =");
+              for (int k = 0; k < f->n_bands; k++)
+                g_string_append_printf (out, "%s %s (%s)", k > 0 ? "," : "",
+                                        cli_format_short (f->band_n[k], a, sizeof a),
+                                        f->band_nominal[k]);
+              g_string_append_c (out, '\n');
+            }
+          else
+            g_string_append_printf (out, " 3-K    %8s %8s %8s\n",
+                                    cli_format_short (f->k1, a, sizeof a),
+                                    cli_format_short (f->ki, b, sizeof b),
+                                    cli_format_short (f->kd, c, sizeof c));
         }
     }
   if (!json)
-    g_string_append (out, _("\nUse --fitting NAME[xCOUNT]; a plain coefficient as --fitting \"K=0.8x2\".\n"));
+    {
+      g_string_append (out, _("\n3-K: K = K1/Re + Ki·(1 + Kd/D^0.3), D the bore in inches (Darby 2001; Hooper 1981 for entrances and the exit)."));
+      g_string_append (out, _("\nCrane: K = n·f_T, f_T = 0.25/[log10(ε/(3.7·D))]² with ε = 0.0018 in (clean commercial steel), n of the size band holding the bore; independent of Re (Crane TP-410, 2009)."));
+      g_string_append (out, _("\nUse --fitting NAME[xCOUNT]; a plain coefficient as --fitting \"K=0.8x2\".\n"));
+    }
   list_end (out, json);
 }
 

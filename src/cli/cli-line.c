@@ -691,8 +691,9 @@ cli_cmd_line (int argc, char **argv)
       RgLineResult first;
       if (rg_line_evaluate (&in, &first, &err) != RG_OK)
         return fail_naming_option (&err);
-      if (rg_fittings_k_sum ((RgFittingUse *) uses->data, (int) uses->len,
-                             first.reynolds, in.diameter_m, &k_fittings, &err) != RG_OK)
+      if (rg_fittings_k_sum_checked ((RgFittingUse *) uses->data, (int) uses->len,
+                                     first.reynolds, in.diameter_m, &k_fittings,
+                                     &warnings, &err) != RG_OK)
         return cli_fail_error (&err);
       in.k_sum = k_extra + k_fittings;
     }

@@ -107,6 +107,26 @@ cli_json_string_array (CliJson *json, const char *key,
 }
 
 void
+cli_json_number_array (CliJson *json, const char *key, const double *values,
+                       int n)
+{
+  char buf[G_ASCII_DTOSTR_BUF_SIZE];
+
+  json_key (json, key);
+  g_string_append_c (json->out, '[');
+  for (int i = 0; i < n; i++)
+    {
+      if (i > 0)
+        g_string_append (json->out, ", ");
+      if (!isfinite (values[i]))
+        g_string_append (json->out, "null");
+      else
+        g_string_append (json->out, cli_format_exact (values[i], buf, sizeof buf));
+    }
+  g_string_append_c (json->out, ']');
+}
+
+void
 cli_json_end (CliJson *json)
 {
   g_string_append (json->out, json->first ? "}\n" : "\n}\n");

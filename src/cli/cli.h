@@ -73,6 +73,8 @@ void cli_json_number (CliJson *json, const char *key, double value);
 void cli_json_string (CliJson *json, const char *key, const char *value);
 void cli_json_string_array (CliJson *json, const char *key,
                             const char *const *values, int n);
+void cli_json_number_array (CliJson *json, const char *key,
+                            const double *values, int n);
 void cli_json_end (CliJson *json);
 void cli_json_escape (GString *out, const char *s);
 

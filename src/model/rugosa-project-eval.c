@@ -280,8 +280,9 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
        * roughness: one ΣK serves the new and the aged line. */
       double re = props.density_kg_m3 * (4.0 * q / (G_PI * diameter * diameter))
                   * diameter / props.dynamic_viscosity_pa_s;
-      if (rg_fittings_k_sum (uses, (int) n_uses, re, diameter,
-                             &p->minor_loss_k_total, &err) != RG_OK)
+      if (rg_fittings_k_sum_checked (uses, (int) n_uses, re, diameter,
+                                     &p->minor_loss_k_total, &p->warnings,
+                                     &err) != RG_OK)
         {
           set_text (p->error, err.text);
           continue;
