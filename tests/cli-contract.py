@@ -146,6 +146,20 @@ check("line transitional", code == 0 and doc.get("regime") == "transitional"
       and close(doc["friction_factor_laminar"], 64 / doc["reynolds"], 1e-14)
       and "roughness_zone" not in doc, out + err)
 
+# --- a Crane-method fitting: K = 45·f_T for a centric butterfly valve, NPS 2–8
+# Source: Crane TP-410 (2009), butterfly valve K = 45 f_T (from memory; the
+# catalog's JSON names it); f_T = 0.25/[log10(ε/3.7D)]², ε = 0.0018 in.
+code, out, err = run("line", "--flow", "20 L/s", "--pipe", "NPS 4 Sch 40", "--length", "20",
+                     "--fluid", "water", "--temperature", "20 C", "--fitting", "valve-butterfly x2", "--json")
+doc = json.loads(out) if code == 0 else {}
+d_in = doc.get("inner_diameter_m", 1) / 0.0254
+ft = 0.25 / math.log10(0.0018 / (3.7 * d_in)) ** 2
+check("butterfly K", code == 0 and close(doc["minor_loss_k_total"], 2 * 45 * ft, 1e-12), out + err)
+code, out, err = run("line", "--flow", "0.5 L/s", "--pipe", "NPS 1 Sch 40", "--length", "20",
+                     "--fluid", "water", "--temperature", "20 C", "--fitting", "valve-butterfly", "--json")
+doc = json.loads(out) if code == 0 else {}
+check("butterfly outside sizes warns", code == 0 and any("valve-butterfly" in w for w in doc["warnings"]), out + err)
+
 # --- eval: the project path gives what the line command gives --------------
 import os
 demo = os.path.join(os.environ.get("RUGOSA_SOURCE_DIR", os.path.dirname(__file__) + "/.."), "data", "demo.rugosa")
