@@ -13,11 +13,16 @@
 #include "model/rugosa-display.h"
 #include "rugosa-line-panel.h"
 #include "rugosa-readout.h"
+#include "rugosa-spin-guard.h"
 
 /* The model stores roughness growth per year; the units parser works in
  * metres per second.  A Julian year of 365.25 days (IAU), the year
  * rg_units uses for "per year". */
 #define SECONDS_PER_YEAR (365.25 * 86400.0)
+
+/* The largest plain K taken, the bound rugosa-cli's --fitting K=… keeps
+ * (docs/bad-input.md): far above any single fitting's published K. */
+#define K_PLAIN_MAX 10000.0
 
 struct _RugosaLinePanel
 {
@@ -158,16 +163,80 @@ _rugosa_line_panel_si_of (RugosaLinePanel *self,
   return v;
 }
 
+/* The project file keeps lowest ≤ design ≤ highest flow (0: not given)
+ * and refuses to read anything else, so the panel does not take a flow
+ * out of that order.  Returns the sentence, or NULL when in order. */
+static char *
+_rugosa_line_panel_flow_order (RugosaLinePanel     *self,
+                               RugosaQuantityEntry *entry,
+                               const char          *property,
+                               double               v)
+{
+  double design = rugosa_line_get_double (self->line, "flow-design");
+  double lo = rugosa_line_get_double (self->line, "flow-minimum");
+  double hi = rugosa_line_get_double (self->line, "flow-maximum");
+  const char *unit = rugosa_quantity_entry_get_unit (entry);
+  g_autofree char *shown = NULL;
+
+  if (g_strcmp0 (property, "flow-minimum") == 0 && v > 0.0 && v > design)
+    {
+      shown = rugosa_display_format_screen (RG_QTY_FLOW, design, unit);
+      return g_strdup_printf (_("The lowest flow must not exceed the design flow, %s."), shown);
+    }
+  if (g_strcmp0 (property, "flow-maximum") == 0 && v > 0.0 && v < design)
+    {
+      shown = rugosa_display_format_screen (RG_QTY_FLOW, design, unit);
+      return g_strdup_printf (_("The highest flow must not be below the design flow, %s."), shown);
+    }
+  if (g_strcmp0 (property, "flow-design") == 0 && lo > 0.0 && v < lo)
+    {
+      shown = rugosa_display_format_screen (RG_QTY_FLOW, lo, unit);
+      return g_strdup_printf (_("The design flow must not be below the lowest flow, %s."), shown);
+    }
+  if (g_strcmp0 (property, "flow-design") == 0 && hi > 0.0 && v > hi)
+    {
+      shown = rugosa_display_format_screen (RG_QTY_FLOW, hi, unit);
+      return g_strdup_printf (_("The design flow must not exceed the highest flow, %s."), shown);
+    }
+  return NULL;
+}
+
 static void
 _rugosa_line_panel_committed (RugosaQuantityEntry *entry,
                               double               si,
                               RugosaLinePanel     *self)
 {
   const char *property = gtk_widget_get_name (GTK_WIDGET (entry));
-  double v = si;
+  double per_si = g_strcmp0 (property, "aging-rate") == 0 ? SECONDS_PER_YEAR : 1.0;
+  double v = si * per_si;
+  GParamSpec *pspec = self->line ? g_object_class_find_property (G_OBJECT_GET_CLASS (self->line), property) : NULL;
 
-  if (g_strcmp0 (property, "aging-rate") == 0)
-    v *= SECONDS_PER_YEAR;
+  /* Outside the range the file format keeps: say so in the field's own
+   * words and unit, before the line is touched. */
+  if (G_IS_PARAM_SPEC_DOUBLE (pspec)
+      && (v < G_PARAM_SPEC_DOUBLE (pspec)->minimum || v > G_PARAM_SPEC_DOUBLE (pspec)->maximum))
+    {
+      int q = rugosa_quantity_entry_get_quantity (entry);
+      const char *unit = rugosa_quantity_entry_get_unit (entry);
+      GtkWidget *row = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
+      const char *title = row ? adw_preferences_row_get_title (ADW_PREFERENCES_ROW (row)) : property;
+      g_autofree char *lo = rugosa_display_format_screen (q, G_PARAM_SPEC_DOUBLE (pspec)->minimum / per_si, unit);
+      g_autofree char *hi = rugosa_display_format_screen (q, G_PARAM_SPEC_DOUBLE (pspec)->maximum / per_si, unit);
+      g_autofree char *why = g_strdup_printf (_("%s must lie between %s and %s."), title, lo, hi);
+
+      rugosa_quantity_entry_set_error (entry, why);
+      return;
+    }
+  if (self->line && g_str_has_prefix (property, "flow-"))
+    {
+      g_autofree char *why = _rugosa_line_panel_flow_order (self, entry, property, v);
+
+      if (why != NULL)
+        {
+          rugosa_quantity_entry_set_error (entry, why);
+          return;
+        }
+    }
   _rugosa_line_panel_emit (self, property, g_variant_new_double (v));
 }
 
@@ -175,8 +244,12 @@ static void
 _rugosa_line_panel_expansion_changed (GtkSpinButton   *spin,
                                       RugosaLinePanel *self)
 {
-  _rugosa_line_panel_emit (self, "oil-expansion",
-                           g_variant_new_double (gtk_spin_button_get_value (spin)));
+  double v = gtk_spin_button_get_value (spin);
+
+  /* A refused text put back re-emits the old value: not an edit. */
+  if (self->line == NULL || v == rugosa_line_get_double (self->line, "oil-expansion"))
+    return;
+  _rugosa_line_panel_emit (self, "oil-expansion", g_variant_new_double (v));
 }
 
 static void
@@ -313,6 +386,7 @@ _rugosa_line_panel_fitting_edit (RugosaLinePanel *self,
   const char *id;
   double k, count;
   guint j = 0;
+  gboolean changed = remove;
 
   g_variant_builder_init (&b, G_VARIANT_TYPE (RUGOSA_LINE_FITTINGS_TYPE));
   g_variant_iter_init (&iter, old);
@@ -323,10 +397,18 @@ _rugosa_line_panel_fitting_edit (RugosaLinePanel *self,
           if (!remove)
             g_variant_builder_add (&b, "(sdd)", id, new_k >= 0 ? new_k : k,
                                    new_count >= 0 ? new_count : count);
+          changed |= (new_k >= 0 && new_k != k) || (new_count >= 0 && new_count != count);
         }
       else
         g_variant_builder_add (&b, "(sdd)", id, k, count);
       j++;
+    }
+  /* A spin button putting back a refused text re-emits its old value: no
+   * edit, so the list (and the field's error mark) is not rebuilt. */
+  if (!changed)
+    {
+      g_variant_builder_clear (&b);
+      return;
     }
   _rugosa_line_panel_emit (self, "fittings", g_variant_builder_end (&b));
 }
@@ -351,12 +433,40 @@ _rugosa_line_panel_fitting_k (GtkEntry        *entry,
   /* A plain K is a bare number: no unit to parse. */
   while (end && *end == ' ')
     end++;
-  if (end == text || (end && *end != '\0') || !isfinite (k) || k < 0.0)
+  if (end == text || (end && *end != '\0') || !isfinite (k) || k < 0.0 || k > K_PLAIN_MAX)
     {
+      GtkWidget *row = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
+      g_autofree char *echo = g_utf8_strlen (text, -1) > 24 ? g_utf8_substring (text, 0, 24) : g_strdup (text);
+      g_autofree char *why = NULL;
+
+      if (end == text && *g_strstrip (echo) == '\0')
+        why = g_strdup (_("The loss coefficient is empty: type a number K from 0 to 10000."));
+      else
+        why = g_strdup_printf (_("'%s%s' is not a loss coefficient: type a number K from 0 to 10000."),
+                               echo, g_utf8_strlen (text, -1) > 24 ? "…" : "");
+
+      /* The sentence sits under the row's title and in the tooltip. */
       gtk_widget_add_css_class (GTK_WIDGET (entry), "error");
+      gtk_widget_set_tooltip_text (GTK_WIDGET (entry), why);
+      if (row)
+        {
+          adw_action_row_set_subtitle (ADW_ACTION_ROW (row), why);
+          gtk_widget_add_css_class (row, "field-error");
+        }
       return;
     }
-  gtk_widget_remove_css_class (GTK_WIDGET (entry), "error");
+  {
+    /* Taken: the mark goes (the row keeps no subtitle of its own). */
+    GtkWidget *row = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
+
+    gtk_widget_remove_css_class (GTK_WIDGET (entry), "error");
+    gtk_widget_set_tooltip_text (GTK_WIDGET (entry), _("Loss coefficient K of one such loss (a number ≥ 0)"));
+    if (row && gtk_widget_has_css_class (row, "field-error"))
+      {
+        adw_action_row_set_subtitle (ADW_ACTION_ROW (row), "");
+        gtk_widget_remove_css_class (row, "field-error");
+      }
+  }
   _rugosa_line_panel_fitting_edit (self, index, FALSE, -1, k);
 }
 
@@ -418,6 +528,7 @@ _rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
       gtk_widget_set_valign (spin, GTK_ALIGN_CENTER);
       gtk_widget_set_tooltip_text (spin, _("How many"));
       g_object_set_data (G_OBJECT (spin), "index", GUINT_TO_POINTER (index));
+      rugosa_spin_guard (GTK_SPIN_BUTTON (spin));
       g_signal_connect (spin, "value-changed", G_CALLBACK (_rugosa_line_panel_fitting_count), self);
       adw_action_row_add_suffix (ADW_ACTION_ROW (row), spin);
 
@@ -913,6 +1024,7 @@ rugosa_line_panel_init (RugosaLinePanel *self)
   gtk_box_layout_set_spacing (GTK_BOX_LAYOUT (layout), 18);
   _rugosa_line_panel_fill_catalogs (self);
   _rugosa_line_panel_collect_entries (self, GTK_WIDGET (self));
+  rugosa_spin_guard (self->oil_expansion_spin);
   self->updating = FALSE;
   gtk_widget_set_sensitive (GTK_WIDGET (self), FALSE);
 }

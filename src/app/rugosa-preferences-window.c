@@ -6,6 +6,7 @@
 #include <glib/gi18n.h>
 
 #include "rugosa-preferences-window.h"
+#include "rugosa-spin-guard.h"
 
 struct _RugosaPreferencesWindow
 {
@@ -26,6 +27,8 @@ struct _RugosaPreferencesWindow
   GSettings *settings;
   GPtrArray *unit_rows;  /* AdwComboRow, in unit_keys order */
   gboolean   applying_system;
+  double     good_laminar, good_turbulent;  /* the last pair in order */
+  GtkSpinButton *refused_spin;              /* to put back, or NULL */
 };
 
 G_DEFINE_FINAL_TYPE (RugosaPreferencesWindow, rugosa_preferences_window, ADW_TYPE_PREFERENCES_WINDOW)
@@ -203,6 +206,48 @@ _rugosa_prefs_bind_spin (GSettings     *settings,
   g_settings_bind (settings, key, spin, "value", G_SETTINGS_BIND_DEFAULT);
   gtk_widget_set_tooltip_text (GTK_WIDGET (spin),
                                g_settings_schema_key_get_description (skey));
+  rugosa_spin_guard (spin);
+}
+
+static gboolean
+_rugosa_prefs_limits_put_back (gpointer user_data)
+{
+  RugosaPreferencesWindow *self = user_data;
+  GtkSpinButton *spin = self->refused_spin;
+
+  if (spin == NULL)
+    return G_SOURCE_REMOVE;
+  self->refused_spin = NULL;
+  gtk_spin_button_set_value (spin, spin == self->laminar_spin ? self->good_laminar : self->good_turbulent);
+  rugosa_spin_guard_mark (spin, _("The laminar limit must lie below the turbulent limit: the last value is kept."));
+  return G_SOURCE_REMOVE;
+}
+
+/* The two ranges overlap (2100 to 3000): a laminar limit at or above the
+ * turbulent one is put back, with the reason beside the field. */
+static void
+_rugosa_prefs_limits_changed (GSettings               *settings,
+                              const char              *key,
+                              RugosaPreferencesWindow *self)
+{
+  gboolean laminar = g_strcmp0 (key, "laminar-limit") == 0;
+  double lam, turb;
+
+  if (!laminar && g_strcmp0 (key, "turbulent-limit") != 0)
+    return;
+  lam = g_settings_get_double (settings, "laminar-limit");
+  turb = g_settings_get_double (settings, "turbulent-limit");
+  if (lam < turb)
+    {
+      self->good_laminar = lam;
+      self->good_turbulent = turb;
+      return;
+    }
+  /* The binding that wrote the key ignores a write-back from inside its
+   * own notification: put the value back once it has returned. */
+  self->refused_spin = laminar ? self->laminar_spin : self->turbulent_spin;
+  g_idle_add_full (G_PRIORITY_DEFAULT, _rugosa_prefs_limits_put_back,
+                   g_object_ref (self), g_object_unref);
 }
 
 static void
@@ -275,6 +320,17 @@ rugosa_preferences_window_new (GSettings *settings)
 
   _rugosa_prefs_build_unit_rows (self);
 
+  self->good_laminar = g_settings_get_double (settings, "laminar-limit");
+  self->good_turbulent = g_settings_get_double (settings, "turbulent-limit");
+  if (self->good_laminar >= self->good_turbulent)
+    {
+      g_autoptr (GVariant) lam = g_settings_get_default_value (settings, "laminar-limit");
+      g_autoptr (GVariant) turb = g_settings_get_default_value (settings, "turbulent-limit");
+      self->good_laminar = g_variant_get_double (lam);
+      self->good_turbulent = g_variant_get_double (turb);
+    }
+  g_signal_connect_object (settings, "changed", G_CALLBACK (_rugosa_prefs_limits_changed), self, 0);
+
   g_signal_connect_object (settings, "changed", G_CALLBACK (_rugosa_prefs_unit_changed), self, 0);
   g_signal_connect_object (settings, "changed::unit-system", G_CALLBACK (_rugosa_prefs_system_changed), self, 0);
 
@@ -286,6 +342,7 @@ rugosa_preferences_window_dispose (GObject *object)
 {
   RugosaPreferencesWindow *self = RUGOSA_PREFERENCES_WINDOW (object);
 
+  self->refused_spin = NULL;
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_PREFERENCES_WINDOW);
   g_clear_pointer (&self->unit_rows, g_ptr_array_unref);
   g_clear_object (&self->settings);

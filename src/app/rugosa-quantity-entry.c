@@ -115,6 +115,10 @@ rugosa_quantity_entry_commit_text (RugosaQuantityEntry *self,
       /* The last valid value stays in force; only the field is marked. */
       if (text != gtk_editable_get_text (GTK_EDITABLE (self->entry)))
         gtk_editable_set_text (GTK_EDITABLE (self->entry), stripped);
+      /* The parser names no field here ("the value is empty: …"); shown
+       * as a sentence of its own under the field's title, it starts with
+       * a capital. */
+      err.text[0] = g_ascii_toupper (err.text[0]);
       _rugosa_quantity_entry_set_error_text (self, err.text[0] ? err.text : _("Not a value this field accepts."));
       return FALSE;
     }

@@ -707,15 +707,15 @@ _rugosa_window_apply_preferences (RugosaWindow *self)
   double lam = g_settings_get_double (self->settings, "laminar-limit");
   double turb = g_settings_get_double (self->settings, "turbulent-limit");
 
-  if (lam >= turb)
-    return;
   g_object_set (ps,
                 "friction-model", g_settings_get_enum (self->settings, "friction-model"),
-                "re-laminar-max", lam,
-                "re-turbulent-min", turb,
                 "velocity-limit", g_settings_get_double (self->settings, "velocity-limit"),
                 "gradient-limit", g_settings_get_double (self->settings, "gradient-limit"),
                 NULL);
+  /* A pair out of order (the preferences put it back) keeps the last one;
+   * the other preferences still apply. */
+  if (lam < turb)
+    g_object_set (ps, "re-laminar-max", lam, "re-turbulent-min", turb, NULL);
 }
 
 static void
