@@ -13,7 +13,8 @@ Run:
       rugosa-cli under LANGUAGE=de, LANG=de_DE.UTF-8 (LOCPATH and
       RUGOSA_LOCALEDIR come from the environment): refusals, core sentences
       and --help come out in German; JSON, CSV and the numbers of the table
-      are byte for byte those of the C locale.
+      are byte for byte those of the C locale; the catalog names in the
+      tables are German, in JSON English.
 
 Output is TAP.  The cli mode skips (TAP) when the de_DE.UTF-8 locale is not
 available; the catalogs mode skips when msgfmt/xgettext are missing.
@@ -245,6 +246,25 @@ def cli(cli_path, root):
         check(f"{name}: the output is identical under de_DE and C",
               j_de.returncode == 0 and j_de.stdout == j_c.stdout and len(j_c.stdout) > 20,
               j_de.stdout.decode() + "\n----\n" + j_c.stdout.decode() + j_de.stderr.decode())
+    # Catalog names (po/catalog-names.c): German in the tables, English
+    # (the core's own) in JSON, ids unchanged.
+    name = 'Commercial steel, new'
+    for what, cmd in (('catalog materials', ['catalog', 'materials']),
+                      ('line', ['line', '--flow', '12 L/s', '--diameter', '100 mm',
+                                '--length', '100 m', '--material', 'commercial-steel',
+                                '--fluid', 'water', '--temperature', '20 C'])):
+        out = run(cli_path, cmd, de_env()).stdout.decode()
+        check(f"{what}: the table shows the German catalog name", tr(name) != name
+              and tr(name) in out and name not in out, out[:400])
+    mats_c = run(cli_path, ['catalog', 'materials'], c_env()).stdout.decode()
+    check("catalog materials: the C locale keeps the English name and the id",
+          f'commercial-steel             {name}' in mats_c, mats_c[:400])
+    for which in ('materials', 'fittings', 'aging'):
+        j_de = run(cli_path, ['catalog', which, '--json'], de_env())
+        j_c = run(cli_path, ['catalog', which, '--json'], c_env())
+        check(f"catalog {which} --json: identical under de_DE and C",
+              j_de.returncode == 0 and j_de.stdout == j_c.stdout and b'"name": "' in j_c.stdout,
+              j_de.stdout.decode()[:400])
     check("line --json carries the warning (so the comparison is not empty)",
           b'"warnings": ["The flow is transitional' in run(cli_path, args + ['--json'], c_env()).stdout)
     demo = os.path.join(root, 'data', 'demo.rugosa')

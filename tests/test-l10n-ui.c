@@ -1,8 +1,9 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The desktop application in German, driven in-process under Xvfb: the
  * visible labels come from po/de.po, numbers on screen carry a decimal
- * comma, the quantity entries accept "2,5 m" and "2.5 m", and the project
- * file stays locale-independent.  Saves a screenshot (rugosa-window-de.png in
+ * comma, the quantity entries accept "2,5 m" and "2.5 m", the catalog names
+ * (po/catalog-names.c) show in German, and the project file stays
+ * locale-independent.  Saves a screenshot (rugosa-window-de.png in
  * the build folder) for a look at the German layout.
  *
  * Environment (tests/meson.build): LANGUAGE=de, LANG=de_DE.UTF-8, LOCPATH at
@@ -19,6 +20,9 @@
 #include <locale.h>
 #include <string.h>
 
+#include "core/aging.h"
+#include "core/catalog.h"
+#include "core/fittings.h"
 #include "model/rugosa-display.h"
 #include "rugosa-application.h"
 #include "rugosa-canvas.h"
@@ -122,6 +126,124 @@ test_labels_german (void)
                             text, _(text));
     }
   g_assert_true (found);
+  close_window (win);
+}
+
+/* Every GtkDropDown under `w`. */
+static void
+collect_dropdowns (GtkWidget *w, GPtrArray *out)
+{
+  if (GTK_IS_DROP_DOWN (w))
+    g_ptr_array_add (out, w);
+  for (GtkWidget *c = gtk_widget_get_first_child (w); c != NULL;
+       c = gtk_widget_get_next_sibling (c))
+    collect_dropdowns (c, out);
+}
+
+/* Checks the drop-down whose first item is `first` (already translated):
+ * item i + 1 must be the German name `name_at (i)`, never the English one.
+ * Returns whether that drop-down was found. */
+static gboolean
+dropdown_is_german (GPtrArray *dropdowns, const char *first, int count,
+                    const char *(*name_at) (int))
+{
+  for (guint d = 0; d < dropdowns->len; d++)
+    {
+      GListModel *model = gtk_drop_down_get_model (g_ptr_array_index (dropdowns, d));
+
+      if (model == NULL || g_list_model_get_n_items (model) != (guint) count + 1
+          || g_strcmp0 (gtk_string_list_get_string (GTK_STRING_LIST (model), 0), first) != 0)
+        continue;
+      for (int i = 0; i < count; i++)
+        {
+          const char *english = name_at (i);
+          const char *shown = gtk_string_list_get_string (GTK_STRING_LIST (model), (guint) i + 1);
+
+          if (g_strcmp0 (shown, _(english)) != 0 || g_strcmp0 (shown, english) == 0)
+            g_test_fail_printf ("Drop-down item \"%s\" is not the German name of \"%s\"",
+                                shown, english);
+        }
+      return TRUE;
+    }
+  return FALSE;
+}
+
+static const char *material_name_at (int i) { return rg_material_at (i)->name; }
+static const char *aging_name_at (int i) { return rg_aging_class_at (i)->name; }
+static const char *fitting_name_at (int i) { return rg_fitting_at (i)->name; }
+
+static void
+test_catalog_names_german (void)
+{
+  RugosaWindow *win = open_demo ();
+  RugosaProject *project = rugosa_window_get_project (win);
+  guint pos = first_ok_line (win);
+  RugosaLine *line = rugosa_project_get_line (project, pos);
+  GtkWidget *panel;
+  const RgMaterial *material = NULL;
+  g_autoptr (GPtrArray) labels = g_ptr_array_new ();
+  g_autoptr (GPtrArray) dropdowns = g_ptr_array_new ();
+  GVariant *fittings;
+  GVariantIter iter;
+  const char *id;
+  double k, count;
+  gboolean material_shown = FALSE;
+  guint catalog_fittings = 0, fittings_shown = 0;
+
+  gtk_single_selection_set_selected (rugosa_window_get_selection (win), pos);
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
+  drain ();
+  panel = rugosa_window_get_line_panel (win);
+
+  /* The names are translated, not the ids or the core's own text. */
+  g_assert_cmpstr (rg_material_at (0)->name, ==, "Copper or brass, drawn tubing");
+  g_assert_cmpstr (_(rg_material_at (0)->name), ==, "Kupfer oder Messing, gezogenes Rohr");
+
+  /* Every item of the three catalog drop-downs. */
+  collect_dropdowns (panel, dropdowns);
+  g_assert_true (dropdown_is_german (dropdowns, _("Custom roughness"), rg_material_count (),
+                                     material_name_at));
+  g_assert_true (dropdown_is_german (dropdowns, _("Custom rate"), rg_aging_class_count (),
+                                     aging_name_at));
+  g_assert_true (dropdown_is_german (dropdowns, _("Other loss, K given"), rg_fitting_count (),
+                                     fitting_name_at));
+
+  /* The selected material and the line's catalog fittings, as shown. */
+  g_assert_nonnull (rugosa_line_get_material_id (line));
+  g_assert_cmpint (rg_material_lookup (rugosa_line_get_material_id (line), &material, NULL),
+                   ==, RG_OK);
+  collect_labels (panel, labels);
+  fittings = rugosa_line_get_fittings (line);
+  g_assert_nonnull (fittings);
+  g_variant_iter_init (&iter, fittings);
+  while (g_variant_iter_next (&iter, "(&sdd)", &id, &k, &count))
+    {
+      const RgFitting *fitting = NULL;
+
+      if (*id == '\0')
+        continue;
+      g_assert_cmpint (rg_fitting_lookup (id, &fitting, NULL), ==, RG_OK);
+      catalog_fittings++;
+      for (guint i = 0; i < labels->len; i++)
+        if (g_strcmp0 (gtk_label_get_label (g_ptr_array_index (labels, i)),
+                       _(fitting->name)) == 0)
+          {
+            fittings_shown++;
+            break;
+          }
+    }
+  for (guint i = 0; i < labels->len; i++)
+    {
+      const char *text = gtk_label_get_label (g_ptr_array_index (labels, i));
+
+      if (g_strcmp0 (text, _(material->name)) == 0)
+        material_shown = TRUE;
+      if (g_strcmp0 (text, material->name) == 0)
+        g_test_fail_printf ("The material is shown in English: \"%s\"", text);
+    }
+  g_assert_true (material_shown);
+  g_assert_cmpuint (catalog_fittings, >, 0);
+  g_assert_cmpuint (fittings_shown, ==, catalog_fittings);
   close_window (win);
 }
 
@@ -384,6 +506,7 @@ main (int argc, char *argv[])
   g_assert_true (g_application_register (G_APPLICATION (app), NULL, NULL));
 
   g_test_add_func ("/l10n/ui/labels-german", test_labels_german);
+  g_test_add_func ("/l10n/ui/catalog-names-german", test_catalog_names_german);
   g_test_add_func ("/l10n/ui/results-decimal-comma", test_results_decimal_comma);
   g_test_add_func ("/l10n/ui/entry-accepts-both", test_entry_accepts_both);
   g_test_add_func ("/l10n/ui/preferences-german", test_preferences_german);

@@ -507,7 +507,7 @@ _rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
       const RgFitting *fitting = NULL;
 
       if (*id != '\0' && rg_fitting_lookup (id, &fitting, NULL) == RG_OK)
-        adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), fitting->name);
+        adw_preferences_row_set_title (ADW_PREFERENCES_ROW (row), _(fitting->name));
       else
         {
           GtkWidget *kentry = gtk_entry_new ();
@@ -902,10 +902,10 @@ _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
 
   gtk_string_list_append (materials, _("Custom roughness"));
   for (int i = 0; i < rg_material_count (); i++)
-    gtk_string_list_append (materials, rg_material_at (i)->name);
+    gtk_string_list_append (materials, _(rg_material_at (i)->name));
   gtk_string_list_append (agings, _("Custom rate"));
   for (int i = 0; i < rg_aging_class_count (); i++)
-    gtk_string_list_append (agings, rg_aging_class_at (i)->name);
+    gtk_string_list_append (agings, _(rg_aging_class_at (i)->name));
   gtk_string_list_append (pipes, _("Custom bore"));
   for (int i = 0; i < rg_pipe_count (); i++)
     {
@@ -915,7 +915,7 @@ _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
     }
   gtk_string_list_append (fittings, _("Other loss, K given"));
   for (int i = 0; i < rg_fitting_count (); i++)
-    gtk_string_list_append (fittings, rg_fitting_at (i)->name);
+    gtk_string_list_append (fittings, _(rg_fitting_at (i)->name));
 
   gtk_drop_down_set_model (self->material_dropdown, G_LIST_MODEL (materials));
   gtk_drop_down_set_model (self->aging_dropdown, G_LIST_MODEL (agings));

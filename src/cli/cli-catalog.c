@@ -75,7 +75,7 @@ materials (GString *out, gboolean json)
         {
           cli_pad (out, m->id, 28);
           g_string_append_c (out, ' ');
-          cli_pad (out, m->name, 44);
+          cli_pad (out, _(m->name), 44);
           g_string_append_printf (out, " %12s  %s – %s\n",
                                 cli_format_short (m->roughness_m * 1e3, a, sizeof a),
                                 cli_format_short (m->roughness_min_m * 1e3, b, sizeof b),
@@ -162,7 +162,7 @@ fittings (GString *out, gboolean json)
         {
           cli_pad (out, f->id, 30);
           g_string_append_c (out, ' ');
-          cli_pad (out, f->name, 50);
+          cli_pad (out, _(f->name), 50);
           if (crane)
             {
               g_string_append (out, " Crane  n·f_T, n =");
@@ -213,7 +213,7 @@ aging (GString *out, gboolean json)
         {
           cli_pad (out, k->id, 24);
           g_string_append_c (out, ' ');
-          cli_pad (out, k->name, 70);
+          cli_pad (out, _(k->name), 70);
           g_string_append_printf (out, " %12s\n",
                                 cli_format_short (k->rate_m_per_year * 1e3, a, sizeof a));
         }

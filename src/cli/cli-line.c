@@ -745,7 +745,7 @@ cli_cmd_line (int argc, char **argv)
       if (pipe != NULL)
         cli_table_row (out, _("pipe"), pipe->designation, NULL);
       if (material != NULL)
-        cli_table_row (out, _("material"), material->name, NULL);
+        cli_table_row (out, _("material"), _(material->name), NULL);
       cli_table_number (out, _("inner diameter"), in.diameter_m * 1e3, "mm");
       cli_table_number (out, _("roughness"), aged.roughness_m * 1e3, "mm");
       if (age > 0.0)
