@@ -162,6 +162,16 @@ test_dispatch (void)
   g_assert_cmpfloat (via.density_kg_m3, ==, direct.density_kg_m3);
   g_assert_cmpfloat (via.kinematic_viscosity_m2_s, ==, direct.kinematic_viscosity_m2_s);
 
+  /* Seawater is refused where it would boil.  From memory of the steam
+   * tables (IAPWS-IF97 region 4): water boils at about 476 kPa at 150 °C, so
+   * 1 atm is far below and 6 bar above. */
+  rg_fluid_spec_init (&spec, RG_FLUID_SEAWATER);
+  spec.temperature_k = 423.15;
+  g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_nonnull (strstr (err.text, "boils"));
+  spec.pressure_pa = 6.0e5;
+  g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), ==, RG_OK);
+
   /* A state outside a model's range is refused with its sentence. */
   rg_fluid_spec_init (&spec, RG_FLUID_SEAWATER);
   spec.salinity_kg_kg = 0.5;

@@ -179,11 +179,10 @@ static const Special specials[] = {
    * Water Treatment 16: correlations valid for S up to 120–160 g/kg. */
   { "salinity", RG_FLUID_SEAWATER, "200-g-kg", "200 g/kg", 'r',
     "beyond the Sharqawy et al. (2010) salinity range" },
-  /* Known gap, left to the core: Sharqawy et al. (2010) cover 0–180 °C,
-   * but at 1 atm seawater boils near 100 °C and the seawater model does
-   * not look at the pressure.  The row shows what happens today. */
-  { "temperature", RG_FLUID_SEAWATER, "seawater-150-C-1-atm", "150 C", 'a',
-    "inside Sharqawy et al. (2010) 0–180 °C, but steam at 1 atm: the core does not check boiling (known gap)" },
+  /* From memory of the steam tables (IAPWS-IF97 region 4): water boils at
+   * about 476 kPa at 150 °C; seawater is refused where pure water boils. */
+  { "temperature", RG_FLUID_SEAWATER, "seawater-150-C-1-atm", "150 C", 'r',
+    "inside Sharqawy et al. (2010) 0–180 °C, but it boils at 1 atm" },
   /* Source: ASTM D341 needs two distinct temperatures. */
   { "oil-t2", RG_FLUID_OIL, "same-as-t1", "40 C", 'r',
     "ASTM D341 needs two different temperatures" },
@@ -216,8 +215,8 @@ static const Special specials[] = {
     "a highest flow below the design flow" },
   { "flow-design", RG_FLUID_WATER, "below-minimum", "1 L/s", 'r',
     "a design flow below the lowest flow" },
-  { "length", RG_FLUID_WATER, "bare-number-is-si", "250", 'a',
-    "a number without unit is read in SI (metres)" },
+  { "temperature", RG_FLUID_WATER, "bare-number-in-shown-unit", "30", 'a',
+    "a number without unit is read in the unit the field shows (°C here)" },
 };
 
 /* A spin button: where it is, its classes' outcomes (bare numbers). */
@@ -278,10 +277,10 @@ static const char k_expect[] = "arrrrarrrrr";
   "50 °C. Temperatures are typed in °C, so `0 C` and `1e-300 C` mean 0 °C. Spin buttons " \
   "that take whole numbers only let digits and a sign be typed: other text leaves them " \
   "empty, and empty is refused.\n\n" \
-  "Known gaps, shown as they are: a number typed without a unit is read in SI (`250` in " \
-  "the length field is 250 m, whatever unit the field shows); seawater at 150 °C and " \
-  "1 atm is accepted although it would boil, because the seawater model (Sharqawy et " \
-  "al. 2010, 0–180 °C) does not look at the pressure.\n\n"
+  "A number typed without a unit is read in the unit the field shows (`30` in the " \
+  "temperature field shown in °C is 30 °C). Seawater is refused where pure water would " \
+  "boil at the line's pressure (its vapour pressure is about 2 % lower: a cautious " \
+  "limit).\n\n"
 
 /* --- helpers ---------------------------------------------------------- */
 

@@ -10,6 +10,8 @@
 
 #include "config.h"
 
+#include "core/units.h"
+
 #include <adwaita.h>
 #include <errno.h>
 #include <glib/gstdio.h>
@@ -240,6 +242,38 @@ test_slider_grows_head_loss (void)
     if (input->line_index[i] == pos)
       g_assert_cmpuint (input->lines[i].n_trail, >=, 2);
   g_assert_cmpuint (rugosa_canvas_get_background_builds (canvas), ==, builds);
+  close_window (win);
+}
+
+/* A number typed without a unit means the unit the field shows. */
+static void
+test_bare_number_display_unit (void)
+{
+  static const struct { const char *field; const char *text; } cases[] = {
+    { "temperature", "30" }, { "flow-design", "18.5" }, { "length", "250" },
+  };
+  RugosaWindow *win = open_demo ();
+  guint pos = find_line (win, 0 /* RG_FLUID_WATER */, FALSE);
+  RugosaLinePanel *panel = select_line (win, pos);
+  RugosaLine *line = rugosa_project_get_line (rugosa_window_get_project (win), pos);
+
+  for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      RugosaQuantityEntry *entry = rugosa_line_panel_get_entry (panel, cases[i].field);
+      const char *unit = rugosa_quantity_entry_get_unit (entry);
+      double expected = 0.0;
+
+      g_assert_nonnull (unit);
+      /* The expected SI value through the core's own conversion of the
+       * field's display unit (the conversions are tested in test-units). */
+      g_assert_cmpint (rg_units_to_si (rugosa_quantity_entry_get_quantity (entry),
+                                       g_ascii_strtod (cases[i].text, NULL), unit,
+                                       &expected, NULL), ==, RG_OK);
+      g_assert_true (rugosa_quantity_entry_commit_text (entry, cases[i].text));
+      drain ();
+      g_assert_cmpfloat_with_epsilon (rugosa_line_get_double (line, cases[i].field),
+                                      expected, 1e-12 * fabs (expected));
+    }
   close_window (win);
 }
 
@@ -1078,6 +1112,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/panel/temperature-changes-density", test_temperature_changes_density);
   g_test_add_func ("/ui/slider/head-loss-grows", test_slider_grows_head_loss);
   g_test_add_func ("/ui/entry/bad-value-keeps-last", test_bad_value_keeps_last);
+  g_test_add_func ("/ui/entry/bare-number-display-unit", test_bare_number_display_unit);
   g_test_add_func ("/ui/files/save-reopen", test_save_reopen);
   g_test_add_func ("/ui/history/undo-redo", test_undo_redo);
   g_test_add_func ("/ui/files/autosave", test_autosave);

@@ -3,6 +3,8 @@
 
 #include "config.h"
 
+#include <math.h>
+
 #include <glib/gi18n.h>
 
 #include "core/units.h"
@@ -110,6 +112,20 @@ rugosa_quantity_entry_commit_text (RugosaQuantityEntry *self,
 
   stripped = g_strstrip (g_strdup (text ? text : ""));
   ascii = rugosa_display_delocalize (stripped);
+  /* A bare number means the unit the field shows: someone who sees
+   * "102.3 mm" and types "150" means 150 mm, not 150 m. */
+  if (self->unit != NULL && *self->unit != '\0' && *ascii != '\0')
+    {
+      char *end = NULL;
+      double x = g_ascii_strtod (ascii, &end);
+
+      if (end != NULL && *end == '\0' && isfinite (x))
+        {
+          char *with_unit = g_strdup_printf ("%s %s", ascii, self->unit);
+          g_free (ascii);
+          ascii = with_unit;
+        }
+    }
   if (rg_units_parse (self->quantity, NULL, ascii, &si, &err) != RG_OK)
     {
       /* The last valid value stays in force; only the field is marked. */

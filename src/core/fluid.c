@@ -127,6 +127,30 @@ water_properties (const RgFluidSpec *spec, RgFluidProps *out, RgError *err)
   return RG_OK;
 }
 
+/* The seawater correlations hold for the liquid only, and they do not take
+ * the pressure.  Dissolved salt lowers the vapour pressure a little (about
+ * 2 % at 35 g/kg, Raoult's law with the salt's mole fraction), so pure
+ * water's saturation pressure (IAPWS-IF97 region 4) is a slightly cautious
+ * boiling limit: seawater is refused where pure water would boil. */
+static RgStatus
+seawater_liquid (const RgFluidSpec *spec, RgError *err)
+{
+  double p_sat;
+
+  if (!isfinite (spec->pressure_pa) || spec->pressure_pa <= 0.0)
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The pressure must be a positive absolute pressure (Pa).");
+  if (!isfinite (spec->temperature_k) || spec->temperature_k < 273.15
+      || spec->temperature_k > 647.0)
+    return RG_OK; /* the seawater model reports its own temperature range */
+  if (rg_water_saturation_pressure (spec->temperature_k, &p_sat, NULL) == RG_OK
+      && spec->pressure_pa < p_sat)
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "At %.4g °C seawater boils below about %.4g kPa: raise the pressure (absolute) or lower the temperature.",
+                         spec->temperature_k - 273.15, p_sat / 1000.0);
+  return RG_OK;
+}
+
 RgStatus
 rg_fluid_properties (const RgFluidSpec *spec, RgFluidProps *out,
                      RgWarnings *warnings, RgError *err)
@@ -145,7 +169,9 @@ rg_fluid_properties (const RgFluidSpec *spec, RgFluidProps *out,
       st = custom_properties (spec, &p, err);
       break;
     case RG_FLUID_SEAWATER:
-      st = rg_seawater_properties (spec->temperature_k, spec->salinity_kg_kg, &p, err);
+      st = seawater_liquid (spec, err);
+      if (st == RG_OK)
+        st = rg_seawater_properties (spec->temperature_k, spec->salinity_kg_kg, &p, err);
       break;
     case RG_FLUID_OIL:
       {
