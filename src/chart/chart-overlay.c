@@ -206,8 +206,9 @@ legend_geometry (RugosaChart *chart)
   for (size_t i = 0; i < chart->n_lines && i < rows; i++)
     {
       double w, h;
+      /* measured bold: the selected line's name is drawn bold */
       PangoLayout *l = _rugosa_chart_text (chart, chart->lines[i].name,
-                                           lay->font_label * 0.95, TEXT_PLAIN, 0);
+                                           lay->font_label * 0.95, TEXT_BOLD, 0);
       _rugosa_chart_text_size (l, &w, &h);
       wmax = fmax (wmax, w);
     }
