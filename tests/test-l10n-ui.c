@@ -31,43 +31,10 @@
 #include "rugosa-quantity-entry.h"
 #include "rugosa-results-table.h"
 #include "rugosa-window.h"
+#include "ui-harness.h"
 
 static RugosaApplication *app;
 static char *tmpdir;
-
-static void
-drain (void)
-{
-  while (g_main_context_pending (NULL))
-    g_main_context_iteration (NULL, FALSE);
-}
-
-static RugosaWindow *
-open_demo (void)
-{
-  RugosaWindow *win = rugosa_window_new (app);
-  const char *src = g_getenv ("RUGOSA_SOURCE_DIR");
-  g_autofree char *path = NULL;
-  g_autoptr (GFile) file = NULL;
-  g_autoptr (GError) error = NULL;
-
-  g_assert_nonnull (src);
-  path = g_build_filename (src, "data", "demo.rugosa", NULL);
-  file = g_file_new_for_path (path);
-  gtk_window_set_default_size (GTK_WINDOW (win), 1400, 900);
-  gtk_window_present (GTK_WINDOW (win));
-  g_assert_true (rugosa_window_load_file_sync (win, file, &error));
-  g_assert_no_error (error);
-  drain ();
-  return win;
-}
-
-static void
-close_window (RugosaWindow *win)
-{
-  gtk_window_destroy (GTK_WINDOW (win));
-  drain ();
-}
 
 /* Every GtkLabel under `w`. */
 static void
@@ -100,7 +67,7 @@ first_ok_line (RugosaWindow *win)
 static void
 test_labels_german (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   g_autoptr (GPtrArray) labels = g_ptr_array_new ();
   gboolean found = FALSE;
 
@@ -126,7 +93,7 @@ test_labels_german (void)
                             text, _(text));
     }
   g_assert_true (found);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 /* Every GtkDropDown under `w`. */
@@ -175,7 +142,7 @@ static const char *fitting_name_at (int i) { return rg_fitting_at (i)->name; }
 static void
 test_catalog_names_german (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   RugosaProject *project = rugosa_window_get_project (win);
   guint pos = first_ok_line (win);
   RugosaLine *line = rugosa_project_get_line (project, pos);
@@ -192,7 +159,7 @@ test_catalog_names_german (void)
 
   gtk_single_selection_set_selected (rugosa_window_get_selection (win), pos);
   gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
-  drain ();
+  ui_harness_drain ();
   panel = rugosa_window_get_line_panel (win);
 
   /* The names are translated, not the ids or the core's own text. */
@@ -244,13 +211,13 @@ test_catalog_names_german (void)
   g_assert_true (material_shown);
   g_assert_cmpuint (catalog_fittings, >, 0);
   g_assert_cmpuint (fittings_shown, ==, catalog_fittings);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_results_decimal_comma (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   RugosaResultsTable *table = RUGOSA_RESULTS_TABLE (rugosa_window_get_results (win));
   RugosaProject *project = rugosa_window_get_project (win);
   guint pos = first_ok_line (win);
@@ -261,7 +228,7 @@ test_results_decimal_comma (void)
   g_autofree char *expect = NULL;
 
   gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
-  drain ();
+  ui_harness_drain ();
   cell = rugosa_results_table_format_cell (table, line, "f");
   /* The Darcy friction factor lies between 0.006 and 0.1 on the chart, so it
    * always has a fractional part: 4 significant figures, "0,01910". */
@@ -276,13 +243,13 @@ test_results_decimal_comma (void)
   f_cell = rugosa_results_table_cell_text (table, pos, "f");
   if (f_cell != NULL)
     g_assert_cmpstr (f_cell, ==, expect);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_entry_accepts_both (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   RugosaLinePanel *panel;
   RugosaQuantityEntry *length;
   const char *error_text;
@@ -292,7 +259,7 @@ test_entry_accepts_both (void)
   g_autoptr (GError) error = NULL;
 
   gtk_single_selection_set_selected (rugosa_window_get_selection (win), first_ok_line (win));
-  drain ();
+  ui_harness_drain ();
   panel = RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win));
   length = rugosa_line_panel_get_entry (panel, "length");
   g_assert_nonnull (length);
@@ -342,34 +309,9 @@ test_entry_accepts_both (void)
     p2 = rugosa_window_get_project (again);
     g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (p2, pos), "length"),
                        ==, rugosa_line_get_double (rugosa_project_get_line (p1, pos), "length"));
-    close_window (again);
+    ui_harness_close_window (again);
   }
-  close_window (win);
-}
-
-/* Renders `widget` to build/NAME (for a look at the German layout). */
-static void
-save_png (GtkWidget *widget, const char *name)
-{
-  const char *build = g_getenv ("RUGOSA_BUILD_DIR");
-  g_autofree char *path = g_build_filename (build ? build : ".", name, NULL);
-  int w = gtk_widget_get_width (widget), h = gtk_widget_get_height (widget);
-  GdkPaintable *paintable = gtk_widget_paintable_new (widget);
-  GtkSnapshot *snapshot = gtk_snapshot_new ();
-  GskRenderNode *node;
-  GdkTexture *texture;
-
-  g_assert_cmpint (w, >, 0);
-  gdk_paintable_snapshot (paintable, snapshot, w, h);
-  node = gtk_snapshot_free_to_node (snapshot);
-  g_assert_nonnull (node);
-  texture = gsk_renderer_render_texture (gtk_native_get_renderer (gtk_widget_get_native (widget)),
-                                         node, &GRAPHENE_RECT_INIT (0, 0, w, h));
-  g_assert_true (gdk_texture_save_to_png (texture, path));
-  g_test_message ("screenshot: %s", path);
-  g_object_unref (texture);
-  gsk_render_node_unref (node);
-  g_object_unref (paintable);
+  ui_harness_close_window (win);
 }
 
 static void
@@ -383,7 +325,7 @@ test_preferences_german (void)
   gtk_window_set_default_size (GTK_WINDOW (prefs), 640, 820);
   gtk_window_present (GTK_WINDOW (prefs));
   gtk_test_widget_wait_for_draw (GTK_WIDGET (prefs));
-  drain ();
+  ui_harness_drain ();
   collect_labels (GTK_WIDGET (prefs), labels);
   for (guint i = 0; i < labels->len; i++)
     {
@@ -398,62 +340,21 @@ test_preferences_german (void)
     }
   g_assert_cmpstr (_("Design limits"), ==, "Auslegungsgrenzen");
   g_assert_true (found);
-  save_png (GTK_WIDGET (prefs), "rugosa-preferences-de.png");
+  ui_harness_save_png (GTK_WIDGET (prefs), "rugosa-preferences-de.png");
   gtk_window_destroy (GTK_WINDOW (prefs));
-  drain ();
+  ui_harness_drain ();
 }
 
 static void
 test_screenshot (void)
 {
-  RugosaWindow *win = open_demo ();
-  const char *build = g_getenv ("RUGOSA_BUILD_DIR");
-  g_autofree char *path = NULL;
-  GdkPaintable *paintable;
-  GtkSnapshot *snapshot;
-  GskRenderNode *node;
-  GdkTexture *texture;
-  int w, h;
+  RugosaWindow *win = ui_harness_open_demo (app);
 
   gtk_single_selection_set_selected (rugosa_window_get_selection (win), first_ok_line (win));
   gtk_range_set_value (rugosa_window_get_age_scale (win), 25.0);
   rugosa_canvas_pointer_at (RUGOSA_CANVAS (rugosa_window_get_canvas (win)), -100, -100);
-  gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
-  drain ();
-  w = gtk_widget_get_width (GTK_WIDGET (win));
-  h = gtk_widget_get_height (GTK_WIDGET (win));
-  g_assert_cmpint (w, >, 0);
-
-  paintable = gtk_widget_paintable_new (GTK_WIDGET (win));
-  snapshot = gtk_snapshot_new ();
-  gdk_paintable_snapshot (paintable, snapshot, w, h);
-  node = gtk_snapshot_free_to_node (snapshot);
-  g_assert_nonnull (node);
-  texture = gsk_renderer_render_texture (gtk_native_get_renderer (GTK_NATIVE (win)), node,
-                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
-  path = g_build_filename (build ? build : ".", "rugosa-window-de.png", NULL);
-  g_assert_true (gdk_texture_save_to_png (texture, path));
-  g_test_message ("screenshot: %s", path);
-
-  g_object_unref (texture);
-  gsk_render_node_unref (node);
-  g_object_unref (paintable);
-  close_window (win);
-}
-
-static void
-remove_tree (const char *path)
-{
-  g_autoptr (GDir) dir = g_dir_open (path, 0, NULL);
-  const char *name;
-
-  if (dir != NULL)
-    while ((name = g_dir_read_name (dir)) != NULL)
-      {
-        g_autofree char *child = g_build_filename (path, name, NULL);
-        remove_tree (child);
-      }
-  g_remove (path);
+  ui_harness_save_png (GTK_WIDGET (win), "rugosa-window-de.png");
+  ui_harness_close_window (win);
 }
 
 int
@@ -479,31 +380,14 @@ main (int argc, char *argv[])
   bind_textdomain_codeset (GETTEXT_PACKAGE, "UTF-8");
   textdomain (GETTEXT_PACKAGE);
 
-  tmpdir = g_dir_make_tmp ("rugosa-test-l10n-ui-XXXXXX", NULL);
-  {
-    g_autofree char *state = g_build_filename (tmpdir, "state", NULL);
-    g_autofree char *data = g_build_filename (tmpdir, "data", NULL);
-    g_setenv ("XDG_STATE_HOME", state, TRUE);
-    g_setenv ("XDG_DATA_HOME", data, TRUE);
-  }
-  g_setenv ("GSETTINGS_BACKEND", "memory", TRUE);
-  g_setenv ("GSK_RENDERER", "cairo", FALSE);
-
-  gtk_disable_setlocale ();
-  if (!gtk_init_check ())
+  tmpdir = ui_harness_private_dirs ("rugosa-test-l10n-ui");
+  if (!ui_harness_init_gtk ())
     {
       g_print ("1..0 # SKIP no display\n");
-      remove_tree (tmpdir);
+      ui_harness_remove_tree (tmpdir);
       return 0;
     }
-  adw_init ();
-
-  app = g_object_new (RUGOSA_TYPE_APPLICATION,
-                      "application-id", "org.rugosa.Rugosa.TestL10n",
-                      "flags", G_APPLICATION_NON_UNIQUE | G_APPLICATION_HANDLES_OPEN,
-                      "resource-base-path", "/org/rugosa/Rugosa",
-                      NULL);
-  g_assert_true (g_application_register (G_APPLICATION (app), NULL, NULL));
+  app = ui_harness_app_new ("org.rugosa.Rugosa.TestL10n");
 
   g_test_add_func ("/l10n/ui/labels-german", test_labels_german);
   g_test_add_func ("/l10n/ui/catalog-names-german", test_catalog_names_german);
@@ -514,7 +398,7 @@ main (int argc, char *argv[])
 
   status = g_test_run ();
   g_clear_object (&app);
-  remove_tree (tmpdir);
+  ui_harness_remove_tree (tmpdir);
   g_free (tmpdir);
   return status;
 }

@@ -49,6 +49,7 @@
 #include "rugosa-readout.h"
 #include "rugosa-results-table.h"
 #include "rugosa-window.h"
+#include "ui-harness.h"
 
 #define LONG_DIGITS 100000
 
@@ -284,13 +285,6 @@ static const char k_expect[] = "arrrrarrrrr";
 
 /* --- helpers ---------------------------------------------------------- */
 
-static void
-drain (void)
-{
-  while (g_main_context_pending (NULL))
-    g_main_context_iteration (NULL, FALSE);
-}
-
 static RugosaLine *
 the_line (void)
 {
@@ -336,7 +330,7 @@ set_base (int kind)
   /* Errors belong to the line shown: showing it again clears them. */
   rugosa_line_panel_set_line (the_panel (), NULL);
   rugosa_line_panel_set_line (the_panel (), line);
-  drain ();
+  ui_harness_drain ();
 }
 
 /* Every double property of the line, to see that nothing moved. */
@@ -570,7 +564,7 @@ test_line_row (gconstpointer data)
   before = line_values ();
 
   rugosa_quantity_entry_commit_text (entry, row->text ? row->text : long_text);
-  drain ();
+  ui_harness_drain ();
 
   error = rugosa_quantity_entry_get_error_text (entry);
   warnings = rugosa_readout_warnings (rugosa_window_get_project (win), line);
@@ -676,7 +670,7 @@ test_k_row (gconstpointer data)
   g_object_ref (entry);
   gtk_editable_set_text (GTK_EDITABLE (entry), row->text ? row->text : long_text);
   g_signal_emit_by_name (entry, "activate");
-  drain ();
+  ui_harness_drain ();
 
   if (rugosa_history_can_undo (history))
     outcome = 'a';
@@ -699,7 +693,7 @@ test_k_row (gconstpointer data)
       /* Typing the old K back is no edit, but clears the mark. */
       gtk_editable_set_text (GTK_EDITABLE (entry), "0.5");
       g_signal_emit_by_name (entry, "activate");
-      drain ();
+      ui_harness_drain ();
       g_assert_false (gtk_widget_has_css_class (GTK_WIDGET (entry), "error"));
       g_assert_false (arow != NULL && gtk_widget_has_css_class (arow, "field-error"));
       g_assert_false (rugosa_history_can_undo (history));
@@ -803,7 +797,7 @@ test_spin_row (gconstpointer data)
   g_object_ref (spin);
   gtk_editable_set_text (GTK_EDITABLE (spin), row->text ? row->text : long_text);
   gtk_spin_button_update (spin);
-  drain ();
+  ui_harness_drain ();
 
   /* The panel may have rebuilt its rows: what the user sees now is the
    * spin button found now. */
@@ -846,7 +840,7 @@ test_spin_row (gconstpointer data)
     {
       gtk_window_destroy (GTK_WINDOW (prefs));
       g_settings_reset (settings, row->spin->id);
-      drain ();
+      ui_harness_drain ();
     }
 }
 
@@ -864,7 +858,7 @@ test_limits_out_of_order (void)
   set_base (RG_FLUID_WATER);
   g_settings_reset (settings, "laminar-limit");
   g_settings_set_double (settings, "turbulent-limit", 2500.0);
-  drain ();
+  ui_harness_drain ();
   prefs = rugosa_preferences_window_new (settings);
   spin = find_pref_spin (GTK_WIDGET (prefs), settings, "laminar-limit");
   g_assert_nonnull (spin);
@@ -873,7 +867,7 @@ test_limits_out_of_order (void)
 
   gtk_editable_set_text (GTK_EDITABLE (spin), "2900");
   gtk_spin_button_update (spin);
-  drain ();
+  ui_harness_drain ();
 
   lam = g_settings_get_double (settings, "laminar-limit");
   turb = g_settings_get_double (settings, "turbulent-limit");
@@ -894,38 +888,7 @@ test_limits_out_of_order (void)
   gtk_window_destroy (GTK_WINDOW (prefs));
   g_settings_reset (settings, "laminar-limit");
   g_settings_reset (settings, "turbulent-limit");
-  drain ();
-}
-
-/* A picture of a window for people to look at (build folder). */
-static void
-save_picture (GtkWidget  *widget,
-              const char *name)
-{
-  const char *build = g_getenv ("RUGOSA_BUILD_DIR");
-  g_autofree char *path = g_build_filename (build ? build : ".", name, NULL);
-  GdkPaintable *paintable;
-  GtkSnapshot *snapshot;
-  GskRenderNode *node;
-  GdkTexture *texture;
-  int w, h;
-
-  gtk_test_widget_wait_for_draw (widget);
-  drain ();
-  w = gtk_widget_get_width (widget);
-  h = gtk_widget_get_height (widget);
-  paintable = gtk_widget_paintable_new (widget);
-  snapshot = gtk_snapshot_new ();
-  gdk_paintable_snapshot (paintable, snapshot, w, h);
-  node = gtk_snapshot_free_to_node (snapshot);
-  g_assert_nonnull (node);
-  texture = gsk_renderer_render_texture (gtk_native_get_renderer (gtk_widget_get_native (widget)), node,
-                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
-  g_assert_true (gdk_texture_save_to_png (texture, path));
-  g_test_message ("picture: %s", path);
-  g_object_unref (texture);
-  gsk_render_node_unref (node);
-  g_object_unref (paintable);
+  ui_harness_drain ();
 }
 
 /* Two refusals on screen at once: a length out of range and a plain K
@@ -947,7 +910,7 @@ test_pictures (void)
   adw_expander_row_set_expanded (ADW_EXPANDER_ROW (expander), TRUE);
   gtk_editable_set_text (GTK_EDITABLE (k), "lots");
   g_signal_emit_by_name (k, "activate");
-  drain ();
+  ui_harness_drain ();
   g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (k), "error"));
   {
     /* Scroll the panel so that the length row is at its top. */
@@ -964,10 +927,10 @@ test_pictures (void)
     for (int i = 0; i < 40; i++)
       {
         g_usleep (10000);
-        drain ();
+        ui_harness_drain ();
       }
   }
-  save_picture (GTK_WIDGET (win), "bad-input-panel.png");
+  ui_harness_save_png (GTK_WIDGET (win), "bad-input-panel.png");
 
   prefs = rugosa_preferences_window_new (settings);
   gtk_window_set_default_size (GTK_WINDOW (prefs), 700, 900);
@@ -977,29 +940,14 @@ test_pictures (void)
                                            ADW_PREFERENCES_PAGE (gtk_widget_get_ancestor (GTK_WIDGET (spin), ADW_TYPE_PREFERENCES_PAGE)));
   gtk_editable_set_text (GTK_EDITABLE (spin), "fast");
   gtk_spin_button_update (spin);
-  drain ();
+  ui_harness_drain ();
   g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (spin), "error"));
-  save_picture (GTK_WIDGET (prefs), "bad-input-preferences.png");
+  ui_harness_save_png (GTK_WIDGET (prefs), "bad-input-preferences.png");
   gtk_window_destroy (GTK_WINDOW (prefs));
-  drain ();
+  ui_harness_drain ();
 }
 
 /* --- main ------------------------------------------------------------- */
-
-static void
-remove_tree (const char *path)
-{
-  g_autoptr (GDir) dir = g_dir_open (path, 0, NULL);
-  const char *name;
-
-  if (dir != NULL)
-    while ((name = g_dir_read_name (dir)) != NULL)
-      {
-        g_autofree char *child = g_build_filename (path, name, NULL);
-        remove_tree (child);
-      }
-  g_remove (path);
-}
 
 static void
 add_rows (void)
@@ -1069,34 +1017,17 @@ main (int argc, char *argv[])
         break;
       }
 
-  tmpdir = g_dir_make_tmp ("rugosa-test-bad-input-XXXXXX", NULL);
-  {
-    /* Recovery copies and recent files go to a private folder. */
-    g_autofree char *state = g_build_filename (tmpdir, "state", NULL);
-    g_autofree char *xdata = g_build_filename (tmpdir, "data", NULL);
-    g_setenv ("XDG_STATE_HOME", state, TRUE);
-    g_setenv ("XDG_DATA_HOME", xdata, TRUE);
-  }
-  g_setenv ("GSETTINGS_BACKEND", "memory", TRUE);
-  g_setenv ("GSK_RENDERER", "cairo", FALSE);
-
+  tmpdir = ui_harness_private_dirs ("rugosa-test-bad-input");
   g_test_init (&argc, &argv, NULL);
   /* A row reports every check that fails, not only the first. */
   g_test_set_nonfatal_assertions ();
-  gtk_disable_setlocale ();
-  if (!gtk_init_check ())
+  if (!ui_harness_init_gtk ())
     {
       g_print ("1..0 # SKIP no display\n");
+      ui_harness_remove_tree (tmpdir);
       return 0;
     }
-  adw_init ();
-
-  app = g_object_new (RUGOSA_TYPE_APPLICATION,
-                      "application-id", "org.rugosa.Rugosa.TestBadInput",
-                      "flags", G_APPLICATION_NON_UNIQUE | G_APPLICATION_HANDLES_OPEN,
-                      "resource-base-path", "/org/rugosa/Rugosa",
-                      NULL);
-  g_assert_true (g_application_register (G_APPLICATION (app), NULL, NULL));
+  app = ui_harness_app_new ("org.rugosa.Rugosa.TestBadInput");
 
   long_text = g_malloc (LONG_DIGITS + 1);
   memset (long_text, '1', LONG_DIGITS);
@@ -1104,20 +1035,9 @@ main (int argc, char *argv[])
   if (markdown_path != NULL)
     markdown = g_string_new (NULL);
 
-  {
-    const char *src = g_getenv ("RUGOSA_SOURCE_DIR");
-    g_autofree char *path = g_build_filename (src ? src : ".", "data", "demo.rugosa", NULL);
-    g_autoptr (GFile) file = g_file_new_for_path (path);
-    g_autoptr (GError) error = NULL;
-
-    win = rugosa_window_new (app);
-    gtk_window_set_default_size (GTK_WINDOW (win), 1400, 900);
-    gtk_window_present (GTK_WINDOW (win));
-    g_assert_true (rugosa_window_load_file_sync (win, file, &error));
-    g_assert_no_error (error);
-    gtk_single_selection_set_selected (rugosa_window_get_selection (win), 0);
-    drain ();
-  }
+  win = ui_harness_open_demo (app);
+  gtk_single_selection_set_selected (rugosa_window_get_selection (win), 0);
+  ui_harness_drain ();
 
   add_rows ();
   status = g_test_run ();
@@ -1134,9 +1054,9 @@ main (int argc, char *argv[])
       g_string_free (markdown, TRUE);
     }
   gtk_window_destroy (GTK_WINDOW (win));
-  drain ();
+  ui_harness_drain ();
   g_object_unref (app);
   g_free (long_text);
-  remove_tree (tmpdir);
+  ui_harness_remove_tree (tmpdir);
   return status;
 }

@@ -26,48 +26,10 @@
 #include "rugosa-readout.h"
 #include "rugosa-results-table.h"
 #include "rugosa-window.h"
+#include "ui-harness.h"
 
 static RugosaApplication *app;
 static char *tmpdir;
-
-static void
-drain (void)
-{
-  while (g_main_context_pending (NULL))
-    g_main_context_iteration (NULL, FALSE);
-}
-
-static char *
-demo_path (void)
-{
-  const char *src = g_getenv ("RUGOSA_SOURCE_DIR");
-  g_assert_nonnull (src);
-  return g_build_filename (src, "data", "demo.rugosa", NULL);
-}
-
-static RugosaWindow *
-open_demo (void)
-{
-  RugosaWindow *win = rugosa_window_new (app);
-  g_autofree char *path = demo_path ();
-  g_autoptr (GFile) file = g_file_new_for_path (path);
-  g_autoptr (GError) error = NULL;
-
-  gtk_window_set_default_size (GTK_WINDOW (win), 1400, 900);
-  gtk_window_present (GTK_WINDOW (win));
-  g_assert_true (rugosa_window_load_file_sync (win, file, &error));
-  g_assert_no_error (error);
-  drain ();
-  return win;
-}
-
-static void
-close_window (RugosaWindow *win)
-{
-  /* Tests leave changes behind on purpose: no save prompt. */
-  gtk_window_destroy (GTK_WINDOW (win));
-  drain ();
-}
 
 /* The first line of the project that evaluates, whose fluid is `kind`
  * (or any kind when kind < 0) and, when `aging` is set, roughens. */
@@ -100,7 +62,7 @@ select_line (RugosaWindow *win,
              guint         position)
 {
   gtk_single_selection_set_selected (rugosa_window_get_selection (win), position);
-  drain ();
+  ui_harness_drain ();
   return RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win));
 }
 
@@ -119,7 +81,7 @@ design_point (RugosaWindow *win,
 static void
 test_demo_loads (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   RugosaProject *project = rugosa_window_get_project (win);
   RugosaCanvas *canvas = RUGOSA_CANVAS (rugosa_window_get_canvas (win));
   RugosaResultsTable *table = RUGOSA_RESULTS_TABLE (rugosa_window_get_results (win));
@@ -152,13 +114,13 @@ test_demo_loads (void)
     g_assert_cmpstr (text, !=, "—");
     g_assert_cmpstr (text, !=, "");
   }
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_temperature_changes_density (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   guint pos = find_line (win, 0 /* RG_FLUID_WATER */, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   RugosaQuantityEntry *entry = rugosa_line_panel_get_entry (panel, "temperature");
@@ -179,7 +141,7 @@ test_temperature_changes_density (void)
 
   g_assert_nonnull (entry);
   g_assert_true (rugosa_quantity_entry_commit_text (entry, target));
-  drain ();
+  ui_harness_drain ();
 
   g_assert_cmpfloat_with_epsilon (rugosa_line_get_double (line, "temperature"), t_expected, 1e-9);
   res = rugosa_project_get_results (project, line);
@@ -202,13 +164,13 @@ test_temperature_changes_density (void)
   g_assert_cmpstr (re_after, !=, re_before);
   (void) head_before;
   g_assert_true (rugosa_window_get_modified (win));
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_slider_grows_head_loss (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   guint pos = find_line (win, -1, TRUE);
   GtkRange *scale = rugosa_window_get_age_scale (win);
   RugosaCanvas *canvas = RUGOSA_CANVAS (rugosa_window_get_canvas (win));
@@ -218,14 +180,14 @@ test_slider_grows_head_loss (void)
 
   select_line (win, pos);
   gtk_range_set_value (scale, 0.0);
-  drain ();
+  ui_harness_drain ();
   h0 = design_point (win, pos)->result.head_loss_total_m;
 
   gtk_test_widget_wait_for_draw (GTK_WIDGET (canvas));
   builds = rugosa_canvas_get_background_builds (canvas);
 
   gtk_range_set_value (scale, 40.0);
-  drain ();
+  ui_harness_drain ();
   gtk_test_widget_wait_for_draw (GTK_WIDGET (canvas));
   h40 = design_point (win, pos)->result.head_loss_total_m;
   ratio = design_point (win, pos)->head_loss_ratio_to_new;
@@ -242,7 +204,7 @@ test_slider_grows_head_loss (void)
     if (input->line_index[i] == pos)
       g_assert_cmpuint (input->lines[i].n_trail, >=, 2);
   g_assert_cmpuint (rugosa_canvas_get_background_builds (canvas), ==, builds);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 /* A number typed without a unit means the unit the field shows. */
@@ -252,7 +214,7 @@ test_bare_number_display_unit (void)
   static const struct { const char *field; const char *text; } cases[] = {
     { "temperature", "30" }, { "flow-design", "18.5" }, { "length", "250" },
   };
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   guint pos = find_line (win, 0 /* RG_FLUID_WATER */, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   RugosaLine *line = rugosa_project_get_line (rugosa_window_get_project (win), pos);
@@ -270,17 +232,17 @@ test_bare_number_display_unit (void)
                                        g_ascii_strtod (cases[i].text, NULL), unit,
                                        &expected, NULL), ==, RG_OK);
       g_assert_true (rugosa_quantity_entry_commit_text (entry, cases[i].text));
-      drain ();
+      ui_harness_drain ();
       g_assert_cmpfloat_with_epsilon (rugosa_line_get_double (line, cases[i].field),
                                       expected, 1e-12 * fabs (expected));
     }
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_bad_value_keeps_last (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   guint pos = find_line (win, 0 /* RG_FLUID_WATER */, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   RugosaProject *project = rugosa_window_get_project (win);
@@ -297,7 +259,7 @@ test_bad_value_keeps_last (void)
 
   /* Not a number: the parser refuses it. */
   g_assert_false (rugosa_quantity_entry_commit_text (flow, "lots gpm"));
-  drain ();
+  ui_harness_drain ();
   g_assert_nonnull (rugosa_quantity_entry_get_error_text (flow));
   text_widget = GTK_WIDGET (rugosa_quantity_entry_get_editable (flow));
   g_assert_true (gtk_widget_has_css_class (text_widget, "error"));
@@ -313,7 +275,7 @@ test_bad_value_keeps_last (void)
    * Source: IAPWS-IF97 region 1 covers 273.15 K to 623.15 K; the core's
    * water.h accepts up to 150 °C. */
   g_assert_true (rugosa_quantity_entry_commit_text (temp, "400 C"));
-  drain ();
+  ui_harness_drain ();
   g_assert_nonnull (rugosa_quantity_entry_get_error_text (temp));
   g_assert_cmpfloat (rugosa_line_get_double (line, "temperature"), ==, t);
 
@@ -331,18 +293,18 @@ test_bad_value_keeps_last (void)
 
   /* A good value clears the mark. */
   g_assert_true (rugosa_quantity_entry_commit_text (flow, "20 L/s"));
-  drain ();
+  ui_harness_drain ();
   g_assert_null (rugosa_quantity_entry_get_error_text (flow));
   g_assert_false (gtk_widget_has_css_class (text_widget, "error"));
   /* Source: SI definition, 1 L = 1e-3 m³ */
   g_assert_cmpfloat_with_epsilon (rugosa_line_get_double (line, "flow-design"), 0.020, 1e-15);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_save_reopen (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   RugosaWindow *again;
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
@@ -351,7 +313,7 @@ test_save_reopen (void)
   g_autoptr (GError) error = NULL;
 
   g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "1234 ft"));
-  drain ();
+  ui_harness_drain ();
   g_assert_true (rugosa_window_get_modified (win));
   g_assert_true (rugosa_window_save_file_sync (win, file, &error));
   g_assert_no_error (error);
@@ -364,14 +326,14 @@ test_save_reopen (void)
   /* Source: NIST SP 811 (2008) B.8, 1 ft = 0.3048 m exactly */
   g_assert_cmpfloat_with_epsilon (rugosa_line_get_double (rugosa_project_get_line (rugosa_window_get_project (again), pos), "length"),
                                   1234 * 0.3048, 1e-9);
-  close_window (again);
-  close_window (win);
+  ui_harness_close_window (again);
+  ui_harness_close_window (win);
 }
 
 static void
 test_undo_redo (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   RugosaProject *project = rugosa_window_get_project (win);
@@ -382,35 +344,35 @@ test_undo_redo (void)
   guint n = rugosa_project_get_n_lines (project);
 
   g_assert_true (rugosa_quantity_entry_commit_text (length, before > 500 ? "250 m" : "750 m"));
-  drain ();
+  ui_harness_drain ();
   g_assert_cmpfloat (rugosa_line_get_double (line, "length"), !=, before);
   g_assert_cmpfloat (design_point (win, pos)->result.head_loss_total_m, !=, h_before);
 
   gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
-  drain ();
+  ui_harness_drain ();
   g_assert_cmpfloat (rugosa_line_get_double (line, "length"), ==, before);
   /* The panel shows the restored value. */
   g_assert_cmpfloat (rugosa_quantity_entry_get_value (length), ==, before);
   g_assert_cmpfloat (design_point (win, pos)->result.head_loss_total_m, ==, h_before);
 
   gtk_widget_activate_action (GTK_WIDGET (win), "win.redo", NULL);
-  drain ();
+  ui_harness_drain ();
   g_assert_cmpfloat (rugosa_line_get_double (line, "length"), !=, before);
 
   /* Structural edits too: add a line, undo it. */
   gtk_widget_activate_action (GTK_WIDGET (win), "win.line-add", NULL);
-  drain ();
+  ui_harness_drain ();
   g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, n + 1);
   gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
-  drain ();
+  ui_harness_drain ();
   g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, n);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_autosave (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   g_autofree char *autosave = rugosa_window_autosave_path (win);
@@ -420,7 +382,7 @@ test_autosave (void)
   g_autoptr (GFile) file = g_file_new_for_path (saved);
 
   g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "321 m"));
-  drain ();
+  ui_harness_drain ();
   g_assert_true (rugosa_window_autosave_now (win, &error));
   g_assert_no_error (error);
   g_assert_true (g_file_test (autosave, G_FILE_TEST_EXISTS));
@@ -430,13 +392,13 @@ test_autosave (void)
   /* A real save makes the copy unnecessary. */
   g_assert_true (rugosa_window_save_file_sync (win, file, &error));
   g_assert_false (g_file_test (autosave, G_FILE_TEST_EXISTS));
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_probe_and_keys (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   RugosaCanvas *canvas = RUGOSA_CANVAS (rugosa_window_get_canvas (win));
   GtkSingleSelection *sel = rugosa_window_get_selection (win);
   guint n = rugosa_project_get_n_lines (rugosa_window_get_project (win));
@@ -469,9 +431,9 @@ test_probe_and_keys (void)
 
   /* A click on a marker selects its line, and the panel follows. */
   gtk_single_selection_set_selected (sel, pos == 0 ? 1 % n : 0);
-  drain ();
+  ui_harness_drain ();
   g_assert_true (rugosa_canvas_select_at (canvas, x, y));
-  drain ();
+  ui_harness_drain ();
   g_assert_cmpuint (gtk_single_selection_get_selected (sel), ==, pos);
   g_assert_true (rugosa_line_panel_get_line (RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win)))
                  == rugosa_project_get_line (rugosa_window_get_project (win), pos));
@@ -493,13 +455,13 @@ test_probe_and_keys (void)
   g_assert_cmpuint (gtk_single_selection_get_selected (sel), ==, 1 % n);
   gtk_widget_activate_action (GTK_WIDGET (canvas), "canvas.step", "i", -1);
   g_assert_cmpuint (gtk_single_selection_get_selected (sel), ==, 0);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_units_preference (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   GSettings *settings = rugosa_application_get_settings (app);
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
@@ -507,12 +469,12 @@ test_units_preference (void)
   const char *text;
 
   g_settings_set_string (settings, "unit-flow", "gpm");
-  drain ();
+  ui_harness_drain ();
   text = gtk_editable_get_text (rugosa_quantity_entry_get_editable (flow));
   g_assert_true (g_str_has_suffix (text, " gpm"));
   g_settings_reset (settings, "unit-flow");
-  drain ();
-  close_window (win);
+  ui_harness_drain ();
+  ui_harness_close_window (win);
 }
 
 /* The message dialog a window has just presented, or NULL. */
@@ -534,7 +496,7 @@ find_message_dialog (GtkWindow *parent)
 static void
 test_recovery (void)
 {
-  RugosaWindow *crashed = open_demo ();
+  RugosaWindow *crashed = ui_harness_open_demo (app);
   RugosaWindow *fresh;
   guint pos = find_line (crashed, -1, FALSE);
   RugosaLinePanel *panel = select_line (crashed, pos);
@@ -548,23 +510,23 @@ test_recovery (void)
   /* A session with unsaved work, autosaved, that then "crashes": the copy
    * is set aside before the window goes away and put back after. */
   g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "777 m"));
-  drain ();
+  ui_harness_drain ();
   g_assert_true (rugosa_window_autosave_now (crashed, &error));
   g_assert_no_error (error);
   g_assert_cmpint (g_rename (autosave, kept), ==, 0);
   g_assert_cmpint (g_rename (origin, kept_origin), ==, 0);
-  close_window (crashed);
+  ui_harness_close_window (crashed);
   g_assert_cmpint (g_rename (kept, autosave), ==, 0);
   g_assert_cmpint (g_rename (kept_origin, origin), ==, 0);
 
   fresh = rugosa_window_new (app);
   gtk_window_present (GTK_WINDOW (fresh));
   rugosa_window_offer_recovery (fresh);
-  drain ();
+  ui_harness_drain ();
   dialog = find_message_dialog (GTK_WINDOW (fresh));
   g_assert_nonnull (dialog);
   adw_message_dialog_response (dialog, "recover");
-  drain ();
+  ui_harness_drain ();
   /* Source: the value typed before the crash, 777 m. */
   g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (rugosa_window_get_project (fresh), pos),
                                              "length"), ==, 777.0);
@@ -572,7 +534,7 @@ test_recovery (void)
   /* The file it came from is known again. */
   g_assert_nonnull (rugosa_window_get_file (fresh));
   g_assert_false (g_file_test (autosave, G_FILE_TEST_EXISTS));
-  close_window (fresh);
+  ui_harness_close_window (fresh);
 }
 
 /* Earlier tests close windows without the close guard and so leave
@@ -599,7 +561,7 @@ clear_recovery_dir (void)
 static void
 test_recovery_keeps_copy (void)
 {
-  RugosaWindow *crashed = open_demo ();
+  RugosaWindow *crashed = ui_harness_open_demo (app);
   RugosaWindow *fresh;
   guint pos = find_line (crashed, -1, FALSE);
   RugosaLinePanel *panel = select_line (crashed, pos);
@@ -614,12 +576,12 @@ test_recovery_keeps_copy (void)
 
   clear_recovery_dir ();
   g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "444 m"));
-  drain ();
+  ui_harness_drain ();
   g_assert_true (rugosa_window_autosave_now (crashed, &error));
   g_assert_no_error (error);
   g_assert_cmpint (g_rename (autosave, kept), ==, 0);
   g_assert_cmpint (g_rename (origin, kept_origin), ==, 0);
-  close_window (crashed);
+  ui_harness_close_window (crashed);
   g_assert_cmpint (g_rename (kept, autosave), ==, 0);
   g_assert_cmpint (g_rename (kept_origin, origin), ==, 0);
 
@@ -629,11 +591,11 @@ test_recovery_keeps_copy (void)
   blocker = rugosa_window_autosave_path (fresh);
   g_assert_cmpint (g_mkdir (blocker, 0700), ==, 0);
   rugosa_window_offer_recovery (fresh);
-  drain ();
+  ui_harness_drain ();
   dialog = find_message_dialog (GTK_WINDOW (fresh));
   g_assert_nonnull (dialog);
   adw_message_dialog_response (dialog, "recover");
-  drain ();
+  ui_harness_drain ();
   /* Source: the value typed before the crash, 444 m. */
   g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (rugosa_window_get_project (fresh), pos),
                                              "length"), ==, 444.0);
@@ -646,13 +608,13 @@ test_recovery_keeps_copy (void)
   g_assert_cmpint (g_rmdir (blocker), ==, 0);
   g_unlink (autosave);
   g_unlink (origin);
-  close_window (fresh);
+  ui_harness_close_window (fresh);
 }
 
 static void
 test_close_guard (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   AdwMessageDialog *dialog;
@@ -662,9 +624,9 @@ test_close_guard (void)
   g_assert_false (rugosa_window_get_modified (win));
 
   g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "888 m"));
-  drain ();
+  ui_harness_drain ();
   gtk_window_close (GTK_WINDOW (win));
-  drain ();
+  ui_harness_drain ();
   /* Changed: the window stays and asks. */
   g_assert_true (gtk_widget_get_visible (GTK_WIDGET (win)));
   dialog = find_message_dialog (GTK_WINDOW (win));
@@ -674,17 +636,17 @@ test_close_guard (void)
   g_assert_true (adw_message_dialog_has_response (dialog, "cancel"));
 
   adw_message_dialog_response (dialog, "cancel");
-  drain ();
+  ui_harness_drain ();
   g_assert_true (gtk_widget_get_visible (GTK_WIDGET (win)));
   g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (rugosa_window_get_project (win), pos),
                                              "length"), ==, 888.0);
 
   gtk_window_close (GTK_WINDOW (win));
-  drain ();
+  ui_harness_drain ();
   dialog = find_message_dialog (GTK_WINDOW (win));
   g_assert_nonnull (dialog);
   adw_message_dialog_response (dialog, "discard");
-  drain ();
+  ui_harness_drain ();
   g_assert_false (gtk_widget_get_visible (GTK_WIDGET (win)));
 }
 
@@ -711,7 +673,7 @@ assert_save_error_dialog (RugosaWindow *win)
   g_assert_null (strstr (body, ". "));
   g_assert_null (strchr (body, '\n'));
   adw_message_dialog_response (dialog, "close");
-  drain ();
+  ui_harness_drain ();
 }
 
 /* A save that fails (here: a full disk, injected) keeps the document
@@ -720,7 +682,7 @@ assert_save_error_dialog (RugosaWindow *win)
 static void
 test_save_fails_keeps_dirty (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   g_autofree char *path = g_build_filename (tmpdir, "full-disk.rugosa", NULL);
@@ -736,11 +698,11 @@ test_save_fails_keeps_dirty (void)
   g_assert_no_error (error);
   g_assert_true (g_file_get_contents (path, &before, NULL, NULL));
   g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "555 m"));
-  drain ();
+  ui_harness_drain ();
 
   rugosa_project_set_save_fault_hook (full_disk, NULL);
   gtk_widget_activate_action (GTK_WIDGET (win), "win.save", NULL);
-  drain ();
+  ui_harness_drain ();
   assert_save_error_dialog (win);
   g_assert_true (rugosa_window_get_modified (win));
   g_assert_true (g_str_has_prefix (gtk_window_get_title (GTK_WINDOW (win)), "• "));
@@ -754,11 +716,11 @@ test_save_fails_keeps_dirty (void)
 
   /* Close, answer "Save": the save fails, so the window must stay. */
   gtk_window_close (GTK_WINDOW (win));
-  drain ();
+  ui_harness_drain ();
   dialog = find_message_dialog (GTK_WINDOW (win));
   g_assert_nonnull (dialog);
   adw_message_dialog_response (dialog, "save");
-  drain ();
+  ui_harness_drain ();
   assert_save_error_dialog (win);
   g_assert_true (gtk_widget_get_visible (GTK_WIDGET (win)));
   g_assert_true (rugosa_window_get_modified (win));
@@ -766,13 +728,13 @@ test_save_fails_keeps_dirty (void)
 
   /* With room on the disk again the same save works and keeps a backup. */
   gtk_widget_activate_action (GTK_WIDGET (win), "win.save", NULL);
-  drain ();
+  ui_harness_drain ();
   g_assert_false (rugosa_window_get_modified (win));
   g_assert_false (g_file_test (autosave, G_FILE_TEST_EXISTS));
   g_free (now);
   g_assert_true (g_file_get_contents (backup, &now, NULL, NULL));
   g_assert_cmpstr (now, ==, before);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 /* A file written by a newer Rugosa is refused, and nothing is ever
@@ -781,7 +743,7 @@ test_save_fails_keeps_dirty (void)
 static void
 test_newer_version_refused (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   RugosaWindow *pristine;
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
@@ -802,17 +764,17 @@ test_newer_version_refused (void)
   g_assert_true (rugosa_window_save_file_sync (win, current_file, &error));
   g_assert_no_error (error);
   g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, "length"), "666 m"));
-  drain ();
+  ui_harness_drain ();
   g_assert_true (g_file_set_contents (future, text, -1, NULL));
   doc_before = rugosa_project_to_data (rugosa_window_get_project (win), NULL);
 
   rugosa_window_load_file (win, future_file);
-  drain ();
+  ui_harness_drain ();
   dialog = find_message_dialog (GTK_WINDOW (win));
   g_assert_nonnull (dialog);
   g_assert_nonnull (strstr (adw_message_dialog_get_body (dialog), "future.rugosa"));
   adw_message_dialog_response (dialog, "close");
-  drain ();
+  ui_harness_drain ();
   doc_after = rugosa_project_to_data (rugosa_window_get_project (win), NULL);
   g_assert_cmpstr (doc_after, ==, doc_before);
   g_assert_true (g_file_equal (rugosa_window_get_file (win), current_file));
@@ -825,7 +787,7 @@ test_newer_version_refused (void)
   g_assert_true (g_file_get_contents (autosave_origin, &origin, NULL, NULL));
   g_assert_cmpstr (origin, ==, current);
   gtk_widget_activate_action (GTK_WIDGET (win), "win.save", NULL);
-  drain ();
+  ui_harness_drain ();
   g_assert_false (rugosa_window_get_modified (win));
   g_assert_true (g_file_get_contents (future, &now, NULL, NULL));
   g_assert_cmpstr (now, ==, text);
@@ -838,29 +800,29 @@ test_newer_version_refused (void)
   g_clear_error (&error);
   g_assert_true (rugosa_window_is_pristine (pristine));
   g_assert_null (rugosa_window_get_file (pristine));
-  close_window (pristine);
+  ui_harness_close_window (pristine);
 
   /* `rugosa future.rugosa`: no window takes the file as its own. */
   windows_before = g_list_copy (gtk_application_get_windows (GTK_APPLICATION (app)));
   g_application_open (G_APPLICATION (app), &future_file, 1, "");
-  drain ();
+  ui_harness_drain ();
   for (l = gtk_application_get_windows (GTK_APPLICATION (app)); l; l = l->next)
     if (RUGOSA_IS_WINDOW (l->data) && rugosa_window_get_file (l->data))
       g_assert_false (g_file_equal (rugosa_window_get_file (l->data), future_file));
   for (l = g_list_copy (gtk_application_get_windows (GTK_APPLICATION (app))); l; l = g_list_delete_link (l, l))
     if (RUGOSA_IS_WINDOW (l->data) && !g_list_find (windows_before, l->data))
-      close_window (l->data);
+      ui_harness_close_window (l->data);
   g_list_free (windows_before);
   g_free (now);
   g_assert_true (g_file_get_contents (future, &now, NULL, NULL));
   g_assert_cmpstr (now, ==, text);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
 test_open_from_command_line (void)
 {
-  g_autofree char *path = demo_path ();
+  g_autofree char *path = ui_harness_demo_path ();
   g_autoptr (GFile) file = g_file_new_for_path (path);
   GList *before = g_list_copy (gtk_application_get_windows (GTK_APPLICATION (app)));
   GList *after;
@@ -868,7 +830,7 @@ test_open_from_command_line (void)
 
   /* What `rugosa FILE` does through G_APPLICATION_HANDLES_OPEN. */
   g_application_open (G_APPLICATION (app), &file, 1, "");
-  drain ();
+  ui_harness_drain ();
   after = gtk_application_get_windows (GTK_APPLICATION (app));
   for (GList *l = after; l; l = l->next)
     if (!g_list_find (before, l->data) || (RUGOSA_IS_WINDOW (l->data) && rugosa_window_get_file (l->data)))
@@ -877,14 +839,14 @@ test_open_from_command_line (void)
   g_assert_nonnull (opened);
   g_assert_true (g_file_equal (rugosa_window_get_file (opened), file));
   g_assert_cmpuint (rugosa_project_get_n_lines (rugosa_window_get_project (opened)), >=, 1);
-  close_window (opened);
+  ui_harness_close_window (opened);
 }
 
 static void
 test_drop_file (void)
 {
   RugosaWindow *win = rugosa_window_new (app);
-  g_autofree char *path = demo_path ();
+  g_autofree char *path = ui_harness_demo_path ();
   g_autoptr (GFile) file = g_file_new_for_path (path);
   g_autoptr (GListModel) controllers = NULL;
   GtkDropTarget *target = NULL;
@@ -893,7 +855,7 @@ test_drop_file (void)
   gboolean accepted = FALSE;
 
   gtk_window_present (GTK_WINDOW (win));
-  drain ();
+  ui_harness_drain ();
   g_assert_true (rugosa_window_is_pristine (win));
   controllers = gtk_widget_observe_controllers (GTK_WIDGET (win));
   for (guint i = 0; i < g_list_model_get_n_items (controllers) && target == NULL; i++)
@@ -911,12 +873,12 @@ test_drop_file (void)
   g_signal_emit_by_name (target, "drop", &value, 100.0, 100.0, &accepted);
   g_value_unset (&value);
   g_slist_free (files);
-  drain ();
+  ui_harness_drain ();
   g_assert_true (accepted);
   g_assert_nonnull (rugosa_window_get_file (win));
   g_assert_true (g_file_equal (rugosa_window_get_file (win), file));
   g_assert_cmpuint (rugosa_project_get_n_lines (rugosa_window_get_project (win)), >=, 2);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static gboolean
@@ -935,7 +897,7 @@ file_starts_with (const char *path,
 static void
 test_outputs (void)
 {
-  RugosaWindow *win = open_demo ();
+  RugosaWindow *win = ui_harness_open_demo (app);
   g_autofree char *png = g_build_filename (tmpdir, "chart.png", NULL);
   g_autofree char *svg = g_build_filename (tmpdir, "chart.svg", NULL);
   g_autofree char *pdf = g_build_filename (tmpdir, "chart.pdf", NULL);
@@ -972,7 +934,7 @@ test_outputs (void)
   for (const char *c = csv_text; *c; c++)
     rows += *c == '\n';
   g_assert_cmpuint (rows, >=, n + 1);
-  close_window (win);
+  ui_harness_close_window (win);
 }
 
 static void
@@ -984,7 +946,7 @@ test_unit_system (void)
 
   /* Choosing a system sets every quantity's unit to that system's. */
   g_settings_set_string (settings, "unit-system", "us-customary");
-  drain ();
+  ui_harness_drain ();
   flow = g_settings_get_string (settings, "unit-flow");
   temp = g_settings_get_string (settings, "unit-temperature");
   g_assert_cmpstr (flow, ==, "gpm");
@@ -992,7 +954,7 @@ test_unit_system (void)
 
   /* Changing one unit by hand makes the system "chosen one by one". */
   g_settings_set_string (settings, "unit-flow", "L/s");
-  drain ();
+  ui_harness_drain ();
   system = g_settings_get_string (settings, "unit-system");
   g_assert_cmpstr (system, ==, "mixed");
 
@@ -1000,7 +962,7 @@ test_unit_system (void)
   /* Back to SI for the tests that follow. */
   rugosa_preferences_apply_unit_system (settings, "si");
   g_settings_set_string (settings, "unit-system", "si");
-  drain ();
+  ui_harness_drain ();
   g_clear_pointer (&flow, g_free);
   flow = g_settings_get_string (settings, "unit-flow");
   g_assert_cmpstr (flow, ==, "L/s");
@@ -1009,13 +971,7 @@ test_unit_system (void)
 static void
 test_screenshot (void)
 {
-  RugosaWindow *win = open_demo ();
-  g_autofree char *path = NULL;
-  const char *build = g_getenv ("RUGOSA_BUILD_DIR");
-  GdkPaintable *paintable;
-  GtkSnapshot *snapshot;
-  GskRenderNode *node;
-  GdkTexture *texture;
+  RugosaWindow *win = ui_harness_open_demo (app);
   int w, h;
 
   find_line (win, -1, TRUE);
@@ -1024,7 +980,7 @@ test_screenshot (void)
   /* Wherever the virtual pointer sits, the picture shows no pointer readout. */
   rugosa_canvas_pointer_at (RUGOSA_CANVAS (rugosa_window_get_canvas (win)), -100, -100);
   gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
-  drain ();
+  ui_harness_drain ();
   /* Without a compositor the window keeps a thin border outside the
    * widget: grow the window until the widget itself is 1400 × 900. */
   for (int tries = 0; tries < 5; tries++)
@@ -1036,7 +992,7 @@ test_screenshot (void)
       gtk_window_set_default_size (GTK_WINDOW (win), 1400 + (1400 - w) + (tries ? 0 : 0),
                                    900 + (900 - h));
       gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
-      drain ();
+      ui_harness_drain ();
     }
   w = gtk_widget_get_width (GTK_WIDGET (win));
   h = gtk_widget_get_height (GTK_WIDGET (win));
@@ -1045,39 +1001,10 @@ test_screenshot (void)
   /* The resizes may have sent the virtual pointer's motion again. */
   rugosa_canvas_pointer_at (RUGOSA_CANVAS (rugosa_window_get_canvas (win)), -100, -100);
   gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
-  drain ();
+  ui_harness_drain ();
 
-  paintable = gtk_widget_paintable_new (GTK_WIDGET (win));
-  snapshot = gtk_snapshot_new ();
-  gdk_paintable_snapshot (paintable, snapshot, w, h);
-  node = gtk_snapshot_free_to_node (snapshot);
-  g_assert_nonnull (node);
-  texture = gsk_renderer_render_texture (gtk_native_get_renderer (GTK_NATIVE (win)), node,
-                                         &GRAPHENE_RECT_INIT (0, 0, w, h));
-  path = g_build_filename (build ? build : ".", "rugosa-window.png", NULL);
-  g_assert_true (gdk_texture_save_to_png (texture, path));
-  g_test_message ("screenshot: %s", path);
-  g_assert_cmpint (gdk_texture_get_width (texture), ==, 1400);
-
-  g_object_unref (texture);
-  gsk_render_node_unref (node);
-  g_object_unref (paintable);
-  close_window (win);
-}
-
-static void
-remove_tree (const char *path)
-{
-  g_autoptr (GDir) dir = g_dir_open (path, 0, NULL);
-  const char *name;
-
-  if (dir != NULL)
-    while ((name = g_dir_read_name (dir)) != NULL)
-      {
-        g_autofree char *child = g_build_filename (path, name, NULL);
-        remove_tree (child);
-      }
-  g_remove (path);
+  ui_harness_save_png (GTK_WIDGET (win), "rugosa-window.png");
+  ui_harness_close_window (win);
 }
 
 int
@@ -1085,32 +1012,15 @@ main (int argc, char *argv[])
 {
   int status;
 
-  tmpdir = g_dir_make_tmp ("rugosa-test-ui-XXXXXX", NULL);
-  {
-    /* Recovery copies and recent files go to a private folder. */
-    g_autofree char *state = g_build_filename (tmpdir, "state", NULL);
-    g_autofree char *data = g_build_filename (tmpdir, "data", NULL);
-    g_setenv ("XDG_STATE_HOME", state, TRUE);
-    g_setenv ("XDG_DATA_HOME", data, TRUE);
-  }
-  g_setenv ("GSETTINGS_BACKEND", "memory", TRUE);
-  g_setenv ("GSK_RENDERER", "cairo", FALSE);
-
+  tmpdir = ui_harness_private_dirs ("rugosa-test-ui");
   g_test_init (&argc, &argv, NULL);
-  gtk_disable_setlocale ();
-  if (!gtk_init_check ())
+  if (!ui_harness_init_gtk ())
     {
       g_print ("1..0 # SKIP no display\n");
+      ui_harness_remove_tree (tmpdir);
       return 0;
     }
-  adw_init ();
-
-  app = g_object_new (RUGOSA_TYPE_APPLICATION,
-                      "application-id", "org.rugosa.Rugosa.Test",
-                      "flags", G_APPLICATION_NON_UNIQUE | G_APPLICATION_HANDLES_OPEN,
-                      "resource-base-path", "/org/rugosa/Rugosa",
-                      NULL);
-  g_assert_true (g_application_register (G_APPLICATION (app), NULL, NULL));
+  app = ui_harness_app_new ("org.rugosa.Rugosa.Test");
 
   g_test_add_func ("/ui/demo/loads", test_demo_loads);
   g_test_add_func ("/ui/panel/temperature-changes-density", test_temperature_changes_density);
@@ -1135,7 +1045,7 @@ main (int argc, char *argv[])
 
   status = g_test_run ();
   g_object_unref (app);
-  remove_tree (tmpdir);
+  ui_harness_remove_tree (tmpdir);
   g_free (tmpdir);
   return status;
 }
