@@ -246,6 +246,48 @@ test_point_errors (void)
   g_assert_cmpint (memcmp (&p, &before, sizeof p), ==, 0);
 }
 
+/* The validity warnings: one per condition, none for a laminar point or a
+ * point inside the stated window. */
+static void
+test_validity_warnings (void)
+{
+  static const struct
+  {
+    RgFrictionModel model;
+    double re, rr;
+    int count;
+    const char *needle;
+  } cases[] = {
+    /* Source: Hagen–Poiseuille holds in laminar flow: nothing to warn. */
+    { RG_FRICTION_COLEBROOK, 1000.0, 1e-3, 0, NULL },
+    /* From memory of Moody (1944): 4000 ≤ Re ≤ 1e8, ε/D ≤ 0.05. */
+    { RG_FRICTION_COLEBROOK, 1.0e5, 1e-3, 0, NULL },
+    { RG_FRICTION_COLEBROOK, 3000.0, 1e-3, 1, "transitional" },
+    { RG_FRICTION_COLEBROOK, 5.0e8, 1e-4, 1, "range stated for Colebrook" },
+    { RG_FRICTION_HAALAND, 1.0e5, 0.07, 1, "largest stated for Haaland" },
+    /* From memory of Swamee and Jain (1976): 5000 ≤ Re, 1e-6 ≤ ε/D ≤ 1e-2. */
+    { RG_FRICTION_SWAMEE_JAIN, 4500.0, 1e-3, 1, "range stated for Swamee" },
+    { RG_FRICTION_SWAMEE_JAIN, 1.0e5, 1e-7, 1, "smallest stated for Swamee" },
+    { RG_FRICTION_SWAMEE_JAIN, 1.0e5, 0.0, 0, NULL },
+  };
+
+  for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      RgFrictionPoint pt;
+      RgWarnings w;
+      RgError err = { 0 };
+
+      rg_warnings_clear (&w);
+      g_assert_cmpint (rg_friction_point (cases[i].model, NULL, cases[i].re, cases[i].rr,
+                                          &pt, &err), ==, RG_OK);
+      rg_friction_validity_warnings (cases[i].model, cases[i].re, cases[i].rr, &pt, &w);
+      g_test_message ("case %zu: %s", i, w.count > 0 ? w.text[0] : "(none)");
+      g_assert_cmpint (w.count, ==, cases[i].count);
+      if (cases[i].needle != NULL)
+        g_assert_nonnull (strstr (w.text[0], cases[i].needle));
+    }
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -262,6 +304,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/regime/point/transitional", test_point_transitional);
   g_test_add_func ("/regime/point/turbulent-zones", test_point_turbulent_zones);
   g_test_add_func ("/regime/point/errors", test_point_errors);
+  g_test_add_func ("/regime/validity-warnings", test_validity_warnings);
 
   return g_test_run ();
 }

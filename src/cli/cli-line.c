@@ -532,31 +532,6 @@ parse_aging (const char *text, double *rate_m_per_year, RgError *err)
   return TRUE;
 }
 
-static void
-range_warnings (RgFrictionModel model, const RgLineResult *r, RgWarnings *w)
-{
-  /* Stated ranges: Colebrook's chart range as usually quoted (Moody 1944:
-   * Re 4000–1e8, ε/D ≤ 0.05); Haaland (1983): same; Swamee and Jain (1976):
-   * 5000 ≤ Re ≤ 1e8, 1e-6 ≤ ε/D ≤ 1e-2. */
-  double re_lo = 4000.0, re_hi = 1.0e8, rr_hi = 0.05;
-
-  if (model == RG_FRICTION_SWAMEE_JAIN)
-    {
-      re_lo = 5000.0;
-      rr_hi = 1.0e-2;
-    }
-  if (r->friction.regime == RG_REGIME_TRANSITIONAL)
-    rg_warnings_add (w, "The flow is transitional (Re %.0f): the friction factor may lie anywhere from the laminar %.4g to the turbulent %.4g; the turbulent value is used.",
-                     r->reynolds, r->friction.f_laminar, r->friction.f);
-  else if (r->friction.regime == RG_REGIME_TURBULENT && model != RG_FRICTION_CHURCHILL
-           && (r->reynolds < re_lo || r->reynolds > re_hi))
-    rg_warnings_add (w, "The Reynolds number %.3g lies outside %g–%g, the range stated for %s.",
-                     r->reynolds, re_lo, re_hi, rg_friction_model_title (model));
-  if (r->relative_roughness > rr_hi && r->friction.regime != RG_REGIME_LAMINAR)
-    rg_warnings_add (w, "The relative roughness %.3g exceeds %g, the largest stated for %s.",
-                     r->relative_roughness, rr_hi, rg_friction_model_title (model));
-}
-
 int
 cli_cmd_line (int argc, char **argv)
 {
@@ -702,7 +677,8 @@ cli_cmd_line (int argc, char **argv)
     return fail_naming_option (&err);
 
   const RgLineResult *r = &aged.result;
-  range_warnings (in.model, r, &warnings);
+  rg_friction_validity_warnings (in.model, r->reynolds, r->relative_roughness,
+                                 &r->friction, &warnings);
   if (spec.kind == RG_FLUID_AIR && r->pressure_drop_pa > 0.1 * spec.pressure_pa)
     rg_warnings_add (&warnings,
                      "The pressure drop is %.1f %% of the inlet pressure: above 10 %% the incompressible model no longer holds for a gas.",

@@ -174,3 +174,48 @@ rg_friction_point (RgFrictionModel model, const RgTransition *t, double re,
   *out = p;
   return RG_OK;
 }
+
+/* Stated ranges of the correlations, for the "outside the range" warning.
+ * From memory of Swamee and Jain (1976), J. Hydraul. Div. ASCE 102(5):
+ * 5000 ≤ Re ≤ 1e8, 1e-6 ≤ ε/D ≤ 1e-2; of Haaland (1983), J. Fluids Eng.
+ * 105(1): 4000 ≤ Re ≤ 1e8, ε/D ≤ 0.05; Colebrook is taken as covering the
+ * window of Moody's chart (Moody 1944, Trans. ASME 66), 4000 ≤ Re ≤ 1e8,
+ * ε/D ≤ 0.05; Churchill (1977) covers every regime, up to the same window;
+ * not checked against the documents. */
+static const struct
+{
+  double re_min, re_max, rr_min, rr_max;
+} correlation_ranges[RG_FRICTION_N_MODELS] = {
+  [RG_FRICTION_COLEBROOK] = { 4000.0, 1.0e8, 0.0, 0.05 },
+  [RG_FRICTION_HAALAND] = { 4000.0, 1.0e8, 0.0, 0.05 },
+  [RG_FRICTION_SWAMEE_JAIN] = { 5000.0, 1.0e8, 1.0e-6, 1.0e-2 },
+  [RG_FRICTION_CHURCHILL] = { 0.0, 1.0e8, 0.0, 0.05 },
+};
+
+void
+rg_friction_validity_warnings (RgFrictionModel model, double re, double rr,
+                               const RgFrictionPoint *pt, RgWarnings *w)
+{
+  if (pt->regime == RG_REGIME_LAMINAR || (unsigned) model >= RG_FRICTION_N_MODELS)
+    return;
+
+  const double re_lo = correlation_ranges[model].re_min;
+  const double re_hi = correlation_ranges[model].re_max;
+  const double rr_lo = correlation_ranges[model].rr_min;
+  const double rr_hi = correlation_ranges[model].rr_max;
+
+  if (pt->regime == RG_REGIME_TRANSITIONAL)
+    rg_warnings_add (w, "The flow is transitional (Re %.0f): the friction factor may lie anywhere from the laminar %.4g to the turbulent %.4g; the turbulent value is used.",
+                     re, pt->f_laminar, pt->f);
+  /* A transitional point lies below every turbulent correlation's range:
+   * the warning above says so already. */
+  else if (re < re_lo || re > re_hi)
+    rg_warnings_add (w, "The Reynolds number %.3g lies outside %g–%g, the range stated for %s.",
+                     re, re_lo, re_hi, rg_friction_model_title (model));
+  if (rr > rr_hi)
+    rg_warnings_add (w, "The relative roughness %.3g exceeds %g, the largest stated for %s.",
+                     rr, rr_hi, rg_friction_model_title (model));
+  else if (rr > 0.0 && rr < rr_lo)
+    rg_warnings_add (w, "The relative roughness %.3g is below %g, the smallest stated for %s.",
+                     rr, rr_lo, rg_friction_model_title (model));
+}

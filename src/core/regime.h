@@ -64,3 +64,11 @@ typedef struct {
 RgStatus rg_friction_point (RgFrictionModel model, const RgTransition *t,
                             double re, double rr, RgFrictionPoint *out,
                             RgError *err);
+
+/* Warnings for an operating point (re, rr) evaluated as `pt` with `model`:
+ * the transitional range (laminar and turbulent values named), and a
+ * Reynolds number or relative roughness outside the range the model's
+ * authors state (sources in regime.c).  Laminar points get none. */
+void rg_friction_validity_warnings (RgFrictionModel model, double re,
+                                    double rr, const RgFrictionPoint *pt,
+                                    RgWarnings *warnings);

@@ -95,23 +95,6 @@ set_text (char *dst, const char *text)
   g_strlcpy (dst, text, RG_ERROR_TEXT_MAX);
 }
 
-/* Validity ranges of the correlations, for the "outside the range"
- * warning.  From memory of Swamee and Jain (1976), J. Hydraul. Div. ASCE
- * 102(5): 5000 ≤ Re ≤ 1e8, 1e-6 ≤ ε/D ≤ 1e-2; of Haaland (1983), J. Fluids
- * Eng. 105(1): 4000 ≤ Re ≤ 1e8, ε/D ≤ 0.05; Colebrook and Churchill are
- * taken as covering the Moody chart window, Re ≤ 1e8 and ε/D ≤ 0.05 (Moody
- * 1944); not checked against the documents. */
-typedef struct {
-  double re_min, re_max, rr_min, rr_max;
-} CorrelationRange;
-
-static const CorrelationRange correlation_ranges[RG_FRICTION_N_MODELS] = {
-  [RG_FRICTION_COLEBROOK] = { 4000.0, 1.0e8, 0.0, 0.05 },
-  [RG_FRICTION_HAALAND] = { 4000.0, 1.0e8, 0.0, 0.05 },
-  [RG_FRICTION_SWAMEE_JAIN] = { 5000.0, 1.0e8, 1.0e-6, 1.0e-2 },
-  [RG_FRICTION_CHURCHILL] = { 0.0, 1.0e8, 0.0, 0.05 },
-};
-
 static void
 add_point_warnings (RugosaOperatingPoint *p, RgFrictionModel model,
                     RugosaSettings *settings)
@@ -119,7 +102,6 @@ add_point_warnings (RugosaOperatingPoint *p, RgFrictionModel model,
   const RgLineResult *r = &p->result;
   const double v_limit = rugosa_settings_get_double (settings, "velocity-limit");
   const double g_limit = rugosa_settings_get_double (settings, "gradient-limit");
-  const CorrelationRange *cr = &correlation_ranges[model];
 
   if (r->velocity_m_s > v_limit)
     rg_warnings_add (&p->warnings,
@@ -129,18 +111,8 @@ add_point_warnings (RugosaOperatingPoint *p, RgFrictionModel model,
     rg_warnings_add (&p->warnings,
                      "The gradient %.3g m per 100 m is above the limit of %.3g m per 100 m.",
                      r->gradient_m_per_100m, g_limit);
-  if (r->friction.regime == RG_REGIME_TRANSITIONAL)
-    rg_warnings_add (&p->warnings,
-                     "Re = %.4g lies in the transitional range: the friction factor is uncertain between the laminar and the turbulent value.",
-                     r->reynolds);
-  if (r->friction.regime != RG_REGIME_LAMINAR
-      && (r->reynolds < cr->re_min || r->reynolds > cr->re_max
-          || (r->relative_roughness > 0.0 && r->relative_roughness < cr->rr_min)
-          || r->relative_roughness > cr->rr_max))
-    rg_warnings_add (&p->warnings,
-                     "Re = %.4g, ε/D = %.3g lies outside the stated range of %s.",
-                     r->reynolds, r->relative_roughness,
-                     rg_friction_model_title (model));
+  rg_friction_validity_warnings (model, r->reynolds, r->relative_roughness,
+                                 &r->friction, &p->warnings);
 }
 
 static void
