@@ -83,20 +83,96 @@ make_one_line (char *text)
     }
 }
 
+static RgStatus
+error_set_va (RgError *err, RgStatus status, RgSubjects subjects,
+              const char *fmt, va_list ap)
+{
+  if (err == NULL)
+    return status;
+  err->status = status;
+  err->subjects = subjects;
+  /* a longer text is cut; make_one_line repairs a cut character */
+  (void) vsnprintf (err->text, sizeof err->text, RG_TRANSLATE (fmt), ap);
+  make_one_line (err->text);
+  return status;
+}
+
 RgStatus
 rg_error_set (RgError *err, RgStatus status, const char *fmt, ...)
 {
   va_list ap;
+  RgStatus st;
 
-  if (err == NULL)
-    return status;
-  err->status = status;
   va_start (ap, fmt);
-  /* a longer text is cut; make_one_line repairs a cut character */
-  (void) vsnprintf (err->text, sizeof err->text, RG_TRANSLATE (fmt), ap);
+  st = error_set_va (err, status, 0, fmt, ap);
   va_end (ap);
-  make_one_line (err->text);
-  return status;
+  return st;
+}
+
+RgStatus
+rg_error_set_on (RgError *err, RgStatus status, RgSubjects subjects,
+                 const char *fmt, ...)
+{
+  va_list ap;
+  RgStatus st;
+
+  va_start (ap, fmt);
+  st = error_set_va (err, status, subjects, fmt, ap);
+  va_end (ap);
+  return st;
+}
+
+RgStatus
+rg_error_add_subjects (RgError *err, RgSubjects subjects)
+{
+  if (err == NULL)
+    return RG_ERR_NUMERIC;
+  err->subjects |= subjects;
+  return err->status;
+}
+
+const char *
+rg_subject_id (RgSubject subject)
+{
+  static const char *const ids[RG_SUBJECT_N] = {
+    [RG_SUBJECT_NONE] = "",
+    [RG_SUBJECT_FLOW] = "flow",
+    [RG_SUBJECT_DIAMETER] = "diameter",
+    [RG_SUBJECT_LENGTH] = "length",
+    [RG_SUBJECT_ROUGHNESS] = "roughness",
+    [RG_SUBJECT_ELEVATION] = "elevation",
+    [RG_SUBJECT_FITTING] = "fitting",
+    [RG_SUBJECT_K_SUM] = "k-sum",
+    [RG_SUBJECT_MATERIAL] = "material",
+    [RG_SUBJECT_PIPE] = "pipe",
+    [RG_SUBJECT_AGING_CLASS] = "aging-class",
+    [RG_SUBJECT_AGING_RATE] = "aging-rate",
+    [RG_SUBJECT_AGE] = "age",
+    [RG_SUBJECT_FLUID] = "fluid",
+    [RG_SUBJECT_TEMPERATURE] = "temperature",
+    [RG_SUBJECT_PRESSURE] = "pressure",
+    [RG_SUBJECT_SALINITY] = "salinity",
+    [RG_SUBJECT_DENSITY] = "density",
+    [RG_SUBJECT_VISCOSITY] = "viscosity",
+    [RG_SUBJECT_OIL_T1] = "oil-t1",
+    [RG_SUBJECT_OIL_NU1] = "oil-nu1",
+    [RG_SUBJECT_OIL_T2] = "oil-t2",
+    [RG_SUBJECT_OIL_NU2] = "oil-nu2",
+    [RG_SUBJECT_OIL_DENSITY_REF] = "oil-density-ref",
+    [RG_SUBJECT_OIL_T_REF] = "oil-t-ref",
+    [RG_SUBJECT_OIL_EXPANSION] = "oil-expansion",
+    [RG_SUBJECT_MODEL] = "model",
+    [RG_SUBJECT_RE_LAMINAR_MAX] = "re-laminar-max",
+    [RG_SUBJECT_RE_TURBULENT_MIN] = "re-turbulent-min",
+    [RG_SUBJECT_REYNOLDS] = "reynolds",
+    [RG_SUBJECT_RELATIVE_ROUGHNESS] = "relative-roughness",
+    [RG_SUBJECT_HEAD_LOSS] = "head-loss",
+    [RG_SUBJECT_VALUE] = "value",
+  };
+
+  if ((int) subject < 0 || subject >= RG_SUBJECT_N)
+    return "";
+  return ids[subject];
 }
 
 void
@@ -105,6 +181,7 @@ rg_error_clear (RgError *err)
   if (err == NULL)
     return;
   err->status = RG_OK;
+  err->subjects = 0;
   err->text[0] = '\0';
 }
 

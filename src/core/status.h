@@ -22,8 +22,63 @@ typedef enum {
 
 enum { RG_ERROR_TEXT_MAX = 320 };
 
+/* The input an error is about, so that each face (a CLI option, a field of
+ * the window, a key of the project file) can point at its own control
+ * without reading the sentence.  An error may concern several inputs (a
+ * relative roughness too large: the roughness and the diameter), so an
+ * error carries a set of subjects (RgSubjects, one bit per RgSubject).
+ * Subjects name what the user can change: a Reynolds number out of range
+ * in a line evaluation names the flow, the diameter and the fluid's state,
+ * not only RG_SUBJECT_REYNOLDS. */
+typedef enum {
+  RG_SUBJECT_NONE = 0,
+  /* the line */
+  RG_SUBJECT_FLOW,
+  RG_SUBJECT_DIAMETER,
+  RG_SUBJECT_LENGTH,
+  RG_SUBJECT_ROUGHNESS,
+  RG_SUBJECT_ELEVATION,
+  RG_SUBJECT_FITTING,        /* a catalog fitting, its count or a plain K */
+  RG_SUBJECT_K_SUM,          /* a ΣK given as one number */
+  RG_SUBJECT_MATERIAL,       /* a catalog material name */
+  RG_SUBJECT_PIPE,           /* a pipe designation */
+  RG_SUBJECT_AGING_CLASS,    /* a catalog aging class name */
+  RG_SUBJECT_AGING_RATE,     /* a roughness growth rate */
+  RG_SUBJECT_AGE,            /* a service age */
+  /* the fluid */
+  RG_SUBJECT_FLUID,          /* the fluid kind */
+  RG_SUBJECT_TEMPERATURE,
+  RG_SUBJECT_PRESSURE,
+  RG_SUBJECT_SALINITY,
+  RG_SUBJECT_DENSITY,        /* a custom fluid's density */
+  RG_SUBJECT_VISCOSITY,      /* a custom fluid's viscosity */
+  RG_SUBJECT_OIL_T1,
+  RG_SUBJECT_OIL_NU1,
+  RG_SUBJECT_OIL_T2,
+  RG_SUBJECT_OIL_NU2,
+  RG_SUBJECT_OIL_DENSITY_REF,
+  RG_SUBJECT_OIL_T_REF,
+  RG_SUBJECT_OIL_EXPANSION,
+  /* the method */
+  RG_SUBJECT_MODEL,          /* the friction model name */
+  RG_SUBJECT_RE_LAMINAR_MAX,
+  RG_SUBJECT_RE_TURBULENT_MIN,
+  /* dimensionless arguments of the friction functions */
+  RG_SUBJECT_REYNOLDS,
+  RG_SUBJECT_RELATIVE_ROUGHNESS,
+  /* targets of the inverse problems */
+  RG_SUBJECT_HEAD_LOSS,
+  /* a unit or number text whose quantity is given by the caller */
+  RG_SUBJECT_VALUE,
+  RG_SUBJECT_N
+} RgSubject;
+
+typedef unsigned long long RgSubjects;
+#define RG_SUBJECT_BIT(s) (1ULL << (unsigned) (s))
+
 typedef struct {
   RgStatus status;
+  RgSubjects subjects;       /* 0 when the error concerns no single input */
   char text[RG_ERROR_TEXT_MAX];
 } RgError;
 
@@ -36,6 +91,20 @@ const char *rg_gettext (const char *msgid);
  * (rg_gettext) before formatting. */
 RgStatus rg_error_set (RgError *err, RgStatus status, const char *fmt, ...)
   __attribute__ ((format (printf, 3, 4)));
+
+/* As rg_error_set, and records the inputs the error is about. */
+RgStatus rg_error_set_on (RgError *err, RgStatus status, RgSubjects subjects,
+                          const char *fmt, ...)
+  __attribute__ ((format (printf, 4, 5)));
+
+/* Adds subjects to an error already set (a caller that knows more inputs
+ * behind a derived value, e.g. the flow and diameter behind a Reynolds
+ * number); returns err->status. */
+RgStatus rg_error_add_subjects (RgError *err, RgSubjects subjects);
+
+/* A stable identifier of one subject ("flow", "oil-t1", …) for logs and
+ * tests; "" for RG_SUBJECT_NONE. */
+const char *rg_subject_id (RgSubject subject);
 
 void rg_error_clear (RgError *err);
 
