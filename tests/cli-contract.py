@@ -97,7 +97,8 @@ code, out2, _ = run("fluid", "water", "--temperature", "68 F", "--json")
 check("fluid 68 F", code == 0 and close(json.loads(out2)["density_kg_m3"], doc.get("density_kg_m3", 0), 1e-14), out2)
 
 # --- line -------------------------------------------------------------------
-LINE_KEYS = {"velocity_m_s", "reynolds", "friction_factor", "regime", "roughness_zone",
+LINE_KEYS = {"velocity_m_s", "reynolds", "relative_roughness", "friction_factor", "regime",
+             "roughness_zone", "roughness_reynolds",
              "head_loss_major_m", "head_loss_minor_m", "head_loss_total_m", "pressure_drop_Pa",
              "gradient_m_per_100m", "wall_shear_Pa", "density_kg_m3", "dynamic_viscosity_Pa_s",
              "roughness_elasticity", "inner_diameter_m", "roughness_m", "roughness_new_m",

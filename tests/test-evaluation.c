@@ -194,7 +194,9 @@ test_errors (void)
                 "flow-design", 0.0, NULL);
   r = rugosa_project_get_results (p, line);
   g_assert_false (r->points[RUGOSA_FLOW_DESIGN].ok);
-  g_assert_nonnull (strstr (r->points[RUGOSA_FLOW_DESIGN].error, "design flow"));
+  g_assert_nonnull (strstr (r->points[RUGOSA_FLOW_DESIGN].error, "Design flow"));
+  /* The error names its input, so a face can point at the flow field. */
+  g_assert_true (r->points[RUGOSA_FLOW_DESIGN].error_subjects & RG_SUBJECT_BIT (RG_SUBJECT_FLOW));
   g_assert_true (r->points[RUGOSA_FLOW_MINIMUM].ok);
 
   /* Bad transition thresholds in the settings. */
@@ -236,7 +238,7 @@ test_warnings (void)
   g_object_set (s, "velocity-limit", v * 0.99, "gradient-limit", g * 0.99, NULL);
   pt = &rugosa_project_get_results (p, line)->points[RUGOSA_FLOW_DESIGN];
   g_assert_true (has_warning (pt, "The velocity"));
-  g_assert_true (has_warning (pt, "The gradient"));
+  g_assert_true (has_warning (pt, "The pipe-friction gradient"));
 
   /* A viscous fluid puts the design point in the transitional range,
    * Re = ρVD/μ = 998·(4·0.02/(π·0.01))·0.1/0.08 ≈ 3177, between the
@@ -305,9 +307,10 @@ test_format (void)
   g_assert_true (rugosa_project_format_eval (p, 10.0, RUGOSA_EVAL_FORMAT_CSV, csv, &error));
   rows = g_strsplit (csv->str, "\r\n", -1);
   g_assert_cmpuint (g_strv_length (rows), ==, 6); /* header, 4 rows, "" */
-  g_assert_true (g_str_has_prefix (rows[0], "line,case,flow_m3_s,velocity_m_s,reynolds,"));
-  g_assert_true (g_str_has_prefix (rows[1], "\"Line, \"\"one\"\"\",design,0.02,"));
-  g_assert_true (g_str_has_prefix (rows[4], "broken,design,0.02,"));
+  /* The columns name their display unit (the SI system shows L/s). */
+  g_assert_true (g_str_has_prefix (rows[0], "line,case,flow (L/s),velocity (m/s),reynolds,"));
+  g_assert_true (g_str_has_prefix (rows[1], "\"Line, \"\"one\"\"\",design,20,"));
+  g_assert_true (g_str_has_prefix (rows[4], "broken,design,20,"));
 
   g_assert_true (rugosa_project_format_eval (p, 10.0, RUGOSA_EVAL_FORMAT_TABLE, table, &error));
   g_assert_nonnull (strstr (table->str, "Service age 10 years"));
@@ -336,7 +339,8 @@ test_format_locale (void)
     }
   g_assert_true (rugosa_project_format_eval (p, 0.0, RUGOSA_EVAL_FORMAT_CSV, csv, NULL));
   setlocale (LC_NUMERIC, "C");
-  g_assert_nonnull (strstr (csv->str, ",0.02,"));
+  g_assert_nonnull (strstr (csv->str, ",20,"));
+  g_assert_nonnull (strstr (csv->str, ",0.0"));
 }
 
 int

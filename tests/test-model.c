@@ -143,8 +143,14 @@ test_settings (void)
   g_object_set (s, "unit-overrides", g_variant_new_parsed ("{'flow': 'gpm'}"), NULL);
   g_object_set (s, "unit-overrides", g_variant_new_parsed ("{'flow': 'gpm'}"), NULL);
   g_assert_cmpint (count, ==, 2);
-  g_assert_cmpstr (rugosa_settings_get_unit_override (s, "flow"), ==, "gpm");
-  g_assert_null (rugosa_settings_get_unit_override (s, "length"));
+  /* The override for flow, the US system's usual unit for the rest. */
+  g_assert_cmpstr (rugosa_settings_get_unit (s, RUGOSA_DISPLAY_FLOW), ==, "gpm");
+  g_assert_cmpstr (rugosa_settings_get_unit (s, RUGOSA_DISPLAY_LENGTH), ==, "ft");
+  g_object_set (s, "unit-overrides", g_variant_new_parsed ("{'flow': 'm3/h'}"), NULL);
+  g_assert_cmpstr (rugosa_settings_get_unit (s, RUGOSA_DISPLAY_FLOW), ==, "m3/h");
+  /* An override this build cannot read is not used. */
+  g_object_set (s, "unit-overrides", g_variant_new_parsed ("{'flow': 'furlong'}"), NULL);
+  g_assert_cmpstr (rugosa_settings_get_unit (s, RUGOSA_DISPLAY_FLOW), ==, "gpm");
   g_assert_false (rugosa_settings_equal (s, t));
 }
 

@@ -233,7 +233,7 @@ static const BadFile bad_files[] = {
   { "bad-friction-model", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"friction_model\": \"guess\"}, \"lines\": []}", -1,
     RUGOSA_PROJECT_ERROR_VALUE, "settings.friction_model: " },
   { "bad-transition-order", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"transition\": {\"re_laminar_max\": 5000}}, \"lines\": []}", -1,
-    RUGOSA_PROJECT_ERROR_VALUE, "settings.transition.re_turbulent_min: must be larger" },
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.transition.re_turbulent_min: " },
   { "bad-unit-system", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"units\": {\"system\": \"imperial\"}}, \"lines\": []}", -1,
     RUGOSA_PROJECT_ERROR_VALUE, "settings.units.system: expected \"si\" or \"us\", found \"imperial\"" },
   { "override-not-string", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"units\": {\"overrides\": {\"flow\": 3}}}, \"lines\": []}", -1,

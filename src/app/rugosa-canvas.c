@@ -76,8 +76,7 @@ rugosa_canvas_refresh (RugosaCanvas *self)
       gtk_widget_queue_draw (GTK_WIDGET (self));
       return;
     }
-  self->input = rugosa_chart_input_new (self->project, self->settings,
-                                        _rugosa_canvas_selected (self), self->trails);
+  self->input = rugosa_chart_input_new (self->project, _rugosa_canvas_selected (self), self->trails);
   rugosa_chart_set_lines (self->chart, self->input->lines, self->input->n_lines);
   if (self->hover >= (int) self->input->n_lines)
     self->hover = -1;

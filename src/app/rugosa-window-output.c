@@ -37,8 +37,7 @@ rugosa_window_export_chart_to (RugosaWindow       *self,
   g_autoptr (RugosaChartInput) input = NULL;
   g_autofree char *date = _rugosa_window_today ();
 
-  input = rugosa_chart_input_new (self->project, self->settings,
-                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
+  input = rugosa_chart_input_new (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
   return rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
                               width, height, date, path, error);
 }
@@ -199,8 +198,7 @@ _rugosa_window_draw_page (GtkPrintOperation *op,
   RugosaChart *chart = rugosa_chart_new ();
   RgError err = { 0 };
 
-  input = rugosa_chart_input_new (self->project, self->settings,
-                                  pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
+  input = rugosa_chart_input_new (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
   /* The page in points; the chart keeps its own proportions below 200 × 150. */
   input->spec.width = MAX (w, 200);
   input->spec.height = MAX (h, 150);

@@ -12,15 +12,6 @@
 #include "chart/rugosa-chart-input.h"
 #include "model/rugosa-display.h"
 
-char *
-rugosa_chart_input_unit (GSettings  *settings,
-                         const char *key)
-{
-  if (settings == NULL)
-    return NULL;
-  return g_settings_get_string (settings, key);
-}
-
 void
 rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
                               RugosaProject   *project)
@@ -178,7 +169,6 @@ _rugosa_chart_input_keep (RugosaChartInput *input,
 
 RugosaChartInput *
 rugosa_chart_input_new (RugosaProject    *project,
-                        GSettings        *settings,
                         int               selected,
                         RugosaTrailCache *cache)
 {
@@ -186,8 +176,10 @@ rugosa_chart_input_new (RugosaProject    *project,
   RugosaSettings *ps = rugosa_project_get_settings (project);
   guint n = rugosa_project_get_n_lines (project);
   double age = rugosa_settings_get_double (ps, "service-age");
-  g_autofree char *u_vel = rugosa_chart_input_unit (settings, "unit-velocity");
-  g_autofree char *u_head = rugosa_chart_input_unit (settings, "unit-head");
+  /* Readouts in the project's display units, as the table shows them. */
+  const char *u_vel = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_VELOCITY);
+  const char *u_grad = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_GRADIENT);
+  const char *u_head = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_HEAD);
 
   input->owned = g_ptr_array_new_with_free_func (g_free);
   if (cache != NULL)
@@ -288,12 +280,11 @@ rugosa_chart_input_new (RugosaProject    *project,
         cl->readout_velocity = _rugosa_chart_input_keep (input, g_strdup_printf (_("V %s"), v));
       }
       {
-        /* The gradient is a ratio: head per 100 of the same length unit. */
-        g_autofree char *g = rugosa_display_format_screen (RG_QTY_LENGTH, design->result.gradient_m_per_100m, u_head);
+        /* A gradient is a ratio: converted as one, whatever the head unit. */
+        g_autofree char *g = rugosa_display_format_screen (RG_QTY_GRADIENT, design->result.gradient_m_per_100m, u_grad);
         cl->readout_head_per_100m =
-          /* TRANSLATORS: hydraulic gradient readout, e.g. "loss 3.4 m/100 m" */
-          _rugosa_chart_input_keep (input, g_strdup_printf (_("loss %s/100 %s"), g,
-                                                            g_strcmp0 (u_head, "ft") == 0 ? "ft" : "m"));
+          /* TRANSLATORS: pipe-friction gradient readout, e.g. "loss 3.4 m/100 m" */
+          _rugosa_chart_input_keep (input, g_strdup_printf (_("loss %s"), g));
       }
       {
         g_autofree char *h = rugosa_display_format_screen (RG_QTY_LENGTH, design->result.head_loss_total_m, u_head);

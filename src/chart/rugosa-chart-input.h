@@ -33,9 +33,8 @@ typedef struct RugosaTrailCache RugosaTrailCache;
 RugosaTrailCache *rugosa_trail_cache_new  (void);
 void              rugosa_trail_cache_free (RugosaTrailCache *cache);
 
-/* `cache` may be NULL. */
+/* `cache` may be NULL.  Readouts are in the project's display units. */
 RugosaChartInput *rugosa_chart_input_new  (RugosaProject    *project,
-                                           GSettings        *settings,
                                            int               selected,
                                            RugosaTrailCache *cache);
 void              rugosa_chart_input_free (RugosaChartInput *input);
@@ -44,10 +43,6 @@ void              rugosa_chart_input_free (RugosaChartInput *input);
  * and theme are left as they are). */
 void rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
                                    RugosaProject   *project);
-
-/* The unit chosen in GSettings for a display field ("unit-flow", …). */
-char *rugosa_chart_input_unit (GSettings  *settings,
-                               const char *key);
 
 G_DEFINE_AUTOPTR_CLEANUP_FUNC (RugosaChartInput, rugosa_chart_input_free)
 

@@ -190,6 +190,14 @@ cli_fail_error (const RgError *err)
   return cli_fail ("%s", err->text[0] != '\0' ? err->text : _("The computation failed."));
 }
 
+int
+cli_fail_option (const char *option, const char *sentence)
+{
+  /* TRANSLATORS: an option of rugosa-cli, then one sentence about it */
+  return cli_fail (_("%s: %s"), option,
+                   sentence != NULL && *sentence != '\0' ? sentence : _("The computation failed."));
+}
+
 const char *
 cli_require (const CliArgs *args, const char *name, const char *hint,
              GString *message)

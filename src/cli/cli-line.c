@@ -1,5 +1,12 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
-/* The computation commands: friction, fluid, line. */
+/* The fluid and line commands.
+ *
+ * Their options are the rows of the model's field tables that name a CLI
+ * option (rugosa-fields.c): each option is parsed with its row's quantity,
+ * checked against its row's range and set on a one-line project, which is
+ * then evaluated by the model's evaluation — the one the window and every
+ * export use.  A refusal names the option(s) behind the error's subjects;
+ * no message text is read. */
 #define G_LOG_DOMAIN "rugosa-cli"
 
 #include "config.h"
@@ -13,340 +20,408 @@
 #include "core/catalog.h"
 #include "core/fittings.h"
 #include "core/fluid.h"
-#include "core/line.h"
 #include "core/units.h"
+#include "model/rugosa-fields.h"
+#include "model/rugosa-output.h"
+
+/* Options of the CLI's own that are no field: what they stand for. */
+static const struct {
+  const char *option;
+  RgSubjects subjects;
+} own_options[] = {
+  { "--k-sum", RG_SUBJECT_BIT (RG_SUBJECT_K_SUM) },
+};
+
+/* The options of `line` (or of `fluid`): every row with a CLI option, then
+ * the CLI's own; built once. */
+static const CliOption *
+options_for (gboolean fluid_only)
+{
+  static CliOption *cache[2];
+  GArray *a;
+
+  if (cache[fluid_only] != NULL)
+    return cache[fluid_only];
+  a = g_array_new (TRUE, TRUE, sizeof (CliOption));
+  for (int table = 0; table < 2; table++)
+    {
+      guint n;
+      const RugosaField *rows = table == 0 ? rugosa_line_fields (&n)
+                                           : rugosa_settings_fields (&n);
+
+      for (guint i = 0; i < n; i++)
+        {
+          CliOption o = { rows[i].cli, TRUE, rows[i].kind == RUGOSA_FIELD_FITTINGS };
+
+          if (rows[i].cli == NULL)
+            continue;
+          if (fluid_only && (rows[i].fluid_kinds == 0 || table == 1))
+            continue;
+          g_array_append_val (a, o);
+        }
+    }
+  if (!fluid_only)
+    for (gsize i = 0; i < G_N_ELEMENTS (own_options); i++)
+      {
+        CliOption o = { own_options[i].option, TRUE, FALSE };
+        g_array_append_val (a, o);
+      }
+  {
+    CliOption json = { "--json", FALSE, FALSE };
+    g_array_append_val (a, json);
+  }
+  cache[fluid_only] = (CliOption *) g_array_free (a, FALSE);
+  return cache[fluid_only];
+}
+
+/* The options behind an error's subjects: those the user gave (or, for
+ * a custom value, the catalog option given instead), as "--a, --b". */
+static char *
+options_of_subjects (const CliArgs *args, RgSubjects subjects)
+{
+  g_autoptr (GString) s = g_string_new (NULL);
+  g_autoptr (GString) any = g_string_new (NULL);
+
+  for (guint k = 0;; k++)
+    {
+      const RugosaField *row = rugosa_field_for_subject (subjects, k);
+      const char *option;
+
+      if (row == NULL)
+        break;
+      option = row->cli;
+      if (option == NULL && row->kind == RUGOSA_FIELD_NUMBER)
+        {
+          /* a value without an option of its own (the growth rate) is set
+           * by its catalog partner's option */
+          guint n;
+          const RugosaField *rows = rugosa_line_fields (&n);
+
+          for (guint i = 0; i < n; i++)
+            if (rows[i].partner != NULL && g_str_equal (rows[i].partner, row->property))
+              option = rows[i].cli;
+        }
+      if (option == NULL)
+        continue;
+      if (!cli_args_has (args, option))
+        {
+          /* a custom value's catalog partner may stand in for it */
+          guint n;
+          const RugosaField *rows = rugosa_line_fields (&n);
+
+          for (guint i = 0; i < n; i++)
+            if (rows[i].partner != NULL && g_str_equal (rows[i].partner, row->property)
+                && cli_args_has (args, rows[i].cli))
+              option = rows[i].cli;
+        }
+      if (strstr (any->str, option) == NULL)
+        g_string_append_printf (any, "%s%s", any->len ? ", " : "", option);
+      if (cli_args_has (args, option) && strstr (s->str, option) == NULL)
+        g_string_append_printf (s, "%s%s", s->len ? ", " : "", option);
+    }
+  for (gsize i = 0; i < G_N_ELEMENTS (own_options); i++)
+    if ((subjects & own_options[i].subjects) && cli_args_has (args, own_options[i].option))
+      g_string_append_printf (s, "%s%s", s->len ? ", " : "", own_options[i].option);
+  if (s->len == 0 && any->len > 0)
+    return g_strdup (any->str);
+  if (s->len == 0)
+    return g_strdup ("rugosa-cli");
+  return g_strdup (s->str);
+}
 
 static int
-finish_output (GString *out)
+fail_subjects (const CliArgs *args, RgSubjects subjects, const char *sentence)
 {
-  return cli_write_stdout (out->str);
+  g_autofree char *options = options_of_subjects (args, subjects);
+
+  return cli_fail_option (options, sentence);
 }
 
+/* "NAME", "NAME x3", "NAMEx3", "NAME*3", "K=0.5", "K=0.5 x2". */
 static gboolean
-parse_quantity (const CliArgs *args, const char *name, RgQuantity q,
-                double *si, RgError *err)
+parse_fitting (const char *text, const char **id, double *k, double *count,
+               RgError *err)
 {
-  const char *text = cli_args_get (args, name);
+  g_autofree char *s = g_strstrip (g_strdup (text));
+  g_autofree char *name = NULL;
+  char *sep = NULL;
+  const RgFitting *fitting;
 
-  return rg_units_parse (q, name, text, si, err) == RG_OK;
-}
-
-/* A quantity that must be greater than zero (or, with allow_zero, not
- * negative); the sentence names the option, as the core cannot. */
-static gboolean
-parse_positive (const CliArgs *args, const char *name, RgQuantity q,
-                gboolean allow_zero, const char *example, double *si,
-                RgError *err)
-{
-  if (!parse_quantity (args, name, q, si, err))
-    return FALSE;
-  if (allow_zero ? *si < 0.0 : *si <= 0.0)
+  *count = 1.0;
+  *k = 0.0;
+  *id = "";
+  for (char *p = s + strlen (s); p > s; p--)
     {
-      rg_error_set (err, RG_ERR_DOMAIN, "%s must be %s, e.g. %s \"%s\".", name,
-                    allow_zero ? _("zero or greater") : _("greater than zero"), name, example);
-      return FALSE;
+      if (!g_ascii_isdigit (p[-1]) && p[-1] != '.')
+        {
+          if ((p[-1] == 'x' || p[-1] == 'X' || p[-1] == '*') && *p != '\0')
+            sep = p - 1;
+          break;
+        }
     }
+  if (sep != NULL && sep > s)
+    {
+      g_autoptr (GString) m = g_string_new (NULL);
+      if (!cli_parse_number (_("The count"), sep + 1, count, m)
+          || !(*count >= 1.0 && *count <= RUGOSA_FITTING_COUNT_MAX && *count == floor (*count)))
+        {
+          g_autofree char *msg = g_strdup_printf (_("The count of a fitting must be a whole number from 1 to %g."),
+                                                  RUGOSA_FITTING_COUNT_MAX);
+          rg_error_set_on (err, RG_ERR_DOMAIN, RG_SUBJECT_BIT (RG_SUBJECT_FITTING), "%s", msg);
+          return FALSE;
+        }
+      name = g_strstrip (g_strndup (s, (gsize) (sep - s)));
+    }
+  else
+    name = g_strdup (s);
+
+  if (g_ascii_strncasecmp (name, "K=", 2) == 0 || g_ascii_strncasecmp (name, "K ", 2) == 0)
+    {
+      g_autoptr (GString) m = g_string_new (NULL);
+      if (!cli_parse_number ("K", name + 2, k, m) || !(*k >= 0.0 && *k <= RUGOSA_FITTING_K_MAX))
+        {
+          g_autofree char *msg = g_strdup_printf (_("A plain loss coefficient K must be a number from 0 to %g."),
+                                                  RUGOSA_FITTING_K_MAX);
+          rg_error_set_on (err, RG_ERR_DOMAIN, RG_SUBJECT_BIT (RG_SUBJECT_FITTING), "%s", msg);
+          return FALSE;
+        }
+      return TRUE;
+    }
+  if (rg_fitting_lookup (name, &fitting, err) != RG_OK)
+    return FALSE;
+  *id = fitting->id;
   return TRUE;
 }
 
-/* The core's sentences name a quantity ("the salinity"), not the option
- * that set it: add the option, so the user knows what to change.  The
- * first entry whose words occur in the sentence wins. */
-static const char *const ERROR_OPTIONS[][2] = {
-  { "Unknown pipe designation", "--pipe" },
-  { "Unknown pipe material", "--material" },
-  { "Unknown fitting", "--fitting" },
-  { "Unknown fluid", "--fluid" },
-  { "aggressiveness class", "--aging" },
-  { "friction model", "--model" },
-  { "transition limits", "--re-laminar-max and --re-turbulent-min" },
-  { "After ", "--age and --aging" },
-  { "aged head loss", "--flow, --length, --age and --aging" },
-  { "head loss is too large", "--flow, --length and --k-sum" },
-  { "relative roughness", "--roughness and --diameter" },
-  { "Reynolds number", "--flow, --diameter and the fluid" },
-  { "velocity that cannot", "--flow and --diameter" },
-  { "boils", "--temperature and --pressure" },
-  { "lower of the two", "--oil-nu1 and --oil-nu2 at --oil-t1 and --oil-t2" },
-  { "two temperatures", "--oil-t1 and --oil-t2" },
-  { "first temperature", "--oil-t1" },
-  { "second temperature", "--oil-t2" },
-  { "reference temperature", "--oil-density-t" },
-  { "kinematic viscosities", "--oil-nu1 and --oil-nu2" },
-  { "reference density", "--oil-density" },
-  { "expansion", "--oil-expansion" },
-  { "salinity", "--salinity" },
-  { "custom fluid's density", "--density" },
-  { "custom fluid's dynamic viscosity", "--viscosity" },
-  { "pressure", "--pressure" },
-  { "temperature", "--temperature" },
-};
-
-static int
-fail_naming_option (const RgError *err)
+/* Set the row's value from the option's text; FALSE and a sentence in
+ * `err` when refused. */
+static gboolean
+apply_number (const CliArgs *args, const RugosaField *row, GObject *target,
+              double density, RgError *err)
 {
-  const char *text = err->text;
-  size_t len = strlen (text);
+  double stored = 0.0;
 
-  for (gsize i = 0; i < G_N_ELEMENTS (ERROR_OPTIONS); i++)
-    if (strstr (text, ERROR_OPTIONS[i][0]) != NULL
-        && strstr (text, ERROR_OPTIONS[i][1]) == NULL && len > 0
-        && text[len - 1] == '.')
-      return cli_fail (_("%.*s; check %s."), (int) (len - 1), text,
-                       ERROR_OPTIONS[i][1]);
-  return cli_fail_error (err);
+  if (!rugosa_field_parse_text (row, cli_args_get (args, row->cli), NULL,
+                                density, &stored, err)
+      || !rugosa_field_in_range (row, stored, NULL, err))
+    return FALSE;
+  g_object_set (target, row->property, stored, NULL);
+  return TRUE;
 }
 
 static gboolean
-parse_model (const CliArgs *args, RgFrictionModel *model, RgError *err)
+apply_catalog (const CliArgs *args, const RugosaField *row, RugosaLine *line,
+               RgError *err)
 {
-  const char *id = cli_args_get (args, "--model");
+  const char *text = cli_args_get (args, row->cli);
 
-  *model = RG_FRICTION_COLEBROOK;
-  if (id == NULL)
-    return TRUE;
-  return rg_friction_model_from_id (id, model, err) == RG_OK;
-}
-
-/* ---- friction ---------------------------------------------------------- */
-
-static const CliOption friction_options[] = {
-  { "--re", TRUE, FALSE },
-  { "--rr", TRUE, FALSE },
-  { "--model", TRUE, FALSE },
-  { "--json", FALSE, FALSE },
-  { NULL, FALSE, FALSE },
-};
-
-int
-cli_cmd_friction (int argc, char **argv)
-{
-  g_auto (CliArgs) args = { 0 };
-  g_autoptr (GString) msg = g_string_new (NULL);
-  g_autoptr (GString) out = g_string_new (NULL);
-  RgError err = { 0 };
-  RgFrictionModel model;
-  RgFrictionPoint pt;
-  const char *re_text, *rr_text;
-  double re, rr;
-
-  if (!cli_args_parse (&args, "friction", friction_options, argc, argv, 2, msg))
-    return cli_fail ("%s", msg->str);
-  if (args.positional->len > 0)
+  if (g_str_equal (row->property, "material-id"))
     {
-      g_autofree char *shown = cli_echo (g_ptr_array_index (args.positional, 0));
-      return cli_fail (_("Unexpected argument \"%s\" for 'friction'."), shown);
+      const RgMaterial *m;
+
+      if (rg_material_lookup (text, &m, err) != RG_OK)
+        return FALSE;
+      g_object_set (line, row->property, m->id, NULL);
     }
-  if ((re_text = cli_require (&args, "--re", _("give the Reynolds number, e.g. --re 1e5"), msg)) == NULL
-      || (rr_text = cli_require (&args, "--rr", _("give the relative roughness ε/D, e.g. --rr 0.0002"), msg)) == NULL)
-    return cli_fail ("%s", msg->str);
-  if (!cli_parse_number ("--re", re_text, &re, msg)
-      || !cli_parse_number ("--rr", rr_text, &rr, msg))
-    return cli_fail ("%s", msg->str);
-  if (!(re > 0.0 && re <= RG_FRICTION_RE_MAX))
-    return cli_fail (_("--re must lie between 0 (exclusive) and %g."), RG_FRICTION_RE_MAX);
-  if (!(rr >= 0.0 && rr <= RG_FRICTION_RR_MAX))
-    return cli_fail (_("--rr must lie between 0 and %g."), RG_FRICTION_RR_MAX);
-  if (!parse_model (&args, &model, &err))
-    return fail_naming_option (&err);
-  if (rg_friction_point (model, NULL, re, rr, &pt, &err) != RG_OK)
-    return cli_fail_error (&err);
-
-  if (cli_args_has (&args, "--json"))
+  else if (g_str_equal (row->property, "pipe-designation"))
     {
-      CliJson json;
-      cli_json_begin (&json, out);
-      cli_json_number (&json, "friction_factor", pt.f);
-      cli_json_string (&json, "model", rg_friction_model_id (model));
-      cli_json_number (&json, "reynolds", re);
-      cli_json_number (&json, "relative_roughness", rr);
-      cli_json_string (&json, "regime", rg_regime_id (pt.regime));
-      if (pt.has_laminar)
-        cli_json_number (&json, "friction_factor_laminar", pt.f_laminar);
-      if (pt.regime == RG_REGIME_TURBULENT)
-        {
-          cli_json_string (&json, "roughness_zone", rg_roughness_zone_id (pt.zone));
-          cli_json_number (&json, "roughness_reynolds", pt.eps_plus);
-        }
-      cli_json_number (&json, "roughness_elasticity", pt.roughness_elasticity);
-      cli_json_end (&json);
+      const RgPipe *p;
+
+      if (rg_pipe_lookup (text, &p, err) != RG_OK)
+        return FALSE;
+      g_object_set (line, row->property, p->designation, NULL);
     }
   else
     {
-      char buf[G_ASCII_DTOSTR_BUF_SIZE];
-      /* f first, alone on the first line, with 17 significant digits */
-      g_string_append_printf (out, "%s\n", cli_format_exact (pt.f, buf, sizeof buf));
-      cli_table_row (out, _("model"), rg_friction_model_title (model), NULL);
-      cli_table_row (out, _("regime"), rg_regime_id (pt.regime), NULL);
-      if (pt.has_laminar)
-        cli_table_number (out, _("laminar value (64/Re)"), pt.f_laminar, NULL);
-      if (pt.regime == RG_REGIME_TURBULENT)
+      /* an aging class, or a growth rate with its unit ("0.05 mm/yr") */
+      const RgAgingClass *klass;
+      RgError lookup_err = { 0 };
+      const RugosaField *rate = rugosa_field_find (row->partner);
+      double stored = 0.0;
+
+      if (rg_aging_class_lookup (text, &klass, &lookup_err) == RG_OK)
         {
-          cli_table_row (out, _("roughness zone"), rg_roughness_zone_id (pt.zone), NULL);
-          cli_table_number (out, _("roughness Reynolds ε⁺"), pt.eps_plus, NULL);
+          g_object_set (line, row->property, klass->id, NULL);
+          return TRUE;
         }
-      cli_table_number (out, _("∂ln f/∂ln(ε/D)"), pt.roughness_elasticity, NULL);
-    }
-  return finish_output (out);
-}
-
-/* ---- fluids ------------------------------------------------------------ */
-
-#define FLUID_OPTIONS \
-  { "--temperature", TRUE, FALSE }, \
-  { "--pressure", TRUE, FALSE }, \
-  { "--salinity", TRUE, FALSE }, \
-  { "--density", TRUE, FALSE }, \
-  { "--viscosity", TRUE, FALSE }, \
-  { "--oil-nu1", TRUE, FALSE }, \
-  { "--oil-t1", TRUE, FALSE }, \
-  { "--oil-nu2", TRUE, FALSE }, \
-  { "--oil-t2", TRUE, FALSE }, \
-  { "--oil-density", TRUE, FALSE }, \
-  { "--oil-density-t", TRUE, FALSE }, \
-  { "--oil-expansion", TRUE, FALSE }
-
-/* Fills `spec` for the fluid `kind_text` from the options.  Unused options
- * of another fluid are refused, so a typo cannot pass unnoticed. */
-static gboolean
-fluid_from_args (const CliArgs *args, const char *kind_text, RgFluidSpec *spec,
-                 RgError *err)
-{
-  static const char *const per_kind[RG_FLUID_N_KINDS][8] = {
-    [RG_FLUID_WATER] = { "--temperature", "--pressure" },
-    [RG_FLUID_CUSTOM] = { "--density", "--viscosity" },
-    [RG_FLUID_SEAWATER] = { "--temperature", "--pressure", "--salinity" },
-    [RG_FLUID_OIL] = { "--temperature", "--oil-nu1", "--oil-t1", "--oil-nu2",
-                       "--oil-t2", "--oil-density", "--oil-density-t",
-                       "--oil-expansion" },
-    [RG_FLUID_AIR] = { "--temperature", "--pressure" },
-  };
-  static const char *const all[] = {
-    "--temperature", "--pressure", "--salinity", "--density", "--viscosity",
-    "--oil-nu1", "--oil-t1", "--oil-nu2", "--oil-t2", "--oil-density",
-    "--oil-density-t", "--oil-expansion",
-  };
-  RgFluidKind kind;
-
-  if (rg_fluid_kind_from_id (kind_text, &kind, err) != RG_OK)
-    return FALSE;
-  rg_fluid_spec_init (spec, kind);
-
-  for (gsize i = 0; i < G_N_ELEMENTS (all); i++)
-    {
-      gboolean allowed = FALSE;
-      if (!cli_args_has (args, all[i]))
-        continue;
-      for (int j = 0; j < 8 && per_kind[kind][j] != NULL; j++)
-        allowed |= g_str_equal (per_kind[kind][j], all[i]);
-      if (!allowed)
+      if (strpbrk (text, "0123456789") == NULL)
         {
-          rg_error_set (err, RG_ERR_DOMAIN, "%s does not apply to the fluid '%s'.",
-                        all[i], rg_fluid_kind_id (kind));
+          *err = lookup_err;
           return FALSE;
         }
-    }
-
-  switch (kind)
-    {
-    case RG_FLUID_CUSTOM:
-      {
-        const char *visc = cli_args_get (args, "--viscosity");
-        int kinematic = 0;
-        double mu;
-        if (!cli_args_has (args, "--density") || visc == NULL)
-          {
-            rg_error_set (err, RG_ERR_DOMAIN,
-                          "A custom fluid needs --density (e.g. \"998 kg/m3\") and --viscosity (dynamic, e.g. \"1 cP\", or kinematic, e.g. \"1 cSt\").");
-            return FALSE;
-          }
-        if (!parse_quantity (args, "--density", RG_QTY_DENSITY, &spec->density_kg_m3, err))
-          return FALSE;
-        if (rg_units_parse_viscosity ("--viscosity", visc, &mu, &kinematic, err) != RG_OK)
-          return FALSE;
-        spec->viscosity_pa_s = kinematic ? mu * spec->density_kg_m3 : mu;
-        return TRUE;
-      }
-    case RG_FLUID_OIL:
-      {
-        static const struct { const char *name; RgQuantity q; gboolean required; gsize offset; } oil[] = {
-          { "--oil-nu1", RG_QTY_KIN_VISCOSITY, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_nu1_m2_s) },
-          { "--oil-t1", RG_QTY_TEMPERATURE, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_t1_k) },
-          { "--oil-nu2", RG_QTY_KIN_VISCOSITY, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_nu2_m2_s) },
-          { "--oil-t2", RG_QTY_TEMPERATURE, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_t2_k) },
-          { "--oil-density", RG_QTY_DENSITY, TRUE, G_STRUCT_OFFSET (RgFluidSpec, oil_density_ref_kg_m3) },
-          { "--oil-density-t", RG_QTY_TEMPERATURE, FALSE, G_STRUCT_OFFSET (RgFluidSpec, oil_t_ref_k) },
-        };
-        for (gsize i = 0; i < G_N_ELEMENTS (oil); i++)
-          {
-            if (!cli_args_has (args, oil[i].name))
-              {
-                if (!oil[i].required)
-                  continue;
-                rg_error_set (err, RG_ERR_DOMAIN,
-                              "An oil needs --oil-nu1 and --oil-t1, --oil-nu2 and --oil-t2 (two kinematic viscosities at two temperatures) and --oil-density; %s is missing.",
-                              oil[i].name);
-                return FALSE;
-              }
-            if (!parse_quantity (args, oil[i].name, oil[i].q,
-                                 G_STRUCT_MEMBER_P (spec, oil[i].offset), err))
-              return FALSE;
-          }
-        if (cli_args_has (args, "--oil-expansion"))
-          {
-            g_autoptr (GString) m = g_string_new (NULL);
-            if (!cli_parse_number ("--oil-expansion (per kelvin, e.g. 0.00064)",
-                                   cli_args_get (args, "--oil-expansion"),
-                                   &spec->oil_expansion_per_k, m))
-              {
-                rg_error_set (err, RG_ERR_PARSE, "%s", m->str);
-                return FALSE;
-              }
-          }
-      }
-      break;
-    case RG_FLUID_WATER:
-    case RG_FLUID_SEAWATER:
-    case RG_FLUID_AIR:
-    case RG_FLUID_N_KINDS:
-    default:
-      break;
-    }
-
-  if (kind != RG_FLUID_CUSTOM)
-    {
-      if (!cli_args_has (args, "--temperature"))
+      if (!rugosa_field_parse_text (rate, text, NULL, 0.0, &stored, err)
+          || !rugosa_field_in_range (rate, stored, NULL, err))
         {
-          rg_error_set (err, RG_ERR_DOMAIN,
-                        "--temperature is required for %s: e.g. --temperature \"20 C\".",
-                        rg_fluid_kind_id (kind));
+          err->subjects = row->subjects;
           return FALSE;
         }
-      if (!parse_quantity (args, "--temperature", RG_QTY_TEMPERATURE, &spec->temperature_k, err))
-        return FALSE;
-    }
-  if (cli_args_has (args, "--pressure")
-      && !parse_quantity (args, "--pressure", RG_QTY_PRESSURE, &spec->pressure_pa, err))
-    return FALSE;
-  if (kind == RG_FLUID_SEAWATER)
-    {
-      if (!cli_args_has (args, "--salinity"))
-        {
-          rg_error_set (err, RG_ERR_DOMAIN,
-                        "--salinity is required for seawater: e.g. --salinity \"35 g/kg\".");
-          return FALSE;
-        }
-      if (!parse_quantity (args, "--salinity", RG_QTY_SALINITY, &spec->salinity_kg_kg, err))
-        return FALSE;
+      g_object_set (line, row->property, NULL, rate->property, stored, NULL);
     }
   return TRUE;
 }
 
-static const CliOption fluid_options[] = {
-  FLUID_OPTIONS,
-  { "--json", FALSE, FALSE },
-  { NULL, FALSE, FALSE },
-};
+static gboolean
+apply_enum (const CliArgs *args, const RugosaField *row, GObject *target,
+            RgError *err)
+{
+  const char *text = cli_args_get (args, row->cli);
+  int value;
+
+  /* The core's sentences list what it offers. */
+  if (row->enum_type () == RUGOSA_TYPE_FLUID_KIND)
+    {
+      RgFluidKind kind;
+      if (rg_fluid_kind_from_id (text, &kind, err) != RG_OK)
+        return FALSE;
+      value = (int) kind;
+    }
+  else if (row->enum_type () == RUGOSA_TYPE_FRICTION_MODEL)
+    {
+      RgFrictionModel model;
+      if (rg_friction_model_from_id (text, &model, err) != RG_OK)
+        return FALSE;
+      value = (int) model;
+    }
+  else if (!rugosa_enum_from_nick (row->enum_type (), text, &value))
+    {
+      rg_error_set_on (err, RG_ERR_PARSE, row->subjects, "%s", _("This value is not one of the choices."));
+      return FALSE;
+    }
+  g_object_set (target, row->property, value, NULL);
+  return TRUE;
+}
+
+/* Apply every option given to the line and the settings.  On a refusal
+ * returns FALSE with the option in *option and the sentence in `err`. */
+static gboolean
+apply_options (const CliArgs *args, gboolean fluid_only, RugosaLine *line,
+               RugosaSettings *settings, const char **option, RgError *err)
+{
+  for (int table = 0; table < 2; table++)
+    {
+      guint n;
+      const RugosaField *rows = table == 0 ? rugosa_line_fields (&n)
+                                           : rugosa_settings_fields (&n);
+      GObject *target = table == 0 ? G_OBJECT (line) : G_OBJECT (settings);
+
+      for (guint i = 0; i < n; i++)
+        {
+          const RugosaField *row = &rows[i];
+          gboolean ok = TRUE;
+
+          if (row->cli == NULL || !cli_args_has (args, row->cli)
+              || g_str_equal (row->property, "fluid-kind"))
+            continue;
+          *option = row->cli;
+          if (row->fluid_kinds != 0
+              && !rugosa_field_applies_to_fluid (row, (RgFluidKind) rugosa_line_get_fluid_kind (line)))
+            {
+              g_autofree char *msg = g_strdup_printf (_("This option does not apply to the fluid “%s”."),
+                                                      rg_fluid_kind_id ((RgFluidKind) rugosa_line_get_fluid_kind (line)));
+              rg_error_set_on (err, RG_ERR_DOMAIN, row->subjects, "%s", msg);
+              return FALSE;
+            }
+          switch (row->kind)
+            {
+            case RUGOSA_FIELD_NUMBER:
+              ok = apply_number (args, row, target, rugosa_line_get_double (line, "density"), err);
+              break;
+            case RUGOSA_FIELD_CATALOG:
+              ok = apply_catalog (args, row, line, err);
+              break;
+            case RUGOSA_FIELD_ENUM:
+              ok = apply_enum (args, row, target, err);
+              break;
+            case RUGOSA_FIELD_FITTINGS:
+              {
+                GPtrArray *all = cli_args_get_all (args, row->cli);
+                GVariantBuilder b;
+
+                g_variant_builder_init (&b, G_VARIANT_TYPE (RUGOSA_LINE_FITTINGS_TYPE));
+                for (guint f = 0; f < all->len && ok; f++)
+                  {
+                    const char *id;
+                    double k, count;
+
+                    ok = parse_fitting (g_ptr_array_index (all, f), &id, &k, &count, err);
+                    if (ok)
+                      g_variant_builder_add (&b, "(sdd)", id, k, count);
+                  }
+                if (ok && cli_args_has (args, "--k-sum"))
+                  {
+                    double k;
+                    g_autoptr (GString) m = g_string_new (NULL);
+
+                    *option = "--k-sum";
+                    if (!cli_parse_number ("--k-sum", cli_args_get (args, "--k-sum"), &k, m)
+                        || !(k >= 0.0 && k <= 1.0e5))
+                      {
+                        rg_error_set_on (err, RG_ERR_DOMAIN, RG_SUBJECT_BIT (RG_SUBJECT_K_SUM), "%s",
+                                         _("The sum of the loss coefficients must be a number from 0 to 100000."));
+                        ok = FALSE;
+                      }
+                    else
+                      g_variant_builder_add (&b, "(sdd)", "", k, 1.0);
+                  }
+                if (ok)
+                  g_object_set (line, row->property, g_variant_builder_end (&b), NULL);
+                else
+                  g_variant_builder_clear (&b);
+              }
+              break;
+            case RUGOSA_FIELD_TEXT:
+            case RUGOSA_FIELD_COLOUR:
+            case RUGOSA_FIELD_UNIT_MAP:
+            default:
+              break;
+            }
+          if (!ok)
+            return FALSE;
+        }
+    }
+  /* --k-sum alone (no --fitting) */
+  if (!fluid_only && cli_args_has (args, "--k-sum") && !cli_args_has (args, "--fitting"))
+    {
+      double k;
+      g_autoptr (GString) m = g_string_new (NULL);
+
+      *option = "--k-sum";
+      if (!cli_parse_number ("--k-sum", cli_args_get (args, "--k-sum"), &k, m)
+          || !(k >= 0.0 && k <= 1.0e5))
+        {
+          rg_error_set_on (err, RG_ERR_DOMAIN, RG_SUBJECT_BIT (RG_SUBJECT_K_SUM), "%s",
+                           _("The sum of the loss coefficients must be a number from 0 to 100000."));
+          return FALSE;
+        }
+      g_object_set (line, "fittings", g_variant_new_parsed ("[('', %d, 1.0)]", k), NULL);
+    }
+  return TRUE;
+}
+
+/* The fluid kind from `text`, and the states that kind needs. */
+static int
+set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
+{
+  RgFluidKind kind;
+  RgError err = { 0 };
+  guint n;
+  const RugosaField *rows = rugosa_line_fields (&n);
+
+  if (rg_fluid_kind_from_id (text, &kind, &err) != RG_OK)
+    return cli_fail_option ("--fluid", err.text);
+  g_object_set (line, "fluid-kind", (int) kind, NULL);
+  for (guint i = 0; i < n; i++)
+    if ((rows[i].flags & RUGOSA_FIELD_STATE_REQUIRED)
+        && rugosa_field_applies_to_fluid (&rows[i], kind)
+        && !cli_args_has (args, rows[i].cli))
+      {
+        /* TRANSLATORS: an option, a fluid id, then what the option gives */
+        g_autofree char *msg = g_strdup_printf (_("This option is required for the fluid “%s”: %s"),
+                                                rg_fluid_kind_id (kind), _(rows[i].help));
+        return cli_fail_option (rows[i].cli, msg);
+      }
+  return CLI_EXIT_OK;
+}
 
 int
 cli_cmd_fluid (int argc, char **argv)
@@ -354,20 +429,27 @@ cli_cmd_fluid (int argc, char **argv)
   g_auto (CliArgs) args = { 0 };
   g_autoptr (GString) msg = g_string_new (NULL);
   g_autoptr (GString) out = g_string_new (NULL);
+  g_autoptr (RugosaLine) line = rugosa_line_new (NULL);
+  g_autoptr (RugosaSettings) settings = rugosa_settings_new ();
   RgError err = { 0 };
   RgWarnings warnings;
   RgFluidSpec spec;
   RgFluidProps props;
+  const char *option = NULL;
+  int status;
 
-  if (!cli_args_parse (&args, "fluid", fluid_options, argc, argv, 2, msg))
+  if (!cli_args_parse (&args, "fluid", options_for (TRUE), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len != 1)
     return cli_fail (_("'fluid' needs exactly one fluid name: water, seawater, oil, air or custom."));
-  if (!fluid_from_args (&args, g_ptr_array_index (args.positional, 0), &spec, &err))
-    return fail_naming_option (&err);
+  if ((status = set_fluid (&args, g_ptr_array_index (args.positional, 0), line)) != CLI_EXIT_OK)
+    return status;
+  if (!apply_options (&args, TRUE, line, settings, &option, &err))
+    return cli_fail_option (option, err.text);
+  rugosa_line_get_fluid_spec (line, &spec);
   rg_warnings_clear (&warnings);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
-    return fail_naming_option (&err);
+    return fail_subjects (&args, err.subjects, err.text);
 
   if (cli_args_has (&args, "--json"))
     {
@@ -389,147 +471,12 @@ cli_cmd_fluid (int argc, char **argv)
       cli_table_number (out, _("dynamic viscosity"), props.dynamic_viscosity_pa_s, "Pa·s");
       cli_table_number (out, _("kinematic viscosity"), props.kinematic_viscosity_m2_s, "m²/s");
       for (int i = 0; i < warnings.count; i++)
-        g_string_append_printf (out, _("warning: %s\n"), warnings.text[i]);
-    }
-  return finish_output (out);
-}
-
-/* ---- line -------------------------------------------------------------- */
-
-static const CliOption line_options[] = {
-  { "--flow", TRUE, FALSE },
-  { "--diameter", TRUE, FALSE },
-  { "--pipe", TRUE, FALSE },
-  { "--length", TRUE, FALSE },
-  { "--roughness", TRUE, FALSE },
-  { "--material", TRUE, FALSE },
-  { "--age", TRUE, FALSE },
-  { "--aging", TRUE, FALSE },
-  { "--fitting", TRUE, TRUE },
-  { "--k-sum", TRUE, FALSE },
-  { "--elevation", TRUE, FALSE },
-  { "--model", TRUE, FALSE },
-  { "--re-laminar-max", TRUE, FALSE },
-  { "--re-turbulent-min", TRUE, FALSE },
-  { "--fluid", TRUE, FALSE },
-  FLUID_OPTIONS,
-  { "--json", FALSE, FALSE },
-  { NULL, FALSE, FALSE },
-};
-
-/* "NAME", "NAME x3", "NAMEx3", "NAME*3", "K=0.5", "K=0.5 x2". */
-static gboolean
-parse_fitting (const char *text, RgFittingUse *use, RgError *err)
-{
-  g_autofree char *s = g_strstrip (g_strdup (text));
-  g_autofree char *name = NULL;
-  double count = 1.0;
-  char *sep = NULL;
-
-  for (char *p = s + strlen (s); p > s; p--)
-    {
-      if (!g_ascii_isdigit (p[-1]) && p[-1] != '.')
         {
-          if ((p[-1] == 'x' || p[-1] == 'X' || p[-1] == '*') && *p != '\0')
-            sep = p - 1;
-          break;
+          g_autofree char *line_text = g_strdup_printf (_("warning: %s"), warnings.text[i]);
+          g_string_append_printf (out, "%s\n", line_text);
         }
     }
-  if (sep != NULL && sep > s)
-    {
-      g_autoptr (GString) m = g_string_new (NULL);
-      if (!cli_parse_number ("--fitting count", sep + 1, &count, m))
-        {
-          rg_error_set (err, RG_ERR_PARSE, "%s", m->str);
-          return FALSE;
-        }
-      if (!(count >= 1.0 && count <= 10000.0 && count == floor (count)))
-        {
-          g_autofree char *shown = cli_echo (text);
-          rg_error_set (err, RG_ERR_DOMAIN,
-                        "--fitting \"%s\": the count must be a whole number from 1 to 10000.", shown);
-          return FALSE;
-        }
-      name = g_strstrip (g_strndup (s, (gsize) (sep - s)));
-    }
-  else
-    name = g_strdup (s);
-
-  use->count = count;
-  use->fitting = NULL;
-  use->k_plain = 0.0;
-  if (g_ascii_strncasecmp (name, "K=", 2) == 0 || g_ascii_strncasecmp (name, "K ", 2) == 0)
-    {
-      g_autoptr (GString) m = g_string_new (NULL);
-      if (!cli_parse_number ("--fitting K", name + 2, &use->k_plain, m))
-        {
-          rg_error_set (err, RG_ERR_PARSE, "%s", m->str);
-          return FALSE;
-        }
-      if (!(use->k_plain >= 0.0 && use->k_plain <= 1.0e4))
-        {
-          g_autofree char *shown = cli_echo (text);
-          rg_error_set (err, RG_ERR_DOMAIN,
-                        "--fitting \"%s\": a plain K must lie between 0 and 10000.", shown);
-          return FALSE;
-        }
-      return TRUE;
-    }
-  return rg_fitting_lookup (name, &use->fitting, err) == RG_OK;
-}
-
-/* Age in years: a bare number is years; "10 yr" and other times convert. */
-static gboolean
-parse_age (const char *text, double *years, RgError *err)
-{
-  g_autoptr (GString) m = g_string_new (NULL);
-  double si;
-
-  if (cli_parse_number ("--age", text, years, m))
-    ;
-  else if (rg_units_parse (RG_QTY_TIME, "--age", text, &si, err) == RG_OK)
-    rg_units_from_si (RG_QTY_TIME, si, "yr", years, err);
-  else
-    return FALSE;
-  if (!(*years >= 0.0 && *years <= 200.0))
-    {
-      rg_error_set (err, RG_ERR_DOMAIN, "%s", _("--age must lie between 0 and 200 years."));
-      return FALSE;
-    }
-  return TRUE;
-}
-
-/* A class of the aging catalog, or a rate ("0.05 mm/yr"). */
-static gboolean
-parse_aging (const char *text, double *rate_m_per_year, RgError *err)
-{
-  const RgAgingClass *klass;
-  RgError lookup_err = { 0 };
-  double si;
-
-  if (rg_aging_class_lookup (text, &klass, &lookup_err) == RG_OK)
-    {
-      *rate_m_per_year = klass->rate_m_per_year;
-      return TRUE;
-    }
-  /* Not a class: a rate with a unit, or else the class error stands. */
-  if (strpbrk (text, "0123456789") == NULL)
-    {
-      *err = lookup_err;
-      return FALSE;
-    }
-  if (rg_units_parse (RG_QTY_ROUGHNESS_RATE, "--aging", text, &si, err) != RG_OK)
-    return FALSE;
-  if (rg_units_from_si (RG_QTY_ROUGHNESS_RATE, si, "mm/yr", rate_m_per_year, err) != RG_OK)
-    return FALSE;
-  *rate_m_per_year *= 1.0e-3; /* mm -> m */
-  if (!(*rate_m_per_year >= 0.0 && *rate_m_per_year <= 0.01))
-    {
-      rg_error_set (err, RG_ERR_DOMAIN,
-                    "--aging must be a growth rate between 0 and 10 mm/yr, or a class name.");
-      return FALSE;
-    }
-  return TRUE;
+  return cli_write_stdout (out->str);
 }
 
 int
@@ -538,22 +485,17 @@ cli_cmd_line (int argc, char **argv)
   g_auto (CliArgs) args = { 0 };
   g_autoptr (GString) msg = g_string_new (NULL);
   g_autoptr (GString) out = g_string_new (NULL);
-  g_autoptr (GArray) uses = g_array_new (FALSE, TRUE, sizeof (RgFittingUse));
+  g_autoptr (RugosaProject) project = rugosa_project_new ();
+  g_autoptr (RugosaLine) line = rugosa_line_new ("line");
+  g_autoptr (RugosaSettings) units = rugosa_settings_new ();
+  RugosaSettings *settings = rugosa_project_get_settings (project);
+  const RugosaLineResults *r;
+  const RugosaOperatingPoint *p;
   RgError err = { 0 };
-  RgWarnings warnings;
-  RgFluidSpec spec;
-  RgFluidProps props;
-  RgLineInput in;
-  RgAgingResult aged;
-  const RgPipe *pipe = NULL;
-  const RgMaterial *material = NULL;
-  const char *fluid;
-  double age = 0.0, rate = 0.0, k_extra = 0.0, k_fittings = 0.0;
+  const char *option = NULL, *fluid, *failed = NULL;
+  int status;
 
-  rg_warnings_clear (&warnings);
-  rg_line_input_init (&in);
-
-  if (!cli_args_parse (&args, "line", line_options, argc, argv, 2, msg))
+  if (!cli_args_parse (&args, "line", options_for (FALSE), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len > 0)
     {
@@ -561,194 +503,61 @@ cli_cmd_line (int argc, char **argv)
       return cli_fail (_("Unexpected argument \"%s\" for 'line'."), shown);
     }
 
-  /* Pipe: catalog designation or inner diameter (not both). */
+  /* What must be given, and what excludes what. */
   if (cli_args_has (&args, "--pipe") && cli_args_has (&args, "--diameter"))
     return cli_fail (_("Give either --pipe (a catalog designation) or --diameter (an inner diameter), not both."));
-  if (cli_args_has (&args, "--pipe"))
-    {
-      if (rg_pipe_lookup (cli_args_get (&args, "--pipe"), &pipe, &err) != RG_OK)
-        return fail_naming_option (&err);
-      in.diameter_m = pipe->inner_diameter_m;
-    }
-  else if (!cli_args_has (&args, "--diameter"))
+  if (!cli_args_has (&args, "--pipe") && !cli_args_has (&args, "--diameter"))
     return cli_fail (_("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\"."));
-  else if (!parse_positive (&args, "--diameter", RG_QTY_LENGTH, FALSE, "102.3 mm", &in.diameter_m, &err))
-    return cli_fail_error (&err);
-
-  /* Roughness: a value, a material, or the pipe's usual material. */
   if (cli_args_has (&args, "--roughness") && cli_args_has (&args, "--material"))
     return cli_fail (_("Give either --roughness (a value) or --material (a catalog name), not both."));
-  if (cli_args_has (&args, "--roughness"))
-    {
-      if (!parse_positive (&args, "--roughness", RG_QTY_ROUGHNESS, TRUE, "0.045 mm", &in.roughness_m, &err))
-        return cli_fail_error (&err);
-    }
-  else
-    {
-      const char *name = cli_args_get (&args, "--material");
-      if (name == NULL && pipe != NULL)
-        name = pipe->material_id;
-      if (name == NULL)
-        return cli_fail (_("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material."));
-      if (rg_material_lookup (name, &material, &err) != RG_OK)
-        return fail_naming_option (&err);
-      in.roughness_m = material->roughness_m;
-    }
-
   if (!cli_args_has (&args, "--flow"))
     return cli_fail (_("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\"."));
-  if (!parse_positive (&args, "--flow", RG_QTY_FLOW, FALSE, "12 L/s", &in.flow_m3_s, &err))
-    return cli_fail_error (&err);
   if (!cli_args_has (&args, "--length"))
     return cli_fail (_("--length is required: give the line length, e.g. --length \"250 m\"."));
-  if (!parse_positive (&args, "--length", RG_QTY_LENGTH, FALSE, "250 m", &in.length_m, &err))
-    return cli_fail_error (&err);
-  /* Common practice (no single source): the longest pipelines run a few
-   * thousand kilometres; a longer line is a typo or a wrong unit. */
-  if (!(in.length_m <= 1.0e7))
-    return cli_fail ("%s", _("--length must lie between 0 (exclusive) and 10000 km."));
-  if (cli_args_has (&args, "--elevation")
-      && !parse_quantity (&args, "--elevation", RG_QTY_LENGTH, &in.elevation_m, &err))
-    return cli_fail_error (&err);
-  /* Common practice (no single source): no pipeline rises or falls more
-   * than the height of the highest mountain; a larger value is a typo. */
-  if (!(fabs (in.elevation_m) <= 1.0e4))
-    return cli_fail ("%s", _("--elevation must lie between -10000 m and 10000 m (outlet height minus inlet height)."));
-  if (cli_args_has (&args, "--k-sum"))
-    {
-      if (!cli_parse_number ("--k-sum", cli_args_get (&args, "--k-sum"), &k_extra, msg))
-        return cli_fail ("%s", msg->str);
-      if (!(k_extra >= 0.0 && k_extra <= 1.0e5))
-        return cli_fail (_("--k-sum must lie between 0 and 100000."));
-    }
-  if (!parse_model (&args, &in.model, &err))
-    return fail_naming_option (&err);
-  if (cli_args_has (&args, "--re-laminar-max")
-      && !cli_parse_number ("--re-laminar-max", cli_args_get (&args, "--re-laminar-max"),
-                            &in.transition.re_laminar_max, msg))
-    return cli_fail ("%s", msg->str);
-  if (cli_args_has (&args, "--re-turbulent-min")
-      && !cli_parse_number ("--re-turbulent-min", cli_args_get (&args, "--re-turbulent-min"),
-                            &in.transition.re_turbulent_min, msg))
-    return cli_fail ("%s", msg->str);
-
-  /* Aging */
   if (cli_args_has (&args, "--age") && !cli_args_has (&args, "--aging"))
     return cli_fail (_("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog aging') or a rate such as \"0.05 mm/yr\"."));
-  if (cli_args_has (&args, "--age") && !parse_age (cli_args_get (&args, "--age"), &age, &err))
-    return cli_fail_error (&err);
-  if (cli_args_has (&args, "--aging") && !parse_aging (cli_args_get (&args, "--aging"), &rate, &err))
-    return fail_naming_option (&err);
-
-  /* Fluid */
   if ((fluid = cli_args_get (&args, "--fluid")) == NULL)
     return cli_fail (_("--fluid is required: water, seawater, oil, air or custom."));
-  if (!fluid_from_args (&args, fluid, &spec, &err))
-    return fail_naming_option (&err);
-  if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
-    return fail_naming_option (&err);
-  in.density_kg_m3 = props.density_kg_m3;
-  in.viscosity_pa_s = props.dynamic_viscosity_pa_s;
 
-  /* Fittings: 3-K values depend on the Reynolds number, which does not
-   * depend on K, so a first evaluation gives Re for the fittings. */
-  GPtrArray *fittings = cli_args_get_all (&args, "--fitting");
-  for (guint i = 0; i < fittings->len; i++)
+  if ((status = set_fluid (&args, fluid, line)) != CLI_EXIT_OK)
+    return status;
+  if (!apply_options (&args, FALSE, line, settings, &option, &err))
+    return cli_fail_option (option, err.text);
+  /* Without a roughness or material, the pipe's usual material. */
+  if (!cli_args_has (&args, "--roughness") && !cli_args_has (&args, "--material"))
     {
-      RgFittingUse use;
-      if (!parse_fitting (g_ptr_array_index (fittings, i), &use, &err))
-        return fail_naming_option (&err);
-      g_array_append_val (uses, use);
-    }
-  in.k_sum = k_extra;
-  if (uses->len > 0)
-    {
-      RgLineResult first;
-      if (rg_line_evaluate (&in, &first, &err) != RG_OK)
-        return fail_naming_option (&err);
-      if (rg_fittings_k_sum_checked ((RgFittingUse *) uses->data, (int) uses->len,
-                                     first.reynolds, in.diameter_m, &k_fittings,
-                                     &warnings, &err) != RG_OK)
-        return cli_fail_error (&err);
-      in.k_sum = k_extra + k_fittings;
-    }
+      const RgPipe *pipe = NULL;
 
-  if (rg_aging_evaluate (&in, rate, age, &aged, &err) != RG_OK)
-    return fail_naming_option (&err);
+      if (cli_args_has (&args, "--pipe"))
+        (void) rg_pipe_lookup (rugosa_line_get_pipe_designation (line), &pipe, NULL);
+      if (pipe == NULL)
+        return cli_fail (_("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material."));
+      g_object_set (line, "material-id", pipe->material_id, NULL);
+    }
+  if (rugosa_settings_check (settings, &failed, &err) != RG_OK)
+    return fail_subjects (&args, err.subjects | rugosa_field_find (failed)->subjects, err.text);
 
-  const RgLineResult *r = &aged.result;
-  rg_friction_validity_warnings (in.model, r->reynolds, r->relative_roughness,
-                                 &r->friction, &warnings);
-  if (spec.kind == RG_FLUID_AIR && r->pressure_drop_pa > 0.1 * spec.pressure_pa)
-    rg_warnings_add (&warnings,
-                     "The pressure drop is %.1f %% of the inlet pressure: above 10 %% the incompressible model no longer holds for a gas.",
-                     100.0 * r->pressure_drop_pa / spec.pressure_pa);
+  rugosa_project_insert_line (project, 0, line);
+  r = rugosa_project_get_results (project, line);
+  p = &r->points[RUGOSA_FLOW_DESIGN];
+  if (!r->ok)
+    return fail_subjects (&args, r->error_subjects, r->error);
+  if (!p->ok)
+    return fail_subjects (&args, p->error_subjects, p->error);
 
   if (cli_args_has (&args, "--json"))
     {
-      CliJson json;
-      const char *w[RG_WARNINGS_MAX];
-      for (int i = 0; i < warnings.count; i++)
-        w[i] = warnings.text[i];
-      cli_json_begin (&json, out);
-      cli_json_number (&json, "velocity_m_s", r->velocity_m_s);
-      cli_json_number (&json, "reynolds", r->reynolds);
-      cli_json_number (&json, "friction_factor", r->friction.f);
-      if (r->friction.has_laminar)
-        cli_json_number (&json, "friction_factor_laminar", r->friction.f_laminar);
-      cli_json_string (&json, "regime", rg_regime_id (r->friction.regime));
-      if (r->friction.regime == RG_REGIME_TURBULENT)
-        cli_json_string (&json, "roughness_zone", rg_roughness_zone_id (r->friction.zone));
-      cli_json_number (&json, "head_loss_major_m", r->head_loss_major_m);
-      cli_json_number (&json, "head_loss_minor_m", r->head_loss_minor_m);
-      cli_json_number (&json, "head_loss_total_m", r->head_loss_total_m);
-      cli_json_number (&json, "pressure_drop_Pa", r->pressure_drop_pa);
-      cli_json_number (&json, "gradient_m_per_100m", r->gradient_m_per_100m);
-      cli_json_number (&json, "wall_shear_Pa", r->wall_shear_pa);
-      cli_json_number (&json, "density_kg_m3", props.density_kg_m3);
-      cli_json_number (&json, "dynamic_viscosity_Pa_s", props.dynamic_viscosity_pa_s);
-      cli_json_number (&json, "roughness_elasticity", r->friction.roughness_elasticity);
-      cli_json_number (&json, "inner_diameter_m", in.diameter_m);
-      cli_json_number (&json, "roughness_m", aged.roughness_m);
-      cli_json_number (&json, "roughness_new_m", in.roughness_m);
-      cli_json_number (&json, "head_loss_ratio_to_new", aged.head_loss_ratio_to_new);
-      cli_json_number (&json, "minor_loss_k_total", in.k_sum);
-      cli_json_string_array (&json, "warnings", w, warnings.count);
-      cli_json_end (&json);
+      g_string_append_c (out, '{');
+      rugosa_output_point_json (out, r, p, "\n  ");
+      g_string_append (out, "\n}\n");
     }
   else
     {
-      if (pipe != NULL)
-        cli_table_row (out, _("pipe"), pipe->designation, NULL);
-      if (material != NULL)
-        cli_table_row (out, _("material"), _(material->name), NULL);
-      cli_table_number (out, _("inner diameter"), in.diameter_m * 1e3, "mm");
-      cli_table_number (out, _("roughness"), aged.roughness_m * 1e3, "mm");
-      if (age > 0.0)
-        cli_table_number (out, _("roughness when new"), in.roughness_m * 1e3, "mm");
-      cli_table_number (out, _("density"), props.density_kg_m3, "kg/m³");
-      cli_table_number (out, _("dynamic viscosity"), props.dynamic_viscosity_pa_s, "Pa·s");
-      cli_table_number (out, _("velocity"), r->velocity_m_s, "m/s");
-      cli_table_number (out, _("Reynolds number"), r->reynolds, NULL);
-      cli_table_number (out, _("relative roughness ε/D"), r->relative_roughness, NULL);
-      cli_table_number (out, _("friction factor (Darcy)"), r->friction.f, NULL);
-      if (r->friction.has_laminar)
-        cli_table_number (out, _("laminar value (64/Re)"), r->friction.f_laminar, NULL);
-      cli_table_row (out, _("regime"), rg_regime_id (r->friction.regime), NULL);
-      if (r->friction.regime == RG_REGIME_TURBULENT)
-        cli_table_row (out, _("roughness zone"), rg_roughness_zone_id (r->friction.zone), NULL);
-      cli_table_number (out, _("head loss, pipe friction"), r->head_loss_major_m, "m");
-      cli_table_number (out, _("head loss, fittings"), r->head_loss_minor_m, "m");
-      cli_table_number (out, _("head loss, total"), r->head_loss_total_m, "m");
-      cli_table_number (out, _("ΣK of fittings"), in.k_sum, NULL);
-      cli_table_number (out, _("pressure drop (with Δz)"), r->pressure_drop_pa / 1e3, "kPa");
-      cli_table_number (out, _("hydraulic gradient"), r->gradient_m_per_100m, "m/100 m");
-      cli_table_number (out, _("wall shear stress"), r->wall_shear_pa, "Pa");
-      cli_table_number (out, _("∂ln f/∂ln(ε/D)"), r->friction.roughness_elasticity, NULL);
-      if (age > 0.0)
-        cli_table_number (out, _("head loss relative to new"), aged.head_loss_ratio_to_new, NULL);
-      for (int i = 0; i < warnings.count; i++)
-        g_string_append_printf (out, _("warning: %s\n"), warnings.text[i]);
+      const char *designation = rugosa_line_get_pipe_designation (line);
+
+      if (designation != NULL)
+        cli_table_row (out, _("pipe"), designation, NULL);
+      rugosa_output_point_table (out, r, p, units);
     }
-  return finish_output (out);
+  return cli_write_stdout (out->str);
 }

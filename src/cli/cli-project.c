@@ -186,7 +186,7 @@ cli_cmd_render (int argc, char **argv)
   if (age >= 0.0)
     g_object_set (rugosa_project_get_settings (project), "service-age", age, NULL);
 
-  input = rugosa_chart_input_new (project, NULL, -1, NULL);
+  input = rugosa_chart_input_new (project, -1, NULL);
   input->spec.theme = theme;
   date = footer_date ();
   if (!rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,

@@ -50,6 +50,8 @@ int cli_write_stdout (const char *out);
 /* Reports a usage error: "rugosa-cli: <sentence>" on stderr. */
 int cli_fail (const char *fmt, ...) G_GNUC_PRINTF (1, 2);
 int cli_fail_error (const RgError *err);
+/* "rugosa-cli: OPTION: SENTENCE" — a refusal that names its option(s). */
+int cli_fail_option (const char *option, const char *sentence);
 
 /* Required option: fails with a sentence naming it and `hint`. */
 const char *cli_require (const CliArgs *args, const char *name,

@@ -26,6 +26,7 @@ typedef struct {
   gboolean present;           /* FALSE when the line sets no such flow */
   gboolean ok;
   char error[RG_ERROR_TEXT_MAX];
+  RgSubjects error_subjects;  /* the inputs the error is about */
   double flow_m3_s;
   double minor_loss_k_total;  /* ΣK at this Reynolds number (3-K depends on Re) */
   RgLineResult result;        /* at the service age */
@@ -37,6 +38,7 @@ typedef struct {
 typedef struct {
   gboolean ok;                /* FALSE: the line itself is wrong (fluid, pipe …) */
   char error[RG_ERROR_TEXT_MAX];
+  RgSubjects error_subjects;  /* the inputs the error is about */
   double age_years;
   double density_kg_m3;
   double dynamic_viscosity_pa_s;

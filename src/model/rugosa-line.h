@@ -6,6 +6,8 @@
 
 #include <glib-object.h>
 
+#include "core/fluid.h"
+
 G_BEGIN_DECLS
 
 #define RUGOSA_TYPE_LINE (rugosa_line_get_type ())
@@ -38,6 +40,9 @@ void rugosa_line_set_fittings (RugosaLine *self, GVariant *fittings);
 /* True when every property of a and b is equal (unknown file fields are
  * not compared). */
 gboolean rugosa_line_equal (RugosaLine *a, RugosaLine *b);
+
+/* The fluid's state as the core takes it (kind, temperature, …). */
+void rugosa_line_get_fluid_spec (RugosaLine *self, RgFluidSpec *spec);
 
 /* Bumped on every real property change; the evaluation cache compares it. */
 guint64 rugosa_line_get_revision (RugosaLine *self);

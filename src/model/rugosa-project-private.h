@@ -12,8 +12,9 @@ struct _RugosaProject
   GPtrArray *lines;           /* of RugosaLine */
   RugosaSettings *settings;
   cJSON *extra;               /* unknown top-level file fields */
-  GHashTable *eval_cache;     /* RugosaLine* (not a ref) -> EvalEntry* */
+  GHashTable *eval_cache;     /* RugosaLine* (not a ref) -> LineCache* */
   GHashTable *pipe_memo;      /* designation text -> const RgPipe* (catalog) */
 
   guint64 evaluation_count;
+  guint64 eval_clock;         /* counts cache lookups, for LRU */
 };

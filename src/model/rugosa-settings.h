@@ -1,41 +1,44 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Project settings: display units, friction model, transition thresholds,
- * chart ranges, the service age shown, and the warning limits. */
+ * chart ranges, the service age shown, and the warning limits.  Every
+ * field is a row of the settings field table (rugosa-fields.c). */
 #pragma once
 
 #include <glib-object.h>
 
-G_BEGIN_DECLS
+#include "core/status.h"
+#include "core/units.h"
+#include "rugosa-enums.h"
 
-typedef enum {
-  RUGOSA_UNIT_SYSTEM_SI = 0,
-  RUGOSA_UNIT_SYSTEM_US,
-} RugosaUnitSystem;
+G_BEGIN_DECLS
 
 #define RUGOSA_TYPE_SETTINGS (rugosa_settings_get_type ())
 G_DECLARE_FINAL_TYPE (RugosaSettings, rugosa_settings, RUGOSA, SETTINGS, GObject)
 
-/* The GVariant type of "unit-overrides": quantity name -> unit spelling,
- * quantity names as listed in docs/file-format.md ("flow", "length", …). */
-#define RUGOSA_SETTINGS_UNIT_OVERRIDES_TYPE "a{ss}"
-
 RugosaSettings *rugosa_settings_new (void);
 
 RugosaUnitSystem rugosa_settings_get_unit_system (RugosaSettings *self);
-GVariant *rugosa_settings_get_unit_overrides (RugosaSettings *self);
-/* The unit chosen for one quantity, or NULL when the system's default is
- * used. */
-const char *rugosa_settings_get_unit_override (RugosaSettings *self,
-                                               const char *quantity);
 /* An RgFrictionModel. */
 int rugosa_settings_get_friction_model (RugosaSettings *self);
-/* Any double property by name ("service-age", "velocity-limit", …). */
+/* Any number field by property name ("service-age", "velocity-limit", …). */
 double rugosa_settings_get_double (RugosaSettings *self, const char *property);
 
-gboolean rugosa_settings_equal (RugosaSettings *a, RugosaSettings *b);
-guint64 rugosa_settings_get_revision (RugosaSettings *self);
+/* The unit `dq` is shown in: the project's override for it when one is set
+ * (and valid), else the unit system's usual unit; NULL for a plain number.
+ * The string lives as long as the settings are unchanged. */
+const char *rugosa_settings_get_unit (RugosaSettings *self,
+                                      RugosaDisplayQuantity dq);
 
-/* The quantity names accepted in "unit-overrides", NULL-terminated. */
-const char *const *rugosa_settings_unit_quantities (void);
+/* The relations between fields that no single range expresses (the
+ * transition limits in order, the chart's axes wide enough); RG_OK or
+ * one sentence in `err` whose subjects point at the field to change.
+ * `failed_property` (may be NULL) receives that field's property name. */
+RgStatus rugosa_settings_check (RugosaSettings *self,
+                                const char **failed_property, RgError *err);
+
+gboolean rugosa_settings_equal (RugosaSettings *a, RugosaSettings *b);
+/* Bumped on every change of a field that can change a result (every field
+ * but the view settings, such as the service age shown). */
+guint64 rugosa_settings_get_revision (RugosaSettings *self);
 
 G_END_DECLS

@@ -1,0 +1,60 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The results as they leave the program: one table of output keys serves
+ * the JSON of `rugosa-cli line` and `eval`, the CSV of `eval` and of the
+ * window's export, and the text tables.  A key has a name, a label, the
+ * quantity it is shown as, and how to read it from an operating point;
+ * its JSON key is the name followed by the SI unit ("velocity_m_s"), its
+ * CSV column the name followed by the display unit ("velocity (ft/s)"). */
+#pragma once
+
+#include <glib.h>
+
+#include "rugosa-enums.h"
+#include "rugosa-evaluation.h"
+#include "rugosa-settings.h"
+
+G_BEGIN_DECLS
+
+typedef enum {
+  RUGOSA_OUTPUT_NUMBER,
+  RUGOSA_OUTPUT_ID,        /* a fixed identifier: the regime, the zone */
+  RUGOSA_OUTPUT_WARNINGS,  /* the list of warning sentences */
+} RugosaOutputKind;
+
+typedef struct {
+  const char *name;                /* "velocity" */
+  const char *label;               /* translatable (N_): "Mean velocity" */
+  RugosaDisplayQuantity display;   /* NUMBER: a plain number */
+  RugosaOutputKind kind;
+  double (*number) (const RugosaLineResults *r, const RugosaOperatingPoint *p);
+  const char *(*id) (const RugosaOperatingPoint *p);
+  /* NULL: always present; else whether the point has this value */
+  gboolean (*present) (const RugosaOperatingPoint *p);
+} RugosaOutputKey;
+
+const RugosaOutputKey *rugosa_output_keys (guint *n);
+const RugosaOutputKey *rugosa_output_key_find (const char *name);
+/* "velocity_m_s"; the name alone for a plain number. */
+const char *rugosa_output_json_key (const RugosaOutputKey *key);
+gboolean rugosa_output_present (const RugosaOutputKey *key,
+                                const RugosaOperatingPoint *p);
+
+/* The unit of a display quantity in `units` (NULL: the SI unit), or NULL
+ * for a plain number. */
+const char *rugosa_output_unit (RugosaSettings *units,
+                                RugosaDisplayQuantity display);
+
+/* One operating point as the members of a JSON object (no braces),
+ * SI, numbers exact and independent of the locale; when the point could
+ * not be computed, an "error" member instead. */
+void rugosa_output_point_json (GString *out, const RugosaLineResults *r,
+                               const RugosaOperatingPoint *p,
+                               const char *indent);
+
+/* One operating point as "label    value unit" lines, values in `units`
+ * (NULL: SI), 4 significant figures. */
+void rugosa_output_point_table (GString *out, const RugosaLineResults *r,
+                                const RugosaOperatingPoint *p,
+                                RugosaSettings *units);
+
+G_END_DECLS

@@ -1,0 +1,30 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The RugosaSettings struct, for the field table (offsets) and the
+ * evaluation. */
+#pragma once
+
+#include <cjson/cJSON.h>
+
+#include "rugosa-settings.h"
+
+G_BEGIN_DECLS
+
+struct _RugosaSettings
+{
+  GObject parent_instance;
+
+  /* owned; each field below is a row of the settings field table */
+  int unit_system;
+  GVariant *unit_overrides; /* a{ss}, never NULL */
+  int friction_model;
+  double re_laminar_max, re_turbulent_min;
+  double chart_re_min, chart_re_max, chart_f_min, chart_f_max;
+  double service_age;
+  double velocity_limit, gradient_limit;
+
+  /* owned, not fields */
+  cJSON *extra;
+  guint64 revision;
+};
+
+G_END_DECLS
