@@ -102,7 +102,7 @@ _rugosa_chart_draw_bands (RugosaChart *chart, cairo_t *cr,
   const double m = 40;
   const RugosaChartRect far = { pl->x - m, pl->y - m, pl->width + 2 * m,
                                 pl->height + 2 * m };
-  const double top = far.y, bottom = far.y + far.height;
+  const double top = far.y;
   const double left = far.x, right = far.x + far.width;
   const double pb = pl->y + pl->height;
   double x_lam, x_turb;
@@ -171,7 +171,6 @@ _rugosa_chart_draw_bands (RugosaChart *chart, cairo_t *cr,
   cairo_close_path (cr);
   _rugosa_chart_set_rgba (cr, &p->band_smooth);
   cairo_fill (cr);
-  (void) bottom;
 
   /* The zone boundaries themselves, dotted. */
   RugosaChartRgba edge = p->muted;

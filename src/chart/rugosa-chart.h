@@ -168,7 +168,6 @@ typedef struct {
   RugosaChartRect box;
   RugosaChartRect marker;  /* the marker's (or transitional bar's) box */
 } RugosaChartLabelInfo;
-size_t rugosa_chart_n_lines (const RugosaChart *chart);
 int rugosa_chart_get_label (RugosaChart *chart, size_t index,
                             RugosaChartLabelInfo *out);
 /* The legend box (empty when hidden). */
