@@ -184,12 +184,14 @@ _rugosa_chart_draw_axes (RugosaChart *chart, cairo_t *cr,
   _rugosa_chart_text_size (ty, &w, &h);
   _rugosa_chart_show_turned (cr, ty, 8 * k + h / 2, pl->y + pl->height / 2, -G_PI / 2, &p->ink, NULL, 0);
 
-  /* Caption: what the curves and zones are. */
-  PangoLayout *cap = _rugosa_chart_text (
-      chart,
-      _("Colebrook (1939) curves by relative roughness ε/D  ·  "
-        "roughness zones where ε⁺ = Re·(ε/D)·√(f/8) crosses 5 and 70"),
-      lay->font_tick, TEXT_PLAIN, 0);
+  /* Caption: what the curves and zones are; the tolerance is the core's
+   * (regime.c), in per cent. */
+  char caption[256];
+  snprintf (caption, sizeof caption,
+            _("Colebrook (1939) curves by relative roughness ε/D  ·  "
+              "zones: f within %g %% of the smooth or the fully rough law"),
+            100.0 * RG_ROUGHNESS_ZONE_TOLERANCE);
+  PangoLayout *cap = _rugosa_chart_text (chart, caption, lay->font_tick, TEXT_PLAIN, 0);
   _rugosa_chart_text_size (cap, &w, &h);
   if (w < lay->width - pl->x - 160 * k)
     _rugosa_chart_show (cr, cap, pl->x, 6 * k, &p->muted, NULL, 0);

@@ -1,14 +1,20 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The regime and roughness-zone bands and their names.
  *
- * Laminar and transitional are strips of Reynolds number; the turbulent
- * strip is split by the loci ε⁺ = 5 and ε⁺ = 70 (chart-geometry.c) into
- * hydraulically smooth, transitionally rough and fully rough zones.  The
- * part of the plane below the smooth-pipe curve holds no Colebrook curve
- * and stays plain.
+ * Laminar and transitional are strips of Reynolds number.  The turbulent
+ * strip is split into hydraulically smooth, transitionally rough and fully
+ * rough zones by the core's rule (regime.c): Colebrook's f within a stated
+ * tolerance of the smooth-pipe law, or of the fully rough law.  Their edges
+ * come from the core (rg_roughness_zone_smooth_edge, _rough_edge), so the
+ * bands follow the same rule as every line's reported zone: the smooth
+ * zone is the thin strip just above the smooth-pipe curve, the fully rough
+ * zone lies above and to the right of its edge.  The part of the plane
+ * below the smooth-pipe curve holds no Colebrook curve and stays plain.
  *
  * Each band's name goes to the free place nearest to a preferred point
- * whose whole (turned) box lies inside the band. */
+ * whose whole (turned) box lies inside the band.  The smooth zone is too
+ * thin to hold text, so its name sits in the plain part just under the
+ * smooth-pipe curve, along it. */
 #include "chart-private.h"
 
 #include <glib/gi18n-lib.h>
@@ -27,23 +33,49 @@ typedef struct {
   size_t n;
 } Poly;
 
-/* The locus ε⁺ = eps_plus from ε/D = 1e-9 (Re far beyond any axis) to the
- * core's largest ε/D: from the bottom right to the top left. */
 static void
-locus_points (const ChartLayout *lay, double eps_plus, const RugosaChartRect *far,
-              Poly *out)
+poly_add (const ChartLayout *lay, double re, double f, const RugosaChartRect *far,
+          Poly *out)
+{
+  double x, y;
+  _rugosa_chart_xy (lay, re, f, &x, &y);
+  out->x[out->n] = clampd (x, far->x, far->x + far->width);
+  out->y[out->n++] = clampd (y, far->y, far->y + far->height);
+}
+
+/* The edge of the fully rough zone from ε/D = 1e-9 (Re far beyond any axis)
+ * to the core's largest ε/D: from the bottom right to the top left. */
+static void
+rough_edge_points (const ChartLayout *lay, const RugosaChartRect *far, Poly *out)
 {
   enum { N = 72 };
   out->n = 0;
   for (int i = 0; i < N; i++)
     {
       const double lrr = -9.0 + (log10 (RG_FRICTION_RR_MAX) + 9.0) * i / (N - 1);
-      double re, f, x, y;
-      if (rugosa_chart_zone_boundary (eps_plus, pow (10.0, lrr), &re, &f, NULL) != RG_OK)
-        continue;
-      _rugosa_chart_xy (lay, re, f, &x, &y);
-      out->x[out->n] = clampd (x, far->x, far->x + far->width);
-      out->y[out->n++] = clampd (y, far->y, far->y + far->height);
+      double re, f;
+      if (rg_roughness_zone_rough_edge (pow (10.0, lrr), &re, &f, NULL) == RG_OK)
+        poly_add (lay, re, f, far, out);
+    }
+}
+
+/* The edge of the hydraulically smooth zone over the core's whole Reynolds
+ * range, from the bottom right to the top left. */
+static void
+smooth_edge_points (const ChartLayout *lay, const RugosaChartRect *far, Poly *out)
+{
+  enum { N = 72 };
+  const double l0 = log10 (RG_FRICTION_RE_MAX), l1 = log10 (RG_FRICTION_RE_MIN);
+  out->n = 0;
+  for (int i = 0; i < N; i++)
+    {
+      /* the ends exactly, whatever log10 and pow round to */
+      const double re = i == 0 ? RG_FRICTION_RE_MAX
+                        : i == N - 1 ? RG_FRICTION_RE_MIN
+                                     : pow (10.0, l0 + (l1 - l0) * i / (N - 1));
+      double rr, f;
+      if (rg_roughness_zone_smooth_edge (re, &rr, &f, NULL) == RG_OK)
+        poly_add (lay, re, f, far, out);
     }
 }
 
@@ -57,13 +89,37 @@ smooth_points (const ChartLayout *lay, double re_lo, double re_hi,
   for (int i = 0; i < N; i++)
     {
       const double re = re_lo * pow (re_hi / re_lo, (double) i / (N - 1));
-      double f, x, y;
-      if (rg_friction_colebrook (re, 0.0, &f, NULL) != RG_OK)
-        continue;
-      _rugosa_chart_xy (lay, re, f, &x, &y);
-      out->x[out->n] = clampd (x, far->x, far->x + far->width);
-      out->y[out->n++] = clampd (y, far->y, far->y + far->height);
+      double f;
+      if (rg_friction_colebrook (re, 0.0, &f, NULL) == RG_OK)
+        poly_add (lay, re, f, far, out);
     }
+}
+
+/* x where a polyline monotone in y (as the edges are) reaches height y;
+ * 0 when it does not. */
+static int
+poly_x_at_y (const Poly *p, double y, double *x)
+{
+  for (size_t i = 1; i < p->n; i++)
+    {
+      const double y0 = p->y[i - 1], y1 = p->y[i];
+      if ((y - y0) * (y - y1) <= 0 && y0 != y1)
+        {
+          *x = p->x[i - 1] + (y - y0) / (y1 - y0) * (p->x[i] - p->x[i - 1]);
+          return 1;
+        }
+    }
+  return 0;
+}
+
+static RugosaChartRect
+far_rect (const ChartLayout *lay)
+{
+  const RugosaChartRect *pl = &lay->plot;
+  const double m = 40;
+  const RugosaChartRect far = { pl->x - m, pl->y - m, pl->width + 2 * m,
+                                pl->height + 2 * m };
+  return far;
 }
 
 static void
@@ -99,9 +155,7 @@ _rugosa_chart_draw_bands (RugosaChart *chart, cairo_t *cr,
   const RugosaChartSpec *spec = &chart->spec;
   const ChartLayout *lay = &chart->lay;
   const RugosaChartRect *pl = &lay->plot;
-  const double m = 40;
-  const RugosaChartRect far = { pl->x - m, pl->y - m, pl->width + 2 * m,
-                                pl->height + 2 * m };
+  const RugosaChartRect far = far_rect (lay);
   const double top = far.y;
   const double left = far.x, right = far.x + far.width;
   const double pb = pl->y + pl->height;
@@ -127,12 +181,12 @@ _rugosa_chart_draw_bands (RugosaChart *chart, cairo_t *cr,
 
   if (x_turb >= pl->x + pl->width)
     return;
-  Poly l70, l5, sm;
-  locus_points (lay, RG_EPS_PLUS_FULLY_ROUGH_MIN, &far, &l70);
-  locus_points (lay, RG_EPS_PLUS_SMOOTH_MAX, &far, &l5);
+  Poly rough, smooth, sm;
+  rough_edge_points (lay, &far, &rough);
+  smooth_edge_points (lay, &far, &smooth);
   smooth_points (lay, fmax (spec->transition.re_turbulent_min, RG_FRICTION_RE_MIN) * 0.9,
                  RG_FRICTION_RE_MAX, &far, &sm);
-  if (l70.n < 2 || l5.n < 2 || sm.n < 2)
+  if (rough.n < 2 || smooth.n < 2 || sm.n < 2)
     return;
 
   cairo_save (cr);
@@ -142,45 +196,45 @@ _rugosa_chart_draw_bands (RugosaChart *chart, cairo_t *cr,
    * this halves the cost of filling most of the plot. */
   cairo_set_antialias (cr, CAIRO_ANTIALIAS_FAST);
   /* The three zones do not overlap, so each pixel is filled once. */
-  /* ε⁺ > 70: above and to the right of its locus. */
-  poly_path (cr, &l70, 0, 1);
-  cairo_line_to (cr, l70.x[l70.n - 1], top);
+  /* Fully rough: above and to the right of its edge. */
+  poly_path (cr, &rough, 0, 1);
+  cairo_line_to (cr, rough.x[rough.n - 1], top);
   cairo_line_to (cr, right, top);
-  cairo_line_to (cr, right, l70.y[0]);
+  cairo_line_to (cr, right, rough.y[0]);
   cairo_close_path (cr);
   _rugosa_chart_set_rgba (cr, &p->band_fully_rough);
   cairo_fill (cr);
-  /* 5 ≤ ε⁺ ≤ 70: between the two loci. */
-  poly_path (cr, &l70, 0, 1);
-  cairo_line_to (cr, l70.x[l70.n - 1], top);
-  cairo_line_to (cr, l5.x[l5.n - 1], top);
-  poly_path (cr, &l5, 1, 0);
-  cairo_line_to (cr, right, l5.y[0]);
-  cairo_line_to (cr, right, l70.y[0]);
+  /* Transitionally rough: between the two edges. */
+  poly_path (cr, &rough, 0, 1);
+  cairo_line_to (cr, rough.x[rough.n - 1], top);
+  cairo_line_to (cr, smooth.x[smooth.n - 1], top);
+  poly_path (cr, &smooth, 1, 0);
+  cairo_line_to (cr, right, smooth.y[0]);
+  cairo_line_to (cr, right, rough.y[0]);
   cairo_close_path (cr);
   _rugosa_chart_set_rgba (cr, &p->band_transitionally_rough);
   cairo_fill (cr);
-  /* ε⁺ < 5: between its locus and the smooth-pipe curve; below that curve
-   * no pipe reaches, and the plot stays plain. */
-  poly_path (cr, &l5, 0, 1);
-  cairo_line_to (cr, left, l5.y[l5.n - 1]);
+  /* Hydraulically smooth: between its edge and the smooth-pipe curve;
+   * below that curve no pipe reaches, and the plot stays plain. */
+  poly_path (cr, &smooth, 0, 1);
+  cairo_line_to (cr, left, smooth.y[smooth.n - 1]);
   cairo_line_to (cr, left, sm.y[0]);
   poly_path (cr, &sm, 0, 0);
   cairo_line_to (cr, right, sm.y[sm.n - 1]);
-  cairo_line_to (cr, right, l5.y[0]);
+  cairo_line_to (cr, right, smooth.y[0]);
   cairo_close_path (cr);
   _rugosa_chart_set_rgba (cr, &p->band_smooth);
   cairo_fill (cr);
 
-  /* The zone boundaries themselves, dotted. */
+  /* The zone edges themselves, dotted. */
   RugosaChartRgba edge = p->muted;
   edge.a = 0.75;
   const double dots[] = { 5.0 * lay->k, 3.5 * lay->k };
   cairo_set_dash (cr, dots, 2, 0);
   cairo_set_line_width (cr, 1.3 * lay->k);
   _rugosa_chart_set_rgba (cr, &edge);
-  poly_path (cr, &l5, 0, 1);
-  poly_path (cr, &l70, 0, 1);
+  poly_path (cr, &smooth, 0, 1);
+  poly_path (cr, &rough, 0, 1);
   cairo_stroke (cr);
   cairo_restore (cr);
 
@@ -207,6 +261,16 @@ typedef struct {
   RgRoughnessZone zone;
 } BandName;
 
+/* A probe in the turbulent strip below the smooth-pipe curve, where no
+ * Colebrook curve runs. */
+static int
+below_smooth_curve (const RugosaChartProbe *pr)
+{
+  double f_s;
+  return pr->regime == RG_REGIME_TURBULENT && !pr->has_rr
+         && rg_friction_colebrook (pr->re, 0.0, &f_s, NULL) == RG_OK && pr->f < f_s;
+}
+
 static int
 box_in_band (RugosaChart *chart, double cx, double cy, double w, double h,
              double c, double s, const BandName *b)
@@ -218,22 +282,15 @@ box_in_band (RugosaChart *chart, double cx, double cy, double w, double h,
         RugosaChartProbe pr;
         _rugosa_chart_classify (&chart->spec, &chart->lay, cx + u * c - v * s,
                                 cy + u * s + v * c, &pr);
-        if (!pr.in_plot || pr.regime != b->regime
-            || (b->regime == RG_REGIME_TURBULENT && pr.zone != b->zone))
+        if (!pr.in_plot || pr.regime != b->regime)
+          return 0;
+        /* the smooth zone's name may also lie under its curve (see the top
+         * of the file) */
+        if (b->regime == RG_REGIME_TURBULENT && pr.zone != b->zone
+            && !(b->zone == RG_ZONE_SMOOTH && below_smooth_curve (&pr)))
           return 0;
       }
   return 1;
-}
-
-/* A point of the locus ε⁺ = c at the height of friction factor f
- * (chart-geometry.c: along the locus 1/√f = −2·log10((ε/D)·K)). */
-static void
-locus_at_f (const ChartLayout *lay, double c, double f, double *x, double *y)
-{
-  const double kk = 1.0 / 3.7 + 2.51 / (c * sqrt (8.0));
-  const double rr = pow (10.0, -0.5 / sqrt (f)) / kk;
-  const double re = c * sqrt (8.0) / (rr * sqrt (f));
-  _rugosa_chart_xy (lay, re, f, x, y);
 }
 
 void
@@ -251,10 +308,15 @@ _rugosa_chart_draw_band_labels (RugosaChart *chart, cairo_t *cr,
     { N_("transitionally rough"), RG_REGIME_TURBULENT, RG_ZONE_TRANSITIONALLY_ROUGH },
     { N_("hydraulically smooth"), RG_REGIME_TURBULENT, RG_ZONE_SMOOTH },
   };
-  double x_lam, x_turb;
+  double x_lam, x_turb, xx, y_high;
   band_edges (chart, &x_lam, &x_turb);
   /* friction factor a sixth of the way down from the top of the axis */
   const double f_high = pow (10.0, lay->ly1 - (lay->ly1 - lay->ly0) / 6.0);
+  _rugosa_chart_xy (lay, 1e4, f_high, &xx, &y_high);
+  const RugosaChartRect far = far_rect (lay);
+  Poly rough, smooth;
+  rough_edge_points (lay, &far, &rough);
+  smooth_edge_points (lay, &far, &smooth);
 
   for (size_t bi = 0; bi < G_N_ELEMENTS (BANDS); bi++)
     {
@@ -265,8 +327,9 @@ _rugosa_chart_draw_band_labels (RugosaChart *chart, cairo_t *cr,
 
       /* Preferred places: the two strips low down (under the laminar line,
        * where no pipe runs); the turbulent zones high up, where the
-       * Colebrook curves are far apart: fully rough to the right, the
-       * others on the middle of their zone (ε⁺ = 1.5 and √(5·70)). */
+       * Colebrook curves are far apart: fully rough to the right,
+       * transitionally rough halfway between the zone edges; the smooth
+       * zone's name under the middle of the smooth-pipe curve. */
       switch (bi)
         {
         case 0:
@@ -282,18 +345,24 @@ _rugosa_chart_draw_band_labels (RugosaChart *chart, cairo_t *cr,
           py = pl->y + pl->height * 0.1;
           break;
         case 3:
-          locus_at_f (lay, sqrt (RG_EPS_PLUS_SMOOTH_MAX * RG_EPS_PLUS_FULLY_ROUGH_MIN),
-                      f_high, &px, &py);
+          {
+            double xs, xr;
+            py = y_high;
+            if (poly_x_at_y (&smooth, y_high, &xs) && poly_x_at_y (&rough, y_high, &xr))
+              px = 0.5 * (xs + xr);
+            else
+              px = 0.5 * (x_turb + pl->x + pl->width);
+          }
           break;
         default:
-          locus_at_f (lay, 1.5, f_high, &px, &py);
           {
-            /* the smooth zone is a sliver: aim just above its curve */
             double re, f, fs;
+            px = 0.5 * (x_turb + pl->x + pl->width);
+            py = pl->y + pl->height;
             _rugosa_chart_value (lay, px, py, &re, &f);
             if (rg_friction_colebrook (fmax (re, RG_FRICTION_RE_MIN), 0, &fs, NULL) == RG_OK)
               _rugosa_chart_xy (lay, re, fs, &yy, &py);
-            py -= h;
+            py += h / 2 + 3 * lay->k;
           }
           break;
         }

@@ -12,12 +12,8 @@
  *   1/√f = −2·log10( (ε/D)/3.7 + 2.51/(Re·√f) )
  * is linear in ε/D, so ε/D = 3.7·(10^(−1/(2√f)) − 2.51/(Re·√f)) exactly.
  *
- * Roughness-zone boundaries: on the locus ε⁺ = Re·(ε/D)·√(f/8) = c the
- * product Re·√f equals c·√8/(ε/D), so the Colebrook equation along it reads
- *   1/√f = −2·log10( (ε/D)·(1/3.7 + 2.51/(c·√8)) ),
- * explicit in ε/D; then Re = c·√8/((ε/D)·√f).  The boundary curves are that
- * locus parametrised by ε/D, with c = RG_EPS_PLUS_SMOOTH_MAX and
- * RG_EPS_PLUS_FULLY_ROUGH_MIN from the core. */
+ * Roughness zone under a point: the core's rule (rg_roughness_zone_classify)
+ * at the point's Reynolds number and the ε/D of the curve through it. */
 #include "chart-private.h"
 
 #include <glib/gi18n-lib.h>
@@ -178,30 +174,6 @@ rugosa_chart_rr_through (double re, double f, double *rr, RgError *err)
   return RG_OK;
 }
 
-RgStatus
-rugosa_chart_zone_boundary (double eps_plus, double rr, double *re, double *f,
-                            RgError *err)
-{
-  if (!(eps_plus > 0 && eps_plus < 1e6))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The roughness Reynolds number must lie between 0 and 1e6.");
-  if (!(rr > 0 && rr <= RG_FRICTION_RR_MAX))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The relative roughness must lie above 0 and at most %g.",
-                         RG_FRICTION_RR_MAX);
-  const double root8 = sqrt (8.0);
-  const double kk = 1.0 / 3.7 + 2.51 / (eps_plus * root8);
-  const double inv_s = -2.0 * log10 (rr * kk);
-  if (!(inv_s > 0))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "No point of that curve has a roughness Reynolds number of %g.",
-                         eps_plus);
-  const double s = 1.0 / inv_s;
-  *f = s * s;
-  *re = eps_plus * root8 / (rr * s);
-  return RG_OK;
-}
-
 void
 _rugosa_chart_classify (const RugosaChartSpec *spec, const ChartLayout *lay,
                         double x, double y, RugosaChartProbe *out)
@@ -215,8 +187,9 @@ _rugosa_chart_classify (const RugosaChartSpec *spec, const ChartLayout *lay,
   if (rugosa_chart_rr_through (out->re, out->f, &out->rr, NULL) == RG_OK)
     {
       out->has_rr = 1;
-      if (out->regime == RG_REGIME_TURBULENT)
-        out->zone = rg_roughness_zone_classify (
-            rg_roughness_reynolds (out->re, out->rr, out->f));
+      /* rr_through has checked re and rr against the core's domain */
+      if (out->regime == RG_REGIME_TURBULENT
+          && rg_roughness_zone_classify (out->re, out->rr, &out->zone, NULL) != RG_OK)
+        out->zone = RG_ZONE_NONE;
     }
 }
