@@ -195,6 +195,9 @@ test_probe_zones (void)
       seen[zone]++;
       checked++;
     }
+  g_test_message ("probe: %d checked; smooth %d, transitionally rough %d, fully rough %d",
+                  checked, seen[RG_ZONE_SMOOTH], seen[RG_ZONE_TRANSITIONALLY_ROUGH],
+                  seen[RG_ZONE_FULLY_ROUGH]);
   g_assert_cmpint (checked, >, 500);
   /* the smooth zone is a thin strip: random points seldom fall in it */
   g_assert_cmpint (seen[RG_ZONE_TRANSITIONALLY_ROUGH], >, 100);
