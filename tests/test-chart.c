@@ -1,6 +1,6 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
-/* Tests of the friction chart (src/chart): transforms, band geometry
- * against the core's roughness Reynolds number, pixel probes, label
+/* Tests of the friction chart (src/chart): transforms, the zone bands as
+ * drawn against the core's zone rule (regime.c), pixel probes, label
  * placement on crowded scenes, hit testing, the background cache and the
  * three export formats. */
 #include <gdk-pixbuf/gdk-pixbuf.h>
@@ -166,40 +166,6 @@ test_rr_through (void)
   g_assert_true (strstr (err.text, "smooth") != NULL);
 }
 
-static void
-test_zone_boundaries (void)
-{
-  const double thresholds[2] = { RG_EPS_PLUS_SMOOTH_MAX, RG_EPS_PLUS_FULLY_ROUGH_MIN };
-  static const double RR[] = { 2e-6, 1e-5, 1e-4, 1e-3, 1e-2, 5e-2 };
-  for (int t = 0; t < 2; t++)
-    for (size_t j = 0; j < G_N_ELEMENTS (RR); j++)
-      {
-        double re_b, f_b, f_c;
-        RgError err;
-        g_assert_cmpint (rugosa_chart_zone_boundary (thresholds[t], RR[j], &re_b, &f_b, &err), ==, RG_OK);
-        if (re_b < RG_FRICTION_RE_MIN || re_b > RG_FRICTION_RE_MAX)
-          continue;
-        /* The boundary point lies on the Colebrook curve of its ε/D (the
-         * core solves to 1e-13; Common practice (no single source): 1e-10
-         * allows for the explicit formula's rounding). */
-        g_assert_cmpint (rg_friction_colebrook (re_b, RR[j], &f_c, NULL), ==, RG_OK);
-        g_assert_cmpfloat (fabs (f_c / f_b - 1), <, 1e-10);
-        /* Source: the thresholds themselves, ε⁺ = 5 and 70, from the core
-         * (regime.c); independent value by rg_roughness_reynolds. */
-        g_assert_cmpfloat (fabs (rg_roughness_reynolds (re_b, RR[j], f_c) / thresholds[t] - 1), <, 1e-10);
-
-        /* Points just inside each side classify into the zones on either
-         * side, by the core's own classification. */
-        const RgRoughnessZone below = t == 0 ? RG_ZONE_SMOOTH : RG_ZONE_TRANSITIONALLY_ROUGH;
-        const RgRoughnessZone above = t == 0 ? RG_ZONE_TRANSITIONALLY_ROUGH : RG_ZONE_FULLY_ROUGH;
-        double f_lo, f_hi;
-        g_assert_cmpint (rg_friction_colebrook (re_b * 0.999, RR[j], &f_lo, NULL), ==, RG_OK);
-        g_assert_cmpint (rg_friction_colebrook (re_b * 1.001, RR[j], &f_hi, NULL), ==, RG_OK);
-        g_assert_cmpint (rg_roughness_zone_classify (rg_roughness_reynolds (re_b * 0.999, RR[j], f_lo)), ==, below);
-        g_assert_cmpint (rg_roughness_zone_classify (rg_roughness_reynolds (re_b * 1.001, RR[j], f_hi)), ==, above);
-      }
-}
-
 /* The chart's hover probe agrees with the core's classification at random
  * points of the turbulent part of the plot. */
 static void
@@ -208,7 +174,7 @@ test_probe_zones (void)
   RugosaChart *chart = chart_with (1600, 1000, RUGOSA_CHART_SHOW_ALL, RUGOSA_CHART_THEME_LIGHT);
   const RugosaChartRect pl = rugosa_chart_plot_area (chart);
   GRand *rand = g_rand_new_with_seed (5);
-  int checked = 0;
+  int checked = 0, seen[4] = { 0 };
   for (int i = 0; i < 2000; i++)
     {
       const double x = pl.x + g_rand_double (rand) * pl.width;
@@ -222,10 +188,20 @@ test_probe_zones (void)
       g_assert_cmpint (rg_friction_colebrook (pr.re, pr.rr, &f, NULL), ==, RG_OK);
       /* Common practice (no single source): 1e-9 relative, as above */
       g_assert_cmpfloat (fabs (f / pr.f - 1), <, 1e-9);
-      g_assert_cmpint (pr.zone, ==, rg_roughness_zone_classify (rg_roughness_reynolds (pr.re, pr.rr, f)));
+      /* Source: the core's zone rule at the probe's (Re, ε/D) */
+      RgRoughnessZone zone;
+      g_assert_cmpint (rg_roughness_zone_classify (pr.re, pr.rr, &zone, NULL), ==, RG_OK);
+      g_assert_cmpint (pr.zone, ==, zone);
+      seen[zone]++;
       checked++;
     }
+  g_test_message ("probe: %d checked; smooth %d, transitionally rough %d, fully rough %d",
+                  checked, seen[RG_ZONE_SMOOTH], seen[RG_ZONE_TRANSITIONALLY_ROUGH],
+                  seen[RG_ZONE_FULLY_ROUGH]);
   g_assert_cmpint (checked, >, 500);
+  /* the smooth zone is a thin strip: random points seldom fall in it */
+  g_assert_cmpint (seen[RG_ZONE_TRANSITIONALLY_ROUGH], >, 100);
+  g_assert_cmpint (seen[RG_ZONE_FULLY_ROUGH], >, 100);
   g_rand_free (rand);
   rugosa_chart_free (chart);
 }
@@ -336,12 +312,28 @@ expected_band (const RugosaChartPalette *p, RgRegime regime, RgRoughnessZone zon
     }
 }
 
+/* Re where the Colebrook curve of rr crosses the edge of the smooth zone,
+ * by bisection on the core's edge (its ε/D falls as Re grows). */
+static double
+smooth_edge_re (double rr)
+{
+  double lo = log10 (RG_FRICTION_RE_MIN), hi = log10 (RG_FRICTION_RE_MAX);
+  for (int i = 0; i < 100; i++)
+    {
+      const double mid = 0.5 * (lo + hi);
+      double rr_edge, f;
+      g_assert_cmpint (rg_roughness_zone_smooth_edge (pow (10.0, mid), &rr_edge, &f, NULL), ==, RG_OK);
+      if (rr_edge > rr)
+        lo = mid;
+      else
+        hi = mid;
+    }
+  return pow (10.0, 0.5 * (lo + hi));
+}
+
 static void
 test_pixel_bands (void)
 {
-  /* Points picked by ε⁺ far from the thresholds (Source: thresholds 5 and
-   * 70 from the core, regime.c): 1.5 (smooth), 19 (transitionally rough),
-   * 400 (fully rough), each on the Colebrook curve of ε/D 1e-3 or 1e-5. */
   RgTransition tr;
   rg_transition_default (&tr);
   for (int theme = 0; theme < 2; theme++)
@@ -350,15 +342,52 @@ test_pixel_bands (void)
       RugosaChartPalette pal;
       rugosa_chart_palette (theme, &pal);
       cairo_surface_t *s = render (chart);
-      struct { double eps_plus, rr; } zones[] = { { 1.5, 1e-3 }, { 19, 1e-3 }, { 400, 1e-3 }, { 1.5, 1e-5 }, { 19, 1e-5 } };
-      for (size_t i = 0; i < G_N_ELEMENTS (zones); i++)
+      /* Points well inside each zone, placed by the core's zone edges
+       * (Source: the zone rule of regime.c): halfway across the thin smooth
+       * strip (f = √1.02 times the smooth-pipe value) at Re 1e5 and 1e6; on
+       * the curves of ε/D 1e-3 and 1e-5 halfway (in log Re) between the two
+       * edges; and at ten times the Reynolds number of the fully rough edge
+       * for ε/D 1e-3 and 1e-2. */
+      struct { double re, f; RgRoughnessZone zone; } pts[6];
+      size_t n = 0;
+      static const double RE_SMOOTH[] = { 1e5, 1e6 };
+      for (size_t i = 0; i < G_N_ELEMENTS (RE_SMOOTH); i++)
         {
-          double re, f, x, y;
+          double rr, f_edge, f_s;
+          g_assert_cmpint (rg_roughness_zone_smooth_edge (RE_SMOOTH[i], &rr, &f_edge, NULL), ==, RG_OK);
+          g_assert_cmpint (rg_friction_colebrook (RE_SMOOTH[i], 0, &f_s, NULL), ==, RG_OK);
+          pts[n].re = RE_SMOOTH[i];
+          pts[n].f = sqrt (f_s * f_edge);
+          pts[n++].zone = RG_ZONE_SMOOTH;
+        }
+      static const double RR_MID[] = { 1e-3, 1e-5 };
+      for (size_t i = 0; i < G_N_ELEMENTS (RR_MID); i++)
+        {
+          double re_r, f_r;
+          g_assert_cmpint (rg_roughness_zone_rough_edge (RR_MID[i], &re_r, &f_r, NULL), ==, RG_OK);
+          pts[n].re = sqrt (smooth_edge_re (RR_MID[i]) * re_r);
+          g_assert_cmpint (rg_friction_colebrook (pts[n].re, RR_MID[i], &pts[n].f, NULL), ==, RG_OK);
+          pts[n++].zone = RG_ZONE_TRANSITIONALLY_ROUGH;
+        }
+      static const double RR_ROUGH[] = { 1e-3, 1e-2 };
+      for (size_t i = 0; i < G_N_ELEMENTS (RR_ROUGH); i++)
+        {
+          double re_r, f_r;
+          g_assert_cmpint (rg_roughness_zone_rough_edge (RR_ROUGH[i], &re_r, &f_r, NULL), ==, RG_OK);
+          pts[n].re = 10 * re_r;
+          g_assert_cmpint (rg_friction_colebrook (pts[n].re, RR_ROUGH[i], &pts[n].f, NULL), ==, RG_OK);
+          pts[n++].zone = RG_ZONE_FULLY_ROUGH;
+        }
+      for (size_t i = 0; i < n; i++)
+        {
+          double x, y, rr;
           int rgb[3];
-          g_assert_cmpint (rugosa_chart_zone_boundary (zones[i].eps_plus, zones[i].rr, &re, &f, NULL), ==, RG_OK);
-          const RgRoughnessZone zone = rg_roughness_zone_classify (rg_roughness_reynolds (re, zones[i].rr, f));
-          g_assert_cmpint (rg_regime_classify (&tr, re), ==, RG_REGIME_TURBULENT);
-          rugosa_chart_to_device (chart, re, f, &x, &y);
+          RgRoughnessZone zone;
+          g_assert_cmpint (rugosa_chart_rr_through (pts[i].re, pts[i].f, &rr, NULL), ==, RG_OK);
+          g_assert_cmpint (rg_roughness_zone_classify (pts[i].re, rr, &zone, NULL), ==, RG_OK);
+          g_assert_cmpint (zone, ==, pts[i].zone);
+          g_assert_cmpint (rg_regime_classify (&tr, pts[i].re), ==, RG_REGIME_TURBULENT);
+          rugosa_chart_to_device (chart, pts[i].re, pts[i].f, &x, &y);
           pixel (s, x, y, rgb);
           /* Common practice (no single source): a flat fill reproduces its
            * colour to within rounding (2 levels) */
@@ -379,29 +408,111 @@ test_pixel_bands (void)
       rugosa_chart_to_device (chart, 1e5, 0.008, &x, &y);
       pixel (s, x, y, rgb);
       g_assert_cmpint (colour_distance (rgb, &pal.plot), <=, 2);
+      cairo_surface_destroy (s);
+      rugosa_chart_free (chart);
+    }
+}
 
-      /* Either side of each computed boundary, on the curve of ε/D 1e-4 at
-       * ε⁺ = 0.7 and 1.4 times the threshold (clear of the dotted boundary
-       * line, which the zones meet at a shallow angle), the pixel shows the
-       * zone the core assigns there. */
-      const double thresholds[2] = { RG_EPS_PLUS_SMOOTH_MAX, RG_EPS_PLUS_FULLY_ROUGH_MIN };
-      const double factors[2] = { 0.7, 1.4 };
-      for (int t = 0; t < 2; t++)
-        for (int side = 0; side < 2; side++)
-          {
-            double re, f;
-            g_assert_cmpint (rugosa_chart_zone_boundary (thresholds[t] * factors[side], 1e-4,
-                                                         &re, &f, NULL), ==, RG_OK);
-            double f_core;
-            g_assert_cmpint (rg_friction_colebrook (re, 1e-4, &f_core, NULL), ==, RG_OK);
-            const RgRoughnessZone zone
-              = rg_roughness_zone_classify (rg_roughness_reynolds (re, 1e-4, f_core));
-            g_assert_cmpint (zone, ==, t == 0 ? (side == 0 ? RG_ZONE_SMOOTH : RG_ZONE_TRANSITIONALLY_ROUGH)
-                                              : (side == 0 ? RG_ZONE_TRANSITIONALLY_ROUGH : RG_ZONE_FULLY_ROUGH));
-            rugosa_chart_to_device (chart, re, f_core, &x, &y);
-            pixel (s, x, y, rgb);
-            g_assert_cmpint (colour_distance (rgb, expected_band (&pal, RG_REGIME_TURBULENT, zone)), <=, 2);
-          }
+/* The drawn zone edges follow the core's rule: a pixel a few pixels to
+ * either side of an edge point that the core computes shows the colour of
+ * the zone the core gives its centre.  On the default axes and on a
+ * narrow friction axis, where the thin smooth strip is wider on screen. */
+static void
+check_edge_side (RugosaChart *chart, cairo_surface_t *s, const RugosaChartPalette *pal,
+                 double x, double y, double nx, double ny, double d,
+                 RgRoughnessZone want, int *checked)
+{
+  const RugosaChartRect pl = rugosa_chart_plot_area (chart);
+  const double cx = floor (x + d * nx) + 0.5, cy = floor (y + d * ny) + 0.5;
+  if (cx < pl.x + 4 || cx > pl.x + pl.width - 4 || cy < pl.y + 4 || cy > pl.y + pl.height - 4)
+    return;
+  RugosaChartProbe pr;
+  rugosa_chart_probe (chart, cx, cy, &pr);
+  if (pr.regime != RG_REGIME_TURBULENT)
+    return;
+  double re, f, rr;
+  RgRoughnessZone zone;
+  rugosa_chart_from_device (chart, cx, cy, &re, &f);
+  /* Source: the core's zone rule at the pixel's centre */
+  g_assert_cmpint (rugosa_chart_rr_through (re, f, &rr, NULL), ==, RG_OK);
+  g_assert_cmpint (rg_roughness_zone_classify (re, rr, &zone, NULL), ==, RG_OK);
+  g_assert_cmpint (zone, ==, want);
+  int rgb[3];
+  pixel (s, cx, cy, rgb);
+  const int dist = colour_distance (rgb, expected_band (pal, RG_REGIME_TURBULENT, zone));
+  if (dist > 2)
+    g_test_fail_printf ("pixel (%.1f, %.1f), Re %.4g, f %.5g: colour off the %s band by %d levels",
+                        cx, cy, re, f, rg_roughness_zone_id (zone), dist);
+  (*checked)++;
+}
+
+static void
+test_pixel_zone_edges (void)
+{
+  static const double F_AXES[2][2] = { { 0.006, 0.1 }, { 0.01, 0.03 } };
+  for (size_t a = 0; a < G_N_ELEMENTS (F_AXES); a++)
+    {
+      RugosaChartSpec spec;
+      RugosaChartPalette pal;
+      rugosa_chart_spec_init (&spec);
+      spec.width = 1600;
+      spec.height = 1000;
+      spec.show = RUGOSA_CHART_SHOW_BANDS;
+      spec.f_min = F_AXES[a][0];
+      spec.f_max = F_AXES[a][1];
+      RugosaChart *chart = rugosa_chart_new ();
+      g_assert_cmpint (rugosa_chart_set_spec (chart, &spec, NULL), ==, RG_OK);
+      rugosa_chart_palette (spec.theme, &pal);
+      cairo_surface_t *s = render (chart);
+      int checked_smooth = 0, checked_rough = 0;
+
+      /* Smooth edge: the strip between it and the smooth-pipe curve is a
+       * few pixels high, so the inside probe goes 40 % of the way across;
+       * the outside one 3 px beyond the edge (clear of its dotted line). */
+      for (double lre = 4.0; lre <= 8.0; lre += 0.25)
+        {
+          const double re = pow (10.0, lre);
+          double rr, f, f_s, x, y, xs, ys, x1, y1, x2, y2, r1, r2, fa, fb;
+          g_assert_cmpint (rg_roughness_zone_smooth_edge (re, &rr, &f, NULL), ==, RG_OK);
+          g_assert_cmpint (rg_friction_colebrook (re, 0, &f_s, NULL), ==, RG_OK);
+          rugosa_chart_to_device (chart, re, f, &x, &y);
+          rugosa_chart_to_device (chart, re, f_s, &xs, &ys);
+          g_assert_cmpint (rg_roughness_zone_smooth_edge (re / 1.05, &r1, &fa, NULL), ==, RG_OK);
+          g_assert_cmpint (rg_roughness_zone_smooth_edge (re * 1.05, &r2, &fb, NULL), ==, RG_OK);
+          rugosa_chart_to_device (chart, re / 1.05, fa, &x1, &y1);
+          rugosa_chart_to_device (chart, re * 1.05, fb, &x2, &y2);
+          const double len = hypot (x2 - x1, y2 - y1);
+          /* normal pointing up, towards larger f */
+          const double nx = (y2 - y1) / len, ny = -(x2 - x1) / len;
+          const double across = (ys - y) * -ny; /* the strip's width along the normal */
+          check_edge_side (chart, s, &pal, x, y, nx, ny, -0.4 * across,
+                           RG_ZONE_SMOOTH, &checked_smooth);
+          check_edge_side (chart, s, &pal, x, y, nx, ny, 3.0,
+                           RG_ZONE_TRANSITIONALLY_ROUGH, &checked_smooth);
+        }
+      /* Fully rough edge, 3 px to either side. */
+      for (double lrr = -6.0; lrr <= -1.25 + 1e-9; lrr += 0.25)
+        {
+          const double rr = pow (10.0, lrr);
+          double re, f, x, y, x1, y1, x2, y2, ra, rb, fa, fb;
+          g_assert_cmpint (rg_roughness_zone_rough_edge (rr, &re, &f, NULL), ==, RG_OK);
+          rugosa_chart_to_device (chart, re, f, &x, &y);
+          g_assert_cmpint (rg_roughness_zone_rough_edge (rr * 1.05, &ra, &fa, NULL), ==, RG_OK);
+          g_assert_cmpint (rg_roughness_zone_rough_edge (rr / 1.05, &rb, &fb, NULL), ==, RG_OK);
+          rugosa_chart_to_device (chart, ra, fa, &x1, &y1);
+          rugosa_chart_to_device (chart, rb, fb, &x2, &y2);
+          const double len = hypot (x2 - x1, y2 - y1);
+          /* from larger to smaller ε/D the edge runs down to the right; the
+           * normal (dy, −dx) points up and right, into the fully rough zone */
+          const double nx = (y2 - y1) / len, ny = -(x2 - x1) / len;
+          check_edge_side (chart, s, &pal, x, y, nx, ny, 3.0, RG_ZONE_FULLY_ROUGH, &checked_rough);
+          check_edge_side (chart, s, &pal, x, y, nx, ny, -3.0,
+                           RG_ZONE_TRANSITIONALLY_ROUGH, &checked_rough);
+        }
+      g_test_message ("f axis %g–%g: %d probes at the smooth edge, %d at the rough edge",
+                      spec.f_min, spec.f_max, checked_smooth, checked_rough);
+      g_assert_cmpint (checked_smooth, >=, 10);
+      g_assert_cmpint (checked_rough, >=, 10);
       cairo_surface_destroy (s);
       rugosa_chart_free (chart);
     }
@@ -794,10 +905,10 @@ main (int argc, char **argv)
   g_test_add_func ("/chart/spec/defaults", test_spec_defaults);
   g_test_add_func ("/chart/transform/roundtrip", test_transform_roundtrip);
   g_test_add_func ("/chart/colebrook/rr-through", test_rr_through);
-  g_test_add_func ("/chart/zones/boundaries", test_zone_boundaries);
   g_test_add_func ("/chart/zones/probe", test_probe_zones);
   g_test_add_func ("/chart/pixels/laminar-line", test_pixel_laminar_line);
   g_test_add_func ("/chart/pixels/bands", test_pixel_bands);
+  g_test_add_func ("/chart/pixels/zone-edges", test_pixel_zone_edges);
   g_test_add_func ("/chart/pixels/scale-2", test_pixel_scale2);
   g_test_add_func ("/chart/overlay/labels-crowded", test_labels_crowded);
   g_test_add_func ("/chart/overlay/hit-test", test_hit_test);

@@ -1,39 +1,26 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Chart geometry: the description's defaults and checks, the layout of one
- * frame, the transforms between (Re, f) and device coordinates, and the
- * curves of the background.
+ * frame, the transforms between (Re, f) and device coordinates, and what
+ * lies under a point (regime, roughness zone, the ε/D of its curve).
  *
  * Transforms: both axes are logarithmic,
  *   x = plot.x + (log10 Re − log10 Re_min)/(log10 Re_max − log10 Re_min)·plot.w
  *   y = plot.y + plot.h − (log10 f − log10 f_min)/(log10 f_max − log10 f_min)·plot.h
  * and the inverse solves these for Re and f.
  *
- * Colebrook curves are sampled adaptively in device space: an interval of
- * log Re is halved while its midpoint lies more than CURVE_TOL pixels from
- * the chord, so flat parts of a curve cost few points.
- *
  * Inverse Colebrook (ε/D through a point (Re, f)): Colebrook (1939)
  *   1/√f = −2·log10( (ε/D)/3.7 + 2.51/(Re·√f) )
  * is linear in ε/D, so ε/D = 3.7·(10^(−1/(2√f)) − 2.51/(Re·√f)) exactly.
  *
- * Roughness-zone boundaries: on the locus ε⁺ = Re·(ε/D)·√(f/8) = c the
- * product Re·√f equals c·√8/(ε/D), so the Colebrook equation along it reads
- *   1/√f = −2·log10( (ε/D)·(1/3.7 + 2.51/(c·√8)) ),
- * explicit in ε/D; then Re = c·√8/((ε/D)·√f).  The boundary curves are that
- * locus parametrised by ε/D, with c = RG_EPS_PLUS_SMOOTH_MAX and
- * RG_EPS_PLUS_FULLY_ROUGH_MIN from the core. */
+ * Roughness zone under a point: the core's rule (rg_roughness_zone_classify)
+ * at the point's Reynolds number and the ε/D of the curve through it. */
 #include "chart-private.h"
 
 #include <glib/gi18n-lib.h>
 #include <math.h>
-#include <stdio.h>
-#include <stdlib.h>
 #include <string.h>
 
 #include "core/friction.h"
-
-/* Pixels a sampled curve may stray from the true one between samples. */
-static const double CURVE_TOL = 0.25;
 
 /* The standard family: smooth, then steps of 1–2–5 per decade over the
  * relative roughness met in practice (drawn tubing to corroded cast iron). */
@@ -187,30 +174,6 @@ rugosa_chart_rr_through (double re, double f, double *rr, RgError *err)
   return RG_OK;
 }
 
-RgStatus
-rugosa_chart_zone_boundary (double eps_plus, double rr, double *re, double *f,
-                            RgError *err)
-{
-  if (!(eps_plus > 0 && eps_plus < 1e6))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The roughness Reynolds number must lie between 0 and 1e6.");
-  if (!(rr > 0 && rr <= RG_FRICTION_RR_MAX))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The relative roughness must lie above 0 and at most %g.",
-                         RG_FRICTION_RR_MAX);
-  const double root8 = sqrt (8.0);
-  const double kk = 1.0 / 3.7 + 2.51 / (eps_plus * root8);
-  const double inv_s = -2.0 * log10 (rr * kk);
-  if (!(inv_s > 0))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "No point of that curve has a roughness Reynolds number of %g.",
-                         eps_plus);
-  const double s = 1.0 / inv_s;
-  *f = s * s;
-  *re = eps_plus * root8 / (rr * s);
-  return RG_OK;
-}
-
 void
 _rugosa_chart_classify (const RugosaChartSpec *spec, const ChartLayout *lay,
                         double x, double y, RugosaChartProbe *out)
@@ -224,165 +187,9 @@ _rugosa_chart_classify (const RugosaChartSpec *spec, const ChartLayout *lay,
   if (rugosa_chart_rr_through (out->re, out->f, &out->rr, NULL) == RG_OK)
     {
       out->has_rr = 1;
-      if (out->regime == RG_REGIME_TURBULENT)
-        out->zone = rg_roughness_zone_classify (
-            rg_roughness_reynolds (out->re, out->rr, out->f));
+      /* rr_through has checked re and rr against the core's domain */
+      if (out->regime == RG_REGIME_TURBULENT
+          && rg_roughness_zone_classify (out->re, out->rr, &out->zone, NULL) != RG_OK)
+        out->zone = RG_ZONE_NONE;
     }
-}
-
-void
-_rugosa_chart_format_rr (double rr, char *buf, size_t size)
-{
-  if (rr <= 0)
-    {
-      snprintf (buf, size, "%s", _("smooth"));
-      return;
-    }
-  /* Plain decimals with three significant digits at most, trailing zeros
-   * dropped: 0.00015, 0.002, 0.05. */
-  int decimals = (int) ceil (-log10 (rr) - 1e-9) + 2;
-  if (decimals < 1)
-    decimals = 1;
-  if (decimals > 12)
-    decimals = 12;
-  char tmp[48];
-  snprintf (tmp, sizeof tmp, "%.*f", decimals, rr);
-  size_t n = strlen (tmp);
-  while (n > 1 && tmp[n - 1] == '0')
-    tmp[--n] = '\0';
-  if (n > 0 && tmp[n - 1] == '.')
-    tmp[--n] = '\0';
-  snprintf (buf, size, "%s", tmp);
-}
-
-/* --- curves --- */
-
-typedef struct {
-  double *x, *y;
-  size_t n, cap;
-} PointBuf;
-
-static void
-push (PointBuf *b, double x, double y)
-{
-  if (b->n == b->cap)
-    {
-      b->cap = b->cap ? b->cap * 2 : 64;
-      b->x = g_renew (double, b->x, b->cap);
-      b->y = g_renew (double, b->y, b->cap);
-    }
-  b->x[b->n] = x;
-  b->y[b->n] = y;
-  b->n++;
-}
-
-static void
-eval_curve (const ChartLayout *lay, double rr, double lre, double *x, double *y)
-{
-  const double re = pow (10.0, lre);
-  double f = 0.02;
-  if (rg_friction_colebrook (re, rr, &f, NULL) != RG_OK)
-    f = 0.02; /* not reached: the Re range is clamped to the domain */
-  _rugosa_chart_xy (lay, re, f, x, y);
-}
-
-static void
-subdivide (const ChartLayout *lay, double rr, PointBuf *b, double u0,
-           double x0, double y0, double u1, double x1, double y1, int depth)
-{
-  const double um = 0.5 * (u0 + u1);
-  double xm, ym;
-  eval_curve (lay, rr, um, &xm, &ym);
-  const double dx = xm - 0.5 * (x0 + x1), dy = ym - 0.5 * (y0 + y1);
-  if (depth < 8 && dx * dx + dy * dy > CURVE_TOL * CURVE_TOL)
-    {
-      subdivide (lay, rr, b, u0, x0, y0, um, xm, ym, depth + 1);
-      subdivide (lay, rr, b, um, xm, ym, u1, x1, y1, depth + 1);
-    }
-  else
-    push (b, x1, y1);
-}
-
-static int
-cmp_double (const void *a, const void *b)
-{
-  const double x = *(const double *) a, y = *(const double *) b;
-  return (x > y) - (x < y);
-}
-
-void
-_rugosa_chart_free_curves (RugosaChart *chart)
-{
-  for (size_t i = 0; i < chart->n_curves; i++)
-    {
-      g_free (chart->curves[i].x);
-      g_free (chart->curves[i].y);
-    }
-  chart->n_curves = 0;
-  chart->geom_valid = 0;
-}
-
-void
-_rugosa_chart_build_curves (RugosaChart *chart)
-{
-  const RugosaChartSpec *spec = &chart->spec;
-  const ChartLayout *lay = &chart->lay;
-  /* (ε/D, is the user's) pairs, sorted by ε/D; a tie keeps one curve. */
-  double pairs[CHART_CURVES_MAX][2];
-  size_t n = 0;
-
-  _rugosa_chart_free_curves (chart);
-
-  for (size_t i = 0; i < spec->n_family; i++)
-    {
-      pairs[n][0] = spec->family[i];
-      pairs[n++][1] = 0;
-    }
-  for (size_t i = 0; i < chart->n_user_rr && n < CHART_CURVES_MAX; i++)
-    {
-      pairs[n][0] = chart->user_rr[i];
-      pairs[n++][1] = 1;
-    }
-  qsort (pairs, n, sizeof pairs[0], cmp_double);
-
-  const double u_lo = log10 (fmax (fmax (spec->re_min, spec->transition.re_turbulent_min),
-                                   RG_FRICTION_RE_MIN));
-  const double u_hi = log10 (spec->re_max);
-  for (size_t i = 0; i < n; i++)
-    {
-      const double rr = pairs[i][0];
-      if (chart->n_curves > 0)
-        {
-          ChartCurve *prev = &chart->curves[chart->n_curves - 1];
-          if (fabs (prev->rr - rr) <= 1e-9 * fmax (rr, 1e-12))
-            {
-              prev->is_user |= pairs[i][1] != 0;
-              continue;
-            }
-        }
-      ChartCurve *c = &chart->curves[chart->n_curves++];
-      PointBuf b = { 0 };
-      c->rr = rr;
-      c->is_user = pairs[i][1] != 0;
-      if (u_hi > u_lo)
-        {
-          /* Eight even steps first, so no feature hides between samples. */
-          enum { STEPS = 8 };
-          double x0, y0;
-          eval_curve (lay, rr, u_lo, &x0, &y0);
-          push (&b, x0, y0);
-          for (int s = 1; s <= STEPS; s++)
-            {
-              const double ua = u_lo + (u_hi - u_lo) * (s - 1) / STEPS;
-              const double ub = u_lo + (u_hi - u_lo) * s / STEPS;
-              double x1, y1;
-              eval_curve (lay, rr, ub, &x1, &y1);
-              subdivide (lay, rr, &b, ua, b.x[b.n - 1], b.y[b.n - 1], ub, x1, y1, 0);
-            }
-        }
-      c->n = b.n;
-      c->x = b.x;
-      c->y = b.y;
-    }
-  chart->geom_valid = 1;
 }

@@ -72,6 +72,13 @@ struct RugosaChart {
   GHashTable *layouts;             /* key text → PangoLayout */
 };
 
+/* Boxes the background's text already occupies (tick labels, curve and
+ * band names), so that later text keeps clear of them. */
+typedef struct {
+  RugosaChartRect boxes[256];
+  size_t n;
+} ChartTaken;
+
 /* chart-geometry.c */
 void _rugosa_chart_layout (const RugosaChartSpec *spec, ChartLayout *lay);
 void _rugosa_chart_xy (const ChartLayout *lay, double re, double f,
@@ -81,9 +88,6 @@ void _rugosa_chart_value (const ChartLayout *lay, double x, double y,
 void _rugosa_chart_classify (const RugosaChartSpec *spec,
                              const ChartLayout *lay, double x, double y,
                              RugosaChartProbe *out);
-void _rugosa_chart_build_curves (RugosaChart *chart);
-void _rugosa_chart_free_curves (RugosaChart *chart);
-void _rugosa_chart_format_rr (double rr, char *buf, size_t size);
 
 /* chart-text.c */
 typedef enum {
@@ -100,6 +104,48 @@ void _rugosa_chart_show (cairo_t *cr, PangoLayout *layout, double x, double y,
                          const RugosaChartRgba *ink,
                          const RugosaChartRgba *halo, double halo_width);
 void _rugosa_chart_set_rgba (cairo_t *cr, const RugosaChartRgba *c);
+RugosaChartRect _rugosa_chart_turned_box (double cx, double cy, double w,
+                                          double h, double angle, double pad);
+void _rugosa_chart_show_turned (cairo_t *cr, PangoLayout *layout, double cx,
+                                double cy, double angle,
+                                const RugosaChartRgba *ink,
+                                const RugosaChartRgba *halo, double halo_w);
+void _rugosa_chart_show_knockout (cairo_t *cr, PangoLayout *layout, double cx,
+                                  double cy, double angle,
+                                  const RugosaChartRgba *ink,
+                                  const RugosaChartRgba *under, double pad);
+
+/* chart-palette.c */
+const RugosaChartRgba *_rugosa_chart_band_colour (const RugosaChartPalette *p,
+                                                  const RugosaChartProbe *pr);
+cairo_pattern_t *_rugosa_chart_hatch_pattern (cairo_t *cr,
+                                              const RugosaChartPalette *p,
+                                              RugosaChartTheme theme, double k);
+
+/* chart-bands.c */
+void _rugosa_chart_draw_bands (RugosaChart *chart, cairo_t *cr,
+                               const RugosaChartPalette *p);
+void _rugosa_chart_draw_band_labels (RugosaChart *chart, cairo_t *cr,
+                                     const RugosaChartPalette *p,
+                                     ChartTaken *taken);
+
+/* chart-axes.c */
+void _rugosa_chart_draw_grid (RugosaChart *chart, cairo_t *cr,
+                              const RugosaChartPalette *p);
+void _rugosa_chart_draw_axes (RugosaChart *chart, cairo_t *cr,
+                              const RugosaChartPalette *p);
+
+/* chart-curves.c */
+void _rugosa_chart_build_curves (RugosaChart *chart);
+void _rugosa_chart_free_curves (RugosaChart *chart);
+void _rugosa_chart_draw_curves (RugosaChart *chart, cairo_t *cr,
+                                const RugosaChartPalette *p);
+void _rugosa_chart_draw_laminar (RugosaChart *chart, cairo_t *cr,
+                                 const RugosaChartPalette *p,
+                                 ChartTaken *taken);
+void _rugosa_chart_draw_curve_labels (RugosaChart *chart, cairo_t *cr,
+                                      const RugosaChartPalette *p,
+                                      ChartTaken *taken);
 
 /* chart-background.c */
 void _rugosa_chart_draw_background (RugosaChart *chart, cairo_t *cr);
@@ -122,4 +168,20 @@ _rugosa_chart_rect_inside (const RugosaChartRect *in, const RugosaChartRect *out
   return in->x >= out->x && in->y >= out->y
          && in->x + in->width <= out->x + out->width
          && in->y + in->height <= out->y + out->height;
+}
+
+static inline int
+_rugosa_chart_taken_free (const ChartTaken *t, const RugosaChartRect *r)
+{
+  for (size_t i = 0; i < t->n; i++)
+    if (_rugosa_chart_rects_overlap (&t->boxes[i], r))
+      return 0;
+  return 1;
+}
+
+static inline void
+_rugosa_chart_taken_add (ChartTaken *t, const RugosaChartRect *r)
+{
+  if (t->n < G_N_ELEMENTS (t->boxes))
+    t->boxes[t->n++] = *r;
 }

@@ -1,10 +1,12 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Chart text: one Pango context with fixed font options (no hinting, so
- * the same layout measures the same on screen, PNG, SVG and PDF) and a
- * cache of laid-out strings, kept across background rebuilds because
- * shaping text is the dearest part of a frame. */
+ * the same layout measures the same on screen, PNG, SVG and PDF), a cache
+ * of laid-out strings, kept across background rebuilds because shaping
+ * text is the dearest part of a frame, and the ways text is shown (plain,
+ * with a halo, turned, on a knockout box). */
 #include "chart-private.h"
 
+#include <math.h>
 #include <stdio.h>
 #include <string.h>
 
@@ -151,4 +153,50 @@ _rugosa_chart_show (cairo_t *cr, PangoLayout *layout, double x, double y,
   cairo_move_to (cr, x, y);
   _rugosa_chart_set_rgba (cr, ink);
   pango_cairo_show_layout (cr, layout);
+}
+
+/* Bounding box of a w × h box centred at (cx, cy) and turned by `angle`. */
+RugosaChartRect
+_rugosa_chart_turned_box (double cx, double cy, double w, double h,
+                          double angle, double pad)
+{
+  const double c = fabs (cos (angle)), s = fabs (sin (angle));
+  const double bw = w * c + h * s + 2 * pad, bh = w * s + h * c + 2 * pad;
+  RugosaChartRect r = { cx - bw / 2, cy - bh / 2, bw, bh };
+  return r;
+}
+
+void
+_rugosa_chart_show_turned (cairo_t *cr, PangoLayout *layout, double cx,
+                           double cy, double angle, const RugosaChartRgba *ink,
+                           const RugosaChartRgba *halo, double halo_w)
+{
+  double w, h;
+  _rugosa_chart_text_size (layout, &w, &h);
+  cairo_save (cr);
+  cairo_translate (cr, cx, cy);
+  cairo_rotate (cr, angle);
+  _rugosa_chart_show (cr, layout, -w / 2, -h / 2, ink, halo, halo_w);
+  cairo_restore (cr);
+}
+
+/* Text on a knockout box of the colour beneath it: it hides the lines under
+ * the text like a halo, at the cost of one rectangle instead of stroking
+ * every glyph outline. */
+void
+_rugosa_chart_show_knockout (cairo_t *cr, PangoLayout *layout, double cx,
+                             double cy, double angle,
+                             const RugosaChartRgba *ink,
+                             const RugosaChartRgba *under, double pad)
+{
+  double w, h;
+  _rugosa_chart_text_size (layout, &w, &h);
+  cairo_save (cr);
+  cairo_translate (cr, cx, cy);
+  cairo_rotate (cr, angle);
+  cairo_rectangle (cr, -w / 2 - pad, -h / 2 + 0.12 * h, w + 2 * pad, h * 0.8);
+  _rugosa_chart_set_rgba (cr, under);
+  cairo_fill (cr);
+  _rugosa_chart_show (cr, layout, -w / 2, -h / 2, ink, NULL, 0);
+  cairo_restore (cr);
 }

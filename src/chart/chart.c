@@ -346,12 +346,6 @@ rugosa_chart_hit_test (RugosaChart *chart, double x, double y, double radius)
   return -1;
 }
 
-size_t
-rugosa_chart_n_lines (const RugosaChart *chart)
-{
-  return chart->n_lines;
-}
-
 int
 rugosa_chart_get_label (RugosaChart *chart, size_t index,
                         RugosaChartLabelInfo *out)

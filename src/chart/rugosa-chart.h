@@ -150,10 +150,6 @@ void rugosa_chart_probe (RugosaChart *chart, double x, double y,
  * lies below the smooth-pipe curve or outside 1e3 ≤ re ≤ 1e10. */
 RgStatus rugosa_chart_rr_through (double re, double f, double *rr,
                                   RgError *err);
-/* The point of the Colebrook curve of relative roughness rr where the
- * roughness Reynolds number equals eps_plus (explicit, see chart-geometry.c). */
-RgStatus rugosa_chart_zone_boundary (double eps_plus, double rr, double *re,
-                                     double *f, RgError *err);
 
 /* Hit testing: the line whose marker is nearest to (x, y) within `radius`
  * device pixels, else the line whose label box holds (x, y), else -1. */
@@ -168,7 +164,6 @@ typedef struct {
   RugosaChartRect box;
   RugosaChartRect marker;  /* the marker's (or transitional bar's) box */
 } RugosaChartLabelInfo;
-size_t rugosa_chart_n_lines (const RugosaChart *chart);
 int rugosa_chart_get_label (RugosaChart *chart, size_t index,
                             RugosaChartLabelInfo *out);
 /* The legend box (empty when hidden). */

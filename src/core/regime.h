@@ -1,7 +1,8 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Flow regime (laminar / transitional / turbulent) and, in turbulent flow,
- * the roughness zone from the roughness Reynolds number
- * ε⁺ = Re·(ε/D)·√(f/8). */
+ * the roughness zone: how close Colebrook's friction factor lies to the
+ * smooth-pipe law and to the fully rough law (regime.c).  The roughness
+ * Reynolds number ε⁺ = Re·(ε/D)·√(f/8) is reported beside it. */
 #pragma once
 
 #include "friction.h"
@@ -26,9 +27,9 @@ typedef struct {
   double re_turbulent_min; /* default 4000 */
 } RgTransition;
 
-/* Roughness Reynolds number thresholds (sources in regime.c). */
-extern const double RG_EPS_PLUS_SMOOTH_MAX;      /* 5 */
-extern const double RG_EPS_PLUS_FULLY_ROUGH_MIN; /* 70 */
+/* Relative tolerance on the friction factor that bounds the hydraulically
+ * smooth and the fully rough zones: 0.02 (regime.c says why). */
+extern const double RG_ROUGHNESS_ZONE_TOLERANCE;
 
 void rg_transition_default (RgTransition *t);
 /* 500 ≤ re_laminar_max ≤ re_turbulent_min ≤ 1e5 (equal limits: no
@@ -41,9 +42,30 @@ RgStatus rg_transition_check (const RgTransition *t, RgError *err);
 RgRegime rg_regime_classify (const RgTransition *t, double re);
 /* ε⁺ = re·rr·√(f/8) */
 double rg_roughness_reynolds (double re, double rr, double f);
-/* Smooth for ε⁺ < 5, fully rough for ε⁺ > 70, transitionally rough between
- * (both limits included).  Never RG_ZONE_NONE. */
-RgRoughnessZone rg_roughness_zone_classify (double eps_plus);
+
+/* The roughness zone of a turbulent point, from Colebrook's friction factor
+ * f at (re, rr) whatever model gives the design value: hydraulically
+ * smooth when f ≤ (1 + RG_ROUGHNESS_ZONE_TOLERANCE) times the smooth-pipe
+ * value at re (Colebrook with ε = 0), else fully rough when f ≤ (1 + tol)
+ * times the fully rough value of rr (von Kármán–Nikuradse), else
+ * transitionally rough.  rr = 0 is smooth.  Domain: RG_FRICTION_RE_MIN ≤
+ * re ≤ RG_FRICTION_RE_MAX, 0 ≤ rr ≤ RG_FRICTION_RR_MAX (NaN fails);
+ * `*zone` is never RG_ZONE_NONE and is left untouched on failure. */
+RgStatus rg_roughness_zone_classify (double re, double rr,
+                                     RgRoughnessZone *zone, RgError *err);
+/* The edge of the hydraulically smooth zone at Reynolds number re (same
+ * range as above): the relative roughness `*rr` at which Colebrook's f is
+ * (1 + tol) times the smooth-pipe value, and that f.  At re a smaller ε/D
+ * is smooth, a larger one is not. */
+RgStatus rg_roughness_zone_smooth_edge (double re, double *rr, double *f,
+                                        RgError *err);
+/* The edge of the fully rough zone for relative roughness rr
+ * (0 < rr ≤ RG_FRICTION_RR_MAX): the Reynolds number `*re` at which
+ * Colebrook's f is (1 + tol) times the fully rough value, and that f.
+ * From *re on the pipe is fully rough.  *re exceeds RG_FRICTION_RE_MAX for
+ * ε/D below about 1e-8 (a point beyond the friction functions' domain). */
+RgStatus rg_roughness_zone_rough_edge (double rr, double *re, double *f,
+                                       RgError *err);
 
 /* "laminar", "transitional", "turbulent" */
 const char *rg_regime_id (RgRegime regime);
@@ -53,7 +75,8 @@ const char *rg_roughness_zone_id (RgRoughnessZone zone);
 /* Everything the friction side knows about one operating point. */
 typedef struct {
   RgRegime regime;
-  RgRoughnessZone zone;        /* RG_ZONE_NONE unless turbulent */
+  RgRoughnessZone zone;        /* RG_ZONE_NONE unless turbulent; by
+                                  rg_roughness_zone_classify */
   double f;                    /* design value: 64/Re when laminar, else the model */
   double f_laminar;            /* 64/Re; meaningful when has_laminar */
   int has_laminar;             /* 1 in the transitional range */
