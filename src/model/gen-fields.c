@@ -342,6 +342,8 @@ cmd_json (void)
             json_string (out, f->cli);
           else
             g_string_append (out, "null");
+          g_string_append (out, ", \"label\": ");
+          json_string (out, f->label);
           g_string_append (out, ", \"unit\": ");
           json_string (out, rugosa_field_si_unit (f));
           g_string_append_printf (out, ", \"to_si\": %s, \"min\": %s, \"max\": %s, \"default\": %s, \"fluid_kinds\": %u}",
