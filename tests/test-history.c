@@ -53,7 +53,7 @@ test_set_undo_redo (Fixture *f, gconstpointer data)
   rugosa_history_set (f->history, f->a, "name", "renamed", NULL);
   g_assert_cmpfloat (length_of (f->a), ==, 250.0);
   g_assert_true (rugosa_history_can_undo (f->history));
-  g_assert_cmpstr (rugosa_history_get_undo_label (f->history), ==, "Change name");
+  g_assert_cmpstr (rugosa_history_get_undo_label (f->history), ==, "Change “Name”");
 
   g_assert_true (rugosa_history_undo (f->history));
   g_assert_cmpstr (rugosa_line_get_name (f->a), ==, "a");
@@ -197,7 +197,7 @@ test_structural (Fixture *f, gconstpointer data)
   ASSERT_NAMES (f, "b,c,d");
   copy = rugosa_history_duplicate_line (f->history, 1);
   ASSERT_NAMES (f, "b,c,c (copy),d");
-  g_assert_cmpstr (rugosa_history_get_undo_label (f->history), ==, "Duplicate line");
+  g_assert_cmpstr (rugosa_history_get_undo_label (f->history), ==, "Duplicate a line option");
   /* Edit the copy, then a removed line's edit survives remove + undo. */
   rugosa_history_set (f->history, copy, "length", 42.0, NULL);
   rugosa_history_remove_line (f->history, 2);

@@ -21,6 +21,8 @@
 #include <string.h>
 
 #include "core/friction.h"
+/* for the limits of the chart window alone (macros; nothing is linked) */
+#include "model/rugosa-fields.h"
 
 /* The standard family: smooth, then steps of 1–2–5 per decade over the
  * relative roughness met in practice (drawn tubing to corroded cast iron). */
@@ -67,15 +69,18 @@ rugosa_chart_spec_check (const RugosaChartSpec *spec, RgError *err)
   if (!(spec->scale >= 1 && spec->scale <= 4))
     return rg_error_set (err, RG_ERR_DOMAIN,
                          "The chart scale factor must lie between 1 and 4.");
-  if (!(spec->re_min >= 1 && spec->re_max <= RG_FRICTION_RE_MAX
-        && spec->re_max >= spec->re_min * 10))
+  /* The window a project may hold (model/rugosa-fields.h) is what the
+   * chart draws. */
+  if (!(spec->re_min >= RUGOSA_CHART_RE_LOWEST && spec->re_max <= RUGOSA_CHART_RE_HIGHEST
+        && spec->re_max >= spec->re_min * RUGOSA_CHART_RE_SPAN_MIN))
     return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The Reynolds axis must span at least one decade between 1 and %g.",
-                         RG_FRICTION_RE_MAX);
-  if (!(spec->f_min >= 0.001 && spec->f_max <= 1
-        && spec->f_max >= spec->f_min * 1.5))
+                         "The Reynolds axis must span at least one decade between %g and %g.",
+                         RUGOSA_CHART_RE_LOWEST, RUGOSA_CHART_RE_HIGHEST);
+  if (!(spec->f_min >= RUGOSA_CHART_F_LOWEST && spec->f_max <= RUGOSA_CHART_F_HIGHEST
+        && spec->f_max >= spec->f_min * RUGOSA_CHART_F_SPAN_MIN))
     return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The friction axis must lie between 0.001 and 1 with its top at least 1.5 times its bottom.");
+                         "The friction axis must lie between %g and %g with its top at least %g times its bottom.",
+                         RUGOSA_CHART_F_LOWEST, RUGOSA_CHART_F_HIGHEST, RUGOSA_CHART_F_SPAN_MIN);
   if (rg_transition_check (&spec->transition, err) != RG_OK)
     return RG_ERR_DOMAIN;
   if (spec->n_family > RUGOSA_CHART_FAMILY_MAX)

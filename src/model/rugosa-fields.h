@@ -17,6 +17,7 @@
 #include <glib-object.h>
 
 #include "core/fluid.h"
+#include "core/friction.h"
 #include "core/status.h"
 #include "rugosa-enums.h"
 
@@ -130,8 +131,15 @@ const char *rugosa_field_label (const RugosaField *field);
  * each lie in 0 … this (far above any single fitting's published K). */
 #define RUGOSA_FITTING_K_MAX 1.0e4
 #define RUGOSA_FITTING_COUNT_MAX 1.0e4
-/* The chart's Reynolds axis spans at least this ratio (one decade), its
- * friction axis at least this one. */
+/* The chart window a project may ask for, which the chart engine draws
+ * (src/chart includes this header for these numbers alone): the Reynolds
+ * axis within the turbulent correlations' domain and spanning at least
+ * one decade, the friction axis within 0.001 … 1 with its top at least
+ * 1.5 times its bottom. */
+#define RUGOSA_CHART_RE_LOWEST 1.0
+#define RUGOSA_CHART_RE_HIGHEST RG_FRICTION_RE_MAX
+#define RUGOSA_CHART_F_LOWEST 0.001
+#define RUGOSA_CHART_F_HIGHEST 1.0
 #define RUGOSA_CHART_RE_SPAN_MIN 10.0
 #define RUGOSA_CHART_F_SPAN_MIN 1.5
 

@@ -3,8 +3,11 @@
 
 #include "config.h"
 
+#include <glib/gi18n-lib.h>
+
 #include <gobject/gvaluecollector.h>
 
+#include "rugosa-fields.h"
 #include "rugosa-history.h"
 
 typedef enum {
@@ -284,7 +287,13 @@ rugosa_history_set_value (RugosaHistory *self, gpointer object,
   pspec = g_object_class_find_property (G_OBJECT_GET_CLASS (object), property);
   g_return_if_fail (pspec != NULL && (pspec->flags & G_PARAM_WRITABLE));
 
-  c = command_new (CMD_SET, g_strdup_printf ("Change %s", property));
+  {
+    const RugosaField *row = rugosa_field_find (property);
+
+    /* TRANSLATORS: an undo step, e.g. "Change “Design flow”" */
+    c = command_new (CMD_SET, g_strdup_printf (_("Change “%s”"),
+                                               row != NULL ? rugosa_field_label (row) : property));
+  }
   c->target = g_object_ref (object);
   c->pspec = pspec;
   g_value_init (&c->old_value, pspec->value_type);
@@ -321,7 +330,7 @@ rugosa_history_set (RugosaHistory *self, gpointer object,
   /* Several properties make one step: collect them in a group, and unwrap
    * a group of one so that it can still merge with the previous step. */
   broken = self->merge_broken;
-  rugosa_history_begin_group (self, "Change properties");
+  rugosa_history_begin_group (self, _("Change several values"));
   va_start (ap, first_property);
   for (const char *name = first_property; name != NULL;
        name = va_arg (ap, const char *))
@@ -381,7 +390,7 @@ rugosa_history_add_line (RugosaHistory *self, guint position, RugosaLine *line)
   g_return_if_fail (position <= rugosa_project_get_n_lines (self->project));
   g_return_if_fail (rugosa_project_find_line (self->project, line) < 0);
 
-  insert_line (self, position, line, "Add line");
+  insert_line (self, position, line, _("Add a line option"));
 }
 
 void
@@ -392,7 +401,7 @@ rugosa_history_remove_line (RugosaHistory *self, guint position)
   g_return_if_fail (RUGOSA_IS_HISTORY (self));
   g_return_if_fail (position < rugosa_project_get_n_lines (self->project));
 
-  c = command_new (CMD_REMOVE, g_strdup ("Remove line"));
+  c = command_new (CMD_REMOVE, g_strdup (_("Remove a line option")));
   c->line = g_object_ref (rugosa_project_get_line (self->project, position));
   c->position = position;
   command_apply (self, c, TRUE);
@@ -412,7 +421,7 @@ rugosa_history_move_line (RugosaHistory *self, guint from, guint to)
   if (from == to)
     return;
 
-  c = command_new (CMD_MOVE, g_strdup ("Move line"));
+  c = command_new (CMD_MOVE, g_strdup (_("Move a line option")));
   c->position = from;
   c->to = to;
   command_apply (self, c, TRUE);
@@ -430,9 +439,10 @@ rugosa_history_duplicate_line (RugosaHistory *self, guint position)
   g_return_val_if_fail (position < rugosa_project_get_n_lines (self->project), NULL);
 
   copy = rugosa_line_duplicate (rugosa_project_get_line (self->project, position));
-  name = g_strdup_printf ("%s (copy)", rugosa_line_get_name (copy));
+  /* TRANSLATORS: the name of a duplicated line option */
+  name = g_strdup_printf (_("%s (copy)"), rugosa_line_get_name (copy));
   rugosa_line_set_name (copy, name);
-  insert_line (self, position + 1, copy, "Duplicate line");
+  insert_line (self, position + 1, copy, _("Duplicate a line option"));
   return copy;
 }
 
@@ -442,7 +452,7 @@ rugosa_history_begin_group (RugosaHistory *self, const char *label)
   Command *g;
 
   g_return_if_fail (RUGOSA_IS_HISTORY (self));
-  g = command_new (CMD_GROUP, g_strdup (label ? label : "Edit"));
+  g = command_new (CMD_GROUP, g_strdup (label ? label : _("Edit")));
   g->children = g_ptr_array_new_with_free_func (command_free);
   g_ptr_array_add (self->open_groups, g);
   self->merge_broken = TRUE;
