@@ -426,6 +426,13 @@ _rugosa_window_close_response (AdwMessageDialog *dialog,
                                const char       *response,
                                RugosaWindow     *self)
 {
+  /* The dialog is closed already, but libadwaita drops its last
+   * reference only after this handler returns, and GTK 4.8 keeps the
+   * transient parent as a plain pointer that the dialog's dispose then
+   * uses.  Discard and Save may destroy this window right here, so the
+   * dialog lets go of it first. */
+  gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
+
   if (g_str_equal (response, "discard"))
     {
       _rugosa_window_remove_autosave (self);

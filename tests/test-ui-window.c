@@ -1,0 +1,255 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+/* The window as a user drives it, through its buttons, lists and dialogs:
+ * quitting through the close guard.
+ *
+ * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
+ * display the program reports a skip.  g_test_init() makes every GLib
+ * warning and critical fatal, so a test fails on any such message, also
+ * one printed while a window is torn down. */
+#define G_LOG_DOMAIN "test-ui-window"
+
+#include "config.h"
+
+#include <adwaita.h>
+#include <glib/gstdio.h>
+#include <string.h>
+
+#include "rugosa-application.h"
+#include "rugosa-line-panel.h"
+#include "rugosa-quantity-entry.h"
+#include "rugosa-window.h"
+#include "ui-harness.h"
+
+static RugosaApplication *app;
+static char *tmpdir;
+
+static RugosaLinePanel *
+select_line (RugosaWindow *win,
+             guint         position)
+{
+  gtk_single_selection_set_selected (rugosa_window_get_selection (win), position);
+  ui_harness_drain ();
+  return RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win));
+}
+
+static void
+type_into (RugosaWindow *win,
+           const char   *property,
+           const char   *text)
+{
+  RugosaLinePanel *panel = RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win));
+
+  g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, property), text));
+  ui_harness_drain ();
+}
+
+/* A copy of the demo project in its own file, opened in a new window. */
+static RugosaWindow *
+open_demo_copy (const char *name)
+{
+  g_autofree char *demo = ui_harness_demo_path ();
+  g_autofree char *path = g_build_filename (tmpdir, name, NULL);
+  g_autoptr (GFile) from = g_file_new_for_path (demo);
+  g_autoptr (GFile) to = g_file_new_for_path (path);
+  g_autoptr (GError) error = NULL;
+  RugosaWindow *win;
+
+  g_assert_true (g_file_copy (from, to, G_FILE_COPY_OVERWRITE, NULL, NULL, NULL, &error));
+  g_assert_no_error (error);
+  win = rugosa_window_new (app);
+  gtk_window_present (GTK_WINDOW (win));
+  g_assert_true (rugosa_window_load_file_sync (win, to, &error));
+  g_assert_no_error (error);
+  ui_harness_drain ();
+  return win;
+}
+
+static gboolean
+window_gone (gpointer data)
+{
+  return *(gpointer *) data == NULL;
+}
+
+static GtkFileChooser *
+wait_for_chooser (RugosaWindow *win)
+{
+  GtkWindow *chooser = NULL;
+
+  for (int i = 0; i < 200 && chooser == NULL; i++)
+    {
+      ui_harness_wait (10);
+      chooser = ui_harness_find_dialog (GTK_WINDOW (win), GTK_TYPE_FILE_CHOOSER_DIALOG);
+    }
+  g_assert_nonnull (chooser);
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (chooser));
+  return GTK_FILE_CHOOSER (chooser);
+}
+
+/* The drop-down beside the label `label` under `root`. */
+static GtkDropDown *
+find_labelled_dropdown (GtkWidget  *root,
+                        const char *label)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkDropDown *found;
+
+      if (GTK_IS_LABEL (c) && g_strcmp0 (gtk_label_get_text (GTK_LABEL (c)), label) == 0
+          && GTK_IS_DROP_DOWN (gtk_widget_get_next_sibling (c)))
+        return GTK_DROP_DOWN (gtk_widget_get_next_sibling (c));
+      if ((found = find_labelled_dropdown (c, label)) != NULL)
+        return found;
+    }
+  return NULL;
+}
+
+/* Picks the entry shown as `shown` in the drop-down labelled `label`. */
+static void
+pick_shown (GtkWidget  *root,
+            const char *label,
+            const char *shown)
+{
+  GtkDropDown *dropdown = find_labelled_dropdown (root, label);
+  GListModel *model;
+
+  g_assert_nonnull (dropdown);
+  model = gtk_drop_down_get_model (dropdown);
+  for (guint i = 0; i < g_list_model_get_n_items (model); i++)
+    {
+      g_autoptr (GObject) item = g_list_model_get_item (model, i);
+
+      if (g_strcmp0 (gtk_string_object_get_string (GTK_STRING_OBJECT (item)), shown) == 0)
+        {
+          gtk_drop_down_set_selected (dropdown, i);
+          return;
+        }
+    }
+  g_test_fail_printf ("The drop-down %s offers no %s.", label, shown);
+}
+
+/* In the open chooser: go to `folder`, pick `shown` in the drop-down
+ * labelled `label` (unless NULL), type `name`, press the accept button. */
+static void
+fill_chooser (GtkFileChooser *chooser,
+              const char     *folder,
+              const char     *label,
+              const char     *shown,
+              const char     *name)
+{
+  g_autoptr (GFile) dir = g_file_new_for_path (folder);
+  g_autoptr (GError) error = NULL;
+
+  g_assert_true (gtk_file_chooser_set_current_folder (chooser, dir, &error));
+  g_assert_no_error (error);
+  if (label != NULL)
+    pick_shown (GTK_WIDGET (chooser), label, shown);
+  gtk_file_chooser_set_current_name (chooser, name);
+  ui_harness_drain ();
+  ui_harness_click (gtk_dialog_get_widget_for_response (GTK_DIALOG (chooser), GTK_RESPONSE_ACCEPT));
+}
+
+/* ---- quitting through the close guard ---- */
+
+static void
+test_quit_discard (void)
+{
+  RugosaWindow *win = open_demo_copy ("quit-discard.rugosa");
+  g_autofree char *path = g_file_get_path (rugosa_window_get_file (win));
+  g_autofree char *before = NULL, *after = NULL;
+  AdwMessageDialog *dialog;
+
+  g_assert_true (g_file_get_contents (path, &before, NULL, NULL));
+  select_line (win, 0);
+  type_into (win, "length", "888 m");
+  g_object_add_weak_pointer (G_OBJECT (win), (gpointer *) &win);
+
+  g_action_group_activate_action (G_ACTION_GROUP (app), "quit", NULL);   /* Ctrl+Q */
+  ui_harness_drain ();
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (win));
+  g_assert_nonnull (dialog);
+  ui_harness_click_response (dialog, "discard");
+  g_assert_true (ui_harness_wait_until (window_gone, &win, 2000));
+  g_assert_true (g_file_get_contents (path, &after, NULL, NULL));
+  g_assert_cmpstr (after, ==, before);
+}
+
+static void
+test_quit_save (void)
+{
+  RugosaWindow *win = open_demo_copy ("quit-save.rugosa");
+  g_autoptr (GFile) file = g_object_ref (rugosa_window_get_file (win));
+  g_autofree char *path = g_file_get_path (file);
+  g_autoptr (RugosaProject) saved = rugosa_project_new ();
+  g_autoptr (GError) error = NULL;
+  AdwMessageDialog *dialog;
+
+  select_line (win, 0);
+  type_into (win, "length", "888 m");
+  g_object_add_weak_pointer (G_OBJECT (win), (gpointer *) &win);
+
+  g_action_group_activate_action (G_ACTION_GROUP (app), "quit", NULL);
+  ui_harness_drain ();
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (win));
+  g_assert_nonnull (dialog);
+  ui_harness_click_response (dialog, "save");
+  g_assert_true (ui_harness_wait_until (window_gone, &win, 2000));
+  g_assert_true (rugosa_project_load (saved, path, &error));
+  g_assert_no_error (error);
+  /* Source: the length typed above, 888 m. */
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (saved, 0), "length"), ==, 888.0);
+}
+
+/* An unnamed project: Save on quitting asks for a name first. */
+static void
+test_quit_save_as (void)
+{
+  RugosaWindow *win = rugosa_window_new (app);
+  g_autofree char *path = g_build_filename (tmpdir, "quit-named.rugosa", NULL);
+  g_autoptr (RugosaProject) saved = rugosa_project_new ();
+  g_autoptr (GError) error = NULL;
+  AdwMessageDialog *dialog;
+
+  gtk_window_present (GTK_WINDOW (win));
+  ui_harness_drain ();
+  select_line (win, 0);
+  type_into (win, "length", "777 m");
+  g_object_add_weak_pointer (G_OBJECT (win), (gpointer *) &win);
+
+  g_action_group_activate_action (G_ACTION_GROUP (app), "quit", NULL);
+  ui_harness_drain ();
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (win));
+  g_assert_nonnull (dialog);
+  ui_harness_click_response (dialog, "save");
+  fill_chooser (wait_for_chooser (win), tmpdir, NULL, NULL, "quit-named");
+  g_assert_true (ui_harness_wait_until (window_gone, &win, 5000));
+  g_assert_true (rugosa_project_load (saved, path, &error));
+  g_assert_no_error (error);
+  /* Source: the length typed above, 777 m. */
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (saved, 0), "length"), ==, 777.0);
+}
+
+int
+main (int argc, char *argv[])
+{
+  int status;
+
+  tmpdir = ui_harness_private_dirs ("rugosa-test-ui-window");
+  g_test_init (&argc, &argv, NULL);
+  if (!ui_harness_init_gtk ())
+    {
+      g_print ("1..0 # SKIP no display\n");
+      ui_harness_remove_tree (tmpdir);
+      return 0;
+    }
+  app = ui_harness_app_new ("org.rugosa.Rugosa.TestWindow");
+
+  g_test_add_func ("/ui/files/quit-discard", test_quit_discard);
+  g_test_add_func ("/ui/files/quit-save", test_quit_save);
+  g_test_add_func ("/ui/files/quit-save-as", test_quit_save_as);
+
+  status = g_test_run ();
+  g_object_unref (app);
+  ui_harness_remove_tree (tmpdir);
+  g_free (tmpdir);
+  return status;
+}
