@@ -1,6 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The window as a user drives it, through its buttons, lists and dialogs:
- * quitting through the close guard.
+ * the enabled state of undo and redo, and quitting through the close
+ * guard.
  *
  * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
  * display the program reports a skip.  g_test_init() makes every GLib
@@ -41,6 +42,18 @@ type_into (RugosaWindow *win,
 
   g_assert_true (rugosa_quantity_entry_commit_text (rugosa_line_panel_get_entry (panel, property), text));
   ui_harness_drain ();
+}
+
+static GtkWidget *
+action_button (RugosaWindow *win,
+               const char   *action,
+               GVariant     *target)
+{
+  g_autoptr (GVariant) t = target ? g_variant_ref_sink (target) : NULL;
+  GtkWidget *button = ui_harness_find_action_widget (GTK_WIDGET (win), action, t);
+
+  g_assert_nonnull (button);
+  return button;
 }
 
 /* A copy of the demo project in its own file, opened in a new window. */
@@ -148,6 +161,57 @@ fill_chooser (GtkFileChooser *chooser,
   ui_harness_click (gtk_dialog_get_widget_for_response (GTK_DIALOG (chooser), GTK_RESPONSE_ACCEPT));
 }
 
+/* ---- enabled state of the actions ---- */
+
+static void
+test_undo_after_duplicate (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  RugosaProject *project = rugosa_window_get_project (win);
+  GtkWidget *undo = action_button (win, "win.undo", NULL);
+  GtkWidget *redo = action_button (win, "win.redo", NULL);
+  GtkWidget *duplicate = action_button (win, "win.line-duplicate", NULL);
+  guint n = rugosa_project_get_n_lines (project);
+  double length;
+
+  select_line (win, 0);
+  length = rugosa_line_get_double (rugosa_project_get_line (project, 0), "length");
+  /* A project just opened has nothing to undo. */
+  g_assert_false (gtk_widget_is_sensitive (undo));
+  g_assert_false (gtk_widget_is_sensitive (redo));
+
+  /* Duplicate as the first step, undone with the button. */
+  ui_harness_click (duplicate);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, n + 1);
+  g_assert_true (gtk_widget_is_sensitive (undo));
+  ui_harness_click (undo);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, n);
+  g_assert_false (gtk_widget_is_sensitive (undo));
+  g_assert_true (gtk_widget_is_sensitive (redo));
+
+  /* Duplicate after an edit: both steps stay undoable, one at a time. */
+  select_line (win, 0);
+  type_into (win, "length", length > 500 ? "432 m" : "765 m");
+  g_assert_true (gtk_widget_is_sensitive (undo));
+  ui_harness_click (duplicate);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, n + 1);
+  g_assert_true (gtk_widget_is_sensitive (undo));
+  g_assert_false (gtk_widget_is_sensitive (redo));
+  ui_harness_click (undo);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, n);
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (project, 0), "length"), !=, length);
+  g_assert_true (gtk_widget_is_sensitive (undo));
+  ui_harness_click (undo);
+  ui_harness_drain ();
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (project, 0), "length"), ==, length);
+  g_assert_false (gtk_widget_is_sensitive (undo));
+  ui_harness_close_window (win);
+}
+
 /* ---- quitting through the close guard ---- */
 
 static void
@@ -243,6 +307,7 @@ main (int argc, char *argv[])
     }
   app = ui_harness_app_new ("org.rugosa.Rugosa.TestWindow");
 
+  g_test_add_func ("/ui/actions/undo-after-duplicate", test_undo_after_duplicate);
   g_test_add_func ("/ui/files/quit-discard", test_quit_discard);
   g_test_add_func ("/ui/files/quit-save", test_quit_save);
   g_test_add_func ("/ui/files/quit-save-as", test_quit_save_as);

@@ -138,8 +138,8 @@ _rugosa_window_update_title (RugosaWindow *self)
   gtk_window_set_title (GTK_WINDOW (self), title);
 }
 
-void
-_rugosa_window_update_actions (RugosaWindow *self)
+static void
+_rugosa_window_apply_actions (RugosaWindow *self)
 {
   guint n = rugosa_project_get_n_lines (self->project);
   guint pos = gtk_single_selection_get_selected (self->selection);
@@ -151,6 +151,31 @@ _rugosa_window_update_actions (RugosaWindow *self)
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-delete", has);
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-rename", has);
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move", has && n > 1);
+}
+
+static gboolean
+_rugosa_window_actions_due (gpointer user_data)
+{
+  RugosaWindow *self = RUGOSA_WINDOW (user_data);
+
+  self->actions_source = 0;
+  _rugosa_window_apply_actions (self);
+  return G_SOURCE_REMOVE;
+}
+
+/* The one place that sets the actions' enabled state.  Every undo step
+ * changes the document, so the project's "changed" (through
+ * _rugosa_window_refresh_all) hears each history change, and the
+ * history's notifications hear undo, redo and clearing.  The state is
+ * read once the change in progress is complete: inside a group of edits
+ * (Duplicate) the history reports nothing to undo, and closing the group
+ * may notify nothing.  G_PRIORITY_HIGH runs the update before the next
+ * input event is handled. */
+void
+_rugosa_window_update_actions (RugosaWindow *self)
+{
+  if (self->actions_source == 0)
+    self->actions_source = g_idle_add_full (G_PRIORITY_HIGH, _rugosa_window_actions_due, self, NULL);
 }
 
 /* --- the line list --------------------------------------------------- */
@@ -799,6 +824,7 @@ _rugosa_window_setup (RugosaWindow *self)
   _rugosa_window_project_replaced (self);
   self->modified = FALSE;
   _rugosa_window_update_title (self);
+  _rugosa_window_apply_actions (self);
 }
 
 static void
@@ -807,6 +833,7 @@ rugosa_window_dispose (GObject *object)
   RugosaWindow *self = RUGOSA_WINDOW (object);
 
   _rugosa_window_files_dispose (self);
+  g_clear_handle_id (&self->actions_source, g_source_remove);
   if (self->canvas)
     rugosa_canvas_set_selection (self->canvas, NULL);
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_WINDOW);
