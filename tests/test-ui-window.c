@@ -1,7 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The window as a user drives it, through its buttons, lists and dialogs:
- * the enabled state of undo and redo, and quitting through the close
- * guard.
+ * the enabled state of undo, redo and the line buttons, and quitting
+ * through the close guard.
  *
  * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
  * display the program reports a skip.  g_test_init() makes every GLib
@@ -212,6 +212,70 @@ test_undo_after_duplicate (void)
   ui_harness_close_window (win);
 }
 
+/* The move buttons follow the selected line's place in the list: a line
+ * moves neither above the first nor below the last. */
+static void
+test_move_buttons_follow_lines (void)
+{
+  RugosaWindow *win = rugosa_window_new (app);
+  RugosaProject *project = rugosa_window_get_project (win);
+  GtkSingleSelection *selection = rugosa_window_get_selection (win);
+  GtkWidget *up, *down, *add, *undo, *redo;
+  RugosaLine *first;
+
+  gtk_window_present (GTK_WINDOW (win));
+  ui_harness_drain ();
+  up = action_button (win, "win.line-move-up", NULL);
+  down = action_button (win, "win.line-move-down", NULL);
+  add = action_button (win, "win.line-add", NULL);
+  undo = action_button (win, "win.undo", NULL);
+  redo = action_button (win, "win.redo", NULL);
+
+  /* A new project has one line: nothing to move it past. */
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, 1);
+  g_assert_false (gtk_widget_is_sensitive (up));
+  g_assert_false (gtk_widget_is_sensitive (down));
+
+  /* A second line, selected at the bottom: it can only go up. */
+  ui_harness_click (add);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, 2);
+  g_assert_cmpuint (gtk_single_selection_get_selected (selection), ==, 1);
+  g_assert_true (gtk_widget_is_sensitive (up));
+  g_assert_false (gtk_widget_is_sensitive (down));
+
+  /* The first line, at the top: it can only go down; moved down, it can
+   * only go up again. */
+  select_line (win, 0);
+  first = rugosa_project_get_line (project, 0);
+  g_assert_false (gtk_widget_is_sensitive (up));
+  g_assert_true (gtk_widget_is_sensitive (down));
+  ui_harness_click (down);
+  ui_harness_drain ();
+  g_assert_true (rugosa_project_get_line (project, 1) == first);
+  g_assert_cmpuint (gtk_single_selection_get_selected (selection), ==, 1);
+  g_assert_true (gtk_widget_is_sensitive (up));
+  g_assert_false (gtk_widget_is_sensitive (down));
+
+  /* The move and the added line taken back, the selection left on the
+   * line that stays: one line, nothing to move. */
+  ui_harness_click (undo);
+  ui_harness_drain ();
+  select_line (win, 0);
+  ui_harness_click (undo);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, 1);
+  g_assert_false (gtk_widget_is_sensitive (up));
+  g_assert_false (gtk_widget_is_sensitive (down));
+  ui_harness_click (redo);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, 2);
+  g_assert_cmpuint (gtk_single_selection_get_selected (selection), ==, 1);
+  g_assert_true (gtk_widget_is_sensitive (up));
+  g_assert_false (gtk_widget_is_sensitive (down));
+  ui_harness_close_window (win);
+}
+
 /* ---- quitting through the close guard ---- */
 
 static void
@@ -308,6 +372,7 @@ main (int argc, char *argv[])
   app = ui_harness_app_new ("org.rugosa.Rugosa.TestWindow");
 
   g_test_add_func ("/ui/actions/undo-after-duplicate", test_undo_after_duplicate);
+  g_test_add_func ("/ui/actions/move-follows-lines", test_move_buttons_follow_lines);
   g_test_add_func ("/ui/files/quit-discard", test_quit_discard);
   g_test_add_func ("/ui/files/quit-save", test_quit_save);
   g_test_add_func ("/ui/files/quit-save-as", test_quit_save_as);

@@ -150,7 +150,9 @@ _rugosa_window_apply_actions (RugosaWindow *self)
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-duplicate", has);
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-delete", has);
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-rename", has);
-  gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move", has && n > 1);
+  /* Each direction on its own: at the top of the list there is no "up". */
+  gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-up", has && pos > 0);
+  gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-down", has && pos + 1 < n);
 }
 
 static gboolean
@@ -649,7 +651,7 @@ _rugosa_window_line_move (GtkWidget  *widget,
 {
   RugosaWindow *self = RUGOSA_WINDOW (widget);
   guint pos = gtk_single_selection_get_selected (self->selection);
-  int step = g_variant_get_int32 (param);
+  int step = g_str_equal (action_name, "win.line-move-up") ? -1 : 1;
   guint n = rugosa_project_get_n_lines (self->project);
   int to;
 
@@ -882,13 +884,14 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   gtk_widget_class_install_action (widget_class, "win.line-add", NULL, _rugosa_window_line_add);
   gtk_widget_class_install_action (widget_class, "win.line-duplicate", NULL, _rugosa_window_line_duplicate);
   gtk_widget_class_install_action (widget_class, "win.line-delete", NULL, _rugosa_window_line_delete);
-  gtk_widget_class_install_action (widget_class, "win.line-move", "i", _rugosa_window_line_move);
+  gtk_widget_class_install_action (widget_class, "win.line-move-up", NULL, _rugosa_window_line_move);
+  gtk_widget_class_install_action (widget_class, "win.line-move-down", NULL, _rugosa_window_line_move);
   gtk_widget_class_install_action (widget_class, "win.line-rename", NULL, _rugosa_window_line_rename);
   gtk_widget_class_install_action (widget_class, "win.age-step", "i", _rugosa_window_age_step);
 
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_F2, 0, "win.line-rename", NULL);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Up, GDK_ALT_MASK, "win.line-move", "i", -1);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Down, GDK_ALT_MASK, "win.line-move", "i", 1);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Up, GDK_ALT_MASK, "win.line-move-up", NULL);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Down, GDK_ALT_MASK, "win.line-move-down", NULL);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Delete, GDK_CONTROL_MASK, "win.line-delete", NULL);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_bracketright, GDK_CONTROL_MASK, "win.age-step", "i", 1);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_bracketleft, GDK_CONTROL_MASK, "win.age-step", "i", -1);
