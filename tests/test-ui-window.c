@@ -1,7 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The window as a user drives it, through its buttons, lists and dialogs:
- * the enabled state of undo, redo and the line buttons, and quitting
- * through the close guard.
+ * the enabled state of undo, redo and the line buttons, the chart and
+ * CSV export dialogs, and quitting through the close guard.
  *
  * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
  * display the program reports a skip.  g_test_init() makes every GLib
@@ -161,6 +161,38 @@ fill_chooser (GtkFileChooser *chooser,
   ui_harness_click (gtk_dialog_get_widget_for_response (GTK_DIALOG (chooser), GTK_RESPONSE_ACCEPT));
 }
 
+static gboolean
+message_shown (gpointer data)
+{
+  return ui_harness_find_message_dialog (data) != NULL;
+}
+
+static AdwMessageDialog *
+wait_for_message (RugosaWindow *win)
+{
+  g_assert_true (ui_harness_wait_until (message_shown, win, 5000));
+  return ui_harness_find_message_dialog (GTK_WINDOW (win));
+}
+
+static gboolean
+file_exists (gpointer data)
+{
+  return g_file_test (data, G_FILE_TEST_IS_REGULAR);
+}
+
+static gboolean
+starts_with (const char *path,
+             const char *magic,
+             gsize       n)
+{
+  g_autofree char *data = NULL;
+  gsize length = 0;
+
+  if (!g_file_get_contents (path, &data, &length, NULL))
+    return FALSE;
+  return length > n && memcmp (data, magic, n) == 0;
+}
+
 /* ---- enabled state of the actions ---- */
 
 static void
@@ -276,6 +308,110 @@ test_move_buttons_follow_lines (void)
   ui_harness_close_window (win);
 }
 
+/* ---- file dialogs ---- */
+
+/* Sources of the magic numbers:
+ * PDF: ISO 32000-1:2008 §7.5.2, a PDF file begins "%PDF-".
+ * PNG: ISO/IEC 15948:2004 §5.2, the signature 89 50 4E 47 0D 0A 1A 0A.
+ * SVG: W3C XML 1.0 §2.8, the XML declaration Cairo's SVG surface writes
+ * first ("<?xml"). */
+static const struct {
+  const char *shown, *typed, *written, *magic;
+  gsize n;
+} export_cases[] = {
+  { "PDF", "chart-a.png", "chart-a.pdf", "%PDF-", 5 },              /* Source: ISO 32000-1 §7.5.2 */
+  { "PNG", "chart-b.svg", "chart-b.png", "\x89PNG\r\n\x1a\n", 8 }, /* Source: ISO/IEC 15948 §5.2 */
+  { "SVG", "chart-c", "chart-c.svg", "<?xml", 5 },                  /* Source: XML 1.0 §2.8 */
+  { "PDF", "chart-d.PDF", "chart-d.PDF", "%PDF-", 5 },              /* Source: ISO 32000-1 §7.5.2 */
+  { "SVG", "chart.e.png", "chart.e.svg", "<?xml", 5 },              /* Source: XML 1.0 §2.8 */
+};
+
+/* The Format chosen in the dialog is the format written, and the file's
+ * extension says so whatever extension was typed. */
+static void
+test_export_format_wins (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  g_autofree char *folder = g_build_filename (tmpdir, "export", NULL);
+
+  g_assert_cmpint (g_mkdir_with_parents (folder, 0700), ==, 0);
+  for (gsize i = 0; i < G_N_ELEMENTS (export_cases); i++)
+    {
+      g_autofree char *written = g_build_filename (folder, export_cases[i].written, NULL);
+      g_autofree char *typed = g_build_filename (folder, export_cases[i].typed, NULL);
+      GtkFileChooser *chooser;
+
+      g_test_message ("Format %s, name typed %s", export_cases[i].shown, export_cases[i].typed);
+      ui_harness_click (action_button (win, "win.export-chart", NULL));
+      chooser = wait_for_chooser (win);
+      fill_chooser (chooser, folder, "Format", export_cases[i].shown, export_cases[i].typed);
+      g_assert_true (ui_harness_wait_until (file_exists, written, 5000));
+      g_assert_true (starts_with (written, export_cases[i].magic, export_cases[i].n));
+      if (strcmp (typed, written) != 0)
+        g_assert_false (g_file_test (typed, G_FILE_TEST_EXISTS));
+    }
+  ui_harness_close_window (win);
+}
+
+/* The name written differs from the one typed: a file of that name is not
+ * replaced without asking. */
+static void
+test_export_corrected_name_asks (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  g_autofree char *folder = g_build_filename (tmpdir, "export-ask", NULL);
+  g_autofree char *existing = g_build_filename (folder, "kept.pdf", NULL);
+  g_autofree char *now = NULL;
+  AdwMessageDialog *dialog;
+
+  g_assert_cmpint (g_mkdir_with_parents (folder, 0700), ==, 0);
+  g_assert_true (g_file_set_contents (existing, "not a chart", -1, NULL));
+
+  ui_harness_click (action_button (win, "win.export-chart", NULL));
+  fill_chooser (wait_for_chooser (win), folder, "Format", "PDF", "kept.png");
+  dialog = wait_for_message (win);
+  g_assert_nonnull (strstr (adw_message_dialog_get_heading (dialog), "kept.pdf"));
+  ui_harness_click_response (dialog, "cancel");
+  ui_harness_drain ();
+  g_assert_true (g_file_get_contents (existing, &now, NULL, NULL));
+  g_assert_cmpstr (now, ==, "not a chart");
+
+  ui_harness_click (action_button (win, "win.export-chart", NULL));
+  fill_chooser (wait_for_chooser (win), folder, "Format", "PDF", "kept.png");
+  dialog = wait_for_message (win);
+  ui_harness_click_response (dialog, "replace");
+  ui_harness_drain ();
+  /* Source: ISO 32000-1:2008 §7.5.2, a PDF file begins "%PDF-". */
+  g_assert_true (starts_with (existing, "%PDF-", 5));
+  ui_harness_close_window (win);
+}
+
+/* The results table is written as CSV into a file named .csv. */
+static void
+test_export_csv_extension (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  g_autofree char *folder = g_build_filename (tmpdir, "csv", NULL);
+  g_autofree char *typed = g_build_filename (folder, "line results", NULL);
+  g_autofree char *written = g_build_filename (folder, "line results.csv", NULL);
+  g_autofree char *reference = g_build_filename (tmpdir, "reference.csv", NULL);
+  g_autofree char *got = NULL, *want = NULL;
+  g_autoptr (GError) error = NULL;
+
+  g_assert_cmpint (g_mkdir_with_parents (folder, 0700), ==, 0);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.export-csv", NULL);   /* the menu item */
+  fill_chooser (wait_for_chooser (win), folder, NULL, NULL, "line results");
+  g_assert_true (ui_harness_wait_until (file_exists, written, 5000));
+  g_assert_false (g_file_test (typed, G_FILE_TEST_EXISTS));
+  /* The same bytes as the results table written directly. */
+  g_assert_true (rugosa_window_export_csv_to (win, reference, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_get_contents (written, &got, NULL, NULL));
+  g_assert_true (g_file_get_contents (reference, &want, NULL, NULL));
+  g_assert_cmpstr (got, ==, want);
+  ui_harness_close_window (win);
+}
+
 /* ---- quitting through the close guard ---- */
 
 static void
@@ -373,6 +509,9 @@ main (int argc, char *argv[])
 
   g_test_add_func ("/ui/actions/undo-after-duplicate", test_undo_after_duplicate);
   g_test_add_func ("/ui/actions/move-follows-lines", test_move_buttons_follow_lines);
+  g_test_add_func ("/ui/files/export-format-wins", test_export_format_wins);
+  g_test_add_func ("/ui/files/export-corrected-name-asks", test_export_corrected_name_asks);
+  g_test_add_func ("/ui/files/export-csv-extension", test_export_csv_extension);
   g_test_add_func ("/ui/files/quit-discard", test_quit_discard);
   g_test_add_func ("/ui/files/quit-save", test_quit_save);
   g_test_add_func ("/ui/files/quit-save-as", test_quit_save_as);
