@@ -1,7 +1,8 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The window as a user drives it, through its buttons, lists and dialogs:
  * the enabled state of undo, redo and the line buttons, the chart and
- * CSV export dialogs, and quitting through the close guard.
+ * CSV export dialogs, quitting through the close guard, and the
+ * maximized state kept between sessions.
  *
  * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
  * display the program reports a skip.  g_test_init() makes every GLib
@@ -492,6 +493,61 @@ test_quit_save_as (void)
   g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (saved, 0), "length"), ==, 777.0);
 }
 
+/* ---- window state between sessions ---- */
+
+static gboolean
+window_maximized (gpointer data)
+{
+  return gtk_window_is_maximized (data);
+}
+
+static void
+test_maximized_restored (void)
+{
+  GSettings *settings = rugosa_application_get_settings (app);
+  RugosaWindow *win;
+  int w = 0, h = 0;
+
+  /* Left maximized last time, with a smaller size to come back to. */
+  g_settings_set_int (settings, "window-width", 1100);
+  g_settings_set_int (settings, "window-height", 720);
+  g_settings_set_boolean (settings, "window-maximized", TRUE);
+  win = rugosa_window_new (app);
+  gtk_window_present (GTK_WINDOW (win));
+  g_assert_true (ui_harness_wait_until (window_maximized, win, 2000));
+  gtk_window_get_default_size (GTK_WINDOW (win), &w, &h);
+  g_assert_cmpint (w, ==, 1100);
+  g_assert_cmpint (h, ==, 720);
+  /* Closed maximized: the flag is written, the size to come back to
+   * stays (not the size of the screen). */
+  g_settings_set_boolean (settings, "window-maximized", FALSE);
+  gtk_window_close (GTK_WINDOW (win));
+  ui_harness_drain ();
+  g_assert_true (g_settings_get_boolean (settings, "window-maximized"));
+  g_assert_cmpint (g_settings_get_int (settings, "window-width"), ==, 1100);
+  g_assert_cmpint (g_settings_get_int (settings, "window-height"), ==, 720);
+
+  /* Left at a size: not maximized next time, and that is written. */
+  g_settings_set_boolean (settings, "window-maximized", FALSE);
+  win = rugosa_window_new (app);
+  gtk_window_present (GTK_WINDOW (win));
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
+  ui_harness_drain ();
+  g_assert_false (gtk_window_is_maximized (GTK_WINDOW (win)));
+  g_settings_set_boolean (settings, "window-maximized", TRUE);
+  gtk_window_close (GTK_WINDOW (win));
+  ui_harness_drain ();
+  g_assert_false (g_settings_get_boolean (settings, "window-maximized"));
+  /* Not resized: the size it opened at is the size written, session
+   * after session. */
+  g_assert_cmpint (g_settings_get_int (settings, "window-width"), ==, 1100);
+  g_assert_cmpint (g_settings_get_int (settings, "window-height"), ==, 720);
+
+  g_settings_reset (settings, "window-width");
+  g_settings_reset (settings, "window-height");
+  g_settings_reset (settings, "window-maximized");
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -515,6 +571,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/files/quit-discard", test_quit_discard);
   g_test_add_func ("/ui/files/quit-save", test_quit_save);
   g_test_add_func ("/ui/files/quit-save-as", test_quit_save_as);
+  g_test_add_func ("/ui/window/maximized-restored", test_maximized_restored);
 
   status = g_test_run ();
   g_object_unref (app);

@@ -791,6 +791,8 @@ _rugosa_window_setup (RugosaWindow *self)
   g_settings_bind (self->settings, "service-age-max", self->age_adjustment, "upper", G_SETTINGS_BIND_GET);
   g_settings_bind (self->settings, "window-width", self, "default-width", G_SETTINGS_BIND_GET_NO_CHANGES);
   g_settings_bind (self->settings, "window-height", self, "default-height", G_SETTINGS_BIND_GET_NO_CHANGES);
+  /* Maximized over the size above, which unmaximizing comes back to. */
+  g_settings_bind (self->settings, "window-maximized", self, "maximized", G_SETTINGS_BIND_GET_NO_CHANGES);
 
   self->project = rugosa_project_new ();
   self->history = rugosa_history_new (self->project);
