@@ -1,8 +1,9 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The window as a user drives it, through its buttons, lists and dialogs:
  * the enabled state of undo, redo and the line buttons, the chart and
- * CSV export dialogs, quitting through the close guard, and the
- * maximized state kept between sessions.
+ * CSV export dialogs, quitting through the close guard, the maximized
+ * state kept between sessions, and the service-age slider as a view
+ * setting.
  *
  * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
  * display the program reports a skip.  g_test_init() makes every GLib
@@ -548,6 +549,69 @@ test_maximized_restored (void)
   g_settings_reset (settings, "window-maximized");
 }
 
+/* ---- the service-age slider ---- */
+
+static void
+drag_slider (RugosaWindow *win,
+             double        years)
+{
+  gboolean handled = FALSE;
+
+  /* What a drag of the slider's knob emits. */
+  g_signal_emit_by_name (rugosa_window_get_age_scale (win), "change-value", GTK_SCROLL_JUMP, years, &handled);
+  ui_harness_drain ();
+}
+
+static void
+test_slider_is_a_view (void)
+{
+  RugosaWindow *win = open_demo_copy ("slider.rugosa");
+  g_autoptr (GFile) file = g_object_ref (rugosa_window_get_file (win));
+  g_autofree char *path = g_file_get_path (file);
+  g_autofree char *before = NULL, *after = NULL;
+  g_autoptr (RugosaProject) saved = rugosa_project_new ();
+  g_autoptr (GError) error = NULL;
+  RugosaSettings *ps = rugosa_project_get_settings (rugosa_window_get_project (win));
+  double age = rugosa_settings_get_double (ps, "service-age");
+  /* Invented positions, away from the file's own age. */
+  double first = age < 20.0 ? 30.0 : 10.0;
+  double second = first + 5.0;
+
+  g_assert_true (g_file_get_contents (path, &before, NULL, NULL));
+  g_object_add_weak_pointer (G_OBJECT (win), (gpointer *) &win);
+  drag_slider (win, first);
+  g_assert_cmpfloat (rugosa_settings_get_double (ps, "service-age"), ==, first);
+  g_assert_false (rugosa_window_get_modified (win));
+  g_assert_false (g_str_has_prefix (gtk_window_get_title (GTK_WINDOW (win)), "• "));
+  g_assert_false (gtk_widget_is_sensitive (action_button (win, "win.undo", NULL)));
+  /* Closing does not ask, and leaves the file as it was. */
+  gtk_window_close (GTK_WINDOW (win));
+  ui_harness_drain ();
+  g_assert_null (win);
+  g_assert_true (g_file_get_contents (path, &after, NULL, NULL));
+  g_assert_cmpstr (after, ==, before);
+
+  /* Saved for another reason, the file keeps the age shown. */
+  win = rugosa_window_new (app);
+  gtk_window_present (GTK_WINDOW (win));
+  g_assert_true (rugosa_window_load_file_sync (win, file, &error));
+  g_assert_no_error (error);
+  ui_harness_drain ();
+  drag_slider (win, second);
+  g_assert_false (rugosa_window_get_modified (win));
+  select_line (win, 0);
+  type_into (win, "length", "654 m");
+  g_assert_true (rugosa_window_get_modified (win));
+  ui_harness_click (action_button (win, "win.save", NULL));
+  ui_harness_drain ();
+  g_assert_false (rugosa_window_get_modified (win));
+  g_assert_true (rugosa_project_load (saved, path, &error));
+  g_assert_no_error (error);
+  /* Source: the position the slider was dragged to above. */
+  g_assert_cmpfloat (rugosa_settings_get_double (rugosa_project_get_settings (saved), "service-age"), ==, second);
+  ui_harness_close_window (win);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -572,6 +636,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/files/quit-save", test_quit_save);
   g_test_add_func ("/ui/files/quit-save-as", test_quit_save_as);
   g_test_add_func ("/ui/window/maximized-restored", test_maximized_restored);
+  g_test_add_func ("/ui/slider/view-not-edit", test_slider_is_a_view);
 
   status = g_test_run ();
   g_object_unref (app);

@@ -415,8 +415,9 @@ _rugosa_window_age_changed (RugosaWindow *self)
 
   if (self->following_model)
     return;
-  /* The service age is a view of the document, not an edit: it is saved
-   * with the project but does not fill the undo history. */
+  /* The service age is a view of the document, not an edit: it does not
+   * fill the undo history nor mark the project modified (closing does
+   * not ask about it), yet a save made for another reason keeps it. */
   self->age_changing = TRUE;
   g_object_set (rugosa_project_get_settings (self->project), "service-age", age, NULL);
   self->age_changing = FALSE;
@@ -425,7 +426,8 @@ _rugosa_window_age_changed (RugosaWindow *self)
 static void
 _rugosa_window_project_changed (RugosaWindow *self)
 {
-  _rugosa_window_mark_modified (self);
+  if (!self->age_changing)
+    _rugosa_window_mark_modified (self);
   _rugosa_window_refresh_all (self);
 }
 
