@@ -1,9 +1,9 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The window as a user drives it, through its buttons, lists and dialogs:
- * the enabled state of undo, redo and the line buttons, the chart and
- * CSV export dialogs, quitting through the close guard, the maximized
- * state kept between sessions, and the service-age slider as a view
- * setting.
+ * the searchable catalog drop-downs of the line panel, the enabled state
+ * of undo, redo and the line buttons, the chart and CSV export dialogs,
+ * quitting through the close guard, the maximized state kept between
+ * sessions, and the service-age slider as a view setting.
  *
  * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
  * display the program reports a skip.  g_test_init() makes every GLib
@@ -193,6 +193,186 @@ starts_with (const char *path,
   if (!g_file_get_contents (path, &data, &length, NULL))
     return FALSE;
   return length > n && memcmp (data, magic, n) == 0;
+}
+
+/* ---- the searchable drop-downs of the line panel ---- */
+
+static guint
+popup_n_items (GtkWidget *list)
+{
+  return g_list_model_get_n_items (G_LIST_MODEL (gtk_list_view_get_model (GTK_LIST_VIEW (list))));
+}
+
+static const char *
+popup_item_text (GtkWidget *list,
+                 guint      position)
+{
+  g_autoptr (GObject) item = g_list_model_get_item (G_LIST_MODEL (gtk_list_view_get_model (GTK_LIST_VIEW (list))),
+                                                    position);
+
+  g_assert_true (GTK_IS_STRING_OBJECT (item));
+  return gtk_string_object_get_string (GTK_STRING_OBJECT (item));
+}
+
+/* The rows the open list shows: drawn rows with text in them. */
+static guint
+popup_rows_shown (GtkWidget *list)
+{
+  guint n = 0;
+
+  for (GtkWidget *row = gtk_widget_get_first_child (list); row; row = gtk_widget_get_next_sibling (row))
+    {
+      GtkWidget *label = ui_harness_find_descendant (row, GTK_TYPE_LABEL);
+
+      if (label && gtk_widget_get_mapped (row) && *gtk_label_get_text (GTK_LABEL (label)) != '\0')
+        n++;
+    }
+  return n;
+}
+
+typedef struct {
+  GtkWidget *button;   /* the drop-down's own button */
+  GtkWidget *popover;
+  GtkWidget *search;
+  GtkWidget *list;
+  guint      total;    /* entries in the list without a search */
+} Picker;
+
+static gboolean
+picker_open (gpointer data)
+{
+  Picker *p = data;
+  return gtk_widget_get_mapped (p->popover);
+}
+
+static gboolean
+picker_filtered (gpointer data)
+{
+  Picker *p = data;
+  return popup_n_items (p->list) < p->total;
+}
+
+static gboolean
+picker_closed (gpointer data)
+{
+  Picker *p = data;
+  return !gtk_widget_get_visible (p->popover);
+}
+
+static gboolean
+in_view (gpointer data)
+{
+  GtkWidget *widget = data;
+  GtkWidget *root = GTK_WIDGET (gtk_widget_get_root (widget));
+  graphene_rect_t b;
+
+  return gtk_widget_compute_bounds (widget, root, &b)
+         && b.origin.y >= 0 && b.origin.y + b.size.height <= gtk_widget_get_height (root);
+}
+
+static void
+picker_click_open (Picker *p)
+{
+  /* Scrolled into view first (the panel scrolls to the focused widget),
+   * as a user does before clicking. */
+  gtk_widget_grab_focus (p->button);
+  g_assert_true (ui_harness_wait_until (in_view, p->button, 2000));
+  ui_harness_click (p->button);
+  g_assert_true (ui_harness_wait_until (picker_open, p, 2000));
+  gtk_test_widget_wait_for_draw (p->popover);
+  ui_harness_drain ();
+}
+
+/* Type a search, then pick the first row it leaves or close the list;
+ * opened again, the list shows every entry and an empty search. */
+static void
+check_picker (RugosaLinePanel *panel,
+              const char      *row_title,
+              const char      *expander_title,
+              gboolean         pick)
+{
+  GtkWidget *row = ui_harness_find_row (GTK_WIDGET (panel), row_title);
+  GtkDropDown *dropdown;
+  Picker p;
+  guint total, filtered;
+  g_autofree char *search = NULL;
+  g_autofree char *picked = NULL;
+
+  if (expander_title != NULL)
+    {
+      /* Opened, and given time to unfold before its rows are clicked. */
+      adw_expander_row_set_expanded (ADW_EXPANDER_ROW (ui_harness_find_row (GTK_WIDGET (panel), expander_title)), TRUE);
+      ui_harness_wait (500);
+    }
+  g_assert_nonnull (row);
+  gtk_test_widget_wait_for_draw (row);
+  dropdown = GTK_DROP_DOWN (ui_harness_find_descendant (row, GTK_TYPE_DROP_DOWN));
+  g_assert_nonnull (dropdown);
+  g_assert_true (gtk_drop_down_get_enable_search (dropdown));
+  p.button = ui_harness_find_descendant (GTK_WIDGET (dropdown), GTK_TYPE_TOGGLE_BUTTON);
+  p.popover = ui_harness_find_descendant (GTK_WIDGET (dropdown), GTK_TYPE_POPOVER);
+  g_assert_nonnull (p.popover);
+  p.search = ui_harness_find_descendant (p.popover, GTK_TYPE_SEARCH_ENTRY);
+  p.list = ui_harness_find_descendant (p.popover, GTK_TYPE_LIST_VIEW);
+  g_assert_nonnull (p.search);
+  g_assert_nonnull (p.list);
+
+  picker_click_open (&p);
+  total = p.total = popup_n_items (p.list);
+  g_assert_cmpuint (total, >, 2);
+  g_assert_cmpuint (popup_rows_shown (p.list), >, 0);
+
+  /* The first characters of the last entry: a search that matches it and
+   * not everything. */
+  search = g_utf8_substring (popup_item_text (p.list, total - 1), 0, 4);
+  gtk_editable_set_text (GTK_EDITABLE (p.search), search);
+  /* The search entry waits for a pause in typing before it filters. */
+  g_assert_true (ui_harness_wait_until (picker_filtered, &p, 2000));
+  filtered = popup_n_items (p.list);
+  g_assert_cmpuint (filtered, >=, 1);
+  g_assert_cmpuint (filtered, <, total);
+
+  if (pick)
+    {
+      /* Pointer over the first row (selects it), then a click on it. */
+      picked = g_strdup (popup_item_text (p.list, 0));
+      gtk_widget_activate_action (p.list, "list.select-item", "(ubb)", 0u, FALSE, FALSE);
+      gtk_widget_activate_action (p.list, "list.activate-item", "u", 0u);
+    }
+  else
+    gtk_popover_popdown (GTK_POPOVER (p.popover));
+  g_assert_true (ui_harness_wait_until (picker_closed, &p, 2000));
+  ui_harness_drain ();
+  if (picked != NULL)
+    g_assert_cmpstr (gtk_string_object_get_string (gtk_drop_down_get_selected_item (dropdown)), ==, picked);
+
+  picker_click_open (&p);
+  g_assert_cmpstr (gtk_editable_get_text (GTK_EDITABLE (p.search)), ==, "");
+  g_assert_cmpuint (popup_n_items (p.list), ==, total);
+  g_assert_cmpuint (popup_rows_shown (p.list), >, 0);
+  gtk_popover_popdown (GTK_POPOVER (p.popover));
+  g_assert_true (ui_harness_wait_until (picker_closed, &p, 2000));
+}
+
+static void
+test_picker_search_reopens (void)
+{
+  static const struct { const char *row, *expander; } pickers[] = {
+    { "Pipe size", NULL },
+    { "Material", NULL },
+    { "Add", "Fittings and other losses" },
+  };
+  RugosaWindow *win = ui_harness_open_demo (app);
+  RugosaLinePanel *panel = select_line (win, 0);
+
+  for (gsize i = 0; i < G_N_ELEMENTS (pickers); i++)
+    {
+      g_test_message ("%s: pick a found entry", pickers[i].row);
+      check_picker (panel, pickers[i].row, pickers[i].expander, TRUE);
+      g_test_message ("%s: close the list", pickers[i].row);
+      check_picker (panel, pickers[i].row, pickers[i].expander, FALSE);
+    }
+  ui_harness_close_window (win);
 }
 
 /* ---- enabled state of the actions ---- */
@@ -627,6 +807,7 @@ main (int argc, char *argv[])
     }
   app = ui_harness_app_new ("org.rugosa.Rugosa.TestWindow");
 
+  g_test_add_func ("/ui/panel/picker-search-reopens", test_picker_search_reopens);
   g_test_add_func ("/ui/actions/undo-after-duplicate", test_undo_after_duplicate);
   g_test_add_func ("/ui/actions/move-follows-lines", test_move_buttons_follow_lines);
   g_test_add_func ("/ui/files/export-format-wins", test_export_format_wins);
