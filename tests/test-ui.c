@@ -477,22 +477,6 @@ test_units_preference (void)
   ui_harness_close_window (win);
 }
 
-/* The message dialog a window has just presented, or NULL. */
-static AdwMessageDialog *
-find_message_dialog (GtkWindow *parent)
-{
-  GListModel *tops = gtk_window_get_toplevels ();  /* borrowed */
-
-  for (guint i = 0; i < g_list_model_get_n_items (tops); i++)
-    {
-      g_autoptr (GtkWindow) w = g_list_model_get_item (tops, i);
-      if (ADW_IS_MESSAGE_DIALOG (w) && gtk_window_get_transient_for (w) == parent
-          && gtk_widget_get_visible (GTK_WIDGET (w)))
-        return ADW_MESSAGE_DIALOG (w);
-    }
-  return NULL;
-}
-
 static void
 test_recovery (void)
 {
@@ -523,7 +507,7 @@ test_recovery (void)
   gtk_window_present (GTK_WINDOW (fresh));
   rugosa_window_offer_recovery (fresh);
   ui_harness_drain ();
-  dialog = find_message_dialog (GTK_WINDOW (fresh));
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (fresh));
   g_assert_nonnull (dialog);
   adw_message_dialog_response (dialog, "recover");
   ui_harness_drain ();
@@ -592,7 +576,7 @@ test_recovery_keeps_copy (void)
   g_assert_cmpint (g_mkdir (blocker, 0700), ==, 0);
   rugosa_window_offer_recovery (fresh);
   ui_harness_drain ();
-  dialog = find_message_dialog (GTK_WINDOW (fresh));
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (fresh));
   g_assert_nonnull (dialog);
   adw_message_dialog_response (dialog, "recover");
   ui_harness_drain ();
@@ -629,7 +613,7 @@ test_close_guard (void)
   ui_harness_drain ();
   /* Changed: the window stays and asks. */
   g_assert_true (gtk_widget_get_visible (GTK_WIDGET (win)));
-  dialog = find_message_dialog (GTK_WINDOW (win));
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (win));
   g_assert_nonnull (dialog);
   g_assert_true (adw_message_dialog_has_response (dialog, "save"));
   g_assert_true (adw_message_dialog_has_response (dialog, "discard"));
@@ -643,7 +627,7 @@ test_close_guard (void)
 
   gtk_window_close (GTK_WINDOW (win));
   ui_harness_drain ();
-  dialog = find_message_dialog (GTK_WINDOW (win));
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (win));
   g_assert_nonnull (dialog);
   adw_message_dialog_response (dialog, "discard");
   ui_harness_drain ();
@@ -663,7 +647,7 @@ full_disk (RugosaSaveStep step,
 static void
 assert_save_error_dialog (RugosaWindow *win)
 {
-  AdwMessageDialog *dialog = find_message_dialog (GTK_WINDOW (win));
+  AdwMessageDialog *dialog = ui_harness_find_message_dialog (GTK_WINDOW (win));
   const char *body;
 
   g_assert_nonnull (dialog);
@@ -717,7 +701,7 @@ test_save_fails_keeps_dirty (void)
   /* Close, answer "Save": the save fails, so the window must stay. */
   gtk_window_close (GTK_WINDOW (win));
   ui_harness_drain ();
-  dialog = find_message_dialog (GTK_WINDOW (win));
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (win));
   g_assert_nonnull (dialog);
   adw_message_dialog_response (dialog, "save");
   ui_harness_drain ();
@@ -770,7 +754,7 @@ test_newer_version_refused (void)
 
   rugosa_window_load_file (win, future_file);
   ui_harness_drain ();
-  dialog = find_message_dialog (GTK_WINDOW (win));
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (win));
   g_assert_nonnull (dialog);
   g_assert_nonnull (strstr (adw_message_dialog_get_body (dialog), "future.rugosa"));
   adw_message_dialog_response (dialog, "close");

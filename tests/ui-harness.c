@@ -133,3 +133,149 @@ ui_harness_remove_tree (const char *path)
       }
   g_remove (path);
 }
+
+void
+ui_harness_wait (guint ms)
+{
+  gint64 end = g_get_monotonic_time () + (gint64) ms * 1000;
+
+  while (g_get_monotonic_time () < end)
+    {
+      if (!g_main_context_iteration (NULL, FALSE))
+        g_usleep (2000);
+    }
+}
+
+gboolean
+ui_harness_wait_until (gboolean (*done) (gpointer data),
+                       gpointer   data,
+                       guint      ms)
+{
+  gint64 end = g_get_monotonic_time () + (gint64) ms * 1000;
+
+  while (!done (data))
+    {
+      if (g_get_monotonic_time () >= end)
+        return done (data);
+      if (!g_main_context_iteration (NULL, FALSE))
+        g_usleep (2000);
+    }
+  return TRUE;
+}
+
+GtkWidget *
+ui_harness_find_descendant (GtkWidget *root,
+                            GType      type)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkWidget *found;
+
+      if (G_TYPE_CHECK_INSTANCE_TYPE (c, type))
+        return c;
+      if ((found = ui_harness_find_descendant (c, type)) != NULL)
+        return found;
+    }
+  return NULL;
+}
+
+GtkWidget *
+ui_harness_find_row (GtkWidget  *root,
+                     const char *title)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkWidget *found;
+
+      if (ADW_IS_PREFERENCES_ROW (c)
+          && g_strcmp0 (adw_preferences_row_get_title (ADW_PREFERENCES_ROW (c)), title) == 0)
+        return c;
+      if ((found = ui_harness_find_row (c, title)) != NULL)
+        return found;
+    }
+  return NULL;
+}
+
+GtkWidget *
+ui_harness_find_action_widget (GtkWidget  *root,
+                               const char *action,
+                               GVariant   *target)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkWidget *found;
+
+      if (GTK_IS_ACTIONABLE (c)
+          && g_strcmp0 (gtk_actionable_get_action_name (GTK_ACTIONABLE (c)), action) == 0)
+        {
+          GVariant *t = gtk_actionable_get_action_target_value (GTK_ACTIONABLE (c));
+
+          if (target == NULL || (t != NULL && g_variant_equal (t, target)))
+            return c;
+        }
+      if ((found = ui_harness_find_action_widget (c, action, target)) != NULL)
+        return found;
+    }
+  return NULL;
+}
+
+GtkWindow *
+ui_harness_find_dialog (GtkWindow *parent,
+                        GType      type)
+{
+  GListModel *tops = gtk_window_get_toplevels ();  /* borrowed */
+
+  for (guint i = 0; i < g_list_model_get_n_items (tops); i++)
+    {
+      g_autoptr (GtkWindow) w = g_list_model_get_item (tops, i);
+
+      if (G_TYPE_CHECK_INSTANCE_TYPE (w, type) && gtk_window_get_transient_for (w) == parent
+          && gtk_widget_get_visible (GTK_WIDGET (w)))
+        return w;
+    }
+  return NULL;
+}
+
+AdwMessageDialog *
+ui_harness_find_message_dialog (GtkWindow *parent)
+{
+  return (AdwMessageDialog *) ui_harness_find_dialog (parent, ADW_TYPE_MESSAGE_DIALOG);
+}
+
+void
+ui_harness_click (GtkWidget *button)
+{
+  g_assert_nonnull (button);
+  g_assert_true (GTK_IS_BUTTON (button));
+  g_assert_true (gtk_widget_is_sensitive (button));
+  /* What a press and release on the button ends in. */
+  g_signal_emit_by_name (button, "clicked");
+}
+
+static GtkWidget *
+_ui_harness_find_button (GtkWidget  *root,
+                         const char *label)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkWidget *found;
+
+      if (GTK_IS_BUTTON (c) && g_strcmp0 (gtk_button_get_label (GTK_BUTTON (c)), label) == 0)
+        return c;
+      if ((found = _ui_harness_find_button (c, label)) != NULL)
+        return found;
+    }
+  return NULL;
+}
+
+void
+ui_harness_click_response (AdwMessageDialog *dialog,
+                           const char       *response)
+{
+  const char *label;
+
+  g_assert_nonnull (dialog);
+  g_assert_true (adw_message_dialog_has_response (dialog, response));
+  label = adw_message_dialog_get_response_label (dialog, response);
+  ui_harness_click (_ui_harness_find_button (GTK_WIDGET (dialog), label));
+}

@@ -886,6 +886,41 @@ _rugosa_line_panel_compact_dropdown (GtkDropDown *dropdown)
   g_object_unref (list);
 }
 
+static GtkWidget *
+_rugosa_line_panel_find (GtkWidget *root,
+                         GType      type)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkWidget *found = G_TYPE_CHECK_INSTANCE_TYPE (c, type) ? c : _rugosa_line_panel_find (c, type);
+
+      if (found)
+        return found;
+    }
+  return NULL;
+}
+
+/* GTK 4.8: after a search, the drop-down resets its list while the popup
+ * is closed, and the list shows no rows when opened again until it is
+ * told where to scroll.  Scroll it to the current choice on opening. */
+static void
+_rugosa_line_panel_popup_mapped (GtkWidget   *popover,
+                                 GtkDropDown *dropdown)
+{
+  GtkWidget *list = _rugosa_line_panel_find (popover, GTK_TYPE_LIST_VIEW);
+  guint selected = gtk_drop_down_get_selected (dropdown);
+  GListModel *shown;
+
+  if (list == NULL || (shown = G_LIST_MODEL (gtk_list_view_get_model (GTK_LIST_VIEW (list)))) == NULL
+      || g_list_model_get_n_items (shown) == 0)
+    return;
+  /* The list shows the whole catalog by now (the search is cleared on
+   * closing), so the choice's position is its row. */
+  if (selected >= g_list_model_get_n_items (shown))
+    selected = 0;
+  gtk_widget_activate_action (list, "list.scroll-to-item", "u", selected);
+}
+
 static void
 _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
 {
@@ -933,6 +968,18 @@ _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
   _rugosa_line_panel_compact_dropdown (self->aging_dropdown);
   _rugosa_line_panel_compact_dropdown (self->pipe_dropdown);
   _rugosa_line_panel_compact_dropdown (self->fitting_add_dropdown);
+
+  {
+    GtkDropDown *searchable[] = { self->material_dropdown, self->pipe_dropdown, self->fitting_add_dropdown };
+
+    for (guint i = 0; i < G_N_ELEMENTS (searchable); i++)
+      {
+        GtkWidget *popover = _rugosa_line_panel_find (GTK_WIDGET (searchable[i]), GTK_TYPE_POPOVER);
+
+        if (popover != NULL)
+          g_signal_connect_object (popover, "map", G_CALLBACK (_rugosa_line_panel_popup_mapped), searchable[i], 0);
+      }
+  }
 }
 
 static void

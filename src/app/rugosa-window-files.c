@@ -426,6 +426,13 @@ _rugosa_window_close_response (AdwMessageDialog *dialog,
                                const char       *response,
                                RugosaWindow     *self)
 {
+  /* The dialog is closed already, but libadwaita drops its last
+   * reference only after this handler returns, and GTK 4.8 keeps the
+   * transient parent as a plain pointer that the dialog's dispose then
+   * uses.  Discard and Save may destroy this window right here, so the
+   * dialog lets go of it first. */
+  gtk_window_set_transient_for (GTK_WINDOW (dialog), NULL);
+
   if (g_str_equal (response, "discard"))
     {
       _rugosa_window_remove_autosave (self);
@@ -437,6 +444,39 @@ _rugosa_window_close_response (AdwMessageDialog *dialog,
       self->close_after_save = TRUE;
       gtk_widget_activate_action (GTK_WIDGET (self), "win.save", NULL);
     }
+}
+
+/* A value the key's range (in the schema) accepts is written; another is
+ * left out rather than refused with a critical. */
+static void
+_rugosa_window_keep_int (RugosaWindow *self,
+                         const char   *key,
+                         int           value)
+{
+  g_autoptr (GSettingsSchema) schema = NULL;
+  g_autoptr (GSettingsSchemaKey) skey = NULL;
+  g_autoptr (GVariant) v = g_variant_ref_sink (g_variant_new_int32 (value));
+
+  g_object_get (self->settings, "settings-schema", &schema, NULL);
+  skey = g_settings_schema_get_key (schema, key);
+  if (g_settings_schema_key_range_check (skey, v))
+    g_settings_set_value (self->settings, key, v);
+}
+
+/* The window's state for the next one opened.  GTK keeps the default size
+ * as the size the window last had while neither maximized nor tiled: the
+ * size to come back to when unmaximized.  (The widget's own size leaves
+ * out the window's shadow, and writing it shrank the window each
+ * session.) */
+static void
+_rugosa_window_keep_state (RugosaWindow *self)
+{
+  int width = 0, height = 0;
+
+  gtk_window_get_default_size (GTK_WINDOW (self), &width, &height);
+  _rugosa_window_keep_int (self, "window-width", width);
+  _rugosa_window_keep_int (self, "window-height", height);
+  g_settings_set_boolean (self->settings, "window-maximized", gtk_window_is_maximized (GTK_WINDOW (self)));
 }
 
 static gboolean
@@ -451,11 +491,7 @@ _rugosa_window_close_request (GtkWindow *window,
     {
       if (!self->modified)
         _rugosa_window_remove_autosave (self);
-      if (!gtk_window_is_maximized (window))
-        {
-          g_settings_set_int (self->settings, "window-width", gtk_widget_get_width (GTK_WIDGET (window)));
-          g_settings_set_int (self->settings, "window-height", gtk_widget_get_height (GTK_WIDGET (window)));
-        }
+      _rugosa_window_keep_state (self);
       return FALSE;
     }
 

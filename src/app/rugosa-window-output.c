@@ -4,6 +4,7 @@
 #include "config.h"
 
 #include <glib/gi18n.h>
+#include <string.h>
 
 #include "chart/rugosa-chart-input.h"
 #include "rugosa-window-private.h"
@@ -54,17 +55,140 @@ rugosa_window_export_csv_to (RugosaWindow  *self,
   return g_file_set_contents (path, out->str, out->len, error);
 }
 
+/* The formats offered, the name shown in the dialog and the extension the
+ * written file gets. */
+static const struct { const char *id; const char *label; const char *ext; RugosaChartFormat format; } export_formats[] = {
+  { "png", "PNG", ".png", RUGOSA_CHART_FORMAT_PNG },
+  { "svg", "SVG", ".svg", RUGOSA_CHART_FORMAT_SVG },
+  { "pdf", "PDF", ".pdf", RUGOSA_CHART_FORMAT_PDF },
+};
+
+/* `path` with the extension `ext`: kept as typed when it has it already
+ * (in any case), put in place of an extension of another chart format,
+ * added otherwise ("chart.v2" becomes "chart.v2.pdf"). */
+static char *
+_rugosa_window_with_extension (const char *path,
+                               const char *ext,
+                               gboolean    chart)
+{
+  const char *base = strrchr (path, G_DIR_SEPARATOR);
+  const char *dot;
+
+  base = base ? base + 1 : path;
+  dot = strrchr (base, '.');
+  if (dot != NULL && dot != base)
+    {
+      if (g_ascii_strcasecmp (dot, ext) == 0)
+        return g_strdup (path);
+      for (guint i = 0; chart && i < G_N_ELEMENTS (export_formats); i++)
+        if (g_ascii_strcasecmp (dot, export_formats[i].ext) == 0)
+          {
+            g_autofree char *stem = g_strndup (path, (gsize) (dot - path));
+            return g_strconcat (stem, ext, NULL);
+          }
+    }
+  return g_strconcat (path, ext, NULL);
+}
+
+/* One export the file dialog has settled. */
+typedef struct
+{
+  char              *path;
+  gboolean           csv;
+  RugosaChartFormat  format;
+  double             width;
+  double             height;
+} RugosaExportJob;
+
+static void
+_rugosa_export_job_free (RugosaExportJob *job)
+{
+  g_free (job->path);
+  g_free (job);
+}
+
+static void
+_rugosa_window_export_run (RugosaWindow    *self,
+                           RugosaExportJob *job)
+{
+  g_autoptr (GError) error = NULL;
+  gboolean ok;
+
+  if (job->csv)
+    ok = rugosa_window_export_csv_to (self, job->path, &error);
+  else
+    ok = rugosa_window_export_chart_to (self, job->path, job->format, job->width, job->height, &error);
+  if (!ok)
+    {
+      const char *heading = job->csv ? _("Could not export the results") : _("Could not export the chart");
+      GtkWidget *msg = adw_message_dialog_new (GTK_WINDOW (self), heading, error->message);
+
+      adw_message_dialog_add_response (ADW_MESSAGE_DIALOG (msg), "close", _("_Close"));
+      gtk_window_present (GTK_WINDOW (msg));
+    }
+  else if (job->csv)
+    _rugosa_window_toast (self, _("Results exported (CSV, SI units)."));
+  else
+    {
+      g_autofree char *base = g_path_get_basename (job->path);
+      g_autofree char *text = g_strdup_printf (_("Chart exported to %s."), base);
+      _rugosa_window_toast (self, text);
+    }
+}
+
+static void
+_rugosa_window_replace_response (AdwMessageDialog *dialog,
+                                 const char       *response,
+                                 RugosaWindow     *self)
+{
+  if (g_str_equal (response, "replace"))
+    _rugosa_window_export_run (self, g_object_get_data (G_OBJECT (dialog), "job"));
+}
+
+/* The file dialog asked before replacing the name typed; a name changed
+ * after it (its extension) is asked about here. */
+static void
+_rugosa_window_export_settled (RugosaWindow    *self,
+                               const char      *typed,
+                               RugosaExportJob *job)
+{
+  GtkWidget *dialog;
+  g_autofree char *base = NULL;
+
+  if (g_str_equal (typed, job->path) || !g_file_test (job->path, G_FILE_TEST_EXISTS))
+    {
+      _rugosa_window_export_run (self, job);
+      _rugosa_export_job_free (job);
+      return;
+    }
+  base = g_path_get_basename (job->path);
+  dialog = adw_message_dialog_new (GTK_WINDOW (self), NULL, NULL);
+  adw_message_dialog_format_heading (ADW_MESSAGE_DIALOG (dialog), _("Replace “%s”?"), base);
+  adw_message_dialog_set_body (ADW_MESSAGE_DIALOG (dialog),
+                               _("The name was given the extension of the format written, and a file "
+                                 "of that name already exists. Replacing it overwrites that file."));
+  adw_message_dialog_add_responses (ADW_MESSAGE_DIALOG (dialog),
+                                    "cancel", _("_Cancel"),
+                                    "replace", _("_Replace"),
+                                    NULL);
+  adw_message_dialog_set_response_appearance (ADW_MESSAGE_DIALOG (dialog), "replace", ADW_RESPONSE_DESTRUCTIVE);
+  adw_message_dialog_set_default_response (ADW_MESSAGE_DIALOG (dialog), "cancel");
+  adw_message_dialog_set_close_response (ADW_MESSAGE_DIALOG (dialog), "cancel");
+  g_object_set_data_full (G_OBJECT (dialog), "job", job, (GDestroyNotify) _rugosa_export_job_free);
+  g_signal_connect (dialog, "response", G_CALLBACK (_rugosa_window_replace_response), self);
+  gtk_window_present (GTK_WINDOW (dialog));
+}
+
 static void
 _rugosa_window_export_response (GtkNativeDialog *dialog,
                                 int              response,
                                 RugosaWindow    *self)
 {
   g_autoptr (GFile) file = NULL;
-  g_autofree char *path = NULL;
-  g_autoptr (GError) error = NULL;
+  g_autofree char *typed = NULL;
+  RugosaExportJob *job;
   const char *size_id, *format_id;
-  RugosaChartFormat format = RUGOSA_CHART_FORMAT_PNG;
-  double w = 960, h = 600;
+  guint f = 0;
 
   if (response != GTK_RESPONSE_ACCEPT)
     {
@@ -72,47 +196,24 @@ _rugosa_window_export_response (GtkNativeDialog *dialog,
       return;
     }
   file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
-  path = g_file_get_path (file);
+  typed = g_file_get_path (file);
   size_id = gtk_file_chooser_get_choice (GTK_FILE_CHOOSER (dialog), "size");
   format_id = gtk_file_chooser_get_choice (GTK_FILE_CHOOSER (dialog), "format");
+
+  job = g_new0 (RugosaExportJob, 1);
+  job->width = 960, job->height = 600;
   for (guint i = 0; i < G_N_ELEMENTS (export_sizes); i++)
     if (g_strcmp0 (size_id, export_sizes[i].id) == 0)
-      w = export_sizes[i].w, h = export_sizes[i].h;
-
-  /* The file name's extension wins over the format choice. */
-  if (g_str_has_suffix (path, ".svg"))
-    format = RUGOSA_CHART_FORMAT_SVG;
-  else if (g_str_has_suffix (path, ".pdf"))
-    format = RUGOSA_CHART_FORMAT_PDF;
-  else if (g_str_has_suffix (path, ".png"))
-    format = RUGOSA_CHART_FORMAT_PNG;
-  else
-    {
-      const char *ext = ".png";
-      char *with;
-
-      if (g_strcmp0 (format_id, "svg") == 0)
-        format = RUGOSA_CHART_FORMAT_SVG, ext = ".svg";
-      else if (g_strcmp0 (format_id, "pdf") == 0)
-        format = RUGOSA_CHART_FORMAT_PDF, ext = ".pdf";
-      with = g_strconcat (path, ext, NULL);
-      g_free (path);
-      path = with;
-    }
-
-  if (!rugosa_window_export_chart_to (self, path, format, w, h, &error))
-    {
-      GtkWidget *msg = adw_message_dialog_new (GTK_WINDOW (self), _("Could not export the chart"), error->message);
-      adw_message_dialog_add_response (ADW_MESSAGE_DIALOG (msg), "close", _("_Close"));
-      gtk_window_present (GTK_WINDOW (msg));
-    }
-  else
-    {
-      g_autofree char *base = g_path_get_basename (path);
-      g_autofree char *text = g_strdup_printf (_("Chart exported to %s."), base);
-      _rugosa_window_toast (self, text);
-    }
+      job->width = export_sizes[i].w, job->height = export_sizes[i].h;
+  for (guint i = 0; i < G_N_ELEMENTS (export_formats); i++)
+    if (g_strcmp0 (format_id, export_formats[i].id) == 0)
+      f = i;
+  /* The Format shown in the dialog is the format written; the file's
+   * extension is made to say the same, whatever extension was typed. */
+  job->format = export_formats[f].format;
+  job->path = _rugosa_window_with_extension (typed, export_formats[f].ext, TRUE);
   g_object_unref (dialog);
+  _rugosa_window_export_settled (self, typed, job);
 }
 
 static void
@@ -124,18 +225,23 @@ _rugosa_window_export_chart (GtkWidget  *widget,
   GtkFileChooserNative *dialog;
   const char *size_ids[G_N_ELEMENTS (export_sizes) + 1] = { 0 };
   const char *size_labels[G_N_ELEMENTS (export_sizes) + 1] = { 0 };
-  static const char *format_ids[] = { "png", "svg", "pdf", NULL };
-  static const char *format_labels[] = { "PNG", "SVG", "PDF", NULL };
+  const char *format_ids[G_N_ELEMENTS (export_formats) + 1] = { 0 };
+  const char *format_labels[G_N_ELEMENTS (export_formats) + 1] = { 0 };
 
   for (guint i = 0; i < G_N_ELEMENTS (export_sizes); i++)
     {
       size_ids[i] = export_sizes[i].id;
       size_labels[i] = _(export_sizes[i].label);
     }
+  for (guint i = 0; i < G_N_ELEMENTS (export_formats); i++)
+    {
+      format_ids[i] = export_formats[i].id;
+      format_labels[i] = export_formats[i].label;
+    }
   dialog = gtk_file_chooser_native_new (_("Export the Chart"), GTK_WINDOW (self),
                                         GTK_FILE_CHOOSER_ACTION_SAVE, _("_Export"), _("_Cancel"));
   gtk_file_chooser_add_choice (GTK_FILE_CHOOSER (dialog), "format", _("Format"), format_ids, format_labels);
-  gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "format", "png");
+  gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "format", export_formats[0].id);
   gtk_file_chooser_add_choice (GTK_FILE_CHOOSER (dialog), "size", _("Size"), size_ids, size_labels);
   gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "size", "1280x800");
   gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), _("friction chart.png"));
@@ -151,17 +257,13 @@ _rugosa_window_csv_response (GtkNativeDialog *dialog,
   if (response == GTK_RESPONSE_ACCEPT)
     {
       g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
-      g_autofree char *path = g_file_get_path (file);
-      g_autoptr (GError) error = NULL;
+      g_autofree char *typed = g_file_get_path (file);
+      RugosaExportJob *job = g_new0 (RugosaExportJob, 1);
 
-      if (!rugosa_window_export_csv_to (self, path, &error))
-        {
-          GtkWidget *msg = adw_message_dialog_new (GTK_WINDOW (self), _("Could not export the results"), error->message);
-          adw_message_dialog_add_response (ADW_MESSAGE_DIALOG (msg), "close", _("_Close"));
-          gtk_window_present (GTK_WINDOW (msg));
-        }
-      else
-        _rugosa_window_toast (self, _("Results exported (CSV, SI units)."));
+      /* Comma-separated values, named so. */
+      job->csv = TRUE;
+      job->path = _rugosa_window_with_extension (typed, ".csv", FALSE);
+      _rugosa_window_export_settled (self, typed, job);
     }
   g_object_unref (dialog);
 }

@@ -42,6 +42,7 @@ struct _RugosaWindow
   char               *autosave_id;  /* unique per window */
 
   guint    autosave_source;
+  guint    actions_source;   /* a pending update of the actions' state */
   gboolean modified;
   gboolean close_confirmed;
   gboolean close_after_save;
@@ -52,6 +53,8 @@ struct _RugosaWindow
 /* rugosa-window.c */
 void     _rugosa_window_refresh_all       (RugosaWindow  *self);
 void     _rugosa_window_update_title      (RugosaWindow  *self);
+/* Brings the actions' enabled state up to date once the change in
+ * progress is complete (before the next input event). */
 void     _rugosa_window_update_actions    (RugosaWindow  *self);
 void     _rugosa_window_toast             (RugosaWindow  *self,
                                            const char    *text);

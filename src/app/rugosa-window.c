@@ -138,8 +138,8 @@ _rugosa_window_update_title (RugosaWindow *self)
   gtk_window_set_title (GTK_WINDOW (self), title);
 }
 
-void
-_rugosa_window_update_actions (RugosaWindow *self)
+static void
+_rugosa_window_apply_actions (RugosaWindow *self)
 {
   guint n = rugosa_project_get_n_lines (self->project);
   guint pos = gtk_single_selection_get_selected (self->selection);
@@ -150,7 +150,34 @@ _rugosa_window_update_actions (RugosaWindow *self)
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-duplicate", has);
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-delete", has);
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-rename", has);
-  gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move", has && n > 1);
+  /* Each direction on its own: at the top of the list there is no "up". */
+  gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-up", has && pos > 0);
+  gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-down", has && pos + 1 < n);
+}
+
+static gboolean
+_rugosa_window_actions_due (gpointer user_data)
+{
+  RugosaWindow *self = RUGOSA_WINDOW (user_data);
+
+  self->actions_source = 0;
+  _rugosa_window_apply_actions (self);
+  return G_SOURCE_REMOVE;
+}
+
+/* The one place that sets the actions' enabled state.  Every undo step
+ * changes the document, so the project's "changed" (through
+ * _rugosa_window_refresh_all) hears each history change, and the
+ * history's notifications hear undo, redo and clearing.  The state is
+ * read once the change in progress is complete: inside a group of edits
+ * (Duplicate) the history reports nothing to undo, and closing the group
+ * may notify nothing.  G_PRIORITY_HIGH runs the update before the next
+ * input event is handled. */
+void
+_rugosa_window_update_actions (RugosaWindow *self)
+{
+  if (self->actions_source == 0)
+    self->actions_source = g_idle_add_full (G_PRIORITY_HIGH, _rugosa_window_actions_due, self, NULL);
 }
 
 /* --- the line list --------------------------------------------------- */
@@ -388,8 +415,9 @@ _rugosa_window_age_changed (RugosaWindow *self)
 
   if (self->following_model)
     return;
-  /* The service age is a view of the document, not an edit: it is saved
-   * with the project but does not fill the undo history. */
+  /* The service age is a view of the document, not an edit: it does not
+   * fill the undo history nor mark the project modified (closing does
+   * not ask about it), yet a save made for another reason keeps it. */
   self->age_changing = TRUE;
   g_object_set (rugosa_project_get_settings (self->project), "service-age", age, NULL);
   self->age_changing = FALSE;
@@ -398,7 +426,8 @@ _rugosa_window_age_changed (RugosaWindow *self)
 static void
 _rugosa_window_project_changed (RugosaWindow *self)
 {
-  _rugosa_window_mark_modified (self);
+  if (!self->age_changing)
+    _rugosa_window_mark_modified (self);
   _rugosa_window_refresh_all (self);
 }
 
@@ -624,7 +653,7 @@ _rugosa_window_line_move (GtkWidget  *widget,
 {
   RugosaWindow *self = RUGOSA_WINDOW (widget);
   guint pos = gtk_single_selection_get_selected (self->selection);
-  int step = g_variant_get_int32 (param);
+  int step = g_str_equal (action_name, "win.line-move-up") ? -1 : 1;
   guint n = rugosa_project_get_n_lines (self->project);
   int to;
 
@@ -764,6 +793,8 @@ _rugosa_window_setup (RugosaWindow *self)
   g_settings_bind (self->settings, "service-age-max", self->age_adjustment, "upper", G_SETTINGS_BIND_GET);
   g_settings_bind (self->settings, "window-width", self, "default-width", G_SETTINGS_BIND_GET_NO_CHANGES);
   g_settings_bind (self->settings, "window-height", self, "default-height", G_SETTINGS_BIND_GET_NO_CHANGES);
+  /* Maximized over the size above, which unmaximizing comes back to. */
+  g_settings_bind (self->settings, "window-maximized", self, "maximized", G_SETTINGS_BIND_GET_NO_CHANGES);
 
   self->project = rugosa_project_new ();
   self->history = rugosa_history_new (self->project);
@@ -799,6 +830,7 @@ _rugosa_window_setup (RugosaWindow *self)
   _rugosa_window_project_replaced (self);
   self->modified = FALSE;
   _rugosa_window_update_title (self);
+  _rugosa_window_apply_actions (self);
 }
 
 static void
@@ -807,6 +839,7 @@ rugosa_window_dispose (GObject *object)
   RugosaWindow *self = RUGOSA_WINDOW (object);
 
   _rugosa_window_files_dispose (self);
+  g_clear_handle_id (&self->actions_source, g_source_remove);
   if (self->canvas)
     rugosa_canvas_set_selection (self->canvas, NULL);
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_WINDOW);
@@ -855,13 +888,14 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   gtk_widget_class_install_action (widget_class, "win.line-add", NULL, _rugosa_window_line_add);
   gtk_widget_class_install_action (widget_class, "win.line-duplicate", NULL, _rugosa_window_line_duplicate);
   gtk_widget_class_install_action (widget_class, "win.line-delete", NULL, _rugosa_window_line_delete);
-  gtk_widget_class_install_action (widget_class, "win.line-move", "i", _rugosa_window_line_move);
+  gtk_widget_class_install_action (widget_class, "win.line-move-up", NULL, _rugosa_window_line_move);
+  gtk_widget_class_install_action (widget_class, "win.line-move-down", NULL, _rugosa_window_line_move);
   gtk_widget_class_install_action (widget_class, "win.line-rename", NULL, _rugosa_window_line_rename);
   gtk_widget_class_install_action (widget_class, "win.age-step", "i", _rugosa_window_age_step);
 
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_F2, 0, "win.line-rename", NULL);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Up, GDK_ALT_MASK, "win.line-move", "i", -1);
-  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Down, GDK_ALT_MASK, "win.line-move", "i", 1);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Up, GDK_ALT_MASK, "win.line-move-up", NULL);
+  gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Down, GDK_ALT_MASK, "win.line-move-down", NULL);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Delete, GDK_CONTROL_MASK, "win.line-delete", NULL);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_bracketright, GDK_CONTROL_MASK, "win.age-step", "i", 1);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_bracketleft, GDK_CONTROL_MASK, "win.age-step", "i", -1);
