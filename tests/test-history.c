@@ -168,6 +168,31 @@ test_group (Fixture *f, gconstpointer data)
   g_assert_cmpstr (rugosa_history_get_undo_label (f->history), ==, "Switch to steel");
 }
 
+static void count_notify (GObject *object, GParamSpec *pspec, int *count);
+
+/* Someone who shows "can undo" hears of every change of it: a group that
+ * opens hides the steps before it, and its end shows them again. */
+static void
+test_group_notifies (Fixture *f, gconstpointer data)
+{
+  int count = 0;
+
+  rugosa_history_set (f->history, f->a, "length", 12.0, NULL);
+  g_signal_connect (f->history, "notify::can-undo", G_CALLBACK (count_notify), &count);
+  rugosa_history_begin_group (f->history, "duplicate");
+  g_assert_false (rugosa_history_can_undo (f->history));
+  g_assert_cmpint (count, ==, 1);
+  rugosa_history_set (f->history, f->a, "length", 13.0, NULL);
+  rugosa_history_end_group (f->history);
+  g_assert_true (rugosa_history_can_undo (f->history));
+  g_assert_cmpint (count, ==, 2);
+  /* an empty group changes nothing in the end, but is heard both ways */
+  rugosa_history_begin_group (f->history, "nothing");
+  rugosa_history_end_group (f->history);
+  g_assert_true (rugosa_history_can_undo (f->history));
+  g_assert_cmpint (count, ==, 4);
+}
+
 static char *
 names (RugosaProject *p)
 {
@@ -258,6 +283,7 @@ main (int argc, char **argv)
   ADD ("/history/merge/broken", test_merge_broken);
   ADD ("/history/merge/no-window", test_no_merge_without_window);
   ADD ("/history/group", test_group);
+  ADD ("/history/group-notifies", test_group_notifies);
   ADD ("/history/structural", test_structural);
   ADD ("/history/notify-and-clear", test_notify_and_clear);
 #undef ADD

@@ -274,6 +274,9 @@ rugosa_history_get_project (RugosaHistory *self)
   return self->project;
 }
 
+static void open_group (RugosaHistory *self, const char *label);
+static void close_group (RugosaHistory *self);
+
 void
 rugosa_history_set_value (RugosaHistory *self, gpointer object,
                           const char *property, const GValue *value)
@@ -322,7 +325,7 @@ rugosa_history_set (RugosaHistory *self, gpointer object,
   va_list ap;
   GPtrArray *stack;
   Command *group;
-  gboolean broken;
+  gboolean broken, could_undo, could_redo;
 
   g_return_if_fail (RUGOSA_IS_HISTORY (self));
   g_return_if_fail (G_IS_OBJECT (object));
@@ -330,7 +333,9 @@ rugosa_history_set (RugosaHistory *self, gpointer object,
   /* Several properties make one step: collect them in a group, and unwrap
    * a group of one so that it can still merge with the previous step. */
   broken = self->merge_broken;
-  rugosa_history_begin_group (self, _("Change several values"));
+  could_undo = rugosa_history_can_undo (self);
+  could_redo = rugosa_history_can_redo (self);
+  open_group (self, _("Change several values"));
   va_start (ap, first_property);
   for (const char *name = first_property; name != NULL;
        name = va_arg (ap, const char *))
@@ -359,7 +364,9 @@ rugosa_history_set (RugosaHistory *self, gpointer object,
   group = g_ptr_array_index (self->open_groups, self->open_groups->len - 1);
   if (group->children->len != 1)
     {
-      rugosa_history_end_group (self);
+      close_group (self);
+      /* the group was opened without a word: say only what changed */
+      notify_state (self, could_undo, could_redo);
       return;
     }
   group = g_ptr_array_steal_index (self->open_groups, self->open_groups->len - 1);
@@ -446,27 +453,38 @@ rugosa_history_duplicate_line (RugosaHistory *self, guint position)
   return copy;
 }
 
-void
-rugosa_history_begin_group (RugosaHistory *self, const char *label)
+static void
+open_group (RugosaHistory *self, const char *label)
 {
-  Command *g;
+  Command *g = command_new (CMD_GROUP, g_strdup (label ? label : _("Edit")));
 
-  g_return_if_fail (RUGOSA_IS_HISTORY (self));
-  g = command_new (CMD_GROUP, g_strdup (label ? label : _("Edit")));
   g->children = g_ptr_array_new_with_free_func (command_free);
   g_ptr_array_add (self->open_groups, g);
   self->merge_broken = TRUE;
 }
 
 void
-rugosa_history_end_group (RugosaHistory *self)
+rugosa_history_begin_group (RugosaHistory *self, const char *label)
 {
-  Command *g;
+  gboolean could_undo, could_redo;
 
   g_return_if_fail (RUGOSA_IS_HISTORY (self));
-  g_return_if_fail (self->open_groups->len > 0);
+  could_undo = rugosa_history_can_undo (self);
+  could_redo = rugosa_history_can_redo (self);
+  open_group (self, label);
+  /* Nothing can be undone while a group is open: say so, and say so again
+   * when it closes (end_group). */
+  notify_state (self, could_undo, could_redo);
+}
 
-  g = g_ptr_array_steal_index (self->open_groups, self->open_groups->len - 1);
+/* Close the innermost group: it becomes one step (none when empty).  The
+ * step's push tells observers of a change against the state before the
+ * group opened. */
+static void
+close_group (RugosaHistory *self)
+{
+  Command *g = g_ptr_array_steal_index (self->open_groups, self->open_groups->len - 1);
+
   if (g->children->len == 0)
     {
       command_free (g);
@@ -475,6 +493,20 @@ rugosa_history_end_group (RugosaHistory *self)
   self->merge_broken = TRUE;
   push (self, g);
   self->merge_broken = TRUE;
+}
+
+void
+rugosa_history_end_group (RugosaHistory *self)
+{
+  gboolean could_undo, could_redo;
+
+  g_return_if_fail (RUGOSA_IS_HISTORY (self));
+  g_return_if_fail (self->open_groups->len > 0);
+
+  could_undo = rugosa_history_can_undo (self);
+  could_redo = rugosa_history_can_redo (self);
+  close_group (self);
+  notify_state (self, could_undo, could_redo);
 }
 
 void
