@@ -36,7 +36,7 @@ static void
 test_classes (void)
 {
   const RgAgingClass *c = NULL;
-  RgError err;
+  RgError err = { 0 };
 
   /* From memory of Lamont (1981), J. AWWA 73(5): five water groups; not
    * checked against the document */
@@ -73,7 +73,7 @@ test_roughness_linear (void)
   assert_rel (e10, 0.96e-3, 1e-14);
   assert_rel (e20 - e10, e10 - e0, 1e-12);
 
-  RgError err;
+  RgError err = { 0 };
   double e;
   g_assert_cmpint (rg_aging_roughness (-1e-3, 0.07e-3, 1.0, &e, &err), ==, RG_ERR_DOMAIN);
   g_assert_cmpint (rg_aging_roughness (1e-3, -0.07e-3, 1.0, &e, &err), ==, RG_ERR_DOMAIN);
@@ -187,7 +187,7 @@ test_errors (void)
 {
   RgLineInput in;
   RgAgingResult r;
-  RgError err;
+  RgError err = { 0 };
 
   water_main (&in);
   in.diameter_m = 0.02;

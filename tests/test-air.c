@@ -59,7 +59,7 @@ test_ideal_gas (void)
 static void
 test_warnings (void)
 {
-  RgWarnings w;
+  RgWarnings w = { 0 };
   RgFluidProps p;
 
   rg_warnings_clear (&w);
@@ -86,7 +86,7 @@ static void
 test_range (void)
 {
   RgFluidProps p;
-  RgError err;
+  RgError err = { 0 };
   double x;
 
   /* Source: White, Viscous Fluid Flow, 3rd ed., Table 1-2: Sutherland's law

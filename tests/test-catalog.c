@@ -23,7 +23,7 @@ static const RgPipe *
 pipe (const char *designation)
 {
   const RgPipe *p = NULL;
-  RgError err;
+  RgError err = { 0 };
   if (rg_pipe_lookup (designation, &p, &err) != RG_OK)
     g_error ("\"%s\": %s", designation, err.text);
   return p;
@@ -51,7 +51,7 @@ static void
 test_materials_lookup (void)
 {
   const RgMaterial *m = NULL;
-  RgError err;
+  RgError err = { 0 };
 
   g_assert_cmpint (rg_material_lookup ("commercial-steel", &m, &err), ==, RG_OK);
   /* From memory of White, Fluid Mechanics, 7th ed., Table 6.1 (commercial
@@ -194,7 +194,7 @@ static void
 test_pipes_unknown (void)
 {
   const RgPipe *p = NULL;
-  RgError err;
+  RgError err = { 0 };
 
   g_assert_cmpint (rg_pipe_lookup ("NPS 2 Sch 41", &p, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "NPS 2 Sch 40"));
@@ -235,7 +235,7 @@ test_unknown_one_line (void)
   const RgMaterial *m = NULL;
   const RgFitting *f = NULL;
   const RgAgingClass *a = NULL;
-  RgError err;
+  RgError err = { 0 };
   /* 39 ASCII bytes, then "é": "%.40s" cuts the two-byte sequence */
   const char *cut = "NPS 2 Sch 41 and some more words of tex\xc3\xa9";
 

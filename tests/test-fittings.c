@@ -19,7 +19,7 @@ static const RgFitting *
 fitting (const char *id)
 {
   const RgFitting *f = NULL;
-  RgError err;
+  RgError err = { 0 };
   if (rg_fitting_lookup (id, &f, &err) != RG_OK)
     g_error ("%s: %s", id, err.text);
   return f;
@@ -70,7 +70,7 @@ test_catalog (void)
   g_assert_cmpfloat (f->kd, ==, 4.0);
 
   const RgFitting *g = NULL;
-  RgError err;
+  RgError err = { 0 };
   g_assert_cmpint (rg_fitting_lookup ("elbow-90-standrd", &g, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "elbow-90-standard"));
   g_assert_cmpint (rg_fitting_lookup (NULL, &g, &err), ==, RG_ERR_NOT_FOUND);
@@ -109,7 +109,7 @@ test_three_k_errors (void)
 {
   const RgFitting *f = fitting ("valve-globe");
   double k = -1.0;
-  RgError err;
+  RgError err = { 0 };
 
   g_assert_cmpint (rg_fitting_k (f, 0.0, 0.05, &k, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "Reynolds"));
@@ -128,7 +128,7 @@ test_sum (void)
   const RgFitting *elbow = fitting ("elbow-90-long-radius");
   const RgFitting *gate = fitting ("valve-gate");
   double ke, kg, sum;
-  RgError err;
+  RgError err = { 0 };
 
   rg_fitting_k (elbow, re, d, &ke, NULL);
   rg_fitting_k (gate, re, d, &kg, NULL);
@@ -161,7 +161,7 @@ static double
 sch40_bore (const char *designation)
 {
   const RgPipe *p = NULL;
-  RgError err;
+  RgError err = { 0 };
   if (rg_pipe_lookup (designation, &p, &err) != RG_OK)
     g_error ("%s: %s", designation, err.text);
   return p->inner_diameter_m;
@@ -171,7 +171,7 @@ static double
 crane_ft (double d)
 {
   double ft = -1.0;
-  RgError err;
+  RgError err = { 0 };
   if (rg_fitting_crane_ft (d, &ft, &err) != RG_OK)
     g_error ("f_T at %g m: %s", d, err.text);
   return ft;
@@ -211,7 +211,7 @@ test_crane_ft (void)
   g_assert_cmpfloat (crane_ft (0.6), <, crane_ft (0.05));
 
   double ft = -1.0;
-  RgError err;
+  RgError err = { 0 };
   /* From memory of Moody (1944), Trans. ASME 66, the chart's largest
    * relative roughness ε/D = 0.05 (the limit fittings.c adopts); not checked
    * against the document: the bore must be at least 0.0018 in / 0.05 =
@@ -262,7 +262,7 @@ test_crane_butterfly (void)
         {
           const double d = bores[i].bore_in * INCH;
           double k = -1.0, k_laminar_re = -1.0;
-          RgWarnings w;
+          RgWarnings w = { 0 };
 
           rg_warnings_clear (&w);
           /* Source: Crane TP-410 (2009 ed.): K = n·f_T, n of the band. */
@@ -287,8 +287,8 @@ test_crane_warnings (void)
 {
   const RgFitting *f = fitting ("valve-butterfly");
   const RgFitting *elbow = fitting ("elbow-90-standard");
-  RgWarnings w;
-  RgError err;
+  RgWarnings w = { 0 };
+  RgError err = { 0 };
   double k = -1.0, k_plain_api = -1.0;
 
   /* Below the stated range: the NPS 2–8 multiplier, with a warning.

@@ -47,7 +47,7 @@ static void
 test_d341 (void)
 {
   RgOilSpec o;
-  RgWarnings w;
+  RgWarnings w = { 0 };
   double nu, nu1, nu2;
 
   vg46 (&o);
@@ -116,7 +116,7 @@ test_errors (void)
 {
   RgOilSpec o;
   RgFluidProps p;
-  RgError err;
+  RgError err = { 0 };
   double nu;
 
   vg46 (&o);

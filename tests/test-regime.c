@@ -274,7 +274,7 @@ test_validity_warnings (void)
   for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
     {
       RgFrictionPoint pt;
-      RgWarnings w;
+      RgWarnings w = { 0 };
       RgError err = { 0 };
 
       rg_warnings_clear (&w);

@@ -92,7 +92,7 @@ test_range (void)
 {
   double x;
   RgFluidProps p;
-  RgError err;
+  RgError err = { 0 };
 
   /* Source: Sharqawy et al. (2010): eq. (8) 0–180 °C, 0–0.16 kg/kg; eq. (22)
    * 0–180 °C, 0–0.15 kg/kg. */

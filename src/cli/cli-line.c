@@ -355,7 +355,7 @@ cli_cmd_fluid (int argc, char **argv)
   g_autoptr (GString) msg = g_string_new (NULL);
   g_autoptr (GString) out = g_string_new (NULL);
   RgError err = { 0 };
-  RgWarnings warnings;
+  RgWarnings warnings = { 0 };
   RgFluidSpec spec;
   RgFluidProps props;
 
@@ -540,7 +540,7 @@ cli_cmd_line (int argc, char **argv)
   g_autoptr (GString) out = g_string_new (NULL);
   g_autoptr (GArray) uses = g_array_new (FALSE, TRUE, sizeof (RgFittingUse));
   RgError err = { 0 };
-  RgWarnings warnings;
+  RgWarnings warnings = { 0 };
   RgFluidSpec spec;
   RgFluidProps props;
   RgLineInput in;

@@ -127,10 +127,10 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
                RugosaLineResults *r)
 {
   RugosaSettings *settings = self->settings;
-  RgError err;
+  RgError err = { 0 };
   RgFluidSpec spec;
   RgFluidProps props;
-  RgWarnings fluid_warnings;
+  RgWarnings fluid_warnings = { 0 };
   RgTransition transition;
   RgFrictionModel model;
   double diameter, roughness_new, rate;
