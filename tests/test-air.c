@@ -82,6 +82,9 @@ test_warnings (void)
   g_assert_cmpint (w.count, ==, 1);
 }
 
+#define T RG_SUBJECT_BIT (RG_SUBJECT_TEMPERATURE)
+#define P RG_SUBJECT_BIT (RG_SUBJECT_PRESSURE)
+
 static void
 test_range (void)
 {
@@ -93,12 +96,20 @@ test_range (void)
    * for air from 170 to 1900 K (from memory; not checked). */
   g_assert_cmpint (rg_air_properties (150.0, 1.0e5, &p, NULL, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "temperature"));
+  g_assert_cmpuint (err.subjects, ==, T);
+  /* in SI with 4 figures: air.h's 170 K and 1900 K */
+  g_assert_nonnull (strstr (err.text, "between 170 K and 1900 K, not 150 K"));
   g_assert_cmpint (rg_air_properties (2000.0, 1.0e5, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, T);
   g_assert_cmpint (rg_air_properties (300.0, 0.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "pressure"));
+  g_assert_cmpuint (err.subjects, ==, P);
   g_assert_cmpint (rg_air_properties (300.0, NAN, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, P);
   g_assert_cmpint (rg_air_density (300.0, 2.0e7, &x, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, P);
   g_assert_cmpint (rg_air_viscosity (INFINITY, &x, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, T);
 }
 
 int
