@@ -66,9 +66,11 @@ test_materials_lookup (void)
   g_assert_cmpint (rg_material_lookup ("comercial-steel", &m, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "commercial-steel"));
   g_assert_nonnull (strstr (err.text, "comercial-steel"));
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_MATERIAL));
   g_assert_cmpint (rg_material_lookup ("steel", &m, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "commercial-steel"));
   g_assert_cmpint (rg_material_lookup (NULL, &m, &err), ==, RG_ERR_NOT_FOUND);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_MATERIAL));
 }
 
 static void
@@ -199,6 +201,7 @@ test_pipes_unknown (void)
   g_assert_cmpint (rg_pipe_lookup ("NPS 2 Sch 41", &p, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "NPS 2 Sch 40"));
   g_assert_nonnull (strstr (err.text, "closest"));
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_PIPE));
   /* From memory of ASME B36.10M, Table 1: no Sch 40 for NPS 22, no XXS for
    * NPS 3-1/2; not checked against the document */
   g_assert_cmpint (rg_pipe_lookup ("NPS 22 Sch 40", &p, &err), ==, RG_ERR_NOT_FOUND);
@@ -210,6 +213,7 @@ test_pipes_unknown (void)
   g_assert_nonnull (strstr (err.text, "3/4 Type"));
   g_assert_cmpint (rg_pipe_lookup ("", &p, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_cmpint (rg_pipe_lookup (NULL, &p, &err), ==, RG_ERR_NOT_FOUND);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_PIPE));
   g_assert_cmpint (rg_pipe_lookup ("\xff\xfe NPS 2 Sch 40 and a lot of extra words after it", &p, &err),
                    ==, RG_ERR_NOT_FOUND);
   g_assert_cmpint ((int) strlen (err.text), <, RG_ERROR_TEXT_MAX);
