@@ -22,13 +22,49 @@ finish_output (GString *out)
   return cli_write_stdout (out->str);
 }
 
+/* The units of the values in the core's sentences (RgError.units,
+ * RgWarnings.units): for each quantity the unit the user typed last, else
+ * the unit the table shows it in, else SI.  The process runs one command,
+ * so one table serves it. */
+static RgUnitChoice cli_units = {
+  .unit = {
+    [RG_QTY_TEMPERATURE] = "°C",
+    [RG_QTY_PRESSURE] = "kPa",
+    [RG_QTY_ROUGHNESS] = "mm",
+  },
+};
+
+/* Remembers the unit of `text`, a value of q the core has just read: the
+ * longest ending of the text after a digit that is a unit of q. */
+static void
+remember_unit (RgQuantity q, const char *text)
+{
+  gboolean digit = FALSE;
+
+  for (const char *p = text; p != NULL && *p != '\0'; p++)
+    {
+      double x;
+
+      if (digit && *p != ' ' && !g_ascii_isdigit (*p)
+          && rg_units_to_si (q, 1.0, p, &x, NULL) == RG_OK)
+        {
+          cli_units.unit[q] = p;
+          return;
+        }
+      digit |= g_ascii_isdigit (*p);
+    }
+}
+
 static gboolean
 parse_quantity (const CliArgs *args, const char *name, RgQuantity q,
                 double *si, RgError *err)
 {
   const char *text = cli_args_get (args, name);
 
-  return rg_units_parse (q, name, text, si, err) == RG_OK;
+  if (rg_units_parse (q, name, text, si, err) != RG_OK)
+    return FALSE;
+  remember_unit (q, text);
+  return TRUE;
 }
 
 /* A quantity that must be greater than zero (or, with allow_zero, not
@@ -49,52 +85,105 @@ parse_positive (const CliArgs *args, const char *name, RgQuantity q,
   return TRUE;
 }
 
-/* The core's sentences name a quantity ("the salinity"), not the option
- * that set it: add the option, so the user knows what to change.  The
- * first entry whose words occur in the sentence wins. */
-static const char *const ERROR_OPTIONS[][2] = {
-  { "Unknown pipe designation", "--pipe" },
-  { "Unknown pipe material", "--material" },
-  { "Unknown fitting", "--fitting" },
-  { "Unknown fluid", "--fluid" },
-  { "aggressiveness class", "--aging" },
-  { "friction model", "--model" },
-  { "transition limits", "--re-laminar-max and --re-turbulent-min" },
-  { "After ", "--age and --aging" },
-  { "aged head loss", "--flow, --length, --age and --aging" },
-  { "head loss is too large", "--flow, --length and --k-sum" },
-  { "relative roughness", "--roughness and --diameter" },
-  { "Reynolds number", "--flow, --diameter and the fluid" },
-  { "velocity that cannot", "--flow and --diameter" },
-  { "boils", "--temperature and --pressure" },
-  { "lower of the two", "--oil-nu1 and --oil-nu2 at --oil-t1 and --oil-t2" },
-  { "two temperatures", "--oil-t1 and --oil-t2" },
-  { "first temperature", "--oil-t1" },
-  { "second temperature", "--oil-t2" },
-  { "reference temperature", "--oil-density-t" },
-  { "kinematic viscosities", "--oil-nu1 and --oil-nu2" },
-  { "reference density", "--oil-density" },
-  { "expansion", "--oil-expansion" },
-  { "salinity", "--salinity" },
-  { "custom fluid's density", "--density" },
-  { "custom fluid's dynamic viscosity", "--viscosity" },
-  { "pressure", "--pressure" },
-  { "temperature", "--temperature" },
-};
-
-static int
-fail_naming_option (const RgError *err)
+/* The option of `line` and `fluid` that sets the input a core error is
+ * about (RgError.subjects), or NULL when no option does.  Where two
+ * options can set the same input (--diameter or --pipe, --roughness or
+ * --material) the one given wins; the options of optional inputs are named
+ * only when given.  One small table, so that it can later come from the
+ * field table of a line option. */
+static const char *
+subject_option (RgSubject subject, const CliArgs *args)
 {
+  static const struct
+  {
+    const char *option, *or_option;
+    RgSubject subject;
+    gboolean only_if_given;
+  } options[] = {
+    { "--flow", NULL, RG_SUBJECT_FLOW, FALSE },
+    { "--diameter", "--pipe", RG_SUBJECT_DIAMETER, FALSE },
+    { "--length", NULL, RG_SUBJECT_LENGTH, FALSE },
+    { "--roughness", "--material", RG_SUBJECT_ROUGHNESS, FALSE },
+    { "--elevation", NULL, RG_SUBJECT_ELEVATION, TRUE },
+    { "--fitting", NULL, RG_SUBJECT_FITTING, TRUE },
+    { "--k-sum", NULL, RG_SUBJECT_K_SUM, TRUE },
+    { "--material", NULL, RG_SUBJECT_MATERIAL, FALSE },
+    { "--pipe", NULL, RG_SUBJECT_PIPE, FALSE },
+    { "--aging", NULL, RG_SUBJECT_AGING_CLASS, FALSE },
+    { "--aging", NULL, RG_SUBJECT_AGING_RATE, TRUE },
+    { "--age", NULL, RG_SUBJECT_AGE, TRUE },
+    { "--fluid", NULL, RG_SUBJECT_FLUID, FALSE },
+    { "--temperature", NULL, RG_SUBJECT_TEMPERATURE, FALSE },
+    { "--pressure", NULL, RG_SUBJECT_PRESSURE, FALSE },
+    { "--salinity", NULL, RG_SUBJECT_SALINITY, FALSE },
+    { "--density", NULL, RG_SUBJECT_DENSITY, FALSE },
+    { "--viscosity", NULL, RG_SUBJECT_VISCOSITY, FALSE },
+    { "--oil-t1", NULL, RG_SUBJECT_OIL_T1, FALSE },
+    { "--oil-nu1", NULL, RG_SUBJECT_OIL_NU1, FALSE },
+    { "--oil-t2", NULL, RG_SUBJECT_OIL_T2, FALSE },
+    { "--oil-nu2", NULL, RG_SUBJECT_OIL_NU2, FALSE },
+    { "--oil-density", NULL, RG_SUBJECT_OIL_DENSITY_REF, FALSE },
+    { "--oil-density-t", NULL, RG_SUBJECT_OIL_T_REF, FALSE },
+    { "--oil-expansion", NULL, RG_SUBJECT_OIL_EXPANSION, FALSE },
+    { "--model", NULL, RG_SUBJECT_MODEL, FALSE },
+    { "--re-laminar-max", NULL, RG_SUBJECT_RE_LAMINAR_MAX, FALSE },
+    { "--re-turbulent-min", NULL, RG_SUBJECT_RE_TURBULENT_MIN, FALSE },
+    { "--re", NULL, RG_SUBJECT_REYNOLDS, TRUE },
+    { "--rr", NULL, RG_SUBJECT_RELATIVE_ROUGHNESS, TRUE },
+  };
+
+  for (gsize i = 0; i < G_N_ELEMENTS (options); i++)
+    if (options[i].subject == subject)
+      {
+        if (options[i].or_option != NULL && cli_args_has (args, options[i].or_option)
+            && !cli_args_has (args, options[i].option))
+          return options[i].or_option;
+        if (options[i].only_if_given && !cli_args_has (args, options[i].option))
+          return NULL;
+        return options[i].option;
+      }
+  return NULL;
+}
+
+/* Whether `text` names `option` as a whole word ("--oil-density" is not
+ * named by "--oil-density-t"). */
+static gboolean
+names_option (const char *text, const char *option)
+{
+  const size_t n = strlen (option);
+
+  for (const char *p = strstr (text, option); p != NULL; p = strstr (p + 1, option))
+    if (!g_ascii_isalnum (p[n]) && p[n] != '-')
+      return TRUE;
+  return FALSE;
+}
+
+/* The core's sentences name a quantity ("the salinity"), in the user's
+ * language, not the option that set it: add the options of the error's
+ * subjects the sentence does not name yet, so the user knows what to
+ * change. */
+static int
+fail_naming_option (const RgError *err, const CliArgs *args)
+{
+  g_autoptr (GString) options = g_string_new (NULL);
   const char *text = err->text;
   size_t len = strlen (text);
 
-  for (gsize i = 0; i < G_N_ELEMENTS (ERROR_OPTIONS); i++)
-    if (strstr (text, ERROR_OPTIONS[i][0]) != NULL
-        && strstr (text, ERROR_OPTIONS[i][1]) == NULL && len > 0
-        && text[len - 1] == '.')
-      return cli_fail (_("%.*s; check %s."), (int) (len - 1), text,
-                       ERROR_OPTIONS[i][1]);
-  return cli_fail_error (err);
+  for (int s = RG_SUBJECT_NONE + 1; s < RG_SUBJECT_N; s++)
+    {
+      const char *option;
+
+      if ((err->subjects & RG_SUBJECT_BIT (s)) == 0
+          || (option = subject_option ((RgSubject) s, args)) == NULL
+          || names_option (text, option) || names_option (options->str, option))
+        continue;
+      if (options->len > 0)
+        g_string_append (options, ", ");
+      g_string_append (options, option);
+    }
+  if (options->len == 0 || len == 0 || text[len - 1] != '.')
+    return cli_fail_error (err);
+  return cli_fail (_("%.*s; check %s."), (int) (len - 1), text, options->str);
 }
 
 static gboolean
@@ -148,9 +237,9 @@ cli_cmd_friction (int argc, char **argv)
   if (!(rr >= 0.0 && rr <= RG_FRICTION_RR_MAX))
     return cli_fail (_("--rr must lie between 0 and %g."), RG_FRICTION_RR_MAX);
   if (!parse_model (&args, &model, &err))
-    return fail_naming_option (&err);
+    return fail_naming_option (&err, &args);
   if (rg_friction_point (model, NULL, re, rr, &pt, &err) != RG_OK)
-    return cli_fail_error (&err);
+    return fail_naming_option (&err, &args);
 
   if (cli_args_has (&args, "--json"))
     {
@@ -264,6 +353,7 @@ fluid_from_args (const CliArgs *args, const char *kind_text, RgFluidSpec *spec,
           return FALSE;
         if (rg_units_parse_viscosity ("--viscosity", visc, &mu, &kinematic, err) != RG_OK)
           return FALSE;
+        remember_unit (kinematic ? RG_QTY_KIN_VISCOSITY : RG_QTY_DYN_VISCOSITY, visc);
         spec->viscosity_pa_s = kinematic ? mu * spec->density_kg_m3 : mu;
         return TRUE;
       }
@@ -354,8 +444,8 @@ cli_cmd_fluid (int argc, char **argv)
   g_auto (CliArgs) args = { 0 };
   g_autoptr (GString) msg = g_string_new (NULL);
   g_autoptr (GString) out = g_string_new (NULL);
-  RgError err = { 0 };
-  RgWarnings warnings = { 0 };
+  RgError err = { .units = &cli_units };
+  RgWarnings warnings = { .units = &cli_units };
   RgFluidSpec spec;
   RgFluidProps props;
 
@@ -364,10 +454,10 @@ cli_cmd_fluid (int argc, char **argv)
   if (args.positional->len != 1)
     return cli_fail (_("'fluid' needs exactly one fluid name: water, seawater, oil, air or custom."));
   if (!fluid_from_args (&args, g_ptr_array_index (args.positional, 0), &spec, &err))
-    return fail_naming_option (&err);
+    return fail_naming_option (&err, &args);
   rg_warnings_clear (&warnings);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
-    return fail_naming_option (&err);
+    return fail_naming_option (&err, &args);
 
   if (cli_args_has (&args, "--json"))
     {
@@ -539,8 +629,8 @@ cli_cmd_line (int argc, char **argv)
   g_autoptr (GString) msg = g_string_new (NULL);
   g_autoptr (GString) out = g_string_new (NULL);
   g_autoptr (GArray) uses = g_array_new (FALSE, TRUE, sizeof (RgFittingUse));
-  RgError err = { 0 };
-  RgWarnings warnings = { 0 };
+  RgError err = { .units = &cli_units };
+  RgWarnings warnings = { .units = &cli_units };
   RgFluidSpec spec;
   RgFluidProps props;
   RgLineInput in;
@@ -567,7 +657,7 @@ cli_cmd_line (int argc, char **argv)
   if (cli_args_has (&args, "--pipe"))
     {
       if (rg_pipe_lookup (cli_args_get (&args, "--pipe"), &pipe, &err) != RG_OK)
-        return fail_naming_option (&err);
+        return fail_naming_option (&err, &args);
       in.diameter_m = pipe->inner_diameter_m;
     }
   else if (!cli_args_has (&args, "--diameter"))
@@ -591,7 +681,7 @@ cli_cmd_line (int argc, char **argv)
       if (name == NULL)
         return cli_fail (_("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material."));
       if (rg_material_lookup (name, &material, &err) != RG_OK)
-        return fail_naming_option (&err);
+        return fail_naming_option (&err, &args);
       in.roughness_m = material->roughness_m;
     }
 
@@ -622,7 +712,7 @@ cli_cmd_line (int argc, char **argv)
         return cli_fail (_("--k-sum must lie between 0 and 100000."));
     }
   if (!parse_model (&args, &in.model, &err))
-    return fail_naming_option (&err);
+    return fail_naming_option (&err, &args);
   if (cli_args_has (&args, "--re-laminar-max")
       && !cli_parse_number ("--re-laminar-max", cli_args_get (&args, "--re-laminar-max"),
                             &in.transition.re_laminar_max, msg))
@@ -638,15 +728,15 @@ cli_cmd_line (int argc, char **argv)
   if (cli_args_has (&args, "--age") && !parse_age (cli_args_get (&args, "--age"), &age, &err))
     return cli_fail_error (&err);
   if (cli_args_has (&args, "--aging") && !parse_aging (cli_args_get (&args, "--aging"), &rate, &err))
-    return fail_naming_option (&err);
+    return fail_naming_option (&err, &args);
 
   /* Fluid */
   if ((fluid = cli_args_get (&args, "--fluid")) == NULL)
     return cli_fail (_("--fluid is required: water, seawater, oil, air or custom."));
   if (!fluid_from_args (&args, fluid, &spec, &err))
-    return fail_naming_option (&err);
+    return fail_naming_option (&err, &args);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
-    return fail_naming_option (&err);
+    return fail_naming_option (&err, &args);
   in.density_kg_m3 = props.density_kg_m3;
   in.viscosity_pa_s = props.dynamic_viscosity_pa_s;
 
@@ -657,7 +747,7 @@ cli_cmd_line (int argc, char **argv)
     {
       RgFittingUse use;
       if (!parse_fitting (g_ptr_array_index (fittings, i), &use, &err))
-        return fail_naming_option (&err);
+        return fail_naming_option (&err, &args);
       g_array_append_val (uses, use);
     }
   in.k_sum = k_extra;
@@ -665,16 +755,23 @@ cli_cmd_line (int argc, char **argv)
     {
       RgLineResult first;
       if (rg_line_evaluate (&in, &first, &err) != RG_OK)
-        return fail_naming_option (&err);
+        {
+          err.subjects = rg_fluid_subjects_behind (spec.kind, err.subjects);
+          return fail_naming_option (&err, &args);
+        }
       if (rg_fittings_k_sum_checked ((RgFittingUse *) uses->data, (int) uses->len,
                                      first.reynolds, in.diameter_m, &k_fittings,
                                      &warnings, &err) != RG_OK)
-        return cli_fail_error (&err);
+        return fail_naming_option (&err, &args);
       in.k_sum = k_extra + k_fittings;
     }
 
   if (rg_aging_evaluate (&in, rate, age, &aged, &err) != RG_OK)
-    return fail_naming_option (&err);
+    {
+      /* the line took the fluid's density and viscosity as numbers */
+      err.subjects = rg_fluid_subjects_behind (spec.kind, err.subjects);
+      return fail_naming_option (&err, &args);
+    }
 
   const RgLineResult *r = &aged.result;
   rg_friction_validity_warnings (in.model, r->reynolds, r->relative_roughness,
