@@ -105,7 +105,8 @@ const char *rg_gettext (const char *msgid);
 #define RG_N_(text) (text)
 
 /* Fill `err` (if not NULL) and return `status`; the format is translated
- * (rg_gettext) before formatting. */
+ * (rg_gettext) before formatting.  The error names no subject: for callers
+ * outside the core (the core itself uses rg_error_set_on). */
 RgStatus rg_error_set (RgError *err, RgStatus status, const char *fmt, ...)
   __attribute__ ((format (printf, 3, 4)));
 
