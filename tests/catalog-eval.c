@@ -53,8 +53,8 @@ main (void)
           for (size_t b = 0; b < sizeof crane_in / sizeof crane_in[0]; b++)
             {
               double k, ft;
-              RgWarnings w;
-              RgError err;
+              RgWarnings w = { 0 };
+              RgError err = { 0 };
               rg_warnings_clear (&w);
               if (rg_fitting_crane_ft (crane_in[b] * 0.0254, &ft, &err) != RG_OK
                   || rg_fitting_k_checked (f, 1.0e6, crane_in[b] * 0.0254, &k, &w, &err) != RG_OK)
@@ -72,7 +72,7 @@ main (void)
         for (size_t r = 0; r < sizeof res / sizeof res[0]; r++)
           {
             double k;
-            RgError err;
+            RgError err = { 0 };
             if (rg_fitting_k (f, res[r], bores_in[b] * 0.0254, &k, &err) != RG_OK)
               {
                 fprintf (stderr, "%s: %s\n", f->id, err.text);

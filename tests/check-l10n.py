@@ -12,7 +12,8 @@ Run:
   check-l10n.py cli RUGOSA_CLI SOURCE_ROOT
       rugosa-cli under LANGUAGE=de, LANG=de_DE.UTF-8 (LOCPATH and
       RUGOSA_LOCALEDIR come from the environment): refusals, core sentences
-      and --help come out in German; JSON, CSV and the numbers of the table
+      and --help come out in German, and a refusal of the core names the
+      option of the error's subjects (never one guessed from words); JSON, CSV and the numbers of the table
       are byte for byte those of the C locale; the catalog names in the
       tables are German, in JSON English.
 
@@ -216,6 +217,31 @@ def cli(cli_path, root):
     text = p_de.stderr.decode()
     check("a refusal of the core is in German", p_de.returncode == 2
           and text.startswith("rugosa-cli: " + prefix) and ' oder ' in text, text)
+
+    # The option a refusal of the core names comes from the error's subjects,
+    # not from English words in the sentence: a pressure unit given for the
+    # viscosity is about --viscosity (the sentence names it), never
+    # --pressure; a custom density out of range names --density after the
+    # German sentence.
+    args = ['fluid', 'custom', '--density', '998 kg/m3', '--viscosity', '1 Pa']
+    p_de = run(cli_path, args, de_env())
+    text = p_de.stderr.decode()
+    kind = tr("'%s' for %s has a unit of another quantity (%s): use %s.")
+    check("German: a unit of another quantity for --viscosity names --viscosity only",
+          p_de.returncode == 2 and p_de.stdout == b'' and text.count('\n') == 1
+          and text.startswith('rugosa-cli: ' + kind.split('%s')[0] + '1 Pa')
+          and '--viscosity' in text and '--pressure' not in text
+          and '(' + tr('pressure') + ')' in text, text)
+    args = ['fluid', 'custom', '--density', '1e5 kg/m3', '--viscosity', '1 cP']
+    p_de = run(cli_path, args, de_env())
+    text = p_de.stderr.decode()
+    hint = tr('%.*s; check %s.').replace('%.*s', '').replace('%s', '--density')
+    check("German: a density out of range names --density after the German sentence",
+          p_de.returncode == 2 and text.count('\n') == 1
+          and text.startswith('rugosa-cli: ' + tr("The custom fluid's density must lie between "
+                                                   "%s and %s (plausible fluids), not %s."
+                                                   ).split('%s')[0])
+          and text.rstrip('\n').endswith(hint), text)
 
     # Warnings of the core in the table output: German; numbers with '.'.
     # A 100 mm bore at 0.25 L/s of 20 °C water: Re about 3200, transitional.

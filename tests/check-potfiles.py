@@ -15,9 +15,11 @@ Marked strings:
   C sources under src/      _("…"), N_("…"), C_("…"), NC_("…"), ngettext ("…"),
                             g_dngettext, g_dpgettext2, g_dcgettext — outside
                             comments, with or without a space before "(";
-                            and the format of rg_error_set (err, STATUS, "…")
+                            and the format of rg_error_set (err, STATUS, "…"),
+                            rg_error_set_on (err, STATUS, SUBJECTS, "…")
                             and rg_warnings_add (w, "…"), which the core
-                            translates
+                            translates, and the core's table marks
+                            RG_N_ ("…")
   GtkBuilder files (ui/, src/)  translatable="yes"
   data/*.desktop.in         always (Name, GenericName, Comment, Keywords)
   data/*.metainfo.xml.in    always (name, summary, description)
@@ -35,9 +37,11 @@ C_MARK = re.compile(
     r'(?<![A-Za-z0-9_])(?:_|N_|C_|NC_|ngettext|g_dngettext|g_dpgettext2|g_dcgettext)'
     r'\s*\(\s*(?:[A-Za-z_][A-Za-z0-9_]*\s*,\s*)?"'
     # the core translates inside these (src/core/status.c; po/meson.build)
-    r'|(?<![A-Za-z0-9_])rg_gettext\s*\(\s*"'
+    r'|(?<![A-Za-z0-9_])(?:rg_gettext|RG_N_)\s*\(\s*"'
     r'|(?<![A-Za-z0-9_])(?:rg_error_set\s*\([^,;()"]*,[^,;()"]*,|rg_warnings_add\s*\([^,;()"]*,)'
-    r'\s*"')
+    r'\s*"'
+    # rg_error_set_on: the subjects may hold calls and parentheses
+    r'|(?<![A-Za-z0-9_])rg_error_set_on\s*\([^;"]*?,[^;"]*?,[^;"]*?,\s*"')
 UI_MARK = re.compile(r'translatable\s*=\s*["\']yes["\']')
 
 # The keywords of Meson's i18n 'glib' preset (mesonbuild/modules/i18n.py).
@@ -52,8 +56,8 @@ XGETTEXT_ARGS = [
     '--flag=g_string_append_printf:2:c-format', '--flag=g_error_new:3:c-format',
     '--flag=g_set_error:4:c-format',
     # po/meson.build adds these for the core
-    '--keyword=rg_error_set:3', '--keyword=rg_warnings_add:2',
-    '--keyword=rg_gettext',
+    '--keyword=rg_error_set:3', '--keyword=rg_error_set_on:4',
+    '--keyword=rg_warnings_add:2', '--keyword=rg_gettext', '--keyword=RG_N_',
 ]
 
 passed = 0
@@ -194,6 +198,12 @@ def self_test():
             'src/core/f.c': 'return rg_error_set (err, RG_ERR_DOMAIN,\n    "Re must be positive.");\n',
             'src/core/g.c': 'rg_warnings_add (w, "Outside the range.");\n',
         }, ['src/core/f.c has strings marked', 'src/core/g.c has strings marked']),
+        ('core messages with subjects, and the marks of the core\'s tables', {
+            'po/POTFILES.in': '',
+            'src/core/h.c': 'return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (FLOW) | f (x),\n'
+                            '    "The flow must be positive.");\n',
+            'src/core/k.c': 'static const char *const N[] = { RG_N_ ("flow") };\n',
+        }, ['src/core/h.c has strings marked', 'src/core/k.c has strings marked']),
         ('marks inside comments only', {
             'po/POTFILES.in': '',
             'src/app/a.c': '/* wrap with _("…") */\n// N_("x")\nx = rg_foo_(1);\n',

@@ -69,7 +69,8 @@ OPTIONS = {
     "--flow": (WATER, "L/s", "m", {"tiny": "accept"}),
     "--diameter": (WATER, "mm", "L/s", {}),
     "--pipe": (PIPE, "name", "", {}),
-    "--length": (WATER, "m", "gpm", {"tiny": "accept"}),
+    # the length's range starts at 1 mm (its row of the field table)
+    "--length": (WATER, "m", "gpm", {}),
     "--roughness": (WATER, "mm", "bar", {"zero": "accept", "tiny": "accept"}),
     "--material": (MATERIAL, "name", "", {}),
     "--age": (AGED, "", "m", {"zero": "accept", "tiny": "accept"}),
@@ -115,7 +116,9 @@ RANGE = {
     "--roughness": [("ε/D 0.06, above Colebrook's stated 0.05", WATER, "6 mm", "warn")],
     "--material": [("a name not in the catalog", MATERIAL, "unobtainium", "refuse")],
     "--age": [("older than 200 years", AGED, "300", "refuse"),
-              ("age as a time", AGED, "25 yr", "accept")],
+              # 25 years of moderate growth take the line above the default
+              # gradient limit of 5 m per 100 m: a warning, as in a project
+              ("age as a time", AGED, "25 yr", "warn")],
     "--aging": [("faster than 10 mm/yr", AGED, "20 mm/yr", "refuse"),
                 ("an unknown class", AGED, "corrosive", "refuse")],
     "--fitting": [("count 0", WATER, "elbow-90-standard x0", "refuse"),

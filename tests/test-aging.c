@@ -1,6 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Roughness aging: linear growth, classes, head-loss ratio and its rate. */
 #include "core/aging.h"
+#include "core/units.h"
 
 #include <glib.h>
 #include <math.h>
@@ -32,11 +33,13 @@ water_main (RgLineInput *in)
   in->viscosity_pa_s = 1.0016e-3;
 }
 
+#define ON(s) RG_SUBJECT_BIT (RG_SUBJECT_##s)
+
 static void
 test_classes (void)
 {
   const RgAgingClass *c = NULL;
-  RgError err;
+  RgError err = { 0 };
 
   /* From memory of Lamont (1981), J. AWWA 73(5): five water groups; not
    * checked against the document */
@@ -58,6 +61,7 @@ test_classes (void)
   assert_rel (c->rate_m_per_year, 0.07e-3, 1e-12);
   g_assert_cmpint (rg_aging_class_lookup ("severre", &c, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "severe"));
+  g_assert_cmpuint (err.subjects, ==, ON (AGING_CLASS));
 }
 
 static void
@@ -73,14 +77,27 @@ test_roughness_linear (void)
   assert_rel (e10, 0.96e-3, 1e-14);
   assert_rel (e20 - e10, e10 - e0, 1e-12);
 
-  RgError err;
+  RgError err = { 0 };
   double e;
+  RgUnitChoice mm = { { NULL } };
+  mm.unit[RG_QTY_ROUGHNESS_RATE] = "mm/yr";
+  err.units = &mm;
   g_assert_cmpint (rg_aging_roughness (-1e-3, 0.07e-3, 1.0, &e, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (ROUGHNESS));
   g_assert_cmpint (rg_aging_roughness (1e-3, -0.07e-3, 1.0, &e, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "rate"));
+  g_assert_cmpuint (err.subjects, ==, ON (AGING_RATE));
+  /* Source: aging.h, at most 10 mm per (Julian) year, written in mm/yr */
+  g_assert_cmpint (rg_aging_roughness (1e-3, 0.02, 1.0, &e, &err), ==, RG_ERR_DOMAIN);
+  g_assert_nonnull (strstr (err.text, "between 0 mm/yr and 10 mm/yr, not 20 mm/yr"));
+  g_assert_cmpuint (err.subjects, ==, ON (AGING_RATE));
+  g_assert_cmpint (rg_aging_roughness (1e-3, RG_AGING_RATE_MAX_M_PER_YEAR, 1.0, &e, &err), ==, RG_OK);
   g_assert_cmpint (rg_aging_roughness (1e-3, 0.07e-3, -1.0, &e, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "age"));
+  g_assert_cmpuint (err.subjects, ==, ON (AGE));
   g_assert_cmpint (rg_aging_roughness (1e-3, 0.07e-3, NAN, &e, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (AGE));
+  g_assert_cmpint (rg_aging_roughness (1e-3, 0.07e-3, RG_AGING_AGE_MAX_YEARS, &e, &err), ==, RG_OK);
 }
 
 static void
@@ -187,18 +204,28 @@ test_errors (void)
 {
   RgLineInput in;
   RgAgingResult r;
-  RgError err;
+  RgError err = { 0 };
 
   water_main (&in);
   in.diameter_m = 0.02;
   /* Common practice (no single source): ε/D above 0.1 is off the chart. */
   g_assert_cmpint (rg_aging_evaluate (&in, 2.0e-3, 10.0, &r, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "years"));
+  g_assert_cmpuint (err.subjects, ==, ON (AGE) | ON (AGING_RATE) | ON (ROUGHNESS) | ON (DIAMETER));
   water_main (&in);
   in.length_m = -1.0;
   g_assert_cmpint (rg_aging_evaluate (&in, 2.0e-3, 10.0, &r, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (LENGTH));
   water_main (&in);
   g_assert_cmpint (rg_aging_evaluate (&in, 2.0e-3, 1000.0, &r, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (AGE));
+  /* the line's own errors come through with their subjects, the Reynolds
+   * number's with the inputs behind it */
+  water_main (&in);
+  in.flow_m3_s = 1.0e6;
+  g_assert_cmpint (rg_aging_evaluate (&in, 0.1e-3, 10.0, &r, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects & ON (FLOW), !=, 0);
+  g_assert_cmpuint (err.subjects & ON (DIAMETER), !=, 0);
 }
 
 int

@@ -59,7 +59,7 @@ test_ideal_gas (void)
 static void
 test_warnings (void)
 {
-  RgWarnings w;
+  RgWarnings w = { 0 };
   RgFluidProps p;
 
   rg_warnings_clear (&w);
@@ -82,23 +82,34 @@ test_warnings (void)
   g_assert_cmpint (w.count, ==, 1);
 }
 
+#define T RG_SUBJECT_BIT (RG_SUBJECT_TEMPERATURE)
+#define P RG_SUBJECT_BIT (RG_SUBJECT_PRESSURE)
+
 static void
 test_range (void)
 {
   RgFluidProps p;
-  RgError err;
+  RgError err = { 0 };
   double x;
 
   /* Source: White, Viscous Fluid Flow, 3rd ed., Table 1-2: Sutherland's law
    * for air from 170 to 1900 K (from memory; not checked). */
   g_assert_cmpint (rg_air_properties (150.0, 1.0e5, &p, NULL, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "temperature"));
+  g_assert_cmpuint (err.subjects, ==, T);
+  /* in SI with 4 figures: air.h's 170 K and 1900 K */
+  g_assert_nonnull (strstr (err.text, "between 170 K and 1900 K, not 150 K"));
   g_assert_cmpint (rg_air_properties (2000.0, 1.0e5, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, T);
   g_assert_cmpint (rg_air_properties (300.0, 0.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "pressure"));
+  g_assert_cmpuint (err.subjects, ==, P);
   g_assert_cmpint (rg_air_properties (300.0, NAN, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, P);
   g_assert_cmpint (rg_air_density (300.0, 2.0e7, &x, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, P);
   g_assert_cmpint (rg_air_viscosity (INFINITY, &x, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, T);
 }
 
 int

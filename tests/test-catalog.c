@@ -23,7 +23,7 @@ static const RgPipe *
 pipe (const char *designation)
 {
   const RgPipe *p = NULL;
-  RgError err;
+  RgError err = { 0 };
   if (rg_pipe_lookup (designation, &p, &err) != RG_OK)
     g_error ("\"%s\": %s", designation, err.text);
   return p;
@@ -51,7 +51,7 @@ static void
 test_materials_lookup (void)
 {
   const RgMaterial *m = NULL;
-  RgError err;
+  RgError err = { 0 };
 
   g_assert_cmpint (rg_material_lookup ("commercial-steel", &m, &err), ==, RG_OK);
   /* From memory of White, Fluid Mechanics, 7th ed., Table 6.1 (commercial
@@ -66,9 +66,11 @@ test_materials_lookup (void)
   g_assert_cmpint (rg_material_lookup ("comercial-steel", &m, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "commercial-steel"));
   g_assert_nonnull (strstr (err.text, "comercial-steel"));
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_MATERIAL));
   g_assert_cmpint (rg_material_lookup ("steel", &m, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "commercial-steel"));
   g_assert_cmpint (rg_material_lookup (NULL, &m, &err), ==, RG_ERR_NOT_FOUND);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_MATERIAL));
 }
 
 static void
@@ -194,11 +196,12 @@ static void
 test_pipes_unknown (void)
 {
   const RgPipe *p = NULL;
-  RgError err;
+  RgError err = { 0 };
 
   g_assert_cmpint (rg_pipe_lookup ("NPS 2 Sch 41", &p, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "NPS 2 Sch 40"));
   g_assert_nonnull (strstr (err.text, "closest"));
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_PIPE));
   /* From memory of ASME B36.10M, Table 1: no Sch 40 for NPS 22, no XXS for
    * NPS 3-1/2; not checked against the document */
   g_assert_cmpint (rg_pipe_lookup ("NPS 22 Sch 40", &p, &err), ==, RG_ERR_NOT_FOUND);
@@ -210,6 +213,7 @@ test_pipes_unknown (void)
   g_assert_nonnull (strstr (err.text, "3/4 Type"));
   g_assert_cmpint (rg_pipe_lookup ("", &p, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_cmpint (rg_pipe_lookup (NULL, &p, &err), ==, RG_ERR_NOT_FOUND);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_PIPE));
   g_assert_cmpint (rg_pipe_lookup ("\xff\xfe NPS 2 Sch 40 and a lot of extra words after it", &p, &err),
                    ==, RG_ERR_NOT_FOUND);
   g_assert_cmpint ((int) strlen (err.text), <, RG_ERROR_TEXT_MAX);
@@ -235,7 +239,7 @@ test_unknown_one_line (void)
   const RgMaterial *m = NULL;
   const RgFitting *f = NULL;
   const RgAgingClass *a = NULL;
-  RgError err;
+  RgError err = { 0 };
   /* 39 ASCII bytes, then "é": "%.40s" cuts the two-byte sequence */
   const char *cut = "NPS 2 Sch 41 and some more words of tex\xc3\xa9";
 

@@ -3,10 +3,15 @@
  * valves), sums with counts and plain K, warnings. */
 #include "core/catalog.h"
 #include "core/fittings.h"
+#include "core/units.h"
 
 #include <glib.h>
 #include <math.h>
 #include <string.h>
+
+#define FITTING RG_SUBJECT_BIT (RG_SUBJECT_FITTING)
+#define DIAMETER RG_SUBJECT_BIT (RG_SUBJECT_DIAMETER)
+#define REYNOLDS RG_SUBJECT_BIT (RG_SUBJECT_REYNOLDS)
 
 static void
 assert_rel (double got, double want, double tol)
@@ -19,7 +24,7 @@ static const RgFitting *
 fitting (const char *id)
 {
   const RgFitting *f = NULL;
-  RgError err;
+  RgError err = { 0 };
   if (rg_fitting_lookup (id, &f, &err) != RG_OK)
     g_error ("%s: %s", id, err.text);
   return f;
@@ -70,10 +75,12 @@ test_catalog (void)
   g_assert_cmpfloat (f->kd, ==, 4.0);
 
   const RgFitting *g = NULL;
-  RgError err;
+  RgError err = { 0 };
   g_assert_cmpint (rg_fitting_lookup ("elbow-90-standrd", &g, &err), ==, RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "elbow-90-standard"));
+  g_assert_cmpuint (err.subjects, ==, FITTING);
   g_assert_cmpint (rg_fitting_lookup (NULL, &g, &err), ==, RG_ERR_NOT_FOUND);
+  g_assert_cmpuint (err.subjects, ==, FITTING);
 }
 
 static void
@@ -109,15 +116,20 @@ test_three_k_errors (void)
 {
   const RgFitting *f = fitting ("valve-globe");
   double k = -1.0;
-  RgError err;
+  RgError err = { 0 };
 
   g_assert_cmpint (rg_fitting_k (f, 0.0, 0.05, &k, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "Reynolds"));
+  g_assert_cmpuint (err.subjects, ==, REYNOLDS);
   g_assert_cmpint (rg_fitting_k (f, NAN, 0.05, &k, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, REYNOLDS);
   g_assert_cmpint (rg_fitting_k (f, 1e5, -0.05, &k, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "diameter"));
+  g_assert_cmpuint (err.subjects, ==, DIAMETER);
   g_assert_cmpint (rg_fitting_k (f, 1e5, INFINITY, &k, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, DIAMETER);
   g_assert_cmpint (rg_fitting_k (NULL, 1e5, 0.05, &k, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, FITTING);
   g_assert_cmpfloat (k, ==, -1.0);
 }
 
@@ -128,7 +140,7 @@ test_sum (void)
   const RgFitting *elbow = fitting ("elbow-90-long-radius");
   const RgFitting *gate = fitting ("valve-gate");
   double ke, kg, sum;
-  RgError err;
+  RgError err = { 0 };
 
   rg_fitting_k (elbow, re, d, &ke, NULL);
   rg_fitting_k (gate, re, d, &kg, NULL);
@@ -148,11 +160,15 @@ test_sum (void)
   RgFittingUse bad_count[] = { { elbow, 0.0, -1.0 } };
   g_assert_cmpint (rg_fittings_k_sum (bad_count, 1, re, d, &sum, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "count"));
+  g_assert_cmpuint (err.subjects, ==, FITTING);
   RgFittingUse bad_k[] = { { NULL, -0.2, 1.0 } };
   g_assert_cmpint (rg_fittings_k_sum (bad_k, 1, re, d, &sum, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "K"));
+  g_assert_cmpuint (err.subjects, ==, FITTING);
   g_assert_cmpint (rg_fittings_k_sum (uses, -1, re, d, &sum, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, FITTING);
   g_assert_cmpint (rg_fittings_k_sum (uses, 2, -5.0, d, &sum, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, REYNOLDS);
 }
 
 static const double INCH = 0.0254; /* m, exact (international inch, 1959) */
@@ -161,7 +177,7 @@ static double
 sch40_bore (const char *designation)
 {
   const RgPipe *p = NULL;
-  RgError err;
+  RgError err = { 0 };
   if (rg_pipe_lookup (designation, &p, &err) != RG_OK)
     g_error ("%s: %s", designation, err.text);
   return p->inner_diameter_m;
@@ -171,7 +187,7 @@ static double
 crane_ft (double d)
 {
   double ft = -1.0;
-  RgError err;
+  RgError err = { 0 };
   if (rg_fitting_crane_ft (d, &ft, &err) != RG_OK)
     g_error ("f_T at %g m: %s", d, err.text);
   return ft;
@@ -211,13 +227,18 @@ test_crane_ft (void)
   g_assert_cmpfloat (crane_ft (0.6), <, crane_ft (0.05));
 
   double ft = -1.0;
-  RgError err;
+  RgUnitChoice mm = { { NULL } };
+  RgError err = { 0 };
   /* From memory of Moody (1944), Trans. ASME 66, the chart's largest
    * relative roughness ε/D = 0.05 (the limit fittings.c adopts); not checked
    * against the document: the bore must be at least 0.0018 in / 0.05 =
-   * 0.9144 mm. */
+   * 0.9144 mm, in the unit the caller chose (the bore in mm here). */
+  mm.unit[RG_QTY_LENGTH] = "mm";
+  err.units = &mm;
   g_assert_cmpint (rg_fitting_crane_ft (0.0005, &ft, &err), ==, RG_ERR_DOMAIN);
-  g_assert_nonnull (strstr (err.text, "0.9144 mm"));
+  g_assert_nonnull (strstr (err.text, "at least 0.9144 mm, not 0.5 mm"));
+  g_assert_cmpuint (err.subjects, ==, DIAMETER);
+  g_assert_cmpfloat (RG_FITTING_CRANE_BORE_MIN_M, ==, 0.0018 * 0.0254 / 0.05);
   g_assert_cmpint (rg_fitting_crane_ft (0.0, &ft, &err), ==, RG_ERR_DOMAIN);
   g_assert_cmpint (rg_fitting_crane_ft (NAN, &ft, &err), ==, RG_ERR_DOMAIN);
   g_assert_cmpint (rg_fitting_crane_ft (-INFINITY, &ft, &err), ==, RG_ERR_DOMAIN);
@@ -262,7 +283,7 @@ test_crane_butterfly (void)
         {
           const double d = bores[i].bore_in * INCH;
           double k = -1.0, k_laminar_re = -1.0;
-          RgWarnings w;
+          RgWarnings w = { 0 };
 
           rg_warnings_clear (&w);
           /* Source: Crane TP-410 (2009 ed.): K = n·f_T, n of the band. */
@@ -287,9 +308,13 @@ test_crane_warnings (void)
 {
   const RgFitting *f = fitting ("valve-butterfly");
   const RgFitting *elbow = fitting ("elbow-90-standard");
-  RgWarnings w;
-  RgError err;
+  RgWarnings w = { 0 };
+  RgError err = { 0 };
+  RgUnitChoice mm = { { NULL } };
   double k = -1.0, k_plain_api = -1.0;
+
+  mm.unit[RG_QTY_LENGTH] = "mm";
+  w.units = &mm;
 
   /* Below the stated range: the NPS 2–8 multiplier, with a warning.
    * Source: Crane TP-410 (2009 ed.), K = 45 f_T for the smallest band;
@@ -300,7 +325,8 @@ test_crane_warnings (void)
   g_assert_cmpint (w.count, ==, 1);
   g_assert_nonnull (strstr (w.text[0], "valve-butterfly"));
   g_assert_nonnull (strstr (w.text[0], "NPS 2–8"));
-  g_assert_nonnull (strstr (w.text[0], "26.64"));
+  /* Source: NIST SP 811 B.8, 1.049 in = 26.6446 mm, 4 figures */
+  g_assert_nonnull (strstr (w.text[0], "26.64 mm"));
   /* The plain API gives the same K, without warnings. */
   g_assert_cmpint (rg_fitting_k (f, 1.0e5, 1.049 * INCH, &k_plain_api, &err), ==, RG_OK);
   g_assert_cmpfloat (k_plain_api, ==, k);
@@ -332,6 +358,7 @@ test_crane_warnings (void)
   k = -1.0;
   g_assert_cmpint (rg_fitting_k_checked (f, 1.0e5, 0.0005, &k, &w, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "f_T"));
+  g_assert_cmpuint (err.subjects, ==, DIAMETER);
   g_assert_cmpint (rg_fitting_k_checked (f, 0.0, 0.1, &k, &w, &err), ==, RG_ERR_DOMAIN);
   g_assert_cmpint (rg_fitting_k_checked (f, 1.0e5, NAN, &k, &w, &err), ==, RG_ERR_DOMAIN);
   g_assert_cmpfloat (k, ==, -1.0);
@@ -353,6 +380,8 @@ test_crane_warnings (void)
   assert_rel (sum, 3.0 * kv + 3.0 * ke, 1e-14);
   g_assert_cmpint (w.count, ==, 1);
   g_assert_nonnull (strstr (w.text[0], "valve-butterfly:"));
+  /* the warnings of the sum are written in the caller's units too */
+  g_assert_nonnull (strstr (w.text[0], "26.64 mm"));
   g_assert_cmpint (rg_fittings_k_sum_checked (uses, 4, 2.0e5, d, &sum, NULL, &err), ==, RG_OK);
   g_assert_cmpint (rg_fittings_k_sum_checked (uses, 4, 2.0e5, 0.0005, &sum, &w, &err), ==, RG_ERR_DOMAIN);
 }

@@ -88,22 +88,24 @@ test_custom (void)
 static void
 test_custom_errors (void)
 {
-  /* Bounds of fluid.c: 0.01–25 000 kg/m³ and 1e-6–1e5 Pa·s */
+  /* Bounds of fluid.h: 0.01–25 000 kg/m³ and 1e-6–1e5 Pa·s, written in SI
+   * with 4 significant figures (units.h) */
   static const struct {
     double rho, mu;
     const char *needle;
+    RgSubject subject;
   } bad[] = {
-    { 0.0, 1e-3, "density" },
-    { -998.0, 1e-3, "density" },
-    { NAN, 1e-3, "density" },
-    { INFINITY, 1e-3, "density" },
-    { 0.005, 1e-3, "between 0.01 and 25000 kg/m³" },
-    { 998.0e3, 1e-3, "between 0.01 and 25000 kg/m³" },
-    { 998.0, 0.0, "viscosity" },
-    { 998.0, -1e-3, "viscosity" },
-    { 998.0, NAN, "viscosity" },
-    { 998.0, 1e-7, "between 1e-06 and 100000 Pa·s" },
-    { 998.0, 1e6, "between 1e-06 and 100000 Pa·s" },
+    { 0.0, 1e-3, "density", RG_SUBJECT_DENSITY },
+    { -998.0, 1e-3, "not -998 kg/m³", RG_SUBJECT_DENSITY },
+    { NAN, 1e-3, "density", RG_SUBJECT_DENSITY },
+    { INFINITY, 1e-3, "density", RG_SUBJECT_DENSITY },
+    { 0.005, 1e-3, "between 0.01 kg/m³ and 25000 kg/m³", RG_SUBJECT_DENSITY },
+    { 998.0e3, 1e-3, "between 0.01 kg/m³ and 25000 kg/m³", RG_SUBJECT_DENSITY },
+    { 998.0, 0.0, "viscosity", RG_SUBJECT_VISCOSITY },
+    { 998.0, -1e-3, "viscosity", RG_SUBJECT_VISCOSITY },
+    { 998.0, NAN, "not —", RG_SUBJECT_VISCOSITY },
+    { 998.0, 1e-7, "between 1e-06 Pa·s and 100000 Pa·s", RG_SUBJECT_VISCOSITY },
+    { 998.0, 1e6, "between 1e-06 Pa·s and 100000 Pa·s", RG_SUBJECT_VISCOSITY },
   };
 
   for (gsize i = 0; i < G_N_ELEMENTS (bad); i++)
@@ -120,6 +122,7 @@ test_custom_errors (void)
       if (strstr (err.text, bad[i].needle) == NULL)
         g_error ("case %u: '%s' lacks '%s'", (unsigned) i, err.text,
                  bad[i].needle);
+      g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (bad[i].subject));
       g_assert_cmpfloat (props.density_kg_m3, ==, -1.0);
     }
 }
@@ -169,6 +172,8 @@ test_dispatch (void)
   spec.temperature_k = 423.15;
   g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "boils"));
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_TEMPERATURE)
+                                      | RG_SUBJECT_BIT (RG_SUBJECT_PRESSURE));
   spec.pressure_pa = 6.0e5;
   g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), ==, RG_OK);
 
@@ -177,6 +182,56 @@ test_dispatch (void)
   spec.salinity_kg_kg = 0.5;
   g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), !=, RG_OK);
   g_assert_cmpstr (err.text, !=, "");
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_SALINITY));
+  /* the seawater pressure is checked too (seawater.h) */
+  rg_fluid_spec_init (&spec, RG_FLUID_SEAWATER);
+  spec.pressure_pa = 2.0 * RG_SEAWATER_P_MAX_PA;
+  g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_PRESSURE));
+  /* each model's errors name its inputs */
+  rg_fluid_spec_init (&spec, RG_FLUID_AIR);
+  spec.pressure_pa = 1.0;
+  g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_PRESSURE));
+  rg_fluid_spec_init (&spec, RG_FLUID_OIL);
+  spec.oil_density_ref_kg_m3 = 2000.0;
+  g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_OIL_DENSITY_REF));
+  rg_fluid_spec_init (&spec, RG_FLUID_WATER);
+  spec.temperature_k = 200.0;
+  g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_TEMPERATURE));
+  /* a misuse of the API names no input */
+  g_assert_cmpint (rg_fluid_properties (NULL, &via, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, 0);
+  spec.kind = RG_FLUID_N_KINDS;
+  g_assert_cmpint (rg_fluid_properties (&spec, &via, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_FLUID));
+}
+
+/* The inputs behind a fluid's density and viscosity replace those two in
+ * the subjects of a line's error (fluid.h). */
+static void
+test_subjects_behind (void)
+{
+  const RgSubjects rho_mu = RG_SUBJECT_BIT (RG_SUBJECT_DENSITY)
+                            | RG_SUBJECT_BIT (RG_SUBJECT_VISCOSITY);
+  const RgSubjects flow = RG_SUBJECT_BIT (RG_SUBJECT_FLOW);
+  const RgSubjects t = RG_SUBJECT_BIT (RG_SUBJECT_TEMPERATURE);
+
+  g_assert_cmpuint (rg_fluid_subjects_behind (RG_FLUID_CUSTOM, flow | rho_mu),
+                    ==, flow | rho_mu);
+  g_assert_cmpuint (rg_fluid_subjects_behind (RG_FLUID_WATER, flow | rho_mu),
+                    ==, flow | t | RG_SUBJECT_BIT (RG_SUBJECT_PRESSURE));
+  g_assert_cmpuint (rg_fluid_subjects_behind (RG_FLUID_SEAWATER, rho_mu),
+                    ==, t | RG_SUBJECT_BIT (RG_SUBJECT_SALINITY));
+  g_assert_cmpuint (rg_fluid_subjects_behind (RG_FLUID_OIL, rho_mu)
+                    & RG_SUBJECT_BIT (RG_SUBJECT_OIL_NU1), !=, 0);
+  g_assert_cmpuint (rg_fluid_subjects_behind (RG_FLUID_OIL, rho_mu) & rho_mu,
+                    ==, 0);
+  /* subjects without the two are left as they are */
+  g_assert_cmpuint (rg_fluid_subjects_behind (RG_FLUID_WATER, flow), ==, flow);
+  g_assert_cmpuint (rg_fluid_property_subjects (RG_FLUID_N_KINDS), ==, 0);
 }
 
 static void
@@ -201,6 +256,7 @@ test_kind_ids (void)
   g_assert_cmpint (rg_fluid_kind_from_id ("brine", &k, &err), ==,
                    RG_ERR_NOT_FOUND);
   g_assert_nonnull (strstr (err.text, "'brine'"));
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_FLUID));
   g_assert_cmpint (rg_fluid_kind_from_id (NULL, &k, &err), ==,
                    RG_ERR_NOT_FOUND);
 }
@@ -215,5 +271,6 @@ main (int argc, char *argv[])
   g_test_add_func ("/fluid/custom/errors", test_custom_errors);
   g_test_add_func ("/fluid/not-available", test_dispatch);
   g_test_add_func ("/fluid/kind-ids", test_kind_ids);
+  g_test_add_func ("/fluid/subjects-behind", test_subjects_behind);
   return g_test_run ();
 }

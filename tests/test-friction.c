@@ -296,6 +296,12 @@ test_domain_edges_accepted (void)
 
 typedef RgStatus (*TwoArgFn) (double, double, double *, RgError *);
 
+/* The subjects a domain error of the friction functions may name: the
+ * Reynolds number, the relative roughness, or the model. */
+static const RgSubjects FRICTION_SUBJECTS
+  = RG_SUBJECT_BIT (RG_SUBJECT_REYNOLDS) | RG_SUBJECT_BIT (RG_SUBJECT_RELATIVE_ROUGHNESS)
+    | RG_SUBJECT_BIT (RG_SUBJECT_MODEL);
+
 static void
 assert_domain_error (const char *what, RgStatus st, const RgError *err,
                      double out)
@@ -303,6 +309,10 @@ assert_domain_error (const char *what, RgStatus st, const RgError *err,
   if (st != RG_ERR_DOMAIN)
     g_test_fail_printf ("%s: status %d, expected RG_ERR_DOMAIN", what, st);
   g_assert_cmpint (err->status, ==, st);
+  /* exactly one argument at fault */
+  g_assert_cmpuint (err->subjects, !=, 0);
+  g_assert_cmpuint (err->subjects & ~FRICTION_SUBJECTS, ==, 0);
+  g_assert_cmpuint (err->subjects & (err->subjects - 1), ==, 0);
   /* one sentence: starts with a capital letter, ends with a full stop */
   const size_t n = strlen (err->text);
   g_assert_cmpuint (n, >, 10);
@@ -349,6 +359,13 @@ test_domain_errors (void)
           continue;
         g_autofree char *what = g_strdup_printf ("%s(%g, %g)", fns[k].name, re, rr);
         assert_domain_error (what, fns[k].fn (re, rr, &out, &err), &err, out);
+        /* the argument at fault: the Reynolds number is checked first */
+        g_assert_cmpuint (err.subjects, ==,
+                          (fns[k].fn == rg_friction_churchill
+                           ? (re > 0.0 && re <= RG_FRICTION_RE_MAX)
+                           : (re >= RG_FRICTION_RE_MIN && re <= RG_FRICTION_RE_MAX))
+                          ? RG_SUBJECT_BIT (RG_SUBJECT_RELATIVE_ROUGHNESS)
+                          : RG_SUBJECT_BIT (RG_SUBJECT_REYNOLDS));
         /* err may be NULL */
         g_assert_cmpint (fns[k].fn (re, rr, &out, NULL), ==, RG_ERR_DOMAIN);
         g_assert_cmpfloat (out, ==, UNTOUCHED);
@@ -385,8 +402,10 @@ test_unknown_model (void)
   assert_domain_error ("model 99", rg_friction_model ((RgFrictionModel) 99, 1e5, 1e-4, &out, &err),
                        &err, out);
 
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_MODEL));
   g_assert_cmpint (rg_friction_model_from_id ("moody", &model, &err), ==, RG_ERR_PARSE);
   g_assert_cmpuint (strlen (err.text), >, 0);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_MODEL));
   g_assert_cmpint (model, ==, RG_FRICTION_HAALAND);
   g_assert_cmpint (rg_friction_model_from_id (NULL, &model, &err), ==, RG_ERR_PARSE);
   g_assert_cmpint (model, ==, RG_FRICTION_HAALAND);

@@ -3,8 +3,10 @@
 #include <float.h>
 #include <glib.h>
 #include <math.h>
+#include <string.h>
 
 #include "core/line.h"
+#include "core/units.h"
 
 static void
 water_like (RgLineInput *in)
@@ -128,25 +130,46 @@ test_transitional (void)
   g_assert_cmpfloat (r.friction.f, >, r.friction.f_laminar);
 }
 
+#define ON(s) RG_SUBJECT_BIT (RG_SUBJECT_##s)
+
 static void
 test_bad_input (void)
 {
-  static const struct { const char *what; gsize offset; double value; } cases[] = {
-    { "flow zero", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), 0.0 },
-    { "flow negative", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), -1.0 },
-    { "flow NaN", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), NAN },
-    { "flow inf", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), INFINITY },
-    { "diameter zero", G_STRUCT_OFFSET (RgLineInput, diameter_m), 0.0 },
-    { "diameter negative", G_STRUCT_OFFSET (RgLineInput, diameter_m), -0.1 },
-    { "length zero", G_STRUCT_OFFSET (RgLineInput, length_m), 0.0 },
-    { "length NaN", G_STRUCT_OFFSET (RgLineInput, length_m), NAN },
-    { "roughness negative", G_STRUCT_OFFSET (RgLineInput, roughness_m), -1e-5 },
-    { "roughness huge", G_STRUCT_OFFSET (RgLineInput, roughness_m), 0.05 },
-    { "k negative", G_STRUCT_OFFSET (RgLineInput, k_sum), -1.0 },
-    { "elevation inf", G_STRUCT_OFFSET (RgLineInput, elevation_m), INFINITY },
-    { "density zero", G_STRUCT_OFFSET (RgLineInput, density_kg_m3), 0.0 },
-    { "viscosity zero", G_STRUCT_OFFSET (RgLineInput, viscosity_pa_s), 0.0 },
-    { "flow huge", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), 1e300 },
+  /* each bad input, and the inputs its error names (line.h, status.h) */
+  static const struct {
+    const char *what;
+    gsize offset;
+    double value;
+    RgSubjects subjects;
+  } cases[] = {
+    { "flow zero", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), 0.0, ON (FLOW) },
+    { "flow negative", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), -1.0, ON (FLOW) },
+    { "flow NaN", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), NAN, ON (FLOW) },
+    { "flow inf", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), INFINITY, ON (FLOW) },
+    { "diameter zero", G_STRUCT_OFFSET (RgLineInput, diameter_m), 0.0, ON (DIAMETER) },
+    { "diameter negative", G_STRUCT_OFFSET (RgLineInput, diameter_m), -0.1, ON (DIAMETER) },
+    { "length zero", G_STRUCT_OFFSET (RgLineInput, length_m), 0.0, ON (LENGTH) },
+    { "length NaN", G_STRUCT_OFFSET (RgLineInput, length_m), NAN, ON (LENGTH) },
+    { "roughness negative", G_STRUCT_OFFSET (RgLineInput, roughness_m), -1e-5, ON (ROUGHNESS) },
+    { "roughness huge", G_STRUCT_OFFSET (RgLineInput, roughness_m), 0.05,
+      ON (ROUGHNESS) | ON (DIAMETER) },
+    { "k negative", G_STRUCT_OFFSET (RgLineInput, k_sum), -1.0, ON (K_SUM) | ON (FITTING) },
+    { "elevation inf", G_STRUCT_OFFSET (RgLineInput, elevation_m), INFINITY, ON (ELEVATION) },
+    { "density zero", G_STRUCT_OFFSET (RgLineInput, density_kg_m3), 0.0, ON (DENSITY) },
+    { "viscosity zero", G_STRUCT_OFFSET (RgLineInput, viscosity_pa_s), 0.0, ON (VISCOSITY) },
+    /* the Reynolds number overflows: the inputs behind it */
+    { "flow huge", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), 1e300,
+      ON (FLOW) | ON (DIAMETER) | ON (DENSITY) | ON (VISCOSITY) },
+    /* Re = 4ρQ/(πμD) ≈ 1.2e10 with 1000 m³/s in 0.1023 m: above 1e10 */
+    { "flow too fast", G_STRUCT_OFFSET (RgLineInput, flow_m3_s), 1000.0,
+      ON (FLOW) | ON (DIAMETER) | ON (DENSITY) | ON (VISCOSITY) },
+    /* the transition limits out of order (regime.h) */
+    { "transition", G_STRUCT_OFFSET (RgLineInput, transition.re_laminar_max), 5000.0,
+      ON (RE_LAMINAR_MAX) | ON (RE_TURBULENT_MIN) },
+    { "transition low", G_STRUCT_OFFSET (RgLineInput, transition.re_laminar_max), 100.0,
+      ON (RE_LAMINAR_MAX) },
+    { "transition high", G_STRUCT_OFFSET (RgLineInput, transition.re_turbulent_min), 2e5,
+      ON (RE_TURBULENT_MIN) },
   };
 
   for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
@@ -160,7 +183,34 @@ test_bad_input (void)
       g_test_message ("case %s", cases[i].what);
       g_assert_cmpint (rg_line_evaluate (&in, &r, &err), !=, RG_OK);
       g_assert_cmpstr (err.text, !=, "");
+      if (err.subjects != cases[i].subjects)
+        g_error ("case %s: '%s': subjects %#llx, want %#llx", cases[i].what,
+                 err.text, err.subjects, cases[i].subjects);
     }
+}
+
+/* The roughness and the bore of "ε/D too large" in the caller's units.
+ * Source: NIST SP 811 B.8, 0.05 m = 0.164 ft and 0.1 m = 0.3281 ft (foot =
+ * 0.3048 m exactly), 4 figures. */
+static void
+test_message_units (void)
+{
+  RgLineInput in;
+  RgLineResult r;
+  RgUnitChoice us = { { NULL } };
+  RgError err = { 0 };
+
+  water_like (&in);
+  in.diameter_m = 0.1;
+  in.roughness_m = 0.05;
+  us.unit[RG_QTY_LENGTH] = "ft";
+  us.unit[RG_QTY_ROUGHNESS] = "ft";
+  err.units = &us;
+  g_assert_cmpint (rg_line_evaluate (&in, &r, &err), ==, RG_ERR_DOMAIN);
+  g_assert_nonnull (strstr (err.text, "The roughness 0.164 ft is too large for the inner diameter 0.3281 ft"));
+  err.units = NULL;
+  g_assert_cmpint (rg_line_evaluate (&in, &r, &err), ==, RG_ERR_DOMAIN);
+  g_assert_nonnull (strstr (err.text, "The roughness 0.05 m is too large for the inner diameter 0.1 m"));
 }
 
 static void
@@ -197,7 +247,12 @@ test_flow_for_head_loss (void)
   g_assert_cmpfloat_with_epsilon (r.head_loss_total_m, 5.0, 1e-12 * 5.0);
 
   g_assert_cmpint (rg_line_flow_for_head_loss (&in, -1.0, &q, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (HEAD_LOSS));
   g_assert_cmpint (rg_line_flow_for_head_loss (&in, NAN, &q, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (HEAD_LOSS));
+  in.length_m = -1.0;
+  g_assert_cmpint (rg_line_flow_for_head_loss (&in, 5.0, &q, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (LENGTH));
 }
 
 static void
@@ -220,6 +275,12 @@ test_diameter_for_head_loss (void)
   in.diameter_m = d * (1.0 - 1e-9);
   g_assert_cmpint (rg_line_evaluate (&in, &r, &err), ==, RG_OK);
   g_assert_cmpfloat (r.head_loss_total_m, >, 2.0);
+
+  g_assert_cmpint (rg_line_diameter_for_head_loss (&in, 0.0, &d, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (HEAD_LOSS));
+  in.flow_m3_s = -1.0;
+  g_assert_cmpint (rg_line_diameter_for_head_loss (&in, 2.0, &d, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (FLOW));
 }
 
 int
@@ -231,6 +292,7 @@ main (int argc, char **argv)
   g_test_add_func ("/line/worked-example", test_worked_example);
   g_test_add_func ("/line/transitional", test_transitional);
   g_test_add_func ("/line/bad-input", test_bad_input);
+  g_test_add_func ("/line/message-units", test_message_units);
   g_test_add_func ("/line/inverse/flow", test_flow_for_head_loss);
   g_test_add_func ("/line/inverse/diameter", test_diameter_for_head_loss);
   return g_test_run ();

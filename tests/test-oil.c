@@ -6,6 +6,7 @@
  * must pass through both given points and every other value must lie on the
  * same straight line in (log T, log log(ν + 0.7)). */
 #include "core/oil.h"
+#include "core/units.h"
 
 #include <glib.h>
 #include <math.h>
@@ -47,7 +48,7 @@ static void
 test_d341 (void)
 {
   RgOilSpec o;
-  RgWarnings w;
+  RgWarnings w = { 0 };
   double nu, nu1, nu2;
 
   vg46 (&o);
@@ -111,35 +112,99 @@ test_density (void)
   assert_rel (p.dynamic_viscosity_pa_s, p.kinematic_viscosity_m2_s * p.density_kg_m3, 1e-15);
 }
 
+#define ON(s) RG_SUBJECT_BIT (RG_SUBJECT_##s)
+
 static void
 test_errors (void)
 {
   RgOilSpec o;
   RgFluidProps p;
-  RgError err;
+  RgUnitChoice cst = { { NULL } };
+  RgError err = { 0 };
   double nu;
 
+  cst.unit[RG_QTY_KIN_VISCOSITY] = "cSt";
+  cst.unit[RG_QTY_TEMPERATURE] = "°C";
+  err.units = &cst;
   vg46 (&o);
   o.nu2_m2_s = 60.0 * CST; /* thicker when hotter */
   g_assert_cmpint (rg_oil_properties (&o, 330.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "higher at the lower"));
+  g_assert_cmpuint (err.subjects, ==, ON (OIL_NU1) | ON (OIL_NU2) | ON (OIL_T1) | ON (OIL_T2));
   vg46 (&o);
   o.t2_k = o.t1_k;
   g_assert_cmpint (rg_oil_properties (&o, 330.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (OIL_T1) | ON (OIL_T2));
+  /* Source: oil.h, the points at least 1 K apart; a difference of 1 K is
+   * one of 1 °C */
+  g_assert_nonnull (strstr (err.text, "at least 1 °C"));
   vg46 (&o);
   o.nu2_m2_s = 1.5 * CST;
   g_assert_cmpint (rg_oil_properties (&o, 330.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
-  g_assert_nonnull (strstr (err.text, "2 cSt"));
+  /* Source: oil.h, 2 cSt to 1e6 cSt (ASTM D341's 0.7 form from 2 cSt) */
+  g_assert_nonnull (strstr (err.text, "between 2 cSt and 1e+06 cSt"));
+  g_assert_nonnull (strstr (err.text, "not 1.5 cSt"));
+  g_assert_cmpuint (err.subjects, ==, ON (OIL_NU2));
+  vg46 (&o);
+  o.nu1_m2_s = 2.0; /* 2 m²/s */
+  g_assert_cmpint (rg_oil_properties (&o, 330.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (OIL_NU1));
   vg46 (&o);
   o.expansion_per_k = 0.01;
   g_assert_cmpint (rg_oil_density (&o, 330.0, &nu, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (OIL_EXPANSION));
   vg46 (&o);
   o.density_ref_kg_m3 = NAN;
   g_assert_cmpint (rg_oil_properties (&o, 330.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (OIL_DENSITY_REF));
+  vg46 (&o);
+  o.t1_k = 100.0;
+  g_assert_cmpint (rg_oil_properties (&o, 330.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (OIL_T1));
+  vg46 (&o);
+  o.t2_k = 900.0;
+  g_assert_cmpint (rg_oil_properties (&o, 330.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (OIL_T2));
+  vg46 (&o);
+  o.t_ref_k = -1.0;
+  g_assert_cmpint (rg_oil_properties (&o, 330.0, &p, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (OIL_T_REF));
   vg46 (&o);
   g_assert_cmpint (rg_oil_kinematic_viscosity (&o, 700.0, &nu, NULL, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "temperature"));
+  g_assert_cmpuint (err.subjects, ==, ON (TEMPERATURE));
+  /* Source: oil.h, 200–600 K = −73.15–326.85 °C (4 figures) */
+  g_assert_nonnull (strstr (err.text, "between -73.15 °C and 326.9 °C, not 426.9 °C"));
   g_assert_cmpint (rg_oil_kinematic_viscosity (&o, NAN, &nu, NULL, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, ON (TEMPERATURE));
+}
+
+/* The extrapolation warning in the units of the warnings: the line's
+ * temperature and the two points.  Source: NIST SP 811 B.9, 283.15 K =
+ * 10 °C = 50 °F, 313.15 K = 40 °C = 104 °F, 373.15 K = 100 °C = 212 °F. */
+static void
+test_warning_units (void)
+{
+  RgOilSpec o;
+  RgUnitChoice us = { { NULL } };
+  RgWarnings w = { 0 };
+  double nu;
+
+  vg46 (&o);
+  us.unit[RG_QTY_TEMPERATURE] = "°F";
+  w.units = &us;
+  rg_warnings_clear (&w);
+  g_assert_true (w.units == &us); /* clearing keeps the units */
+  g_assert_cmpint (rg_oil_kinematic_viscosity (&o, 283.15, &nu, &w, NULL), ==, RG_OK);
+  g_assert_cmpint (w.count, ==, 1);
+  g_assert_nonnull (strstr (w.text[0], "Oil: 50 °F lies outside"));
+  g_assert_nonnull (strstr (w.text[0], "(104 °F and 212 °F)"));
+  g_assert_null (strstr (w.text[0], " K "));
+  w.units = NULL;
+  rg_warnings_clear (&w);
+  g_assert_cmpint (rg_oil_kinematic_viscosity (&o, 283.15, &nu, &w, NULL), ==, RG_OK);
+  /* in SI: 313.15 K and 373.15 K with 4 figures */
+  g_assert_nonnull (strstr (w.text[0], "(313.1 K and 373.1 K)"));
 }
 
 int
@@ -149,5 +214,6 @@ main (int argc, char **argv)
   g_test_add_func ("/oil/d341", test_d341);
   g_test_add_func ("/oil/density", test_density);
   g_test_add_func ("/oil/errors", test_errors);
+  g_test_add_func ("/oil/warning-units", test_warning_units);
   return g_test_run ();
 }

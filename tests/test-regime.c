@@ -76,26 +76,39 @@ test_transition_check_errors (void)
 {
   /* Source: the settable range documented in regime.h,
    * 500 ≤ lower ≤ upper ≤ 1e5 */
-  const RgTransition bad[] = {
-    { 4000.0, 2000.0 }, { 499.0, 4000.0 }, { 2000.0, 100001.0 },
-    { NAN, 4000.0 }, { 2000.0, NAN }, { -INFINITY, 4000.0 },
-    { 2000.0, INFINITY }, { 0.0, 0.0 },
+  const RgSubjects lam = RG_SUBJECT_BIT (RG_SUBJECT_RE_LAMINAR_MAX);
+  const RgSubjects turb = RG_SUBJECT_BIT (RG_SUBJECT_RE_TURBULENT_MIN);
+  /* with the limits at fault: both when they are out of order */
+  const struct
+  {
+    RgTransition t;
+    RgSubjects subjects;
+  } bad[] = {
+    { { 4000.0, 2000.0 }, lam | turb }, { { 499.0, 4000.0 }, lam },
+    { { 2000.0, 100001.0 }, turb }, { { NAN, 4000.0 }, lam | turb },
+    { { 2000.0, NAN }, lam | turb }, { { -INFINITY, 4000.0 }, lam },
+    { { 2000.0, INFINITY }, turb }, { { 0.0, 0.0 }, lam },
   };
 
   for (size_t i = 0; i < G_N_ELEMENTS (bad); i++)
     {
       RgError err = { 0 };
-      g_assert_cmpint (rg_transition_check (&bad[i], &err), ==, RG_ERR_DOMAIN);
+      g_assert_cmpint (rg_transition_check (&bad[i].t, &err), ==, RG_ERR_DOMAIN);
       g_assert_cmpint (err.status, ==, RG_ERR_DOMAIN);
       g_assert_cmpuint (strlen (err.text), >, 10);
       g_assert_cmpint (err.text[strlen (err.text) - 1], ==, '.');
+      g_assert_cmpuint (err.subjects, ==, bad[i].subjects);
     }
   RgError err = { 0 };
   g_assert_cmpint (rg_transition_check (NULL, &err), ==, RG_ERR_DOMAIN);
   g_assert_cmpuint (strlen (err.text), >, 0);
+  g_assert_cmpuint (err.subjects, ==, lam | turb);
   /* the edges of the settable range are accepted */
-  const RgTransition edges = { 500.0, 1e5 };
+  const RgTransition edges = { RG_TRANSITION_RE_LOWEST, RG_TRANSITION_RE_HIGHEST };
   g_assert_cmpint (rg_transition_check (&edges, NULL), ==, RG_OK);
+  /* Source: regime.h, 500 ≤ lower ≤ upper ≤ 1e5 */
+  g_assert_cmpfloat (RG_TRANSITION_RE_LOWEST, ==, 500.0);
+  g_assert_cmpfloat (RG_TRANSITION_RE_HIGHEST, ==, 1e5);
 }
 
 static void
@@ -567,12 +580,15 @@ test_point_errors (void)
 {
   /* Source: domain in friction.h (0 < Re ≤ 1e10, 0 ≤ ε/D ≤ 0.1) and the
    * settable limits in regime.h */
+  const RgSubjects re = RG_SUBJECT_BIT (RG_SUBJECT_REYNOLDS);
+  const RgSubjects rr = RG_SUBJECT_BIT (RG_SUBJECT_RELATIVE_ROUGHNESS);
   const struct
   {
     double re, rr;
+    RgSubjects subjects;
   } bad[] = {
-    { NAN, 1e-3 }, { INFINITY, 1e-3 }, { 0.0, 1e-3 }, { -5.0, 1e-3 },
-    { 2e10, 1e-3 }, { 1e5, -1e-3 }, { 1e5, 0.2 }, { 1e5, NAN },
+    { NAN, 1e-3, re }, { INFINITY, 1e-3, re }, { 0.0, 1e-3, re }, { -5.0, 1e-3, re },
+    { 2e10, 1e-3, re }, { 1e5, -1e-3, rr }, { 1e5, 0.2, rr }, { 1e5, NAN, rr },
   };
   RgFrictionPoint p, before;
 
@@ -583,6 +599,7 @@ test_point_errors (void)
       RgError err = { 0 };
       g_assert_cmpint (rg_friction_point (RG_FRICTION_COLEBROOK, NULL, bad[i].re, bad[i].rr, &p, &err), ==, RG_ERR_DOMAIN);
       g_assert_cmpuint (strlen (err.text), >, 10);
+      g_assert_cmpuint (err.subjects, ==, bad[i].subjects);
       g_assert_cmpint (memcmp (&p, &before, sizeof p), ==, 0);
     }
 
@@ -594,6 +611,7 @@ test_point_errors (void)
 
   g_assert_cmpint (rg_friction_point (RG_FRICTION_N_MODELS, NULL, 1e5, 1e-3, &p, &err), ==, RG_ERR_DOMAIN);
   g_assert_cmpint (memcmp (&p, &before, sizeof p), ==, 0);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_MODEL));
 }
 
 /* The validity warnings: one per condition, none for a laminar point or a
@@ -624,7 +642,7 @@ test_validity_warnings (void)
   for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
     {
       RgFrictionPoint pt;
-      RgWarnings w;
+      RgWarnings w = { 0 };
       RgError err = { 0 };
 
       rg_warnings_clear (&w);

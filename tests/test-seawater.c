@@ -7,6 +7,7 @@
  * (density ±0.1 %, viscosity ±1.5 %); the pure-water viscosity fit is held
  * to what we measured against python3-iapws (see seawater.c). */
 #include "core/seawater.h"
+#include "core/units.h"
 
 #include <glib.h>
 #include <math.h>
@@ -87,12 +88,16 @@ test_trends (void)
     }
 }
 
+#define T RG_SUBJECT_BIT (RG_SUBJECT_TEMPERATURE)
+#define P RG_SUBJECT_BIT (RG_SUBJECT_PRESSURE)
+#define S RG_SUBJECT_BIT (RG_SUBJECT_SALINITY)
+
 static void
 test_range (void)
 {
   double x;
   RgFluidProps p;
-  RgError err;
+  RgError err = { 0 };
 
   /* Source: Sharqawy et al. (2010): eq. (8) 0–180 °C, 0–0.16 kg/kg; eq. (22)
    * 0–180 °C, 0–0.15 kg/kg. */
@@ -100,12 +105,64 @@ test_range (void)
   g_assert_cmpint (rg_seawater_density (453.15, 0.0, &x, NULL), ==, RG_OK);
   g_assert_cmpint (rg_seawater_density (272.0, 0.035, &x, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "temperature"));
+  g_assert_cmpuint (err.subjects, ==, T);
   g_assert_cmpint (rg_seawater_viscosity (454.0, 0.035, &x, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, T);
   g_assert_cmpint (rg_seawater_properties (300.0, 0.16, &p, &err), ==, RG_ERR_DOMAIN);
   g_assert_nonnull (strstr (err.text, "salinity"));
+  g_assert_cmpuint (err.subjects, ==, S);
   g_assert_cmpint (rg_seawater_properties (300.0, -0.001, &p, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, S);
   g_assert_cmpint (rg_seawater_properties (NAN, 0.035, &p, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, T);
   g_assert_cmpint (rg_seawater_properties (300.0, NAN, &p, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, S);
+  /* in the caller's units: Source: Sharqawy et al. (2010), 0–180 °C and
+   * 0–150 g/kg, the ends written in °C and g/kg */
+  RgUnitChoice metric = { { NULL } };
+  metric.unit[RG_QTY_TEMPERATURE] = "°C";
+  metric.unit[RG_QTY_SALINITY] = "g/kg";
+  err.units = &metric;
+  g_assert_cmpint (rg_seawater_properties (300.0, 0.16, &p, &err), ==, RG_ERR_DOMAIN);
+  g_assert_nonnull (strstr (err.text, "between 0 g/kg and 150 g/kg (Sharqawy et al. 2010), not 160 g/kg"));
+  g_assert_cmpint (rg_seawater_properties (500.0, 0.035, &p, &err), ==, RG_ERR_DOMAIN);
+  g_assert_nonnull (strstr (err.text, "between 0 °C and 180 °C"));
+}
+
+/* The pressure: positive, at most RG_SEAWATER_P_MAX_PA (seawater.h gives
+ * the reasons), and not below the saturation pressure. */
+static void
+test_pressure (void)
+{
+  RgUnitChoice metric = { { NULL } };
+  RgError err = { 0 };
+
+  metric.unit[RG_QTY_TEMPERATURE] = "°C";
+  metric.unit[RG_QTY_PRESSURE] = "MPa";
+  err.units = &metric;
+  /* Source: seawater.h, the correlations hold at 0.1 MPa; accepted up to
+   * 10 MPa */
+  g_assert_cmpfloat (RG_SEAWATER_P_MAX_PA, ==, 10.0e6);
+  g_assert_cmpint (rg_seawater_check_state (293.15, 101325.0, &err), ==, RG_OK);
+  g_assert_cmpint (rg_seawater_check_state (293.15, RG_SEAWATER_P_MAX_PA, &err), ==, RG_OK);
+  g_assert_cmpint (rg_seawater_check_state (293.15, 10.5e6, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, P);
+  g_assert_nonnull (strstr (err.text, "10.5 MPa (absolute) is above 10 MPa"));
+  g_assert_cmpint (rg_seawater_check_state (293.15, 0.0, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, P);
+  g_assert_cmpint (rg_seawater_check_state (293.15, -1.0, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpint (rg_seawater_check_state (293.15, NAN, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpint (rg_seawater_check_state (293.15, INFINITY, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, P);
+  /* Cross-check: python3-iapws iapws.iapws97._PSat_T(423.15) = 0.476101 MPa:
+   * at 150 °C seawater is refused below it (pure water's saturation
+   * pressure, seawater.h), accepted above */
+  g_assert_cmpint (rg_seawater_check_state (423.15, 0.45e6, &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, T | P);
+  g_assert_nonnull (strstr (err.text, "At 150 °C seawater boils below about 0.4761 MPa"));
+  g_assert_cmpint (rg_seawater_check_state (423.15, 0.5e6, &err), ==, RG_OK);
+  /* outside the correlations' temperatures the range check speaks */
+  g_assert_cmpint (rg_seawater_check_state (500.0, 101325.0, &err), ==, RG_OK);
 }
 
 int
@@ -116,5 +173,6 @@ main (int argc, char **argv)
   g_test_add_func ("/seawater/standard-seawater", test_standard_seawater);
   g_test_add_func ("/seawater/trends", test_trends);
   g_test_add_func ("/seawater/range", test_range);
+  g_test_add_func ("/seawater/pressure", test_pressure);
   return g_test_run ();
 }

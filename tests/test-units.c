@@ -386,6 +386,8 @@ expect_error (RgQuantity q, const char *text, RgStatus status,
   /* the value is untouched and the sentence names the option */
   g_assert_cmpfloat (si, ==, 42.0);
   g_assert_nonnull (strstr (err.text, "--flow"));
+  /* the text the caller passed is at fault (units.h) */
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_VALUE));
   if (needle1 != NULL && strstr (err.text, needle1) == NULL)
     g_error ("'%s': message '%s' lacks '%s'", text, err.text, needle1);
   if (needle2 != NULL && strstr (err.text, needle2) == NULL)
@@ -421,17 +423,17 @@ test_bad_input (void)
   expect_error (RG_QTY_LENGTH, "1/0 in", RG_ERR_PARSE, "zero", NULL);
   expect_error (RG_QTY_FLOW, "12 furlongs", RG_ERR_UNIT, "'furlongs'",
                 rg_units_accepted (RG_QTY_FLOW));
-  expect_error (RG_QTY_FLOW, "2 in", RG_ERR_UNIT, "is a length",
-                "needs a flow");
-  expect_error (RG_QTY_FLOW, "3 m/s", RG_ERR_UNIT, "is a velocity", "m³/s");
-  expect_error (RG_QTY_LENGTH, "5 gpm", RG_ERR_UNIT, "is a flow",
-                "needs a length");
-  expect_error (RG_QTY_PRESSURE, "20 °C", RG_ERR_UNIT, "is a temperature",
+  expect_error (RG_QTY_FLOW, "2 in", RG_ERR_UNIT, "another quantity (length)",
+                rg_units_accepted (RG_QTY_FLOW));
+  expect_error (RG_QTY_FLOW, "3 m/s", RG_ERR_UNIT, "(velocity)", "m³/s");
+  expect_error (RG_QTY_LENGTH, "5 gpm", RG_ERR_UNIT, "(flow)",
+                rg_units_accepted (RG_QTY_LENGTH));
+  expect_error (RG_QTY_PRESSURE, "20 °C", RG_ERR_UNIT, "(temperature)",
                 NULL);
   expect_error (RG_QTY_PRESSURE, "30 psig", RG_ERR_UNIT, "gauge", "absolute");
   expect_error (RG_QTY_PRESSURE, "2 barg", RG_ERR_UNIT, "gauge", NULL);
   expect_error (RG_QTY_PRESSURE, "2 bar(g)", RG_ERR_UNIT, "gauge", NULL);
-  expect_error (RG_QTY_FLOW, "2 psig", RG_ERR_UNIT, "is a pressure", NULL);
+  expect_error (RG_QTY_FLOW, "2 psig", RG_ERR_UNIT, "(pressure)", NULL);
   expect_error (RG_QTY_TEMPERATURE, "-300 °C", RG_ERR_DOMAIN,
                 "absolute zero", NULL);
   expect_error (RG_QTY_TEMPERATURE, "-500 F", RG_ERR_DOMAIN,
@@ -476,8 +478,14 @@ test_viscosity (void)
 
   g_assert_cmpint (rg_units_parse_viscosity ("--visc", "3 gpm", &v, &kin,
                                              &err), ==, RG_ERR_UNIT);
-  g_assert_nonnull (strstr (err.text, "needs a viscosity"));
+  g_assert_nonnull (strstr (err.text, "(flow)"));
+  g_assert_nonnull (strstr (err.text, "(kinematic)"));
   g_assert_nonnull (strstr (err.text, "--visc"));
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_VALUE));
+  /* a pressure unit for a viscosity names the pressure as what it is */
+  g_assert_cmpint (rg_units_parse_viscosity ("--visc", "1 Pa", &v, &kin,
+                                             &err), ==, RG_ERR_UNIT);
+  g_assert_nonnull (strstr (err.text, "(pressure)"));
   g_assert_cmpint (rg_units_parse_viscosity ("--visc", "", &v, &kin, &err),
                    ==, RG_ERR_PARSE);
 }
@@ -490,7 +498,8 @@ test_conversion_errors (void)
 
   g_assert_cmpint (rg_units_to_si (RG_QTY_FLOW, 1.0, "ft", &v, &err), ==,
                    RG_ERR_UNIT);
-  g_assert_nonnull (strstr (err.text, "length"));
+  g_assert_nonnull (strstr (err.text, "(length)"));
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_VALUE));
   g_assert_cmpint (rg_units_to_si (RG_QTY_FLOW, 1.0, "furlong", &v, &err), ==,
                    RG_ERR_UNIT);
   g_assert_cmpint (rg_units_from_si (RG_QTY_FLOW, 1.0, "psig", &v, &err), ==,
@@ -507,10 +516,14 @@ test_conversion_errors (void)
                    ==, RG_ERR_DOMAIN);
   g_assert_cmpint (rg_units_from_si (RG_QTY_TEMPERATURE, -1.0, "°C", &v,
                                      &err), ==, RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, RG_SUBJECT_BIT (RG_SUBJECT_VALUE));
+  /* an unknown kind of quantity is a misuse of the API: no subject */
   g_assert_cmpint (rg_units_to_si (RG_QTY_N, 1.0, "m", &v, &err), ==,
                    RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, 0);
   g_assert_cmpint (rg_units_parse (RG_QTY_N, "--x", "1 m", &v, &err), ==,
                    RG_ERR_DOMAIN);
+  g_assert_cmpuint (err.subjects, ==, 0);
   /* Source: SI (no unit, or a blank one, means SI) */
   g_assert_cmpint (rg_units_from_si (RG_QTY_FLOW, 0.25, "", &v, &err), ==,
                    RG_OK);
@@ -518,6 +531,102 @@ test_conversion_errors (void)
   g_assert_cmpint (rg_units_to_si (RG_QTY_FLOW, 0.25, NULL, &v, &err), ==,
                    RG_OK);
   g_assert_cmpfloat (v, ==, 0.25);
+}
+
+/* rg_units_format: the value in the chosen unit, 4 significant figures,
+ * the display symbol.  Every expected value follows from the exact
+ * definitions of NIST SP 811 (2008), Appendix B.8/B.9 (inch, foot, US
+ * gallon = 231 in³, pound-force = 0.45359237 kg × 9.80665 m/s², standard
+ * atmosphere = 101 325 Pa, T/K = (t/°F + 459.67)/1.8, T/K = t/°C + 273.15),
+ * rounded by hand to 4 significant figures. */
+static void
+test_format (void)
+{
+  RgUnitChoice us = { { NULL } };
+  RgUnitChoice odd = { { NULL } };
+  RgUnitChoice micro = { { NULL } };
+  char buf[48];
+  const struct
+  {
+    const RgUnitChoice *choice;
+    RgQuantity q;
+    double si;
+    const char *want;
+  } cases[] = {
+    /* Source: NIST SP 811 B.8: 150 US gal/min = 150·231·0.0254³/60 m³/s */
+    { &us, RG_QTY_FLOW, 150.0 * GAL / 60.0, "150 gpm" },
+    /* Source: NIST SP 811 B.9: 68 °F = (68 + 459.67)/1.8 K = 293.15 K */
+    { &us, RG_QTY_TEMPERATURE, (68.0 + 459.67) / 1.8, "68 °F" },
+    /* Source: NIST SP 811 B.9: −40 °F = −40 °C = 233.15 K */
+    { &us, RG_QTY_TEMPERATURE, 233.15, "-40 °F" },
+    /* Source: NIST SP 811 B.8: 101 325 Pa / (4.4482216152605 N / 6.4516e-4
+     * m²) = 14.6959… psi */
+    { &us, RG_QTY_PRESSURE, 101325.0, "14.7 psi" },
+    /* Source: NIST SP 811 B.8: 10 MPa = 1450.377… psi */
+    { &us, RG_QTY_PRESSURE, 10.0e6, "1450 psi" },
+    /* Source: NIST SP 811 B.8: 0.9144 mm = 0.036 in = 0.003 ft */
+    { &us, RG_QTY_LENGTH, 0.9144e-3, "0.003 ft" },
+    /* Source: NIST SP 811 B.8: 1e9 m / 0.3048 m = 3.2808…e9 ft */
+    { &us, RG_QTY_LENGTH, 1.0e9, "3.281e+09 ft" },
+    /* Source: SI (the quantity has no entry in the choice) */
+    { &us, RG_QTY_DENSITY, 998.2, "998.2 kg/m³" },
+    /* Source: SI, no choice at all */
+    { NULL, RG_QTY_FLOW, 1.2, "1.2 m³/s" },
+    { NULL, RG_QTY_PRESSURE, 12345.0, "12350 Pa" },
+    { NULL, RG_QTY_LENGTH, 4.5e-5, "4.5e-05 m" },
+    { NULL, RG_QTY_LENGTH, 0.0, "0 m" },
+    { NULL, RG_QTY_LENGTH, -0.25, "-0.25 m" },
+    /* Source: SI prefixes: 4.5e-5 m = 0.045 mm */
+    { &odd, RG_QTY_ROUGHNESS, 4.5e-5, "0.045 mm" },
+    /* Source: SI prefixes: 4.5e-5 m = 45 µm ("um" is shown "µm") */
+    { &micro, RG_QTY_ROUGHNESS, 4.5e-5, "45 µm" },
+    /* Source: NIST SP 811 B.9: 273.16 K = 0.01 °C */
+    { &odd, RG_QTY_TEMPERATURE, 273.16, "0.01 °C" },
+    /* spellings shown in the display form of the same unit */
+    { &odd, RG_QTY_FLOW, 150.0 * GAL / 60.0, "150 gpm" },
+    { &odd, RG_QTY_PRESSURE, 1.0e5, "1 bar" },
+    /* a spelling the core does not know: SI */
+    { &odd, RG_QTY_LENGTH, 2.0, "2 m" },
+    /* never NaN or infinity */
+    { &us, RG_QTY_FLOW, NAN, "—" },
+    { NULL, RG_QTY_PRESSURE, INFINITY, "—" },
+    { &us, RG_QTY_PRESSURE, -INFINITY, "—" },
+  };
+
+  us.unit[RG_QTY_FLOW] = "gpm";
+  us.unit[RG_QTY_TEMPERATURE] = "°F";
+  us.unit[RG_QTY_PRESSURE] = "psi";
+  us.unit[RG_QTY_LENGTH] = "ft";
+  odd.unit[RG_QTY_ROUGHNESS] = "mm";
+  odd.unit[RG_QTY_TEMPERATURE] = "degC";
+  odd.unit[RG_QTY_FLOW] = "USgpm";
+  odd.unit[RG_QTY_PRESSURE] = "bara";
+  odd.unit[RG_QTY_LENGTH] = "furlong";
+  micro.unit[RG_QTY_ROUGHNESS] = "um";
+
+  for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
+    {
+      const char *got = rg_units_format (cases[i].choice, cases[i].q,
+                                         cases[i].si, buf, sizeof buf);
+      g_assert_true (got == buf);
+      if (strcmp (got, cases[i].want) != 0)
+        g_error ("case %" G_GSIZE_FORMAT ": got '%s', want '%s'", i, got,
+                 cases[i].want);
+    }
+
+  /* A temperature difference has no offset.  Source: NIST SP 811 B.9,
+   * a difference of 1 K is one of 1.8 °F. */
+  g_assert_cmpstr (rg_units_format_difference (&us, RG_QTY_TEMPERATURE, 1.0,
+                                               buf, sizeof buf), ==, "1.8 °F");
+  g_assert_cmpstr (rg_units_format_difference (NULL, RG_QTY_TEMPERATURE, 1.0,
+                                               buf, sizeof buf), ==, "1 K");
+  /* a short buffer is cut, never overrun */
+  {
+    char small[4] = { 'x', 'x', 'x', 'x' };
+    rg_units_format (&us, RG_QTY_FLOW, 150.0 * GAL / 60.0, small, 3);
+    g_assert_cmpint (small[2], ==, '\0');
+    g_assert_cmpint (small[3], ==, 'x');
+  }
 }
 
 /* Parsing must not follow LC_NUMERIC: under de_DE the C library reads
@@ -568,7 +677,7 @@ assert_one_line (const RgError *err)
 static void
 test_fuzz_regressions (void)
 {
-  RgError err;
+  RgError err = { 0 };
   double v = 0.0;
 
   /* From the fuzzer: bytes that are not UTF-8 before the number were echoed
@@ -599,6 +708,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/units/parse/bad-input", test_bad_input);
   g_test_add_func ("/units/parse/viscosity", test_viscosity);
   g_test_add_func ("/units/convert/errors", test_conversion_errors);
+  g_test_add_func ("/units/format", test_format);
   g_test_add_func ("/units/parse/locale", test_locale);
   g_test_add_func ("/units/parse/fuzz-regressions", test_fuzz_regressions);
   return g_test_run ();

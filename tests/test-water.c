@@ -10,6 +10,7 @@
 #include <math.h>
 #include <string.h>
 
+#include "core/units.h"
 #include "core/water.h"
 #include "core/water-private.h"
 
@@ -116,20 +117,35 @@ test_viscosity_r1208_table4 (void)
     }
 }
 
+#define T RG_SUBJECT_BIT (RG_SUBJECT_TEMPERATURE)
+#define P RG_SUBJECT_BIT (RG_SUBJECT_PRESSURE)
+#define RHO RG_SUBJECT_BIT (RG_SUBJECT_DENSITY)
+
+/* The error, its sentence and the inputs it names. */
 static void
-expect_error (RgStatus st, const RgError *err, const char *needle)
+expect_error (RgStatus st, const RgError *err, const char *needle,
+              RgSubjects subjects)
 {
   g_assert_cmpint (st, ==, RG_ERR_DOMAIN);
   g_assert_cmpint (err->status, ==, RG_ERR_DOMAIN);
   if (strstr (err->text, needle) == NULL)
     g_error ("message '%s' lacks '%s'", err->text, needle);
+  if (err->subjects != subjects)
+    g_error ("message '%s': subjects %#llx, want %#llx", err->text,
+             err->subjects, subjects);
 }
 
 static void
 test_range (void)
 {
   double rho = -1.0, mu = -1.0, p = -1.0;
+  /* the values in the sentences in °C and kPa, as an engineer reads them */
+  RgUnitChoice metric = { { NULL } };
   RgError err = { 0 };
+
+  metric.unit[RG_QTY_TEMPERATURE] = "°C";
+  metric.unit[RG_QTY_PRESSURE] = "kPa";
+  err.units = &metric;
 
   /* the ends of the range are accepted (water.h) */
   g_assert_cmpint (rg_water_properties (RG_WATER_T_MIN_K, 101325.0, &rho, &mu,
@@ -140,34 +156,44 @@ test_range (void)
                                         &rho, &mu, &err), ==, RG_OK);
 
   rho = mu = -1.0;
+  /* Source: water.h, 0.01–150 °C (273.16–423.15 K) */
   expect_error (rg_water_properties (273.15, 101325.0, &rho, &mu, &err), &err,
-                "0.01–150 °C");
+                "0.01 °C to 150 °C", T);
   expect_error (rg_water_properties (423.16, 1.0e6, &rho, &mu, &err), &err,
-                "0.01–150 °C");
+                "0.01 °C to 150 °C", T);
   expect_error (rg_water_density (NAN, 101325.0, &rho, &err), &err,
-                "finite");
-  expect_error (rg_water_density (300.0, 10.5e6, &rho, &err), &err, "10 MPa");
-  expect_error (rg_water_density (300.0, 0.0, &rho, &err), &err, "positive");
-  expect_error (rg_water_density (300.0, -1.0, &rho, &err), &err, "positive");
+                "finite", T);
+  /* Source: water.h, 10 MPa = 10 000 kPa */
+  expect_error (rg_water_density (300.0, 10.5e6, &rho, &err), &err,
+                "10500 kPa (absolute) is above 10000 kPa", P);
+  expect_error (rg_water_density (300.0, 0.0, &rho, &err), &err, "positive", P);
+  expect_error (rg_water_density (300.0, -1.0, &rho, &err), &err, "positive", P);
   expect_error (rg_water_density (300.0, INFINITY, &rho, &err), &err,
-                "positive");
+                "positive", P);
   /* 150 °C at 4 bar: vapour.  Cross-check: python3-iapws
    * iapws.iapws97._PSat_T(423.15) = 0.476101 MPa, printed with 4 digits */
   expect_error (rg_water_density (423.15, 0.4e6, &rho, &err), &err,
                 "At 150 °C water boils below 476.1 kPa: raise the pressure "
-                "(absolute) or lower the temperature.");
+                "(absolute) or lower the temperature.", T | P);
   /* 100.01 °C at one atmosphere: just past the boiling point */
   expect_error (rg_water_density (373.16, 101325.0, &rho, &err), &err,
-                "boils below");
+                "boils below", T | P);
   expect_error (rg_water_viscosity (298.15, 1200.0, &mu, &err), &err,
-                "kg/m³");
-  expect_error (rg_water_viscosity (298.15, NAN, &mu, &err), &err, "kg/m³");
+                "kg/m³", RHO);
+  expect_error (rg_water_viscosity (298.15, NAN, &mu, &err), &err, "kg/m³",
+                RHO);
   expect_error (rg_water_viscosity (500.0, 950.0, &mu, &err), &err,
-                "0.01–150 °C");
+                "0.01 °C to 150 °C", T);
+  /* Source: IAPWS-IF97 eq. 30 holds from 273.15 K (0 °C) to 647.096 K
+   * (373.946 °C, shown with 4 figures) */
   expect_error (rg_water_saturation_pressure (273.0, &p, &err), &err,
-                "273.15 K");
+                "from 0 °C to 373.9 °C, not at -0.15 °C", T);
   expect_error (rg_water_saturation_pressure (700.0, &p, &err), &err,
-                "647.096 K");
+                "373.9 °C", T);
+  /* in SI when the caller chose no units */
+  err.units = NULL;
+  expect_error (rg_water_density (300.0, 10.5e6, &rho, &err), &err,
+                "1.05e+07 Pa (absolute) is above 1e+07 Pa", P);
   /* outputs are untouched on error */
   g_assert_cmpfloat (rho, ==, -1.0);
   g_assert_cmpfloat (mu, ==, -1.0);

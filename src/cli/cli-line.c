@@ -448,8 +448,10 @@ cli_cmd_fluid (int argc, char **argv)
     return cli_fail_option (option, err.text);
   rugosa_line_get_fluid_spec (line, &spec);
   rg_warnings_clear (&warnings);
+  /* the core's sentences in the units of the SI system (°C, kPa …) */
+  err.units = warnings.units = rugosa_settings_get_unit_choice (settings);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
-    return fail_subjects (&args, err.subjects, err.text);
+    return fail_subjects (&args, rg_fluid_subjects_behind (spec.kind, err.subjects), err.text);
 
   if (cli_args_has (&args, "--json"))
     {

@@ -32,11 +32,12 @@
 
 #include "catalog.h"
 #include "catalog-data.h"
+#include "message-private.h"
 
 #include <math.h>
 
-/* A century and a half covers any pipe still in service. */
-static const double AGE_MAX_YEARS = 150.0;
+/* The ranges of the age and of the growth rate, with their reasons:
+ * aging.h (RG_AGING_AGE_MAX_YEARS, RG_AGING_RATE_MAX_M_PER_YEAR). */
 
 int
 rg_aging_class_count (void)
@@ -78,9 +79,9 @@ rg_aging_class_lookup (const char *id, const RgAgingClass **out, RgError *err)
     }
   rg_catalog_closest (id, class_id_at, rg_catalog_aging_classes_count, near,
                       sizeof near);
-  return rg_error_set (err, RG_ERR_NOT_FOUND,
-                       "Unknown water aggressiveness class \"%.40s\"; the closest are %s.",
-                       id, near);
+  return rg_error_set_on (err, RG_ERR_NOT_FOUND, RG_ON (AGING_CLASS),
+                          "Unknown water aggressiveness class \"%.40s\"; the closest are %s.",
+                          id, near);
 }
 
 RgStatus
@@ -88,21 +89,37 @@ rg_aging_roughness (double roughness_new_m, double rate_m_per_year,
                     double age_years, double *roughness_m, RgError *err)
 {
   if (!isfinite (roughness_new_m) || roughness_new_m < 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The roughness when new must be zero or a positive number (m).");
-  if (!isfinite (rate_m_per_year) || rate_m_per_year < 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The roughness growth rate must be zero or a positive number (m per year).");
-  if (!isfinite (age_years) || age_years < 0.0 || age_years > AGE_MAX_YEARS)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The age must lie between 0 and %g years.", AGE_MAX_YEARS);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (ROUGHNESS),
+                            "The roughness when new must be zero or a positive number.");
+  if (!isfinite (rate_m_per_year) || rate_m_per_year < 0.0
+      || rate_m_per_year > RG_AGING_RATE_MAX_M_PER_YEAR)
+    {
+      char lo[RG_VALUE_MAX], hi[RG_VALUE_MAX], v[RG_VALUE_MAX];
+      return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (AGING_RATE),
+                              "The roughness growth rate must lie between %s and %s, not %s.",
+                              RG_ERR_VALUE (err, RG_QTY_ROUGHNESS_RATE, 0.0, lo),
+                              RG_ERR_VALUE (err, RG_QTY_ROUGHNESS_RATE,
+                                            RG_AGING_RATE_MAX_M_PER_YEAR / RG_UNITS_SECONDS_PER_YEAR, hi),
+                              RG_ERR_VALUE (err, RG_QTY_ROUGHNESS_RATE,
+                                            rate_m_per_year / RG_UNITS_SECONDS_PER_YEAR, v));
+    }
+  if (!isfinite (age_years) || age_years < 0.0 || age_years > RG_AGING_AGE_MAX_YEARS)
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (AGE),
+                            "The age must lie between 0 and %g years.",
+                            RG_AGING_AGE_MAX_YEARS);
   const double eps = roughness_new_m + rate_m_per_year * age_years;
   if (!isfinite (eps))
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The aged roughness is too large to compute.");
+    return rg_error_set_on (err, RG_ERR_NUMERIC,
+                            RG_ON (ROUGHNESS) | RG_ON (AGING_RATE) | RG_ON (AGE),
+                            "The aged roughness is too large to compute.");
   *roughness_m = eps;
   return RG_OK;
 }
+
+/* What the derivative of the loss with age is made of. */
+static const RgSubjects DERIVATIVE_INPUTS
+  = RG_ON (FLOW) | RG_ON (DIAMETER) | RG_ON (ROUGHNESS) | RG_ON (AGING_RATE)
+    | RG_ON (AGE) | RG_ON (MODEL);
 
 /* ∂ln f/∂(ε/D) of the design friction factor at this point. */
 static RgStatus
@@ -136,15 +153,17 @@ dlnf_drr (const RgLineInput *in, const RgLineResult *r, double *out,
       if (rr - h >= 0.0)
         lo = rr - h;
       const double hi = fmin (rr + h, RG_FRICTION_RR_MAX);
-      if ((st = rg_friction_model (in->model, re_t, hi, &fp, err)) != RG_OK)
-        return st;
-      if ((st = rg_friction_model (in->model, re_t, lo, &fm, err)) != RG_OK)
-        return st;
+      if ((st = rg_friction_model (in->model, re_t, hi, &fp, err)) != RG_OK
+          || (st = rg_friction_model (in->model, re_t, lo, &fm, err)) != RG_OK)
+        {
+          rg_error_add_subjects (err, DERIVATIVE_INPUTS);
+          return st;
+        }
       *out = (log (fp) - log (fm)) / (hi - lo);
     }
   if (!isfinite (*out))
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The rate of change of the head loss could not be computed.");
+    return rg_error_set_on (err, RG_ERR_NUMERIC, DERIVATIVE_INPUTS,
+                            "The rate of change of the head loss could not be computed.");
   return RG_OK;
 }
 
@@ -163,14 +182,24 @@ rg_aging_evaluate (const RgLineInput *in, double rate_m_per_year,
     return st;
   if (isfinite (in->diameter_m) && in->diameter_m > 0.0
       && eps / in->diameter_m > RG_FRICTION_RR_MAX)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "After %g years the roughness grows to %.3g mm, a relative roughness of %.3g, above the limit %g.",
-                         age_years, eps * 1e3, eps / in->diameter_m,
-                         RG_FRICTION_RR_MAX);
+    {
+      char e[RG_VALUE_MAX];
+      return rg_error_set_on (err, RG_ERR_DOMAIN,
+                              RG_ON (AGE) | RG_ON (AGING_RATE) | RG_ON (ROUGHNESS)
+                              | RG_ON (DIAMETER),
+                              "After %g years the roughness grows to %s, a relative roughness of %.3g, above the limit %g.",
+                              age_years, RG_ERR_VALUE (err, RG_QTY_ROUGHNESS, eps, e),
+                              eps / in->diameter_m, RG_FRICTION_RR_MAX);
+    }
   aged = *in;
   aged.roughness_m = eps;
   if ((st = rg_line_evaluate (&aged, &out->result, err)) != RG_OK)
-    return st;
+    {
+      /* the aged roughness is the new one grown at this rate for this age */
+      if (err != NULL && (err->subjects & RG_ON (ROUGHNESS)) != 0)
+        rg_error_add_subjects (err, RG_ON (AGING_RATE) | RG_ON (AGE));
+      return st;
+    }
   if ((st = dlnf_drr (&aged, &out->result, &slope, err)) != RG_OK)
     return st;
 
@@ -188,7 +217,8 @@ rg_aging_evaluate (const RgLineInput *in, double rate_m_per_year,
                                    * rate_m_per_year / in->diameter_m;
   if (!isfinite (out->head_loss_ratio_to_new)
       || !isfinite (out->head_loss_rate_m_per_year))
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The aged head loss could not be computed: check the inputs.");
+    return rg_error_set_on (err, RG_ERR_NUMERIC,
+                            RG_ON (FLOW) | RG_ON (LENGTH) | RG_ON (AGING_RATE) | RG_ON (AGE),
+                            "The aged head loss could not be computed.");
   return RG_OK;
 }

@@ -17,29 +17,44 @@
  * rg_air_compressibility_warning gives the sentence beyond that. */
 #include "air.h"
 
+#include "message-private.h"
+
 #include <math.h>
 
 static const double SUTHERLAND_BETA = 1.458e-6; /* kg/(m·s·K^½), ISO 2533 */
 static const double SUTHERLAND_S = 110.4;       /* K, ISO 2533 */
-static const double IDEAL_GAS_WARN_PA = 1.0e6;
 
 static RgStatus
 check_t (double t_k, RgError *err)
 {
+  char lo[RG_VALUE_MAX], hi[RG_VALUE_MAX], v[RG_VALUE_MAX];
+
   if (!isfinite (t_k) || t_k < RG_AIR_T_MIN_K || t_k > RG_AIR_T_MAX_K)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Air: the temperature must lie between %g and %g K.",
-                         RG_AIR_T_MIN_K, RG_AIR_T_MAX_K);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (TEMPERATURE),
+                            "Air: the temperature must lie between %s and "
+                            "%s, not %s.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_AIR_T_MIN_K, lo),
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_AIR_T_MAX_K, hi),
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE, t_k, v));
   return RG_OK;
 }
 
 static RgStatus
 check_p (double p_pa, RgError *err)
 {
+  char lo[RG_VALUE_MAX], hi[RG_VALUE_MAX], v[RG_VALUE_MAX];
+
   if (!isfinite (p_pa) || p_pa < RG_AIR_P_MIN_PA || p_pa > RG_AIR_P_MAX_PA)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Air: the absolute pressure must lie between %g Pa and %g MPa.",
-                         RG_AIR_P_MIN_PA, RG_AIR_P_MAX_PA / 1e6);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (PRESSURE),
+                            "Air: the absolute pressure must lie between %s "
+                            "and %s, not %s.",
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE,
+                                          RG_AIR_P_MIN_PA, lo),
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE,
+                                          RG_AIR_P_MAX_PA, hi),
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE, p_pa, v));
   return RG_OK;
 }
 
@@ -76,9 +91,15 @@ rg_air_properties (double t_k, double p_pa, RgFluidProps *out,
     return st;
   if ((st = rg_air_viscosity (t_k, &mu, err)) != RG_OK)
     return st;
-  if (p_pa > IDEAL_GAS_WARN_PA)
-    rg_warnings_add (warnings,
-                     "Air: above 1 MPa the ideal-gas density may be off by more than 0.5 %%.");
+  if (warnings != NULL && p_pa > RG_AIR_P_IDEAL_GAS_WARN_PA)
+    {
+      char v[RG_VALUE_MAX];
+      rg_warnings_add (warnings,
+                       "Air: above %s the ideal-gas density may be off by "
+                       "more than 0.5 %%.",
+                       RG_WARN_VALUE (warnings, RG_QTY_PRESSURE,
+                                      RG_AIR_P_IDEAL_GAS_WARN_PA, v));
+    }
   out->density_kg_m3 = rho;
   out->dynamic_viscosity_pa_s = mu;
   out->kinematic_viscosity_m2_s = mu / rho;
@@ -93,10 +114,20 @@ rg_air_compressibility_warning (double pressure_drop_pa,
       || inlet_pressure_pa <= 0.0)
     return 0;
   const double share = fabs (pressure_drop_pa) / inlet_pressure_pa;
+  char dp[RG_VALUE_MAX], p[RG_VALUE_MAX];
+
   if (share <= RG_AIR_DP_FRACTION_MAX)
     return 0;
   rg_warnings_add (warnings,
-                   "The pressure drop is %.0f %% of the inlet pressure, above 10 %%: the incompressible model no longer holds; split the line into shorter parts or use a compressible-flow method.",
-                   100.0 * share);
+                   "The pressure drop of %s is %.0f %% of the inlet pressure "
+                   "%s, above %.0f %%: the incompressible model no longer "
+                   "holds; split the line into shorter parts or use a "
+                   "compressible-flow method.",
+                   RG_WARN_VALUE (warnings, RG_QTY_PRESSURE,
+                                  fabs (pressure_drop_pa), dp),
+                   100.0 * share,
+                   RG_WARN_VALUE (warnings, RG_QTY_PRESSURE,
+                                  inlet_pressure_pa, p),
+                   100.0 * RG_AIR_DP_FRACTION_MAX);
   return 1;
 }

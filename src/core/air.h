@@ -13,11 +13,13 @@
 /* Where the model is computed: Sutherland's law with these constants fits
  * within about 2 % from 170 to 1900 K (White, Viscous Fluid Flow, 3rd ed.,
  * 2006, Table 1-2); the ideal gas is kept to pressures up to 10 MPa, with a
- * warning above 1 MPa. */
+ * warning above 1 MPa, where the compressibility factor of air leaves
+ * 1 ± 0.005 (common practice, no single source; air.c). */
 #define RG_AIR_T_MIN_K 170.0
 #define RG_AIR_T_MAX_K 1900.0
 #define RG_AIR_P_MIN_PA 100.0
 #define RG_AIR_P_MAX_PA 1.0e7
+#define RG_AIR_P_IDEAL_GAS_WARN_PA 1.0e6
 
 /* Above this fraction of the inlet pressure the pressure drop makes the
  * incompressible model unreliable (Crane TP-410, 2009, p. 1-9). */

@@ -218,9 +218,10 @@ rg_material_lookup (const char *name, const RgMaterial **out, RgError *err)
       }
   rg_catalog_closest (name, material_id_at, rg_catalog_materials_count, near,
                       sizeof near);
-  return rg_error_set (err, RG_ERR_NOT_FOUND,
-                       "Unknown pipe material \"%.40s\"; the closest are %s.",
-                       name, near);
+  return rg_error_set_on (err, RG_ERR_NOT_FOUND,
+                          RG_SUBJECT_BIT (RG_SUBJECT_MATERIAL),
+                          "Unknown pipe material \"%.40s\"; the closest are %s.",
+                          name, near);
 }
 
 /* ---- pipe designations ------------------------------------------------- */
@@ -539,7 +540,8 @@ rg_pipe_lookup (const char *designation, const RgPipe **out, RgError *err)
       return RG_OK;
     }
   format_closest (best, pipe_designation_at, near, sizeof near);
-  return rg_error_set (err, RG_ERR_NOT_FOUND,
-                       "Unknown pipe designation \"%.40s\"; the closest are %s.",
-                       designation, near);
+  return rg_error_set_on (err, RG_ERR_NOT_FOUND,
+                          RG_SUBJECT_BIT (RG_SUBJECT_PIPE),
+                          "Unknown pipe designation \"%.40s\"; the closest are %s.",
+                          designation, near);
 }

@@ -44,6 +44,7 @@
 
 #include "catalog.h"
 #include "catalog-data.h"
+#include "message-private.h"
 
 #include <math.h>
 #include <string.h>
@@ -52,20 +53,8 @@
  * exactly, international inch 1959). */
 static const double INCH_M = 0.0254;
 
-/* Clean commercial steel for Crane's f_T: ε = 0.0018 in (from memory of
- * Crane TP-410, 2009 ed.; python3-fluids' K_butterfly_valve_Crane docstring
- * gives the same value). */
-static const double CRANE_ROUGHNESS_M = 0.0018 * 0.0254;
-
-/* f_T is computed for relative roughness up to 0.05, the largest curve of
- * Moody's chart (from memory of Moody 1944, Trans. ASME 66; the limit is
- * our choice): a bore below 20·ε = 0.9144 mm is refused. */
-static const double CRANE_MAX_RELATIVE_ROUGHNESS = 0.05;
-
-/* Below this Reynolds number Crane's turbulent K is flagged.  Common
- * practice (no single source): flow is taken as fully turbulent from
- * Re ≈ 4000, as in the project's default transition settings. */
-static const double CRANE_RE_TURBULENT_MIN = 4000.0;
+/* Crane's roughness, its largest ε/D and the turbulent Reynolds number,
+ * with their sources: fittings.h (RG_FITTING_CRANE_*). */
 
 int
 rg_fitting_count (void)
@@ -118,23 +107,26 @@ rg_fitting_lookup (const char *id, const RgFitting **out, RgError *err)
       }
   rg_catalog_closest (id, fitting_id_at, rg_catalog_fittings_count, near,
                       sizeof near);
-  return rg_error_set (err, RG_ERR_NOT_FOUND,
-                       "Unknown fitting \"%.40s\"; the closest are %s.", id, near);
+  return rg_error_set_on (err, RG_ERR_NOT_FOUND, RG_ON (FITTING),
+                          "Unknown fitting \"%.40s\"; the closest are %s.", id, near);
 }
 
 RgStatus
 rg_fitting_crane_ft (double diameter_m, double *ft, RgError *err)
 {
+  char lo[RG_VALUE_MAX], v[RG_VALUE_MAX];
+
   if (!isfinite (diameter_m) || diameter_m <= 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The inner diameter for the fitting loss must be a positive number (m).");
-  if (CRANE_ROUGHNESS_M / diameter_m > CRANE_MAX_RELATIVE_ROUGHNESS)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Crane's friction factor f_T needs a bore of at least %.4g mm, not %.4g mm.",
-                         CRANE_ROUGHNESS_M / CRANE_MAX_RELATIVE_ROUGHNESS * 1e3,
-                         diameter_m * 1e3);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (DIAMETER),
+                            "The inner diameter for the fitting loss must be a positive number.");
+  if (RG_FITTING_CRANE_ROUGHNESS_M / diameter_m > RG_FITTING_CRANE_RR_MAX)
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (DIAMETER),
+                            "Crane's friction factor f_T needs a bore of at least %s, not %s.",
+                            RG_ERR_VALUE (err, RG_QTY_LENGTH,
+                                          RG_FITTING_CRANE_BORE_MIN_M, lo),
+                            RG_ERR_VALUE (err, RG_QTY_LENGTH, diameter_m, v));
   /* Crane TP-410 (2009): the fully rough limit of Colebrook. */
-  const double lg = log10 (CRANE_ROUGHNESS_M / (3.7 * diameter_m));
+  const double lg = log10 (RG_FITTING_CRANE_ROUGHNESS_M / (3.7 * diameter_m));
   *ft = 0.25 / (lg * lg);
   return RG_OK;
 }
@@ -166,13 +158,14 @@ rg_fitting_k_checked (const RgFitting *fitting, double re, double diameter_m,
   double kf;
 
   if (fitting == NULL)
-    return rg_error_set (err, RG_ERR_DOMAIN, "No fitting was given.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (FITTING),
+                            "No fitting was given.");
   if (!isfinite (re) || re <= 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The Reynolds number for the fitting loss must be a positive number.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (REYNOLDS),
+                            "The Reynolds number for the fitting loss must be a positive number.");
   if (!isfinite (diameter_m) || diameter_m <= 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The inner diameter for the fitting loss must be a positive number (m).");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (DIAMETER),
+                            "The inner diameter for the fitting loss must be a positive number.");
 
   if (fitting->method == RG_FITTING_METHOD_CRANE_FT)
     {
@@ -181,19 +174,28 @@ rg_fitting_k_checked (const RgFitting *fitting, double re, double diameter_m,
       RgStatus st;
 
       if (fitting->n_bands < 1 || fitting->n_bands > RG_FITTING_BANDS_MAX)
-        return rg_error_set (err, RG_ERR_DOMAIN,
-                             "The fitting \"%s\" has no size bands.", fitting->id);
+        return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (FITTING),
+                                "The fitting \"%s\" has no size bands.", fitting->id);
       if ((st = rg_fitting_crane_ft (diameter_m, &ft, err)) != RG_OK)
         return st;
       band = crane_band (fitting, diameter_m, &outside);
       kf = fitting->band_n[band] * ft;
-      if (outside)
-        rg_warnings_add (warnings,
-                         "%s: the bore %.4g mm is outside the published sizes (%.4g to %.4g mm); K uses the %s value.",
-                         fitting->id, diameter_m * 1e3, fitting->min_bore_m * 1e3,
-                         fitting->band_max_bore_m[fitting->n_bands - 1] * 1e3,
-                         fitting->band_nominal[band]);
-      if (re < CRANE_RE_TURBULENT_MIN)
+      if (outside && warnings != NULL)
+        {
+          char d[RG_VALUE_MAX], lo[RG_VALUE_MAX], hi[RG_VALUE_MAX];
+          /* TRANSLATORS: the first %s is a fitting's catalog id, the last
+           * a nominal size band as published ("NPS 2–8"). */
+          rg_warnings_add (warnings,
+                           "%s: the bore %s is outside the published sizes (%s to %s); K uses the %s value.",
+                           fitting->id,
+                           RG_WARN_VALUE (warnings, RG_QTY_LENGTH, diameter_m, d),
+                           RG_WARN_VALUE (warnings, RG_QTY_LENGTH, fitting->min_bore_m, lo),
+                           RG_WARN_VALUE (warnings, RG_QTY_LENGTH,
+                                          fitting->band_max_bore_m[fitting->n_bands - 1], hi),
+                           fitting->band_nominal[band]);
+        }
+      if (re < RG_FITTING_CRANE_RE_TURBULENT_MIN)
+        /* TRANSLATORS: %s is a fitting's catalog id. */
         rg_warnings_add (warnings,
                          "%s: Crane's K is a turbulent-flow value; at Re = %.3g the loss may be larger.",
                          fitting->id, re);
@@ -204,9 +206,10 @@ rg_fitting_k_checked (const RgFitting *fitting, double re, double diameter_m,
       kf = fitting->k1 / re + fitting->ki * (1.0 + fitting->kd / pow (d_in, 0.3));
     }
   if (!isfinite (kf))
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The loss coefficient of \"%s\" is too large to compute: check the Reynolds number and diameter.",
-                         fitting->id);
+    return rg_error_set_on (err, RG_ERR_NUMERIC,
+                            RG_ON (FITTING) | RG_ON (REYNOLDS) | RG_ON (DIAMETER),
+                            "The loss coefficient of \"%s\" is too large to compute.",
+                            fitting->id);
   *k = kf;
   return RG_OK;
 }
@@ -242,24 +245,25 @@ rg_fittings_k_sum_checked (const RgFittingUse *uses, int n, double re,
   RgStatus st;
 
   if (n < 0 || (n > 0 && uses == NULL))
-    return rg_error_set (err, RG_ERR_DOMAIN, "The fitting list is not valid.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (FITTING),
+                            "The fitting list is not valid.");
   for (int i = 0; i < n; i++)
     {
       const RgFittingUse *u = &uses[i];
       double k = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
-      RgWarnings own;
+      RgWarnings own = { 0 };
 
-      rg_warnings_clear (&own);
+      own.units = warnings != NULL ? warnings->units : NULL;
       if (!isfinite (u->count) || u->count < 0.0)
-        return rg_error_set (err, RG_ERR_DOMAIN,
-                             "Fitting %d: the count must be zero or a positive number.",
-                             i + 1);
+        return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (FITTING),
+                                "Fitting %d: the count must be zero or a positive number.",
+                                i + 1);
       if (u->fitting == NULL)
         {
           if (!isfinite (u->k_plain) || u->k_plain < 0.0)
-            return rg_error_set (err, RG_ERR_DOMAIN,
-                                 "Fitting %d: the loss coefficient K must be zero or a positive number.",
-                                 i + 1);
+            return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (FITTING),
+                                    "Fitting %d: the loss coefficient K must be zero or a positive number.",
+                                    i + 1);
           k = u->k_plain;
         }
       else if ((st = rg_fitting_k_checked (u->fitting, re, diameter_m, &k, &own, err)) != RG_OK)
@@ -269,8 +273,8 @@ rg_fittings_k_sum_checked (const RgFittingUse *uses, int n, double re,
       sum += u->count * k;
     }
   if (!isfinite (sum))
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The sum of the fitting loss coefficients is too large to compute.");
+    return rg_error_set_on (err, RG_ERR_NUMERIC, RG_ON (FITTING),
+                            "The sum of the fitting loss coefficients is too large to compute.");
   *k_sum = sum;
   return RG_OK;
 }

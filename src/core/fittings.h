@@ -34,9 +34,26 @@ const RgFitting *rg_fitting_at (int index);
 RgStatus rg_fitting_lookup (const char *id, const RgFitting **out,
                             RgError *err);
 
+/* Clean commercial steel for Crane's f_T: ε = 0.0018 in (from memory of
+ * Crane TP-410, 2009 ed.; python3-fluids' K_butterfly_valve_Crane docstring
+ * gives the same value). */
+#define RG_FITTING_CRANE_ROUGHNESS_M (0.0018 * 0.0254)
+/* f_T is computed for relative roughness up to 0.05, the largest curve of
+ * Moody's chart (from memory of Moody 1944, Trans. ASME 66; the limit is
+ * our choice): a bore below 20·ε = 0.9144 mm is refused. */
+#define RG_FITTING_CRANE_RR_MAX 0.05
+#define RG_FITTING_CRANE_BORE_MIN_M \
+  (RG_FITTING_CRANE_ROUGHNESS_M / RG_FITTING_CRANE_RR_MAX)
+/* Below this Reynolds number Crane's turbulent K is flagged.  Common
+ * practice (no single source): flow is taken as fully turbulent from
+ * Re ≈ 4000, as in the project's default transition settings. */
+#define RG_FITTING_CRANE_RE_TURBULENT_MIN 4000.0
+
 /* Crane's friction factor of clean commercial steel in the zone of complete
  * turbulence for a bore of `diameter_m`: f_T = 0.25/[log10(ε/(3.7·D))]²,
- * ε = 0.0018 in.  Fails (RG_ERR_DOMAIN) unless ε/D ≤ 0.05, i.e. D ≥ 0.9144 mm. */
+ * ε = RG_FITTING_CRANE_ROUGHNESS_M.  Fails (RG_ERR_DOMAIN) unless
+ * ε/D ≤ RG_FITTING_CRANE_RR_MAX, i.e. D ≥ RG_FITTING_CRANE_BORE_MIN_M
+ * (0.9144 mm). */
 RgStatus rg_fitting_crane_ft (double diameter_m, double *ft, RgError *err);
 
 /* The loss coefficient of one fitting in a line of inner diameter
@@ -55,7 +72,7 @@ RgStatus rg_fitting_k_checked (const RgFitting *fitting, double re,
                                double diameter_m, double *k,
                                RgWarnings *warnings, RgError *err);
 
-/* One entry of a line's fitting list: a catalog fitting, or a plain K
+/* One entry of a line's fitting list: a catalog fitting, or a plain K ≥ 0
  * (fitting == NULL, k_plain used) — either with a count ≥ 0. */
 typedef struct {
   const RgFitting *fitting;

@@ -4,16 +4,13 @@
  * Water: water.c (IAPWS-IF97 region 1 density, IAPWS R12-08 viscosity),
  *   at spec->temperature_k and spec->pressure_pa (absolute).
  * Custom: the density and dynamic viscosity given, checked against broad
- *   plausibility bounds so that a unit slip (g/cm³ typed as kg/m³, cP as
- *   Pa·s) is caught at entry:
- *     density 0.01 … 25 000 kg/m³ — Common practice (no single source): a
- *       gas near vacuum is about 0.01 kg/m³, mercury 13 546 kg/m³;
- *     viscosity 1e-6 … 1e5 Pa·s — Common practice (no single source): the
- *       least viscous gases (hydrogen) are near 9e-6 Pa·s, pumped heavy
- *       residues and bitumens stay well below 1e5 Pa·s.
+ *   plausibility bounds (RG_FLUID_CUSTOM_*, with their sources, in
+ *   fluid.h) so that a unit slip is caught at entry.
  *   The kinematic viscosity is μ/ρ.
  * Seawater, oil and air live in their own files (seawater.c, oil.c, air.c);
  *   this file maps the shared RgFluidSpec onto them.
+ *
+ * Seawater also has its pressure checked (rg_seawater_check_state).
  *
  * rg_fluid_spec_init gives every kind a usable state: 293.15 K (20 °C) and
  * 101 325 Pa absolute (one standard atmosphere).  A pressure of 0 is not
@@ -21,6 +18,7 @@
 #include "fluid.h"
 
 #include "air.h"
+#include "message-private.h"
 #include "oil.h"
 #include "seawater.h"
 #include "water.h"
@@ -30,11 +28,6 @@
 
 static const double DEFAULT_T_K = 293.15;   /* 20 °C */
 static const double DEFAULT_P_PA = 101325.0; /* 1 atm, NIST SP 811 B.8 */
-
-static const double CUSTOM_RHO_MIN = 0.01;
-static const double CUSTOM_RHO_MAX = 25000.0;
-static const double CUSTOM_MU_MIN = 1.0e-6;
-static const double CUSTOM_MU_MAX = 1.0e5;
 
 static const char *const KIND_ID[RG_FLUID_N_KINDS] = {
   [RG_FLUID_WATER] = "water",
@@ -85,9 +78,9 @@ rg_fluid_kind_from_id (const char *id, RgFluidKind *kind, RgError *err)
           *kind = (RgFluidKind) k;
           return RG_OK;
         }
-  return rg_error_set (err, RG_ERR_NOT_FOUND,
-                       "Unknown fluid '%.40s': use water, custom, seawater, "
-                       "oil or air.", id != NULL ? id : "");
+  return rg_error_set_on (err, RG_ERR_NOT_FOUND, RG_ON (FLUID),
+                          "Unknown fluid '%.40s': use water, custom, "
+                          "seawater, oil or air.", id != NULL ? id : "");
 }
 
 static RgStatus
@@ -95,17 +88,28 @@ custom_properties (const RgFluidSpec *spec, RgFluidProps *out, RgError *err)
 {
   double rho = spec->density_kg_m3;
   double mu = spec->viscosity_pa_s;
+  char lo[RG_VALUE_MAX], hi[RG_VALUE_MAX], v[RG_VALUE_MAX];
 
-  if (!isfinite (rho) || rho < CUSTOM_RHO_MIN || rho > CUSTOM_RHO_MAX)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The custom fluid's density must lie between %g and "
-                         "%g kg/m³ (plausible fluids), not %g kg/m³.",
-                         CUSTOM_RHO_MIN, CUSTOM_RHO_MAX, rho);
-  if (!isfinite (mu) || mu < CUSTOM_MU_MIN || mu > CUSTOM_MU_MAX)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The custom fluid's dynamic viscosity must lie "
-                         "between %g and %g Pa·s (plausible fluids), not "
-                         "%g Pa·s.", CUSTOM_MU_MIN, CUSTOM_MU_MAX, mu);
+  if (!isfinite (rho) || rho < RG_FLUID_CUSTOM_DENSITY_MIN_KG_M3
+      || rho > RG_FLUID_CUSTOM_DENSITY_MAX_KG_M3)
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (DENSITY),
+                            "The custom fluid's density must lie between %s "
+                            "and %s (plausible fluids), not %s.",
+                            RG_ERR_VALUE (err, RG_QTY_DENSITY,
+                                          RG_FLUID_CUSTOM_DENSITY_MIN_KG_M3, lo),
+                            RG_ERR_VALUE (err, RG_QTY_DENSITY,
+                                          RG_FLUID_CUSTOM_DENSITY_MAX_KG_M3, hi),
+                            RG_ERR_VALUE (err, RG_QTY_DENSITY, rho, v));
+  if (!isfinite (mu) || mu < RG_FLUID_CUSTOM_VISCOSITY_MIN_PA_S
+      || mu > RG_FLUID_CUSTOM_VISCOSITY_MAX_PA_S)
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (VISCOSITY),
+                            "The custom fluid's dynamic viscosity must lie "
+                            "between %s and %s (plausible fluids), not %s.",
+                            RG_ERR_VALUE (err, RG_QTY_DYN_VISCOSITY,
+                                          RG_FLUID_CUSTOM_VISCOSITY_MIN_PA_S, lo),
+                            RG_ERR_VALUE (err, RG_QTY_DYN_VISCOSITY,
+                                          RG_FLUID_CUSTOM_VISCOSITY_MAX_PA_S, hi),
+                            RG_ERR_VALUE (err, RG_QTY_DYN_VISCOSITY, mu, v));
   out->density_kg_m3 = rho;
   out->dynamic_viscosity_pa_s = mu;
   out->kinematic_viscosity_m2_s = mu / rho;
@@ -127,30 +131,6 @@ water_properties (const RgFluidSpec *spec, RgFluidProps *out, RgError *err)
   return RG_OK;
 }
 
-/* The seawater correlations hold for the liquid only, and they do not take
- * the pressure.  Dissolved salt lowers the vapour pressure a little (about
- * 2 % at 35 g/kg, Raoult's law with the salt's mole fraction), so pure
- * water's saturation pressure (IAPWS-IF97 region 4) is a slightly cautious
- * boiling limit: seawater is refused where pure water would boil. */
-static RgStatus
-seawater_liquid (const RgFluidSpec *spec, RgError *err)
-{
-  double p_sat;
-
-  if (!isfinite (spec->pressure_pa) || spec->pressure_pa <= 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The pressure must be a positive absolute pressure (Pa).");
-  if (!isfinite (spec->temperature_k) || spec->temperature_k < 273.15
-      || spec->temperature_k > 647.0)
-    return RG_OK; /* the seawater model reports its own temperature range */
-  if (rg_water_saturation_pressure (spec->temperature_k, &p_sat, NULL) == RG_OK
-      && spec->pressure_pa < p_sat)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "At %.4g °C seawater boils below about %.4g kPa: raise the pressure (absolute) or lower the temperature.",
-                         spec->temperature_k - 273.15, p_sat / 1000.0);
-  return RG_OK;
-}
-
 RgStatus
 rg_fluid_properties (const RgFluidSpec *spec, RgFluidProps *out,
                      RgWarnings *warnings, RgError *err)
@@ -158,8 +138,9 @@ rg_fluid_properties (const RgFluidSpec *spec, RgFluidProps *out,
   RgFluidProps p = { 0 }; /* for clang-analyzer: rg_error_set never returns RG_OK */
   RgStatus st;
 
+  /* a misuse of the API: no input a user can change (subjects 0) */
   if (spec == NULL || out == NULL)
-    return rg_error_set (err, RG_ERR_DOMAIN, "No fluid was given.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, 0, "No fluid was given.");
   switch (spec->kind)
     {
     case RG_FLUID_WATER:
@@ -169,7 +150,7 @@ rg_fluid_properties (const RgFluidSpec *spec, RgFluidProps *out,
       st = custom_properties (spec, &p, err);
       break;
     case RG_FLUID_SEAWATER:
-      st = seawater_liquid (spec, err);
+      st = rg_seawater_check_state (spec->temperature_k, spec->pressure_pa, err);
       if (st == RG_OK)
         st = rg_seawater_properties (spec->temperature_k, spec->salinity_kg_kg, &p, err);
       break;
@@ -190,14 +171,47 @@ rg_fluid_properties (const RgFluidSpec *spec, RgFluidProps *out,
       break;
     case RG_FLUID_N_KINDS:
     default:
-      return rg_error_set (err, RG_ERR_DOMAIN,
-                           "Unknown fluid kind %d.", (int) spec->kind);
+      return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (FLUID),
+                              "Unknown fluid kind %d.", (int) spec->kind);
     }
   if (st != RG_OK)
     return st;
   if (!isfinite (p.kinematic_viscosity_m2_s))
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The kinematic viscosity could not be computed.");
+    return rg_error_set_on (err, RG_ERR_NUMERIC,
+                            rg_fluid_property_subjects (spec->kind),
+                            "The kinematic viscosity could not be computed.");
   *out = p;
   return RG_OK;
+}
+
+RgSubjects
+rg_fluid_property_subjects (RgFluidKind kind)
+{
+  switch (kind)
+    {
+    case RG_FLUID_WATER:
+    case RG_FLUID_AIR:
+      return RG_ON (TEMPERATURE) | RG_ON (PRESSURE);
+    case RG_FLUID_CUSTOM:
+      return RG_ON (DENSITY) | RG_ON (VISCOSITY);
+    case RG_FLUID_SEAWATER:
+      return RG_ON (TEMPERATURE) | RG_ON (SALINITY);
+    case RG_FLUID_OIL:
+      return RG_ON (TEMPERATURE) | RG_ON (OIL_T1) | RG_ON (OIL_NU1)
+             | RG_ON (OIL_T2) | RG_ON (OIL_NU2) | RG_ON (OIL_DENSITY_REF)
+             | RG_ON (OIL_T_REF) | RG_ON (OIL_EXPANSION);
+    case RG_FLUID_N_KINDS:
+    default:
+      return 0;
+    }
+}
+
+RgSubjects
+rg_fluid_subjects_behind (RgFluidKind kind, RgSubjects subjects)
+{
+  const RgSubjects props = RG_ON (DENSITY) | RG_ON (VISCOSITY);
+
+  if ((subjects & props) == 0)
+    return subjects;
+  return (subjects & ~props) | rg_fluid_property_subjects (kind);
 }

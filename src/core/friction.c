@@ -56,6 +56,8 @@
  * RG_ERR_DOMAIN and leave the result untouched. */
 #include "friction.h"
 
+#include "message-private.h"
+
 #include <float.h>
 #include <math.h>
 #include <string.h>
@@ -70,17 +72,23 @@ static const double COLEBROOK_F0_SHIFT = 0.2;
 /* 2/ln(10); mpmath, 40 digits */
 static const double TWO_OVER_LN10 = 0.8685889638065036553022578378332101645888;
 
-/* Out of the hot path: which argument is wrong, as one sentence. */
+/* Out of the hot path: which argument is wrong, as one sentence.  `who`
+ * is the name of a published equation ("Colebrook", "Haaland"): a proper
+ * name, the same in every language. */
 static RgStatus
 turbulent_domain_error (const char *who, double re, double rr, RgError *err)
 {
+  /* TRANSLATORS: the first %s names a published equation, e.g.
+   * "Colebrook". */
   if (!(re >= RG_FRICTION_RE_MIN && re <= RG_FRICTION_RE_MAX))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "%s: the Reynolds number must be a number between %g and %g, not %g.",
-                         who, RG_FRICTION_RE_MIN, RG_FRICTION_RE_MAX, re);
-  return rg_error_set (err, RG_ERR_DOMAIN,
-                       "%s: the relative roughness must be a number between 0 and %g, not %g.",
-                       who, RG_FRICTION_RR_MAX, rr);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (REYNOLDS),
+                            "%s: the Reynolds number must be a number between %g and %g, not %g.",
+                            who, RG_FRICTION_RE_MIN, RG_FRICTION_RE_MAX, re);
+  /* TRANSLATORS: the first %s names a published equation, e.g.
+   * "Colebrook". */
+  return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (RELATIVE_ROUGHNESS),
+                          "%s: the relative roughness must be a number between 0 and %g, not %g.",
+                          who, RG_FRICTION_RR_MAX, rr);
 }
 
 /* One comparison chain; written so that NaN fails it. */
@@ -96,9 +104,10 @@ finish (const char *who, double f, double *out, RgError *err)
 {
   /* also false for NaN */
   if (!(f > 0.0 && f <= DBL_MAX))
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "%s: the friction factor could not be computed (it is not a finite positive number).",
-                         who);
+    return rg_error_set_on (err, RG_ERR_NUMERIC,
+                            RG_ON (REYNOLDS) | RG_ON (RELATIVE_ROUGHNESS),
+                            "%s: the friction factor could not be computed (it is not a finite positive number).",
+                            who);
   *out = f;
   return RG_OK;
 }
@@ -107,14 +116,14 @@ RgStatus
 rg_friction_laminar (double re, double *f, RgError *err)
 {
   if (!(re > 0.0 && re <= DBL_MAX))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Laminar friction: the Reynolds number must be a finite positive number, not %g.",
-                         re);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (REYNOLDS),
+                            "Laminar friction: the Reynolds number must be a finite positive number, not %g.",
+                            re);
   /* 64/re overflows only for re below 64/DBL_MAX */
   if (re < 64.0 / DBL_MAX)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Laminar friction: the Reynolds number %g is too small to give a finite friction factor.",
-                         re);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (REYNOLDS),
+                            "Laminar friction: the Reynolds number %g is too small to give a finite friction factor.",
+                            re);
   *f = 64.0 / re;
   return RG_OK;
 }
@@ -186,13 +195,13 @@ RgStatus
 rg_friction_churchill (double re, double rr, double *f, RgError *err)
 {
   if (!(re > 0.0 && re <= RG_FRICTION_RE_MAX))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Churchill: the Reynolds number must be a number above 0 and at most %g, not %g.",
-                         RG_FRICTION_RE_MAX, re);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (REYNOLDS),
+                            "Churchill: the Reynolds number must be a number above 0 and at most %g, not %g.",
+                            RG_FRICTION_RE_MAX, re);
   if (!(rr >= 0.0 && rr <= RG_FRICTION_RR_MAX))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Churchill: the relative roughness must be a number between 0 and %g, not %g.",
-                         RG_FRICTION_RR_MAX, rr);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (RELATIVE_ROUGHNESS),
+                            "Churchill: the relative roughness must be a number between 0 and %g, not %g.",
+                            RG_FRICTION_RR_MAX, rr);
   /* Churchill (1977), worked in logarithms:
    *   ln A = 16·ln|2.457·ln(1/w)|, w = (7/Re)^0.9 + 0.27·ε/D
    *   (the even power makes the sign of ln(1/w) irrelevant; w = 1 gives
@@ -224,9 +233,9 @@ rg_friction_model (RgFrictionModel model, double re, double rr, double *f,
       return rg_friction_churchill (re, rr, f, err);
     case RG_FRICTION_N_MODELS:
     default:
-      return rg_error_set (err, RG_ERR_DOMAIN,
-                           "Unknown friction model number %d; use colebrook, haaland, swamee-jain or churchill.",
-                           (int) model);
+      return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (MODEL),
+                              "Unknown friction model number %d; use colebrook, haaland, swamee-jain or churchill.",
+                              (int) model);
     }
 }
 
@@ -234,8 +243,9 @@ RgStatus
 rg_friction_roughness_elasticity (double re, double rr, double *elasticity,
                                   RgError *err)
 {
+  /* the elasticity is that of the Colebrook equation */
   if (!turbulent_args_ok (re, rr))
-    return turbulent_domain_error ("Roughness elasticity", re, rr, err);
+    return turbulent_domain_error ("Colebrook", re, rr, err);
   double f;
   RgStatus st = rg_friction_colebrook (re, rr, &f, err);
   if (st != RG_OK)
@@ -246,8 +256,9 @@ rg_friction_roughness_elasticity (double re, double rr, double *elasticity,
   const double u = r + 2.51 * x / re;
   const double e = 2.0 * TWO_OVER_LN10 * r / (x * (u + 2.51 * TWO_OVER_LN10 / re));
   if (!(e >= 0.0 && e <= DBL_MAX))
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "Roughness elasticity: the result is not a finite number.");
+    return rg_error_set_on (err, RG_ERR_NUMERIC,
+                            RG_ON (REYNOLDS) | RG_ON (RELATIVE_ROUGHNESS),
+                            "The roughness elasticity could not be computed (it is not a finite number).");
   *elasticity = e;
   return RG_OK;
 }
@@ -284,7 +295,7 @@ rg_friction_model_from_id (const char *id, RgFrictionModel *model, RgError *err)
         *model = (RgFrictionModel) i;
         return RG_OK;
       }
-  return rg_error_set (err, RG_ERR_PARSE,
-                       "Unknown friction model \"%.40s\"; use colebrook, haaland, swamee-jain or churchill.",
-                       id != NULL ? id : "");
+  return rg_error_set_on (err, RG_ERR_PARSE, RG_ON (MODEL),
+                          "Unknown friction model \"%.40s\"; use colebrook, haaland, swamee-jain or churchill.",
+                          id != NULL ? id : "");
 }

@@ -13,6 +13,8 @@
  * edge of the jump. */
 #include "line.h"
 
+#include "message-private.h"
+
 #include <math.h>
 
 void
@@ -30,42 +32,69 @@ rg_line_input_init (RgLineInput *in)
   rg_transition_default (&in->transition);
 }
 
-static RgStatus
-check_positive (const char *what, const char *unit, double x, RgError *err)
+/* The inputs behind the dimensionless numbers of the friction side: a
+ * failure of rg_friction_point names the Reynolds number or the relative
+ * roughness, and the line knows what they were made of. */
+static const RgSubjects RE_INPUTS = RG_ON (FLOW) | RG_ON (DIAMETER)
+                                    | RG_ON (DENSITY) | RG_ON (VISCOSITY);
+static const RgSubjects RR_INPUTS = RG_ON (ROUGHNESS) | RG_ON (DIAMETER);
+
+static void
+add_line_subjects (RgError *err)
 {
-  if (!isfinite (x) || x <= 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The %s must be a positive number (%s).", what, unit);
-  return RG_OK;
+  if (err == NULL)
+    return;
+  if (err->subjects & RG_ON (REYNOLDS))
+    err->subjects |= RE_INPUTS;
+  if (err->subjects & RG_ON (RELATIVE_ROUGHNESS))
+    err->subjects |= RR_INPUTS;
+}
+
+static int
+positive (double x)
+{
+  return isfinite (x) && x > 0.0;
 }
 
 static RgStatus
 check_input (const RgLineInput *in, int need_flow, int need_diameter,
              RgError *err)
 {
-  RgStatus st;
-
-  if (need_flow && (st = check_positive ("flow", "m³/s", in->flow_m3_s, err)))
-    return st;
-  if (need_diameter
-      && (st = check_positive ("inner diameter", "m", in->diameter_m, err)))
-    return st;
-  if ((st = check_positive ("length", "m", in->length_m, err)))
-    return st;
-  if ((st = check_positive ("density", "kg/m³", in->density_kg_m3, err)))
-    return st;
-  if ((st = check_positive ("viscosity", "Pa·s", in->viscosity_pa_s, err)))
-    return st;
+  if (need_flow && !positive (in->flow_m3_s))
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (FLOW),
+                            "The flow must be a positive number.");
+  if (need_diameter && !positive (in->diameter_m))
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (DIAMETER),
+                            "The inner diameter must be a positive number.");
+  if (!positive (in->length_m))
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (LENGTH),
+                            "The length must be a positive number.");
+  if (!positive (in->density_kg_m3))
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (DENSITY),
+                            "The density must be a positive number.");
+  if (!positive (in->viscosity_pa_s))
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (VISCOSITY),
+                            "The viscosity must be a positive number.");
   if (!isfinite (in->roughness_m) || in->roughness_m < 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The roughness must be zero or a positive number (m).");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (ROUGHNESS),
+                            "The roughness must be zero or a positive number.");
   if (!isfinite (in->k_sum) || in->k_sum < 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The sum of fitting loss coefficients must be zero or positive.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN,
+                            RG_ON (K_SUM) | RG_ON (FITTING),
+                            "The sum of fitting loss coefficients must be zero or positive.");
   if (!isfinite (in->elevation_m))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The elevation change must be a finite number (m).");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (ELEVATION),
+                            "The elevation change must be a finite number.");
   return rg_transition_check (&in->transition, err);
+}
+
+static RgStatus
+check_head_loss (double head_loss_m, RgError *err)
+{
+  if (!positive (head_loss_m))
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (HEAD_LOSS),
+                            "The allowed head loss must be a positive number.");
+  return RG_OK;
 }
 
 RgStatus
@@ -83,20 +112,28 @@ rg_line_evaluate (const RgLineInput *in, RgLineResult *out, RgError *err)
   const double rr = in->roughness_m / d;
 
   if (!isfinite (v) || !isfinite (re))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The flow and diameter give a velocity that cannot be computed.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RE_INPUTS,
+                            "The flow and diameter give a velocity that cannot be computed.");
   if (rr > RG_FRICTION_RR_MAX)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The relative roughness ε/D = %.3g exceeds %g: the roughness is too large for this diameter.",
-                         rr, RG_FRICTION_RR_MAX);
+    {
+      char eps[RG_VALUE_MAX], dia[RG_VALUE_MAX];
+      return rg_error_set_on (err, RG_ERR_DOMAIN, RR_INPUTS,
+                              "The roughness %s is too large for the inner diameter %s: the relative roughness ε/D = %.3g exceeds %g.",
+                              RG_ERR_VALUE (err, RG_QTY_ROUGHNESS, in->roughness_m, eps),
+                              RG_ERR_VALUE (err, RG_QTY_LENGTH, d, dia),
+                              rr, RG_FRICTION_RR_MAX);
+    }
   if (re > RG_FRICTION_RE_MAX)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The Reynolds number %.3g exceeds %g: check the flow, diameter and viscosity.",
-                         re, RG_FRICTION_RE_MAX);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RE_INPUTS,
+                            "The Reynolds number %.3g exceeds %g, the largest the friction factor is computed for.",
+                            re, RG_FRICTION_RE_MAX);
 
   if ((st = rg_friction_point (in->model, &in->transition, re, rr,
                                &out->friction, err)) != RG_OK)
-    return st;
+    {
+      add_line_subjects (err);
+      return st;
+    }
 
   const double vh = v * v / (2.0 * RG_GRAVITY);
   const double f = out->friction.f;
@@ -114,8 +151,10 @@ rg_line_evaluate (const RgLineInput *in, RgLineResult *out, RgError *err)
 
   if (!isfinite (out->head_loss_total_m) || !isfinite (out->pressure_drop_pa)
       || !isfinite (out->wall_shear_pa))
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The head loss is too large to compute: check the inputs.");
+    return rg_error_set_on (err, RG_ERR_NUMERIC,
+                            RG_ON (FLOW) | RG_ON (DIAMETER) | RG_ON (LENGTH)
+                            | RG_ON (K_SUM) | RG_ON (FITTING),
+                            "The head loss is too large to compute.");
   return RG_OK;
 }
 
@@ -176,9 +215,15 @@ solve_log (LossFn fn, const RgLineInput *in, double target, double lo,
   glo -= target;
   ghi -= target;
   if ((glo > 0.0) == (ghi > 0.0))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "No %s within the computable range gives this head loss.",
-                         fn == loss_at_flow ? "flow" : "diameter");
+    {
+      const RgSubjects others = RG_ON (HEAD_LOSS) | RG_ON (LENGTH)
+                                | RG_ON (ROUGHNESS) | RG_ON (K_SUM);
+      if (fn == loss_at_flow)
+        return rg_error_set_on (err, RG_ERR_DOMAIN, others | RG_ON (DIAMETER),
+                                "No flow within the computable range gives this head loss.");
+      return rg_error_set_on (err, RG_ERR_DOMAIN, others | RG_ON (FLOW),
+                              "No diameter within the computable range gives this head loss.");
+    }
 
   for (int i = 0; i < 200 && !converged (lo, hi); i++)
     {
@@ -216,7 +261,7 @@ rg_line_flow_for_head_loss (const RgLineInput *in, double head_loss_m,
 
   if ((st = check_input (in, 0, 1, err)) != RG_OK)
     return st;
-  if ((st = check_positive ("allowed head loss", "m", head_loss_m, err)))
+  if ((st = check_head_loss (head_loss_m, err)) != RG_OK)
     return st;
 
   /* Bracket by Reynolds number 1 … RE_MAX. */
@@ -235,7 +280,7 @@ rg_line_diameter_for_head_loss (const RgLineInput *in, double head_loss_m,
 
   if ((st = check_input (in, 1, 0, err)) != RG_OK)
     return st;
-  if ((st = check_positive ("allowed head loss", "m", head_loss_m, err)))
+  if ((st = check_head_loss (head_loss_m, err)) != RG_OK)
     return st;
 
   /* Smallest diameter: Re ≤ RE_MAX and ε/D ≤ RR_MAX; largest: Re ≥ 1. */
@@ -244,8 +289,10 @@ rg_line_diameter_for_head_loss (const RgLineInput *in, double head_loss_m,
                       in->roughness_m / (RG_FRICTION_RR_MAX * 0.999));
   double dmax = re_d;
   if (!(dmin < dmax))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "No diameter within the computable range suits this flow.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN,
+                            RG_ON (FLOW) | RG_ON (ROUGHNESS) | RG_ON (DENSITY)
+                            | RG_ON (VISCOSITY),
+                            "No diameter within the computable range suits this flow.");
   double root = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
   /* h falls as D grows: solve on the loss at each diameter, then take the
    * side of the bracket within the allowed loss (the larger diameter). */

@@ -76,26 +76,27 @@ rg_transition_default (RgTransition *t)
   t->re_turbulent_min = 4000.0;
 }
 
-/* Bounds on settable transition limits: a sanity range, not physics.
- * Below about 2000 pipe flow stays laminar whatever the disturbances, and
- * with great care it has been kept laminar to about 1e5 (from memory of
- * Pfenninger's 1961 experiments as cited by White, Viscous Fluid Flow; not
- * checked against the document); 500 leaves room for cautious choices. */
-static const double TRANSITION_RE_LOWEST = 500.0;
-static const double TRANSITION_RE_HIGHEST = 1.0e5;
+/* Bounds on settable transition limits: regime.h (RG_TRANSITION_RE_*). */
 
 RgStatus
 rg_transition_check (const RgTransition *t, RgError *err)
 {
   if (t == NULL)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The transition limits are missing.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN,
+                            RG_SUBJECT_BIT (RG_SUBJECT_RE_LAMINAR_MAX)
+                            | RG_SUBJECT_BIT (RG_SUBJECT_RE_TURBULENT_MIN),
+                            "The transition limits are missing.");
   const double lo = t->re_laminar_max, hi = t->re_turbulent_min;
-  /* written so that NaN fails */
-  if (!(lo >= TRANSITION_RE_LOWEST && lo <= hi && hi <= TRANSITION_RE_HIGHEST))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The transition limits must satisfy %g ≤ lower ≤ upper ≤ %g (Reynolds numbers), not lower %g and upper %g.",
-                         TRANSITION_RE_LOWEST, TRANSITION_RE_HIGHEST, lo, hi);
+  /* written so that NaN fails; the subjects are the limits at fault (both
+   * when they are out of order) */
+  if (!(lo >= RG_TRANSITION_RE_LOWEST && lo <= hi && hi <= RG_TRANSITION_RE_HIGHEST))
+    return rg_error_set_on (err, RG_ERR_DOMAIN,
+                            (!(lo >= RG_TRANSITION_RE_LOWEST) || !(lo <= hi)
+                             ? RG_SUBJECT_BIT (RG_SUBJECT_RE_LAMINAR_MAX) : 0)
+                            | (!(hi <= RG_TRANSITION_RE_HIGHEST) || !(lo <= hi)
+                               ? RG_SUBJECT_BIT (RG_SUBJECT_RE_TURBULENT_MIN) : 0),
+                            "The transition limits must satisfy %g ≤ lower ≤ upper ≤ %g (Reynolds numbers), not lower %g and upper %g.",
+                            RG_TRANSITION_RE_LOWEST, RG_TRANSITION_RE_HIGHEST, lo, hi);
   return RG_OK;
 }
 
@@ -261,13 +262,15 @@ rg_friction_point (RgFrictionModel model, const RgTransition *t, double re,
   if ((st = rg_transition_check (t, err)) != RG_OK)
     return st;
   if (!(re > 0.0 && re <= RG_FRICTION_RE_MAX))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The Reynolds number must be a number above 0 and at most %g, not %g.",
-                         RG_FRICTION_RE_MAX, re);
+    return rg_error_set_on (err, RG_ERR_DOMAIN,
+                            RG_SUBJECT_BIT (RG_SUBJECT_REYNOLDS),
+                            "The Reynolds number must be a number above 0 and at most %g, not %g.",
+                            RG_FRICTION_RE_MAX, re);
   if (!(rr >= 0.0 && rr <= RG_FRICTION_RR_MAX))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The relative roughness must be a number between 0 and %g, not %g.",
-                         RG_FRICTION_RR_MAX, rr);
+    return rg_error_set_on (err, RG_ERR_DOMAIN,
+                            RG_SUBJECT_BIT (RG_SUBJECT_RELATIVE_ROUGHNESS),
+                            "The relative roughness must be a number between 0 and %g, not %g.",
+                            RG_FRICTION_RR_MAX, rr);
 
   /* Filled here and copied out only on success, so that a failure leaves
    * *out untouched. */

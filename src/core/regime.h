@@ -31,9 +31,18 @@ typedef struct {
  * smooth and the fully rough zones: 0.02 (regime.c says why). */
 extern const double RG_ROUGHNESS_ZONE_TOLERANCE;
 
+/* Bounds on settable transition limits: a sanity range, not physics.
+ * Below about 2000 pipe flow stays laminar whatever the disturbances, and
+ * with great care it has been kept laminar to about 1e5 (from memory of
+ * Pfenninger's 1961 experiments as cited by White, Viscous Fluid Flow; not
+ * checked against the document); 500 leaves room for cautious choices. */
+#define RG_TRANSITION_RE_LOWEST 500.0
+#define RG_TRANSITION_RE_HIGHEST 1.0e5
+
 void rg_transition_default (RgTransition *t);
-/* 500 ≤ re_laminar_max ≤ re_turbulent_min ≤ 1e5 (equal limits: no
- * transitional range).  NULL or NaN fails. */
+/* RG_TRANSITION_RE_LOWEST ≤ re_laminar_max ≤ re_turbulent_min ≤
+ * RG_TRANSITION_RE_HIGHEST (equal limits: no transitional range).  NULL or
+ * NaN fails. */
 RgStatus rg_transition_check (const RgTransition *t, RgError *err);
 
 /* Laminar for re < re_laminar_max, transitional up to (not including)

@@ -22,8 +22,13 @@
  * values at S = 35 g/kg.
  *
  * Special cases: S = 0 gives the pure-water fits.  Outside the stated
- * ranges the functions return RG_ERR_DOMAIN (no extrapolation). */
+ * ranges the functions return RG_ERR_DOMAIN (no extrapolation).  The
+ * pressure is checked apart (rg_seawater_check_state; its range and the
+ * reasons for it in seawater.h). */
 #include "seawater.h"
+
+#include "message-private.h"
+#include "water.h"
 
 #include <math.h>
 
@@ -35,12 +40,59 @@ static const double B1 = 8.020e2, B2 = -2.001, B3 = 1.677e-2,
 static RgStatus
 check_range (double t_k, double s, RgError *err)
 {
+  char lo[RG_VALUE_MAX], hi[RG_VALUE_MAX], v[RG_VALUE_MAX];
+
   if (!isfinite (t_k) || t_k < RG_SEAWATER_T_MIN_K || t_k > RG_SEAWATER_T_MAX_K)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Seawater: the temperature must lie between 0 and 180 °C (Sharqawy et al. 2010).");
-  if (!isfinite (s) || s < 0.0 || s > RG_SEAWATER_S_MAX_KG_KG)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Seawater: the salinity must lie between 0 and 150 g/kg (Sharqawy et al. 2010).");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (TEMPERATURE),
+                            "Seawater: the temperature must lie between %s "
+                            "and %s (Sharqawy et al. 2010), not %s.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_SEAWATER_T_MIN_K, lo),
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_SEAWATER_T_MAX_K, hi),
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE, t_k, v));
+  if (!isfinite (s) || s < RG_SEAWATER_S_MIN_KG_KG || s > RG_SEAWATER_S_MAX_KG_KG)
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (SALINITY),
+                            "Seawater: the salinity must lie between %s and "
+                            "%s (Sharqawy et al. 2010), not %s.",
+                            RG_ERR_VALUE (err, RG_QTY_SALINITY,
+                                          RG_SEAWATER_S_MIN_KG_KG, lo),
+                            RG_ERR_VALUE (err, RG_QTY_SALINITY,
+                                          RG_SEAWATER_S_MAX_KG_KG, hi),
+                            RG_ERR_VALUE (err, RG_QTY_SALINITY, s, v));
+  return RG_OK;
+}
+
+RgStatus
+rg_seawater_check_state (double t_k, double p_pa, RgError *err)
+{
+  char a[RG_VALUE_MAX], b[RG_VALUE_MAX];
+  double p_sat;
+
+  if (!isfinite (p_pa) || p_pa <= 0.0)
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (PRESSURE),
+                            "The seawater pressure must be a positive "
+                            "absolute pressure of at most %s.",
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE,
+                                          RG_SEAWATER_P_MAX_PA, a));
+  if (p_pa > RG_SEAWATER_P_MAX_PA)
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (PRESSURE),
+                            "A seawater pressure of %s (absolute) is above "
+                            "%s, the limit of the seawater model.",
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE, p_pa, a),
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE,
+                                          RG_SEAWATER_P_MAX_PA, b));
+  /* outside the correlations' temperatures check_range speaks */
+  if (!isfinite (t_k) || t_k < RG_SEAWATER_T_MIN_K || t_k > RG_SEAWATER_T_MAX_K)
+    return RG_OK;
+  if (rg_water_saturation_pressure (t_k, &p_sat, NULL) == RG_OK
+      && p_pa < p_sat)
+    return rg_error_set_on (err, RG_ERR_DOMAIN,
+                            RG_ON (TEMPERATURE) | RG_ON (PRESSURE),
+                            "At %s seawater boils below about %s: raise the "
+                            "pressure (absolute) or lower the temperature.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE, t_k, a),
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE, p_sat, b));
   return RG_OK;
 }
 

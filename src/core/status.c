@@ -188,8 +188,13 @@ rg_error_clear (RgError *err)
 void
 rg_warnings_clear (RgWarnings *w)
 {
-  if (w != NULL)
-    memset (w, 0, sizeof *w);
+  const struct RgUnitChoice *units;
+
+  if (w == NULL)
+    return;
+  units = w->units;
+  memset (w, 0, sizeof *w);
+  w->units = units;
 }
 
 void

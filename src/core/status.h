@@ -76,19 +76,37 @@ typedef enum {
 typedef unsigned long long RgSubjects;
 #define RG_SUBJECT_BIT(s) (1ULL << (unsigned) (s))
 
+/* The unit to write each quantity in (units.h); NULL means SI. */
+struct RgUnitChoice;
+
+/* Start every RgError and RgWarnings from zero (`RgError err = { 0 };`):
+ * the core reads `units` before it writes a sentence, and the clear
+ * functions keep it. */
 typedef struct {
   RgStatus status;
-  RgSubjects subjects;       /* 0 when the error concerns no single input */
+  RgSubjects subjects;       /* 0 only for a misuse of the API (a NULL
+                              * argument, an unknown enum value): no input a
+                              * user can change is at fault */
+  /* Set by the caller before a call: the values and ranges in the sentence
+   * are written in these units (rg_units_format); NULL: SI. */
+  const struct RgUnitChoice *units;
   char text[RG_ERROR_TEXT_MAX];
 } RgError;
 
 /* The translation of a short text of the core in the "rugosa" catalog
  * (dgettext when built with RG_ENABLE_NLS), else `msgid` itself.
- * rg_error_set and rg_warnings_add look their format up the same way. */
+ * rg_error_set, rg_error_set_on and rg_warnings_add look their format up
+ * the same way. */
 const char *rg_gettext (const char *msgid);
 
+/* Marks a string of a table for translation without translating it there
+ * (the xgettext keyword RG_N_ in po/meson.build, like GLib's N_); the code
+ * that uses the string passes it through rg_gettext. */
+#define RG_N_(text) (text)
+
 /* Fill `err` (if not NULL) and return `status`; the format is translated
- * (rg_gettext) before formatting. */
+ * (rg_gettext) before formatting.  The error names no subject: for callers
+ * outside the core (the core itself uses rg_error_set_on). */
 RgStatus rg_error_set (RgError *err, RgStatus status, const char *fmt, ...)
   __attribute__ ((format (printf, 3, 4)));
 
@@ -106,17 +124,21 @@ RgStatus rg_error_add_subjects (RgError *err, RgSubjects subjects);
  * tests; "" for RG_SUBJECT_NONE. */
 const char *rg_subject_id (RgSubject subject);
 
+/* Empties the status, the subjects and the text; keeps `units`. */
 void rg_error_clear (RgError *err);
 
 /* Short non-fatal remarks (outside a correlation's stated range, high
  * velocity, compressibility): a fixed list so the core needs no allocation. */
-enum { RG_WARNINGS_MAX = 8, RG_WARNING_TEXT_MAX = 200 };
+enum { RG_WARNINGS_MAX = 8, RG_WARNING_TEXT_MAX = RG_ERROR_TEXT_MAX };
 
 typedef struct {
   int count;
+  /* as RgError's: the units of the values in the sentences; NULL: SI */
+  const struct RgUnitChoice *units;
   char text[RG_WARNINGS_MAX][RG_WARNING_TEXT_MAX];
 } RgWarnings;
 
+/* Removes every sentence; keeps `units`. */
 void rg_warnings_clear (RgWarnings *w);
 void rg_warnings_add (RgWarnings *w, const char *fmt, ...)
   __attribute__ ((format (printf, 2, 3)));

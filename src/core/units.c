@@ -42,6 +42,7 @@
 #include <errno.h>
 #include <locale.h>
 #include <math.h>
+#include <stdio.h>
 #include <stdlib.h>
 #include <string.h>
 
@@ -55,7 +56,7 @@
 #define M2_PER_IN2 6.4516e-4               /* 0.0254², exact */
 #define PA_PER_ATM 101325.0
 #define S_PER_DAY 86400.0
-#define S_PER_YEAR 31557600.0              /* Julian year, 365.25 d */
+#define S_PER_YEAR RG_UNITS_SECONDS_PER_YEAR /* Julian year, 365.25 d */
 /* 3.785411784e-3 / 60 is the exact decimal 6.30901964e-5. */
 #define M3S_PER_GPM 6.30901964e-5
 
@@ -212,20 +213,22 @@ static const char *const CHOICES[RG_QTY_N][8] = {
   [RG_QTY_SALINITY] = { "kg/kg", "g/kg", "ppt" },
 };
 
+/* The accepted units as a list for messages; the words in parentheses are
+ * translated (rg_gettext), the unit symbols stay as they are. */
 static const char *const ACCEPTED[RG_QTY_N] = {
-  [RG_QTY_FLOW] = "m³/s, L/s, L/min, m³/h, gpm (US gal/min), cfs (ft³/s)",
-  [RG_QTY_LENGTH] = "m, cm, mm, km, in (or \"), ft",
-  [RG_QTY_ROUGHNESS] = "m, mm, µm (or um), cm, in, ft",
-  [RG_QTY_TEMPERATURE] = "K, °C (or C), °F (or F)",
-  [RG_QTY_PRESSURE] = "Pa, kPa, MPa, bar, atm, psi (all absolute)",
-  [RG_QTY_DYN_VISCOSITY] = "Pa·s (or Pa.s), mPa·s, cP",
-  [RG_QTY_KIN_VISCOSITY] = "m²/s (or m2/s), mm²/s, cSt",
-  [RG_QTY_DENSITY] = "kg/m³ (or kg/m3), g/cm³, kg/L, lb/ft³",
-  [RG_QTY_VELOCITY] = "m/s, ft/s",
-  [RG_QTY_GRADIENT] = "m/100 m (or %), ft/100 ft, m/km, m/m",
-  [RG_QTY_TIME] = "s, min, h, d, yr (or year, a)",
-  [RG_QTY_ROUGHNESS_RATE] = "m/s, mm/yr, µm/yr",
-  [RG_QTY_SALINITY] = "kg/kg, g/kg, ppt",
+  [RG_QTY_FLOW] = RG_N_ ("m³/s, L/s, L/min, m³/h, gpm (US gal/min), cfs (ft³/s)"),
+  [RG_QTY_LENGTH] = RG_N_ ("m, cm, mm, km, in (or \"), ft"),
+  [RG_QTY_ROUGHNESS] = RG_N_ ("m, mm, µm (or um), cm, in, ft"),
+  [RG_QTY_TEMPERATURE] = RG_N_ ("K, °C (or C), °F (or F)"),
+  [RG_QTY_PRESSURE] = RG_N_ ("Pa, kPa, MPa, bar, atm, psi (all absolute)"),
+  [RG_QTY_DYN_VISCOSITY] = RG_N_ ("Pa·s (or Pa.s), mPa·s, cP"),
+  [RG_QTY_KIN_VISCOSITY] = RG_N_ ("m²/s (or m2/s), mm²/s, cSt"),
+  [RG_QTY_DENSITY] = RG_N_ ("kg/m³ (or kg/m3), g/cm³, kg/L, lb/ft³"),
+  [RG_QTY_VELOCITY] = RG_N_ ("m/s, ft/s"),
+  [RG_QTY_GRADIENT] = RG_N_ ("m/100 m (or %), ft/100 ft, m/km, m/m"),
+  [RG_QTY_TIME] = RG_N_ ("s, min, h, d, yr (or year, a)"),
+  [RG_QTY_ROUGHNESS_RATE] = RG_N_ ("m/s, mm/yr, µm/yr"),
+  [RG_QTY_SALINITY] = RG_N_ ("kg/kg, g/kg, ppt"),
 };
 
 static const char *const SI_SYMBOL[RG_QTY_N] = {
@@ -244,23 +247,28 @@ static const char *const SI_SYMBOL[RG_QTY_N] = {
   [RG_QTY_SALINITY] = "kg/kg",
 };
 
-/* "a flow": the quantity as it reads in a sentence; KIND[q] + 2 drops the
- * article. */
-static const char *const KIND[RG_QTY_N] = {
-  [RG_QTY_FLOW] = "a flow",
-  [RG_QTY_LENGTH] = "a length",
-  [RG_QTY_ROUGHNESS] = "a roughness",
-  [RG_QTY_TEMPERATURE] = "a temperature",
-  [RG_QTY_PRESSURE] = "a pressure",
-  [RG_QTY_DYN_VISCOSITY] = "a dynamic viscosity",
-  [RG_QTY_KIN_VISCOSITY] = "a kinematic viscosity",
-  [RG_QTY_DENSITY] = "a density",
-  [RG_QTY_VELOCITY] = "a velocity",
-  [RG_QTY_GRADIENT] = "a hydraulic gradient",
-  [RG_QTY_TIME] = "a time",
-  [RG_QTY_ROUGHNESS_RATE] = "a roughness growth rate",
-  [RG_QTY_SALINITY] = "a salinity",
+/* The name of each quantity, shown in parentheses inside a sentence ("has
+ * a unit of another quantity (length)"), so that a translation needs no
+ * article or case for it. */
+static const char *const QTY_NAME[RG_QTY_N] = {
+  [RG_QTY_FLOW] = RG_N_ ("flow"),
+  [RG_QTY_LENGTH] = RG_N_ ("length"),
+  [RG_QTY_ROUGHNESS] = RG_N_ ("roughness"),
+  [RG_QTY_TEMPERATURE] = RG_N_ ("temperature"),
+  [RG_QTY_PRESSURE] = RG_N_ ("pressure"),
+  [RG_QTY_DYN_VISCOSITY] = RG_N_ ("dynamic viscosity"),
+  [RG_QTY_KIN_VISCOSITY] = RG_N_ ("kinematic viscosity"),
+  [RG_QTY_DENSITY] = RG_N_ ("density"),
+  [RG_QTY_VELOCITY] = RG_N_ ("velocity"),
+  [RG_QTY_GRADIENT] = RG_N_ ("hydraulic gradient"),
+  [RG_QTY_TIME] = RG_N_ ("time"),
+  [RG_QTY_ROUGHNESS_RATE] = RG_N_ ("roughness growth rate"),
+  [RG_QTY_SALINITY] = RG_N_ ("salinity"),
 };
+
+/* The accepted units of a viscosity that may be dynamic or kinematic. */
+static const char VISCOSITY_ACCEPTED[] =
+  RG_N_ ("Pa·s, mPa·s, cP (dynamic) or m²/s, mm²/s, cSt (kinematic)");
 
 /* ---- characters, without <ctype.h> (it follows the locale) ------------ */
 
@@ -709,57 +717,109 @@ echo_text (const char *s, size_t len, char out[ECHO_MAX + 4])
   out[n] = '\0';
 }
 
+/* A caller's name for the value ("--flow"), or NULL when it gave none:
+ * every message below comes in two whole sentences, with the name and
+ * without it. */
 static const char *
-name_of (const char *what)
+name_or_null (const char *what)
 {
-  return (what != NULL && what[0] != '\0') ? what : "the value";
+  return (what != NULL && what[0] != '\0') ? what : NULL;
 }
+
+/* Parse errors carry RG_SUBJECT_VALUE: the text the caller passed. */
+#define VALUE_SUBJECT RG_SUBJECT_BIT (RG_SUBJECT_VALUE)
 
 static RgStatus
 number_error (NumResult r, const char *what, const char *text,
               const char *accepted, RgError *err)
 {
   char t[ECHO_MAX + 4];
+  const char *w = name_or_null (what);
 
   echo_text (text, strlen (text), t);
+  accepted = rg_gettext (accepted);
   switch (r)
     {
     case NUM_EMPTY:
-      return rg_error_set (err, RG_ERR_PARSE,
-                           "%s is empty: give a number followed by a unit "
-                           "(%s).", name_of (what), accepted);
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                                "%s is empty: give a number followed by a "
+                                "unit (%s).", w, accepted);
+      return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                              "The value is empty: give a number followed by "
+                              "a unit (%s).", accepted);
     case NUM_COMMA:
-      return rg_error_set (err, RG_ERR_PARSE,
-                           "'%s' for %s contains a comma: write decimals with "
-                           "a point (2.5) and no thousands separator.",
-                           t, name_of (what));
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                                "'%s' for %s contains a comma: write decimals "
+                                "with a point (2.5) and no thousands "
+                                "separator.", t, w);
+      return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                              "'%s' contains a comma: write decimals with a "
+                              "point (2.5) and no thousands separator.", t);
     case NUM_NONFINITE:
-      return rg_error_set (err, RG_ERR_PARSE,
-                           "'%s' for %s is not a finite number.", t,
-                           name_of (what));
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                                "'%s' for %s is not a finite number.", t, w);
+      return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                              "'%s' is not a finite number.", t);
     case NUM_OVERFLOW:
-      return rg_error_set (err, RG_ERR_PARSE,
-                           "'%s' for %s is too large a number.", t,
-                           name_of (what));
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                                "'%s' for %s is too large a number.", t, w);
+      return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                              "'%s' is too large a number.", t);
     case NUM_UNDERFLOW:
-      return rg_error_set (err, RG_ERR_PARSE,
-                           "'%s' for %s is too small a number to represent "
-                           "(write 0 for zero).", t, name_of (what));
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                                "'%s' for %s is too small a number to "
+                                "represent (write 0 for zero).", t, w);
+      return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                              "'%s' is too small a number to represent "
+                              "(write 0 for zero).", t);
     case NUM_DIV_ZERO:
-      return rg_error_set (err, RG_ERR_PARSE,
-                           "'%s' for %s divides by zero.", t, name_of (what));
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                                "'%s' for %s divides by zero.", t, w);
+      return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                              "'%s' divides by zero.", t);
     case NUM_NO_LOCALE:
-      return rg_error_set (err, RG_ERR_NUMERIC,
-                           "'%s' for %s could not be read: the C locale is "
-                           "not available.", t, name_of (what));
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_NUMERIC, VALUE_SUBJECT,
+                                "'%s' for %s could not be read: the C locale "
+                                "is not available.", t, w);
+      return rg_error_set_on (err, RG_ERR_NUMERIC, VALUE_SUBJECT,
+                              "'%s' could not be read: the C locale is not "
+                              "available.", t);
     case NUM_NOT_NUMBER:
     case NUM_OK:
     default:
-      return rg_error_set (err, RG_ERR_PARSE,
-                           "'%s' for %s is not a number: give a number "
-                           "followed by a unit (%s).", t, name_of (what),
-                           accepted);
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                                "'%s' for %s is not a number: give a number "
+                                "followed by a unit (%s).", t, w, accepted);
+      return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                              "'%s' is not a number: give a number followed "
+                              "by a unit (%s).", t, accepted);
     }
+}
+
+/* The unit of `t` belongs to the quantity `other`, not to any of those the
+ * caller accepts. */
+static RgStatus
+other_kind_error (const char *t, const char *w, RgQuantity other,
+                  const char *accepted, RgError *err)
+{
+  /* TRANSLATORS: the second (or third) %s is the name of a quantity, e.g.
+   * "length"; the last %s lists the units to use instead. */
+  if (w != NULL)
+    return rg_error_set_on (err, RG_ERR_UNIT, VALUE_SUBJECT,
+                            "'%s' for %s has a unit of another quantity "
+                            "(%s): use %s.", t, w, rg_gettext (QTY_NAME[other]),
+                            accepted);
+  return rg_error_set_on (err, RG_ERR_UNIT, VALUE_SUBJECT,
+                          "'%s' has a unit of another quantity (%s): use %s.",
+                          t, rg_gettext (QTY_NAME[other]), accepted);
 }
 
 static int
@@ -772,12 +832,14 @@ valid_quantity (RgQuantity q)
  * qs[0] in SI); *found is the quantity of the unit given. */
 static RgStatus
 parse_as (const RgQuantity *qs, int nq, const char *what, const char *text,
-          const char *accepted, const char *needs, double *si,
-          RgQuantity *found, RgError *err)
+          const char *accepted_msgid, double *si, RgQuantity *found,
+          RgError *err)
 {
   double x = 0.0, v;
   const char *rest = NULL;
   const char *u, *uend;
+  const char *w = name_or_null (what);
+  const char *accepted;
   char norm[UNIT_MAX];
   char t[ECHO_MAX + 4];
   NumResult r;
@@ -789,8 +851,9 @@ parse_as (const RgQuantity *qs, int nq, const char *what, const char *text,
     text = "";
   r = parse_number (text, &x, &rest);
   if (r != NUM_OK)
-    return number_error (r, what, text, accepted, err);
+    return number_error (r, what, text, accepted_msgid, err);
 
+  accepted = rg_gettext (accepted_msgid);
   echo_text (text, strlen (text), t);
   u = skip_spaces (rest);
   uend = u + strlen (u);
@@ -798,7 +861,7 @@ parse_as (const RgQuantity *qs, int nq, const char *what, const char *text,
     uend--;
   /* no unit starts so: "2 100", "1-2", "1.2.3" are malformed numbers */
   if (*u != '\0' && (is_digit (*u) || strchr (".,+-/", *u) != NULL))
-    return number_error (NUM_NOT_NUMBER, what, text, accepted, err);
+    return number_error (NUM_NOT_NUMBER, what, text, accepted_msgid, err);
   if (uend > u)
     {
       char ut[ECHO_MAX + 4];
@@ -814,37 +877,53 @@ parse_as (const RgQuantity *qs, int nq, const char *what, const char *text,
           offset = def->offset;
           break;
         case LOOKUP_OTHER_KIND:
-          return rg_error_set (err, RG_ERR_UNIT,
-                               "'%s' is %s, but %s needs %s: use %s.", t,
-                               KIND[other], name_of (what), needs, accepted);
+          return other_kind_error (t, w, other, accepted, err);
         case LOOKUP_GAUGE:
           if (!in_list (RG_QTY_PRESSURE, qs, nq))
-            return rg_error_set (err, RG_ERR_UNIT,
-                                 "'%s' is a pressure, but %s needs %s: use "
-                                 "%s.", t, name_of (what), needs, accepted);
-          return rg_error_set (err, RG_ERR_UNIT,
-                               "'%s' for %s is a gauge pressure, but "
-                               "pressures here are absolute: add the "
-                               "atmospheric pressure (101.325 kPa at sea "
-                               "level) and use %s.", t, name_of (what),
-                               accepted);
+            return other_kind_error (t, w, RG_QTY_PRESSURE, accepted, err);
+          if (w != NULL)
+            return rg_error_set_on (err, RG_ERR_UNIT, VALUE_SUBJECT,
+                                    "'%s' for %s is a gauge pressure, but "
+                                    "pressures here are absolute: add the "
+                                    "atmospheric pressure (101.325 kPa at "
+                                    "sea level) and use %s.", t, w, accepted);
+          return rg_error_set_on (err, RG_ERR_UNIT, VALUE_SUBJECT,
+                                  "'%s' is a gauge pressure, but pressures "
+                                  "here are absolute: add the atmospheric "
+                                  "pressure (101.325 kPa at sea level) and "
+                                  "use %s.", t, accepted);
         case LOOKUP_UNKNOWN:
         default:
           echo_text (u, (size_t) (uend - u), ut);
-          return rg_error_set (err, RG_ERR_UNIT,
-                               "'%s' for %s has an unknown unit '%s': use %s.",
-                               t, name_of (what), ut, accepted);
+          if (w != NULL)
+            return rg_error_set_on (err, RG_ERR_UNIT, VALUE_SUBJECT,
+                                    "'%s' for %s has an unknown unit '%s': "
+                                    "use %s.", t, w, ut, accepted);
+          return rg_error_set_on (err, RG_ERR_UNIT, VALUE_SUBJECT,
+                                  "'%s' has an unknown unit '%s': use %s.", t,
+                                  ut, accepted);
         }
     }
 
   v = (x + offset) * factor;
   if (!isfinite (v))
-    return rg_error_set (err, RG_ERR_PARSE, "'%s' for %s is too large.", t,
-                         name_of (what));
+    {
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                                "'%s' for %s is too large.", t, w);
+      return rg_error_set_on (err, RG_ERR_PARSE, VALUE_SUBJECT,
+                              "'%s' is too large.", t);
+    }
   if (q == RG_QTY_TEMPERATURE && v < 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "'%s' for %s is below absolute zero (0 K, "
-                         "−273.15 °C, −459.67 °F).", t, name_of (what));
+    {
+      if (w != NULL)
+        return rg_error_set_on (err, RG_ERR_DOMAIN, VALUE_SUBJECT,
+                                "'%s' for %s is below absolute zero (0 K, "
+                                "−273.15 °C, −459.67 °F).", t, w);
+      return rg_error_set_on (err, RG_ERR_DOMAIN, VALUE_SUBJECT,
+                              "'%s' is below absolute zero (0 K, −273.15 °C, "
+                              "−459.67 °F).", t);
+    }
   *si = v;
   if (found != NULL)
     *found = q;
@@ -853,15 +932,22 @@ parse_as (const RgQuantity *qs, int nq, const char *what, const char *text,
 
 /* ---- public ----------------------------------------------------------- */
 
+/* A quantity that is not one of RgQuantity is a misuse of the API: no
+ * input a user can change is at fault (subjects 0). */
+static RgStatus
+unknown_quantity (RgQuantity q, RgError *err)
+{
+  return rg_error_set_on (err, RG_ERR_DOMAIN, 0,
+                          "Unknown kind of quantity %d.", (int) q);
+}
+
 RgStatus
 rg_units_parse (RgQuantity q, const char *what, const char *text, double *si,
                 RgError *err)
 {
   if (!valid_quantity (q))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "%s: unknown kind of quantity %d.", name_of (what),
-                         (int) q);
-  return parse_as (&q, 1, what, text, ACCEPTED[q], KIND[q], si, NULL, err);
+    return unknown_quantity (q, err);
+  return parse_as (&q, 1, what, text, ACCEPTED[q], si, NULL, err);
 }
 
 RgStatus
@@ -872,10 +958,8 @@ rg_units_parse_viscosity (const char *what, const char *text, double *si,
                                     RG_QTY_KIN_VISCOSITY };
   RgQuantity found = RG_QTY_DYN_VISCOSITY;
   double v = 0.0; /* for clang-analyzer: rg_error_set never returns RG_OK */
-  RgStatus st = parse_as (qs, 2, what, text,
-                          "Pa·s, mPa·s, cP (dynamic) or m²/s, mm²/s, cSt "
-                          "(kinematic)",
-                          "a viscosity", &v, &found, err);
+  RgStatus st = parse_as (qs, 2, what, text, VISCOSITY_ACCEPTED, &v, &found,
+                          err);
 
   if (st != RG_OK)
     return st;
@@ -885,34 +969,48 @@ rg_units_parse_viscosity (const char *what, const char *text, double *si,
   return RG_OK;
 }
 
-/* The unit named for conversion: NULL or blank is SI. */
-static RgStatus
-conversion_unit (RgQuantity q, const char *unit, double *factor,
-                 double *offset, RgError *err)
+/* The unit definition named by `unit` for q: NULL or blank is SI (*def
+ * NULL); returns the lookup result. */
+static Lookup
+find_unit (RgQuantity q, const char *unit, const UnitDef **def,
+           RgQuantity *other, char norm[UNIT_MAX])
 {
   const char *u, *uend;
-  char norm[UNIT_MAX];
-  char ut[ECHO_MAX + 4];
-  const UnitDef *def = NULL;
-  RgQuantity other = q;
-  Lookup l = LOOKUP_UNKNOWN;
 
-  if (!valid_quantity (q))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "Unknown kind of quantity %d.", (int) q);
-  *factor = 1.0;
-  *offset = 0.0;
+  *def = NULL;
+  norm[0] = '\0';
   if (unit == NULL)
-    return RG_OK;
+    return LOOKUP_FOUND;
   u = skip_spaces (unit);
   uend = u + strlen (u);
   while (uend > u && is_space (uend[-1]))
     uend--;
   if (uend == u)
+    return LOOKUP_FOUND;
+  if (normalise_unit (u, (size_t) (uend - u), norm) != 0)
+    return LOOKUP_UNKNOWN;
+  return lookup (&q, 1, norm, def, other);
+}
+
+/* The unit named for conversion: NULL or blank is SI. */
+static RgStatus
+conversion_unit (RgQuantity q, const char *unit, double *factor,
+                 double *offset, RgError *err)
+{
+  char norm[UNIT_MAX];
+  char ut[ECHO_MAX + 4];
+  const UnitDef *def = NULL;
+  RgQuantity other = q;
+  Lookup l;
+
+  if (!valid_quantity (q))
+    return unknown_quantity (q, err);
+  *factor = 1.0;
+  *offset = 0.0;
+  l = find_unit (q, unit, &def, &other, norm);
+  if (l == LOOKUP_FOUND && def == NULL)
     return RG_OK;
-  echo_text (u, (size_t) (uend - u), ut);
-  if (normalise_unit (u, (size_t) (uend - u), norm) == 0)
-    l = lookup (&q, 1, norm, &def, &other);
+  echo_text (unit, strlen (unit), ut);
   switch (l)
     {
     case LOOKUP_FOUND:
@@ -920,18 +1018,25 @@ conversion_unit (RgQuantity q, const char *unit, double *factor,
       *offset = def->offset;
       return RG_OK;
     case LOOKUP_OTHER_KIND:
-      return rg_error_set (err, RG_ERR_UNIT,
-                           "The unit '%s' measures %s, not %s: use %s.", ut,
-                           KIND[other] + 2, KIND[q] + 2, ACCEPTED[q]);
+      /* TRANSLATORS: the second %s is the name of a quantity, e.g.
+       * "length"; the last lists the units to use instead. */
+      return rg_error_set_on (err, RG_ERR_UNIT, VALUE_SUBJECT,
+                              "The unit '%s' measures another quantity (%s): "
+                              "use %s.", ut, rg_gettext (QTY_NAME[other]),
+                              rg_gettext (ACCEPTED[q]));
     case LOOKUP_GAUGE:
-      return rg_error_set (err, RG_ERR_UNIT,
-                           "The unit '%s' is a gauge pressure, but pressures "
-                           "here are absolute: use %s.", ut, ACCEPTED[q]);
+      return rg_error_set_on (err, RG_ERR_UNIT, VALUE_SUBJECT,
+                              "The unit '%s' is a gauge pressure, but "
+                              "pressures here are absolute: use %s.", ut,
+                              rg_gettext (ACCEPTED[q]));
     case LOOKUP_UNKNOWN:
     default:
-      return rg_error_set (err, RG_ERR_UNIT,
-                           "The unit '%s' is unknown for %s: use %s.", ut,
-                           KIND[q] + 2, ACCEPTED[q]);
+      /* TRANSLATORS: the second %s is the name of a quantity, e.g.
+       * "length". */
+      return rg_error_set_on (err, RG_ERR_UNIT, VALUE_SUBJECT,
+                              "The unit '%s' is unknown for this quantity "
+                              "(%s): use %s.", ut, rg_gettext (QTY_NAME[q]),
+                              rg_gettext (ACCEPTED[q]));
     }
 }
 
@@ -947,18 +1052,19 @@ rg_units_to_si (RgQuantity q, double value, const char *unit, double *si,
   if (unit == NULL || *skip_spaces (unit) == '\0')
     unit = SI_SYMBOL[q];
   if (!isfinite (value))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The %s to convert must be a finite number.",
-                         KIND[q] + 2);
+    /* TRANSLATORS: %s is the name of a quantity, e.g. "length". */
+    return rg_error_set_on (err, RG_ERR_DOMAIN, VALUE_SUBJECT,
+                            "The value to convert (%s) is not a finite "
+                            "number.", rg_gettext (QTY_NAME[q]));
   v = (value + offset) * factor;
   if (!isfinite (v))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The %s %g %s is too large to convert.", KIND[q] + 2,
-                         value, unit);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, VALUE_SUBJECT,
+                            "The value %g %s is too large to convert.",
+                            value, unit);
   if (q == RG_QTY_TEMPERATURE && v < 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The temperature %g %s is below absolute zero.",
-                         value, unit);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, VALUE_SUBJECT,
+                            "The temperature %g %s is below absolute zero.",
+                            value, unit);
   *si = v;
   return RG_OK;
 }
@@ -973,17 +1079,19 @@ rg_units_from_si (RgQuantity q, double si, const char *unit, double *value,
   if (st != RG_OK)
     return st;
   if (!isfinite (si))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The %s to convert must be a finite number.",
-                         KIND[q] + 2);
+    /* TRANSLATORS: %s is the name of a quantity, e.g. "length". */
+    return rg_error_set_on (err, RG_ERR_DOMAIN, VALUE_SUBJECT,
+                            "The value to convert (%s) is not a finite "
+                            "number.", rg_gettext (QTY_NAME[q]));
   if (q == RG_QTY_TEMPERATURE && si < 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The temperature %g K is below absolute zero.", si);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, VALUE_SUBJECT,
+                            "The temperature %g K is below absolute zero.",
+                            si);
   v = si / factor - offset;
   if (!isfinite (v))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The %s %g %s is too large to convert.", KIND[q] + 2,
-                         si, SI_SYMBOL[q]);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, VALUE_SUBJECT,
+                            "The value %g %s is too large to convert.", si,
+                            SI_SYMBOL[q]);
   *value = v;
   return RG_OK;
 }
@@ -997,14 +1105,179 @@ rg_units_si_symbol (RgQuantity q)
 const char *
 rg_units_accepted (RgQuantity q)
 {
-  return valid_quantity (q) ? ACCEPTED[q] : "";
+  return valid_quantity (q) ? rg_gettext (ACCEPTED[q]) : "";
 }
+
+enum { N_CHOICES = sizeof CHOICES[0] / sizeof CHOICES[0][0] };
 
 const char *
 rg_units_choice (RgQuantity q, int i)
 {
-  if (!valid_quantity (q) || i < 0
-      || i >= (int) (sizeof CHOICES[0] / sizeof CHOICES[0][0]))
+  if (!valid_quantity (q) || i < 0 || i >= (int) N_CHOICES)
     return NULL;
   return CHOICES[q][i];
+}
+
+/* ---- values written into sentences ------------------------------------ */
+
+/* The display spelling of a unit found as `def` from the normalised text
+ * `norm`: the offered choice spelled the same ("um" is "µm"), else the
+ * first offered choice of the same size ("USgpm" is "gpm", "psia" "psi"),
+ * else NULL. */
+static const char *
+display_symbol (RgQuantity q, const UnitDef *def, const char *norm)
+{
+  char cn[UNIT_MAX];
+
+  for (int i = 0; i < (int) N_CHOICES && CHOICES[q][i] != NULL; i++)
+    if (normalise_unit (CHOICES[q][i], strlen (CHOICES[q][i]), cn) == 0
+        && strcmp (cn, norm) == 0)
+      return CHOICES[q][i];
+  for (int i = 0; i < (int) N_CHOICES && CHOICES[q][i] != NULL; i++)
+    {
+      const UnitDef *c = NULL;
+      RgQuantity other = q;
+
+      if (normalise_unit (CHOICES[q][i], strlen (CHOICES[q][i]), cn) == 0
+          && lookup (&q, 1, cn, &c, &other) == LOOKUP_FOUND
+          && c->factor == def->factor && c->offset == def->offset)
+        return CHOICES[q][i];
+    }
+  return NULL;
+}
+
+/* Strips the zeros that end the decimals of a number written with
+ * "%.*f" (and the decimal separator itself when nothing is left after it);
+ * the separator is whatever is not a digit or a sign. */
+static void
+strip_zeros (char *s, size_t end)
+{
+  size_t sep = end;
+
+  for (size_t i = 0; i < end; i++)
+    if (!is_digit (s[i]) && s[i] != '-' && s[i] != '+')
+      {
+        sep = i;
+        break;
+      }
+  if (sep == end)
+    return;
+  while (end > sep + 1 && s[end - 1] == '0')
+    end--;
+  if (end == sep + 1)
+    end = sep;
+  s[end] = '\0';
+}
+
+/* x with 4 significant figures: fixed notation from 1e-3 to below 1e6
+ * (trailing zeros dropped: "150", "1.2", "0.0454"), else "1.235e+07". */
+static void
+format_significant (double x, char *out, size_t len)
+{
+  double a = fabs (x);
+
+  if (a == 0.0)
+    {
+      (void) snprintf (out, len, "0");
+      return;
+    }
+  if (a >= 1.0e-3 && a < 1.0e6)
+    {
+      int e = (int) floor (log10 (a));
+      int decimals = e >= 3 ? 0 : 3 - e;
+      double r = x;
+
+      /* 12345 → 12350: the digits past the fourth are rounded away too */
+      if (e > 3)
+        {
+          const double p = pow (10.0, e - 3);
+          r = round (x / p) * p;
+        }
+      (void) snprintf (out, len, "%.*f", decimals, r);
+      if (decimals > 0)
+        strip_zeros (out, strlen (out));
+      return;
+    }
+  {
+    char mant[32];
+    char *e;
+
+    (void) snprintf (mant, sizeof mant, "%.3e", x);
+    e = strchr (mant, 'e');
+    if (e == NULL)
+      {
+        (void) snprintf (out, len, "%s", mant);
+        return;
+      }
+    {
+      char exp_part[16];
+      (void) snprintf (exp_part, sizeof exp_part, "%s", e);
+      *e = '\0';
+      strip_zeros (mant, strlen (mant));
+      (void) snprintf (out, len, "%s%s", mant, exp_part);
+    }
+  }
+}
+
+/* Shared by rg_units_format and rg_units_format_difference. */
+static const char *
+format_value (const RgUnitChoice *choice, RgQuantity q, double si,
+              int difference, char *buf, size_t len)
+{
+  const char *symbol;
+  const UnitDef *def = NULL;
+  double v = si;
+  char num[48];
+
+  if (buf == NULL || len == 0)
+    return buf;
+  if (!isfinite (si))
+    {
+      (void) snprintf (buf, len, "—");
+      return buf;
+    }
+  if (!valid_quantity (q))
+    {
+      format_significant (si, num, sizeof num);
+      (void) snprintf (buf, len, "%s", num);
+      return buf;
+    }
+  symbol = SI_SYMBOL[q];
+  if (choice != NULL && choice->unit[q] != NULL)
+    {
+      char norm[UNIT_MAX];
+      RgQuantity other = q;
+
+      if (find_unit (q, choice->unit[q], &def, &other, norm) == LOOKUP_FOUND
+          && def != NULL)
+        {
+          const char *shown = display_symbol (q, def, norm);
+          /* offset 0 except for °C and °F; a difference has none */
+          const double x = difference ? si / def->factor
+                                      : si / def->factor - def->offset;
+
+          if (isfinite (x))
+            {
+              v = x;
+              symbol = shown != NULL ? shown : choice->unit[q];
+            }
+        }
+    }
+  format_significant (v, num, sizeof num);
+  (void) snprintf (buf, len, "%s %s", num, symbol);
+  return buf;
+}
+
+const char *
+rg_units_format (const RgUnitChoice *choice, RgQuantity q, double si,
+                 char *buf, size_t len)
+{
+  return format_value (choice, q, si, 0, buf, len);
+}
+
+const char *
+rg_units_format_difference (const RgUnitChoice *choice, RgQuantity q,
+                            double si_delta, char *buf, size_t len)
+{
+  return format_value (choice, q, si_delta, 1, buf, len);
 }

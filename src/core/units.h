@@ -6,6 +6,10 @@
 
 #include "status.h"
 
+/* The year of the time units ("yr", "a") and of the rates per year: the
+ * Julian year of 365.25 d (units.c says why). */
+#define RG_UNITS_SECONDS_PER_YEAR 31557600.0
+
 typedef enum {
   RG_QTY_FLOW = 0,         /* m3/s */
   RG_QTY_LENGTH,           /* m (lengths, diameters, elevation, head) */
@@ -23,9 +27,35 @@ typedef enum {
   RG_QTY_N
 } RgQuantity;
 
+/* The unit a person reads each quantity in, for the values the core writes
+ * into its sentences (RgError.units, RgWarnings.units): one spelling per
+ * quantity as rg_units_to_si accepts ("gpm", "°F", "psi"); a NULL entry,
+ * or a spelling the core does not know, is SI. */
+typedef struct RgUnitChoice {
+  const char *unit[RG_QTY_N];
+} RgUnitChoice;
+
+/* Writes `si` (a value of q in SI) converted to the unit `choice` gives for
+ * q (SI when `choice` is NULL), with 4 significant figures and the unit's
+ * display symbol: "150 gpm", "68 °F", "1.2 m³/s".  Numbers follow the
+ * decimal point of LC_NUMERIC, as the rest of a sentence of the core does.
+ * Never writes NaN or infinity: a non-finite value is written "—", and a
+ * value too large for the chosen unit is written in SI.  Returns buf
+ * (cut to len bytes); 48 bytes hold any value. */
+const char *rg_units_format (const RgUnitChoice *choice, RgQuantity q,
+                             double si, char *buf, size_t len);
+
+/* As rg_units_format for a difference of two values of q (no offset: a
+ * temperature difference of 1 K is written "1.8 °F"). */
+const char *rg_units_format_difference (const RgUnitChoice *choice,
+                                        RgQuantity q, double si_delta,
+                                        char *buf, size_t len);
+
 /* Parse "150 gpm", "2 in", "68 F", "1.5e-3" (a bare number is SI) into SI.
- * Errors name the quantity (`what`, e.g. "--flow") and list the accepted
- * units. */
+ * Errors name the quantity (`what`, e.g. "--flow"; NULL or "" when the
+ * caller shows the sentence beside its own field) and list the accepted
+ * units; they carry the subject RG_SUBJECT_VALUE, which a caller that knows
+ * its own subject may replace. */
 RgStatus rg_units_parse (RgQuantity q, const char *what, const char *text,
                          double *si, RgError *err);
 
@@ -43,7 +73,8 @@ RgStatus rg_units_from_si (RgQuantity q, double si, const char *unit,
 
 /* Canonical display symbol of the SI unit of q ("m³/s", "K", …). */
 const char *rg_units_si_symbol (RgQuantity q);
-/* Comma-separated list of the accepted unit spellings for messages. */
+/* Comma-separated list of the accepted unit spellings for messages,
+ * translated (rg_gettext). */
 const char *rg_units_accepted (RgQuantity q);
 
 /* The i-th unit offered for q, counting from 0, in its display spelling

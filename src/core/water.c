@@ -32,6 +32,8 @@
 #include "water.h"
 #include "water-private.h"
 
+#include "message-private.h"
+
 #include <math.h>
 
 /* IF97 eq. 1: specific gas constant of water, J/(kg·K). */
@@ -73,10 +75,7 @@ static const double IF97_R4_N[11] = {
   -0.48232657361591e4, 0.40511340542057e6, -0.23855557567849,
   0.65017534844798e3,
 };
-/* IF97 region 4 validity: 273.15 K to the critical temperature 647.096 K
- * (eq. 30; critical point from IF97 eq. 3). */
-static const double IF97_R4_T_MIN = 273.15;
-static const double IF97_R4_T_MAX = 647.096;
+/* IF97 region 4 validity: water.h (RG_WATER_SATURATION_T_*). */
 
 /* R12-08 reference constants (Section 2.2): critical temperature and
  * density; the viscosity is reduced by 1e-6 Pa·s. */
@@ -165,18 +164,25 @@ saturation_pressure (double t_k)
 RgStatus
 rg_water_saturation_pressure (double t_k, double *p_pa, RgError *err)
 {
+  char a[RG_VALUE_MAX], b[RG_VALUE_MAX], c[RG_VALUE_MAX];
   double p;
 
-  if (!isfinite (t_k) || t_k < IF97_R4_T_MIN || t_k > IF97_R4_T_MAX)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The saturation pressure of water is defined from "
-                         "273.15 K to 647.096 K (0–322.946 °C), not at %g K.",
-                         t_k);
+  if (!isfinite (t_k) || t_k < RG_WATER_SATURATION_T_MIN_K
+      || t_k > RG_WATER_SATURATION_T_MAX_K)
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (TEMPERATURE),
+                            "The saturation pressure of water is defined "
+                            "from %s to %s, not at %s.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_WATER_SATURATION_T_MIN_K, a),
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_WATER_SATURATION_T_MAX_K, b),
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE, t_k, c));
   p = saturation_pressure (t_k);
   if (!isfinite (p) || p <= 0.0)
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The saturation pressure of water at %g K could not "
-                         "be computed.", t_k);
+    return rg_error_set_on (err, RG_ERR_NUMERIC, RG_ON (TEMPERATURE),
+                            "The saturation pressure of water at %s could "
+                            "not be computed.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE, t_k, a));
   *p_pa = p;
   return RG_OK;
 }
@@ -184,15 +190,25 @@ rg_water_saturation_pressure (double t_k, double *p_pa, RgError *err)
 static RgStatus
 check_temperature (double t_k, RgError *err)
 {
+  char a[RG_VALUE_MAX], b[RG_VALUE_MAX], c[RG_VALUE_MAX];
+
   if (!isfinite (t_k))
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The water temperature must be a finite number "
-                         "between 0.01 °C and 150 °C.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (TEMPERATURE),
+                            "The water temperature must be a finite number "
+                            "between %s and %s.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_WATER_T_MIN_K, a),
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_WATER_T_MAX_K, b));
   if (t_k < RG_WATER_T_MIN_K || t_k > RG_WATER_T_MAX_K)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "A water temperature of %.6g °C (%.6g K) lies outside "
-                         "0.01–150 °C, the range of the water model.",
-                         t_k - 273.15, t_k);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (TEMPERATURE),
+                            "A water temperature of %s lies outside the "
+                            "range of the water model, %s to %s.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE, t_k, a),
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_WATER_T_MIN_K, b),
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE,
+                                          RG_WATER_T_MAX_K, c));
   return RG_OK;
 }
 
@@ -200,25 +216,32 @@ static RgStatus
 check_state (double t_k, double p_pa, RgError *err)
 {
   RgStatus st = check_temperature (t_k, err);
+  char a[RG_VALUE_MAX], b[RG_VALUE_MAX];
   double ps;
 
   if (st != RG_OK)
     return st;
   if (!isfinite (p_pa) || p_pa <= 0.0)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The water pressure must be a positive absolute "
-                         "pressure of at most 10 MPa.");
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (PRESSURE),
+                            "The water pressure must be a positive absolute "
+                            "pressure of at most %s.",
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE,
+                                          RG_WATER_P_MAX_PA, a));
   if (p_pa > RG_WATER_P_MAX_PA)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "A water pressure of %.6g MPa (absolute) is above "
-                         "10 MPa, the limit of the water model.",
-                         p_pa / 1.0e6);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (PRESSURE),
+                            "A water pressure of %s (absolute) is above %s, "
+                            "the limit of the water model.",
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE, p_pa, a),
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE,
+                                          RG_WATER_P_MAX_PA, b));
   ps = saturation_pressure (t_k);
   if (p_pa < ps)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "At %.6g °C water boils below %.4g kPa: raise the "
-                         "pressure (absolute) or lower the temperature.",
-                         t_k - 273.15, ps / 1000.0);
+    return rg_error_set_on (err, RG_ERR_DOMAIN,
+                            RG_ON (TEMPERATURE) | RG_ON (PRESSURE),
+                            "At %s water boils below %s: raise the pressure "
+                            "(absolute) or lower the temperature.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE, t_k, a),
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE, ps, b));
   return RG_OK;
 }
 
@@ -226,38 +249,51 @@ RgStatus
 rg_water_density (double t_k, double p_pa, double *rho, RgError *err)
 {
   RgStatus st = check_state (t_k, p_pa, err);
+  char a[RG_VALUE_MAX], b[RG_VALUE_MAX];
   double v;
 
   if (st != RG_OK)
     return st;
   v = rg_water_region1_volume_unchecked (t_k, p_pa);
   if (!isfinite (v) || v <= 0.0)
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The density of water at %g K and %g Pa could not be "
-                         "computed.", t_k, p_pa);
+    return rg_error_set_on (err, RG_ERR_NUMERIC,
+                            RG_ON (TEMPERATURE) | RG_ON (PRESSURE),
+                            "The density of water at %s and %s could not be "
+                            "computed.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE, t_k, a),
+                            RG_ERR_VALUE (err, RG_QTY_PRESSURE, p_pa, b));
   *rho = 1.0 / v;
   return RG_OK;
 }
 
+/* The density is an argument here; rg_water_properties computes it from
+ * the temperature and pressure inside the range, so that only a direct
+ * caller can pass one out of range (subject RG_SUBJECT_DENSITY). */
 RgStatus
 rg_water_viscosity (double t_k, double rho, double *mu, RgError *err)
 {
   RgStatus st = check_temperature (t_k, err);
+  char a[RG_VALUE_MAX], b[RG_VALUE_MAX], c[RG_VALUE_MAX];
   double m;
 
   if (st != RG_OK)
     return st;
   if (!isfinite (rho) || rho < RG_WATER_RHO_MIN_KG_M3
       || rho > RG_WATER_RHO_MAX_KG_M3)
-    return rg_error_set (err, RG_ERR_DOMAIN,
-                         "The density for the water viscosity must lie "
-                         "between %g and %g kg/m³ (liquid water).",
-                         RG_WATER_RHO_MIN_KG_M3, RG_WATER_RHO_MAX_KG_M3);
+    return rg_error_set_on (err, RG_ERR_DOMAIN, RG_ON (DENSITY),
+                            "The density for the water viscosity must lie "
+                            "between %s and %s (liquid water), not %s.",
+                            RG_ERR_VALUE (err, RG_QTY_DENSITY,
+                                          RG_WATER_RHO_MIN_KG_M3, a),
+                            RG_ERR_VALUE (err, RG_QTY_DENSITY,
+                                          RG_WATER_RHO_MAX_KG_M3, b),
+                            RG_ERR_VALUE (err, RG_QTY_DENSITY, rho, c));
   m = rg_water_viscosity_unchecked (t_k, rho);
   if (!isfinite (m) || m <= 0.0)
-    return rg_error_set (err, RG_ERR_NUMERIC,
-                         "The viscosity of water at %g K could not be "
-                         "computed.", t_k);
+    return rg_error_set_on (err, RG_ERR_NUMERIC, RG_ON (TEMPERATURE),
+                            "The viscosity of water at %s could not be "
+                            "computed.",
+                            RG_ERR_VALUE (err, RG_QTY_TEMPERATURE, t_k, a));
   *mu = m;
   return RG_OK;
 }
@@ -273,7 +309,13 @@ rg_water_properties (double t_k, double p_pa, double *rho, double *mu,
     return st;
   st = rg_water_viscosity (t_k, r, &m, err);
   if (st != RG_OK)
-    return st;
+    {
+      /* the density came from the temperature and the pressure */
+      if (err != NULL && (err->subjects & RG_ON (DENSITY)) != 0)
+        err->subjects = (err->subjects & ~RG_ON (DENSITY))
+                        | RG_ON (TEMPERATURE) | RG_ON (PRESSURE);
+      return st;
+    }
   *rho = r;
   *mu = m;
   return RG_OK;

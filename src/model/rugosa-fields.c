@@ -4,8 +4,9 @@
  *
  * Ranges: a row's range is what a project may hold and what every face
  * accepts for the field.  Where the core enforces a limit on the same input
- * (the custom fluid, the aging model, the transition range) the row uses
- * the core's number.  Whether a value is valid for a correlation (water
+ * (the custom fluid, the oil, seawater's salinity, the aging model, the
+ * transition range) the row uses the core's constant; a state shared by
+ * several fluids (temperature, pressure) spans their ranges.  Whether a value is valid for a correlation (water
  * above its boiling point, an oil outside its viscosity data) is decided by
  * the core when the line is evaluated: such a line loads, and shows the
  * core's sentence.
@@ -27,15 +28,27 @@
 #include <string.h>
 
 #include "core/aging.h"
+#include "core/air.h"
 #include "core/fluid.h"
+#include "core/oil.h"
 #include "core/regime.h"
+#include "core/seawater.h"
+#include "core/units.h"
+#include "core/water.h"
 #include "rugosa-display.h"
 #include "rugosa-fields.h"
 #include "rugosa-line-private.h"
 #include "rugosa-settings-private.h"
 #include "rugosa-units.h"
 
-#define SECONDS_PER_YEAR 31557600.0 /* the Julian year of rg_units ("yr") */
+#define SECONDS_PER_YEAR RG_UNITS_SECONDS_PER_YEAR
+
+/* The temperature and pressure rows hold the state of several fluids:
+ * their range spans the fluids' ranges (the core checks each fluid's). */
+#define T_LOWEST MIN (MIN (RG_WATER_T_MIN_K, RG_SEAWATER_T_MIN_K), MIN (RG_OIL_T_MIN_K, RG_AIR_T_MIN_K))
+#define T_HIGHEST MAX (MAX (RG_WATER_T_MAX_K, RG_SEAWATER_T_MAX_K), MAX (RG_OIL_T_MAX_K, RG_AIR_T_MAX_K))
+#define P_LOWEST RG_AIR_P_MIN_PA
+#define P_HIGHEST MAX (MAX (RG_WATER_P_MAX_PA, RG_SEAWATER_P_MAX_PA), RG_AIR_P_MAX_PA)
 
 #define L(field) G_STRUCT_OFFSET (RugosaLine, field)
 #define S(field) G_STRUCT_OFFSET (RugosaSettings, field)
@@ -74,52 +87,52 @@ static RugosaField line_fields[] = {
     N_("Which property model gives the fluid's density and viscosity."),
     NULL, "--fluid", SUBJ (FLUID), NULL, rugosa_fluid_kind_get_type, 0,
     L (fluid_kind), -1, 0 },
-  FLUID_NUM ("temperature", "fluid.temperature_K", TEMPERATURE, 1.0, 2000.0, 0,
+  FLUID_NUM ("temperature", "fluid.temperature_K", TEMPERATURE, T_LOWEST, T_HIGHEST, 0,
        RUGOSA_FIELD_CORE_DEFAULT | RUGOSA_FIELD_STATE_REQUIRED, N_("Temperature"),
        N_("The fluid's temperature."),
        "--temperature", SUBJ (TEMPERATURE), L (temperature), SPEC (temperature_k), WATER | SEAWATER | OIL | AIR),
-  FLUID_NUM ("pressure", "fluid.pressure_Pa", PRESSURE, 1.0, 1.0e9, 0,
+  FLUID_NUM ("pressure", "fluid.pressure_Pa", PRESSURE, P_LOWEST, P_HIGHEST, 0,
        RUGOSA_FIELD_CORE_DEFAULT, N_("Pressure"),
        N_("The fluid's absolute pressure."),
        "--pressure", SUBJ (PRESSURE), L (pressure), SPEC (pressure_pa), WATER | SEAWATER | AIR),
-  FLUID_NUM ("salinity", "fluid.salinity_kg_kg", SALINITY, 0.0, 0.3, 0,
+  FLUID_NUM ("salinity", "fluid.salinity_kg_kg", SALINITY, RG_SEAWATER_S_MIN_KG_KG, RG_SEAWATER_S_MAX_KG_KG, 0,
        RUGOSA_FIELD_CORE_DEFAULT | RUGOSA_FIELD_STATE_REQUIRED, N_("Salinity"),
        N_("The mass of salt per mass of seawater."),
        "--salinity", SUBJ (SALINITY), L (salinity), SPEC (salinity_kg_kg), SEAWATER),
-  FLUID_NUM ("density", "fluid.density_kg_m3", DENSITY, 0.01, 25000.0, 1000.0, RUGOSA_FIELD_STATE_REQUIRED,
+  FLUID_NUM ("density", "fluid.density_kg_m3", DENSITY, RG_FLUID_CUSTOM_DENSITY_MIN_KG_M3, RG_FLUID_CUSTOM_DENSITY_MAX_KG_M3, 1000.0, RUGOSA_FIELD_STATE_REQUIRED,
        N_("Density"), N_("The density of a fluid given by its properties."),
        "--density", SUBJ (DENSITY), L (density), SPEC (density_kg_m3), CUSTOM),
-  FLUID_NUM ("viscosity", "fluid.dynamic_viscosity_Pa_s", DYNAMIC_VISCOSITY, 1.0e-6, 1.0e5,
+  FLUID_NUM ("viscosity", "fluid.dynamic_viscosity_Pa_s", DYNAMIC_VISCOSITY, RG_FLUID_CUSTOM_VISCOSITY_MIN_PA_S, RG_FLUID_CUSTOM_VISCOSITY_MAX_PA_S,
        1.0e-3, RUGOSA_FIELD_STATE_REQUIRED, N_("Viscosity"),
        N_("The dynamic viscosity of a fluid given by its properties; a kinematic viscosity (cSt, mm²/s) is converted with the density."),
        "--viscosity", SUBJ (VISCOSITY), L (viscosity), SPEC (viscosity_pa_s), CUSTOM),
-  FLUID_NUM ("oil-t1", "fluid.oil.t1_K", TEMPERATURE, 1.0, 2000.0, 0,
+  FLUID_NUM ("oil-t1", "fluid.oil.t1_K", TEMPERATURE, RG_OIL_T_MIN_K, RG_OIL_T_MAX_K, 0,
        RUGOSA_FIELD_CORE_DEFAULT | RUGOSA_FIELD_STATE_REQUIRED, N_("First temperature"),
        N_("The temperature of the oil's first viscosity value."),
        "--oil-t1", SUBJ (OIL_T1), L (oil_t1), SPEC (oil_t1_k), OIL),
-  FLUID_NUM ("oil-nu1", "fluid.oil.nu1_m2_s", KINEMATIC_VISCOSITY, 1.0e-9, 1.0, 0,
+  FLUID_NUM ("oil-nu1", "fluid.oil.nu1_m2_s", KINEMATIC_VISCOSITY, RG_OIL_NU_MIN_M2_S, RG_OIL_NU_MAX_M2_S, 0,
        RUGOSA_FIELD_CORE_DEFAULT | RUGOSA_FIELD_STATE_REQUIRED, N_("Viscosity at the first temperature"),
        N_("The oil's kinematic viscosity at the first temperature."),
        "--oil-nu1", SUBJ (OIL_NU1), L (oil_nu1), SPEC (oil_nu1_m2_s), OIL),
-  FLUID_NUM ("oil-t2", "fluid.oil.t2_K", TEMPERATURE, 1.0, 2000.0, 0,
+  FLUID_NUM ("oil-t2", "fluid.oil.t2_K", TEMPERATURE, RG_OIL_T_MIN_K, RG_OIL_T_MAX_K, 0,
        RUGOSA_FIELD_CORE_DEFAULT | RUGOSA_FIELD_STATE_REQUIRED, N_("Second temperature"),
        N_("The temperature of the oil's second viscosity value."),
        "--oil-t2", SUBJ (OIL_T2), L (oil_t2), SPEC (oil_t2_k), OIL),
-  FLUID_NUM ("oil-nu2", "fluid.oil.nu2_m2_s", KINEMATIC_VISCOSITY, 1.0e-9, 1.0, 0,
+  FLUID_NUM ("oil-nu2", "fluid.oil.nu2_m2_s", KINEMATIC_VISCOSITY, RG_OIL_NU_MIN_M2_S, RG_OIL_NU_MAX_M2_S, 0,
        RUGOSA_FIELD_CORE_DEFAULT | RUGOSA_FIELD_STATE_REQUIRED, N_("Viscosity at the second temperature"),
        N_("The oil's kinematic viscosity at the second temperature."),
        "--oil-nu2", SUBJ (OIL_NU2), L (oil_nu2), SPEC (oil_nu2_m2_s), OIL),
-  FLUID_NUM ("oil-density-ref", "fluid.oil.density_ref_kg_m3", DENSITY, 1.0, 30000.0, 0,
+  FLUID_NUM ("oil-density-ref", "fluid.oil.density_ref_kg_m3", DENSITY, RG_OIL_DENSITY_MIN_KG_M3, RG_OIL_DENSITY_MAX_KG_M3, 0,
        RUGOSA_FIELD_CORE_DEFAULT | RUGOSA_FIELD_STATE_REQUIRED, N_("Oil density"),
        N_("The oil's density at its reference temperature."),
        "--oil-density", SUBJ (OIL_DENSITY_REF), L (oil_density_ref),
        SPEC (oil_density_ref_kg_m3), OIL),
-  FLUID_NUM ("oil-t-ref", "fluid.oil.t_ref_K", TEMPERATURE, 1.0, 2000.0, 0,
+  FLUID_NUM ("oil-t-ref", "fluid.oil.t_ref_K", TEMPERATURE, RG_OIL_T_MIN_K, RG_OIL_T_MAX_K, 0,
        RUGOSA_FIELD_CORE_DEFAULT, N_("Density reference temperature"),
        N_("The temperature at which the oil's density is given."),
        "--oil-density-t", SUBJ (OIL_T_REF), L (oil_t_ref), SPEC (oil_t_ref_k), OIL),
   { "oil-expansion", "fluid.oil.expansion_per_K", RUGOSA_FIELD_NUMBER,
-    RUGOSA_DISPLAY_NUMBER, 1.0, 0.0, 0.01, 0, NULL, RUGOSA_FIELD_CORE_DEFAULT,
+    RUGOSA_DISPLAY_NUMBER, 1.0, RG_OIL_EXPANSION_MIN_PER_K, RG_OIL_EXPANSION_MAX_PER_K, 0, NULL, RUGOSA_FIELD_CORE_DEFAULT,
     N_("Thermal expansion"),
     N_("The oil's volumetric thermal expansion coefficient."),
     "1/K", "--oil-expansion", SUBJ (OIL_EXPANSION), NULL, NULL, 0,
@@ -139,7 +152,7 @@ static RugosaField line_fields[] = {
     NULL, "--aging", SUBJ (AGING_CLASS), "aging-rate", NULL, 120,
     L (aging_class_id), -1 },
   { "aging-rate", "aging.rate_m_per_year", RUGOSA_FIELD_NUMBER,
-    RUGOSA_DISPLAY_ROUGHNESS_RATE, 1.0 / SECONDS_PER_YEAR, 0.0, 0.01, 0.0, NULL,
+    RUGOSA_DISPLAY_ROUGHNESS_RATE, 1.0 / SECONDS_PER_YEAR, 0.0, RG_AGING_RATE_MAX_M_PER_YEAR, 0.0, NULL,
     0, N_("Roughness growth"),
     N_("The growth of the roughness per year of service, α in ε(t) = ε₀ + α·t, used when no aging class is chosen."),
     NULL, NULL, SUBJ (AGING_RATE), NULL, NULL, 0, L (aging_rate), -1 },
@@ -197,11 +210,11 @@ static RugosaField settings_fields[] = {
     N_("The correlation that gives the turbulent friction factor."),
     NULL, "--model", SUBJ (MODEL), NULL, rugosa_friction_model_get_type, 0,
     S (friction_model), -1 },
-  NUM ("re-laminar-max", "transition.re_laminar_max", NUMBER, 500.0, 1.0e5, 2000.0,
+  NUM ("re-laminar-max", "transition.re_laminar_max", NUMBER, RG_TRANSITION_RE_LOWEST, RG_TRANSITION_RE_HIGHEST, 2000.0,
        RUGOSA_FIELD_SEEDED, N_("End of laminar flow"),
        N_("The Reynolds number below which the flow is taken as laminar."),
        "--re-laminar-max", SUBJ (RE_LAMINAR_MAX), S (re_laminar_max), -1),
-  NUM ("re-turbulent-min", "transition.re_turbulent_min", NUMBER, 500.0, 1.0e5,
+  NUM ("re-turbulent-min", "transition.re_turbulent_min", NUMBER, RG_TRANSITION_RE_LOWEST, RG_TRANSITION_RE_HIGHEST,
        4000.0, RUGOSA_FIELD_SEEDED, N_("Start of turbulent flow"),
        N_("The Reynolds number from which the flow is taken as turbulent; not below the end of laminar flow."),
        "--re-turbulent-min", SUBJ (RE_TURBULENT_MIN), S (re_turbulent_min), -1),
@@ -222,7 +235,7 @@ static RugosaField settings_fields[] = {
        N_("The top of the chart's friction-factor axis."),
        NULL, 0, S (chart_f_max), -1),
   { "service-age", "service_age_years", RUGOSA_FIELD_NUMBER, RUGOSA_DISPLAY_AGE,
-    SECONDS_PER_YEAR, 0.0, 150.0, 0.0, NULL, RUGOSA_FIELD_VIEW,
+    SECONDS_PER_YEAR, 0.0, RG_AGING_AGE_MAX_YEARS, 0.0, NULL, RUGOSA_FIELD_VIEW,
     N_("Service age"),
     N_("The years of service at which results are shown (the roughness grows with age)."),
     NULL, "--age", SUBJ (AGE), NULL, NULL, 0, S (service_age), -1 },

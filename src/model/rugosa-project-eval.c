@@ -164,15 +164,25 @@ line_error (RugosaLineResults *r, const RgError *err)
   set_text (r->error, err->text);
 }
 
+/* A point's error, its subjects naming what the user can change: a
+ * density or viscosity the line computation took as numbers stands for
+ * the fluid's state behind it. */
+static void
+point_error (RugosaOperatingPoint *p, RgFluidKind kind, const RgError *err)
+{
+  p->error_subjects = rg_fluid_subjects_behind (kind, err->subjects);
+  set_text (p->error, err->text);
+}
+
 static void
 evaluate_line (RugosaProject *self, RugosaLine *line, double age,
                RugosaLineResults *r)
 {
   RugosaSettings *settings = self->settings;
-  RgError err;
+  RgError err = { 0 };
   RgFluidSpec spec;
   RgFluidProps props;
-  RgWarnings fluid_warnings;
+  RgWarnings fluid_warnings = { 0 };
   RgTransition transition;
   RgFrictionModel model;
   double diameter, roughness_new, rate;
@@ -180,13 +190,20 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
   RgFittingUse *uses;
   gsize n_uses;
 
+  const RgUnitChoice *units = rugosa_settings_get_unit_choice (settings);
+
   memset (r, 0, sizeof *r);
   r->age_years = age;
   self->evaluation_count++;
+  /* The core's sentences show values in the project's units. */
   rg_error_clear (&err);
+  err.units = units;
+  for (RugosaFlowCase c = 0; c < RUGOSA_N_FLOWS; c++)
+    r->points[c].warnings.units = units;
 
   rugosa_line_get_fluid_spec (line, &spec);
   rg_warnings_clear (&fluid_warnings);
+  fluid_warnings.units = units;
   if (rg_fluid_properties (&spec, &props, &fluid_warnings, &err) != RG_OK)
     return line_error (r, &err);
   r->density_kg_m3 = props.density_kg_m3;
@@ -287,8 +304,7 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
                                      &p->minor_loss_k_total, &p->warnings,
                                      &err) != RG_OK)
         {
-          p->error_subjects = err.subjects;
-          set_text (p->error, err.text);
+          point_error (p, spec.kind, &err);
           continue;
         }
 
@@ -305,8 +321,7 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
       in.transition = transition;
       if (rg_aging_evaluate (&in, rate, age, &ar, &err) != RG_OK)
         {
-          p->error_subjects = err.subjects;
-          set_text (p->error, err.text);
+          point_error (p, spec.kind, &err);
           continue;
         }
       p->ok = TRUE;

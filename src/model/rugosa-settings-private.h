@@ -5,6 +5,7 @@
 
 #include <cjson/cJSON.h>
 
+#include "core/units.h"
 #include "rugosa-settings.h"
 
 G_BEGIN_DECLS
@@ -25,6 +26,8 @@ struct _RugosaSettings
   /* owned, not fields */
   cJSON *extra;
   guint64 revision;
+  RgUnitChoice unit_choice;       /* cache of rugosa_settings_get_unit_choice */
+  guint64 unit_choice_revision;   /* revision + 1 it was made for; 0: none */
 };
 
 G_END_DECLS

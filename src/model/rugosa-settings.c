@@ -136,6 +136,27 @@ rugosa_settings_get_unit (RugosaSettings *self, RugosaDisplayQuantity dq)
   return rugosa_display_default_unit (dq, (RugosaUnitSystem) self->unit_system);
 }
 
+const RgUnitChoice *
+rugosa_settings_get_unit_choice (RugosaSettings *self)
+{
+  g_return_val_if_fail (RUGOSA_IS_SETTINGS (self), NULL);
+
+  if (self->unit_choice_revision != self->revision + 1)
+    {
+      memset (&self->unit_choice, 0, sizeof self->unit_choice);
+      for (int dq = 0; dq < RUGOSA_N_DISPLAY; dq++)
+        {
+          const RugosaDisplayInfo *info = rugosa_display_info ((RugosaDisplayQuantity) dq);
+
+          if (info != NULL && self->unit_choice.unit[info->quantity] == NULL)
+            self->unit_choice.unit[info->quantity] =
+              rugosa_settings_get_unit (self, (RugosaDisplayQuantity) dq);
+        }
+      self->unit_choice_revision = self->revision + 1;
+    }
+  return &self->unit_choice;
+}
+
 RgStatus
 rugosa_settings_check (RugosaSettings *self, const char **failed_property,
                        RgError *err)

@@ -29,6 +29,12 @@ double rugosa_settings_get_double (RugosaSettings *self, const char *property);
 const char *rugosa_settings_get_unit (RugosaSettings *self,
                                       RugosaDisplayQuantity dq);
 
+/* The unit of each core quantity for the core's sentences (warnings and
+ * errors format their values with it): the unit of the first display
+ * quantity of that core quantity.  Owned by the settings; valid until the
+ * next change. */
+const RgUnitChoice *rugosa_settings_get_unit_choice (RugosaSettings *self);
+
 /* The relations between fields that no single range expresses (the
  * transition limits in order, the chart's axes wide enough); RG_OK or
  * one sentence in `err` whose subjects point at the field to change.
