@@ -556,9 +556,20 @@ cli_cmd_line (int argc, char **argv)
   else
     {
       const char *designation = rugosa_line_get_pipe_designation (line);
+      const char *material_id = rugosa_line_get_material_id (line);
+      const RgMaterial *material = NULL;
 
+      /* what the catalogs chose, named by the rows' labels */
       if (designation != NULL)
-        cli_table_row (out, _("pipe"), designation, NULL);
+        {
+          cli_pad (out, rugosa_field_label (rugosa_field_find ("pipe-designation")), 38);
+          g_string_append_printf (out, "%s\n", designation);
+        }
+      if (material_id != NULL && rg_material_lookup (material_id, &material, NULL) == RG_OK)
+        {
+          cli_pad (out, rugosa_field_label (rugosa_field_find ("material-id")), 38);
+          g_string_append_printf (out, "%s\n", _(material->name));
+        }
       rugosa_output_point_table (out, r, p, units);
     }
   return cli_write_stdout (out->str);
