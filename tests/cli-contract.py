@@ -241,6 +241,21 @@ for name, args, needle in [
     code, out, err = run(*args)
     check(f"render refuses {name}", code == 2 and out == "" and len(err.splitlines()) == 1
           and needle in err, f"{code} {err!r}")
+# The chart window a project may hold (its settings rows) is what render
+# draws: the widest window renders; a window under one decade is refused
+# when the file is read, with its path.
+wide = os.path.join(tmp, "wide.rugosa")
+narrow = os.path.join(tmp, "narrow.rugosa")
+doc = json.load(open(demo, encoding="utf-8"))
+doc["settings"]["chart"] = {"re_min": 1, "re_max": 1e10, "f_min": 0.001, "f_max": 1}
+json.dump(doc, open(wide, "w", encoding="utf-8"))
+code, out, err = run_env(env_date, "render", wide, "-o", a)
+check("render draws the widest chart window a file may hold", code == 0 and err == "", err)
+doc["settings"]["chart"] = {"re_min": 1000, "re_max": 5000, "f_min": 0.01, "f_max": 0.1}
+json.dump(doc, open(narrow, "w", encoding="utf-8"))
+code, out, err = run_env(env_date, "render", narrow, "-o", a)
+check("a chart window under one decade is refused with its path",
+      code == 2 and "settings.chart.re_max" in err, err)
 shutil.rmtree(tmp)
 
 # --- bad input: exit 2, one sentence naming the option, nothing on stdout -----

@@ -9,6 +9,7 @@
 
 #include "cli.h"
 #include "chart/rugosa-chart-input.h"
+#include "model/rugosa-fields.h"
 #include "model/rugosa-project.h"
 
 static const CliOption eval_options[] = {
@@ -39,24 +40,23 @@ cli_load_project (const CliArgs *args, const char *command)
   return g_steal_pointer (&project);
 }
 
-/* --age YEARS: a bare number of years, 0 to 200; -1 when not given. */
+/* --age: the service age, a bare number of years or a time ("25 yr"),
+ * in the range of the settings row it sets; -1 when not given. */
 gboolean
 cli_parse_age_option (const CliArgs *args, double *age)
 {
-  g_autoptr (GString) msg = g_string_new (NULL);
+  const RugosaField *row = rugosa_field_find_cli ("--age");
   const char *text = cli_args_get (args, "--age");
+  RgError err = { 0 };
 
   *age = -1.0;
   if (text == NULL)
     return TRUE;
-  if (!cli_parse_number ("--age", text, age, msg))
+  if (!rugosa_field_parse_text (row, text, NULL, 0.0, age, &err)
+      || !rugosa_field_in_range (row, *age, NULL, &err))
     {
-      cli_fail (_("%s (years)"), msg->str);
-      return FALSE;
-    }
-  if (!(*age >= 0.0 && *age <= 200.0))
-    {
-      cli_fail (_("--age must lie between 0 and 200 years."));
+      *age = -1.0;
+      cli_fail_option ("--age", err.text);
       return FALSE;
     }
   return TRUE;
