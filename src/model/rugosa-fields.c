@@ -403,6 +403,10 @@ rugosa_field_in_range (const RugosaField *field, double stored,
   if (err == NULL)
     return FALSE;
 
+  /* A value kept per year (a service age, a growth rate) is shown per year
+   * when no unit is asked for, not in seconds. */
+  if (info != NULL && unit == NULL && field->to_si != 1.0)
+    unit = info->si_unit;
   if (info != NULL)
     {
       lo = rugosa_display_format (info->quantity, field->min * field->to_si, unit);
