@@ -11,6 +11,7 @@
 #include "core/fittings.h"
 #include "core/fluid.h"
 #include "model/rugosa-display.h"
+#include "model/rugosa-fields.h"
 #include "rugosa-line-panel.h"
 #include "rugosa-readout.h"
 #include "rugosa-spin-guard.h"
@@ -59,7 +60,6 @@ struct _RugosaLinePanel
 
   /* borrowed references */
   RugosaProject *project;
-  GSettings     *settings;
 
   /* owned references */
   RugosaLine *line;
@@ -76,34 +76,6 @@ enum {
 };
 
 static guint signals[N_SIGNALS];
-
-/* The display unit of each edited quantity: a GSettings key, or a fixed
- * spelling where the preferences offer no choice. */
-static const struct {
-  const char *property;
-  const char *settings_key;
-  const char *fixed_unit;
-} entry_units[] = {
-  { "temperature", "unit-temperature", NULL },
-  { "pressure", "unit-pressure", NULL },
-  { "salinity", NULL, "g/kg" },
-  { "density", "unit-density", NULL },
-  { "viscosity", "unit-viscosity", NULL },
-  { "oil-t1", "unit-temperature", NULL },
-  { "oil-nu1", NULL, "cSt" },
-  { "oil-t2", "unit-temperature", NULL },
-  { "oil-nu2", NULL, "cSt" },
-  { "oil-density-ref", "unit-density", NULL },
-  { "oil-t-ref", "unit-temperature", NULL },
-  { "roughness", "unit-roughness", NULL },
-  { "aging-rate", NULL, "mm/yr" },
-  { "inner-diameter", "unit-diameter", NULL },
-  { "length", "unit-length", NULL },
-  { "elevation", "unit-length", NULL },
-  { "flow-design", "unit-flow", NULL },
-  { "flow-minimum", "unit-flow", NULL },
-  { "flow-maximum", "unit-flow", NULL },
-};
 
 static const char *fluid_titles[RG_FLUID_N_KINDS] = {
   [RG_FLUID_WATER] = N_("Water (IAPWS-IF97)"),
@@ -562,47 +534,33 @@ _rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
   }
 }
 
+/* Each field is shown in the project's unit for its row's quantity. */
 static void
 _rugosa_line_panel_update_units (RugosaLinePanel *self)
 {
-  for (guint i = 0; i < G_N_ELEMENTS (entry_units); i++)
-    {
-      RugosaQuantityEntry *e = g_hash_table_lookup (self->entries, entry_units[i].property);
-      g_autofree char *unit = NULL;
+  GHashTableIter iter;
+  const char *property;
+  RugosaQuantityEntry *entry;
+  RugosaSettings *ps = self->project ? rugosa_project_get_settings (self->project) : NULL;
 
-      if (e == NULL)
+  g_hash_table_iter_init (&iter, self->entries);
+  while (g_hash_table_iter_next (&iter, (gpointer *) &property, (gpointer *) &entry))
+    {
+      const RugosaField *row = rugosa_field_find (property);
+
+      if (row == NULL)
         continue;
-      if (entry_units[i].settings_key && self->settings)
-        unit = g_settings_get_string (self->settings, entry_units[i].settings_key);
-      rugosa_quantity_entry_set_unit (e, unit ? unit : entry_units[i].fixed_unit);
-    }
-}
-
-static void
-_rugosa_line_panel_settings_changed (GSettings       *settings,
-                                     const char      *key,
-                                     RugosaLinePanel *self)
-{
-  if (g_str_has_prefix (key, "unit-"))
-    {
-      _rugosa_line_panel_update_units (self);
-      rugosa_line_panel_refresh (self);
+      rugosa_quantity_entry_set_unit (entry, ps ? rugosa_settings_get_unit (ps, row->display) : NULL);
     }
 }
 
 void
 rugosa_line_panel_set_context (RugosaLinePanel *self,
-                               RugosaProject   *project,
-                               GSettings       *settings)
+                               RugosaProject   *project)
 {
   g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
 
-  if (self->settings)
-    g_signal_handlers_disconnect_by_data (self->settings, self);
   self->project = project;
-  self->settings = settings;
-  if (settings)
-    g_signal_connect_object (settings, "changed", G_CALLBACK (_rugosa_line_panel_settings_changed), self, 0);
   _rugosa_line_panel_update_units (self);
 }
 
@@ -666,6 +624,7 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
     return;
 
   self->updating = TRUE;
+  _rugosa_line_panel_update_units (self);
 
   if (!gtk_widget_has_focus (GTK_WIDGET (self->name_entry))
       || g_strcmp0 (gtk_editable_get_text (GTK_EDITABLE (self->name_entry)), rugosa_line_get_name (self->line)) != 0)
@@ -739,10 +698,8 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
 
   if (res != NULL && res->ok)
     {
-      g_autofree char *ud = self->settings ? g_settings_get_string (self->settings, "unit-density") : NULL;
-      g_autofree char *uv = self->settings ? g_settings_get_string (self->settings, "unit-viscosity") : NULL;
-      g_autofree char *rho = rugosa_display_format_screen (RG_QTY_DENSITY, res->density_kg_m3, ud);
-      g_autofree char *mu = rugosa_display_format_screen (RG_QTY_DYN_VISCOSITY, res->dynamic_viscosity_pa_s, uv);
+      g_autofree char *rho = rugosa_readout_format (self->project, RUGOSA_DISPLAY_DENSITY, res->density_kg_m3);
+      g_autofree char *mu = rugosa_readout_format (self->project, RUGOSA_DISPLAY_DYNAMIC_VISCOSITY, res->dynamic_viscosity_pa_s);
       g_autofree char *text = g_strdup_printf (_("ρ = %s · μ = %s"), rho, mu);
 
       adw_action_row_set_subtitle (self->fluid_props_row, text);
@@ -987,9 +944,6 @@ rugosa_line_panel_dispose (GObject *object)
 {
   RugosaLinePanel *self = RUGOSA_LINE_PANEL (object);
 
-  if (self->settings)
-    g_signal_handlers_disconnect_by_data (self->settings, self);
-  self->settings = NULL;
   g_clear_object (&self->line);
   g_clear_pointer (&self->entries, g_hash_table_unref);
   g_clear_pointer (&self->fitting_rows, g_ptr_array_unref);

@@ -20,8 +20,7 @@ G_DECLARE_FINAL_TYPE (RugosaLinePanel, rugosa_line_panel, RUGOSA, LINE_PANEL, Gt
 
 GtkWidget  *rugosa_line_panel_new          (void);
 void        rugosa_line_panel_set_context  (RugosaLinePanel *self,
-                                            RugosaProject   *project,
-                                            GSettings       *settings);
+                                            RugosaProject   *project);
 void        rugosa_line_panel_set_line     (RugosaLinePanel *self,
                                             RugosaLine      *line);
 RugosaLine *rugosa_line_panel_get_line     (RugosaLinePanel *self);

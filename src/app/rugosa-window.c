@@ -8,6 +8,7 @@
 
 #include "model/rugosa-display.h"
 #include "rugosa-readout.h"
+#include "rugosa-seed.h"
 #include "rugosa-window-private.h"
 
 G_DEFINE_FINAL_TYPE (RugosaWindow, rugosa_window, ADW_TYPE_APPLICATION_WINDOW)
@@ -224,10 +225,8 @@ _rugosa_window_update_row (RugosaWindow *self,
   if (res && res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
     {
       const RugosaOperatingPoint *p = &res->points[RUGOSA_FLOW_DESIGN];
-      g_autofree char *uv = g_settings_get_string (self->settings, "unit-velocity");
-      g_autofree char *uh = g_settings_get_string (self->settings, "unit-head");
-      g_autofree char *v = rugosa_display_format_screen (RG_QTY_VELOCITY, p->result.velocity_m_s, uv);
-      g_autofree char *h = rugosa_display_format_screen (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
+      g_autofree char *v = rugosa_readout_format (self->project, RUGOSA_DISPLAY_VELOCITY, p->result.velocity_m_s);
+      g_autofree char *h = rugosa_readout_format (self->project, RUGOSA_DISPLAY_HEAD, p->result.head_loss_total_m);
 
       sub = g_strdup_printf (_("%s · loss %s"), v, h);
     }
@@ -361,8 +360,7 @@ _rugosa_window_update_age_summary (RugosaWindow *self)
       if (res && res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
         {
           const RugosaOperatingPoint *p = &res->points[RUGOSA_FLOW_DESIGN];
-          g_autofree char *uh = g_settings_get_string (self->settings, "unit-head");
-          g_autofree char *h = rugosa_display_format_screen (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
+          g_autofree char *h = rugosa_readout_format (self->project, RUGOSA_DISPLAY_HEAD, p->result.head_loss_total_m);
           g_autofree char *change = rugosa_readout_change (p->head_loss_ratio_to_new);
           g_autofree char *text = g_strdup_printf (_("%s: head loss %s, %s vs new"),
                                                    rugosa_line_get_name (line), h, change);
@@ -727,46 +725,17 @@ _rugosa_window_items_changed (RugosaWindow *self,
     gtk_single_selection_set_selected (self->selection, position);
 }
 
-/* --- preferences that change the document ------------------------------ */
+/* --- a new project ------------------------------------------------------ */
 
-static void
-_rugosa_window_apply_preferences (RugosaWindow *self)
-{
-  RugosaSettings *ps = rugosa_project_get_settings (self->project);
-  double lam = g_settings_get_double (self->settings, "laminar-limit");
-  double turb = g_settings_get_double (self->settings, "turbulent-limit");
-
-  g_object_set (ps,
-                "friction-model", g_settings_get_enum (self->settings, "friction-model"),
-                "velocity-limit", g_settings_get_double (self->settings, "velocity-limit"),
-                "gradient-limit", g_settings_get_double (self->settings, "gradient-limit"),
-                NULL);
-  /* A pair out of order (the preferences put it back) keeps the last one;
-   * the other preferences still apply. */
-  if (lam < turb)
-    g_object_set (ps, "re-laminar-max", lam, "re-turbulent-min", turb, NULL);
-}
-
-static void
-_rugosa_window_settings_changed (GSettings    *settings,
-                                 const char   *key,
-                                 RugosaWindow *self)
-{
-  if (g_str_equal (key, "friction-model") || g_str_equal (key, "laminar-limit")
-      || g_str_equal (key, "turbulent-limit") || g_str_equal (key, "velocity-limit")
-      || g_str_equal (key, "gradient-limit"))
-    _rugosa_window_apply_preferences (self);
-  else if (g_str_has_prefix (key, "unit-"))
-    _rugosa_window_refresh_all (self);
-}
-
+/* A new project starts from the preferences (rugosa-seed.h) and one line
+ * option; nothing else reads them, so an open project keeps its own. */
 static void
 _rugosa_window_fill_new_project (RugosaWindow *self)
 {
   g_autoptr (RugosaLine) line = rugosa_line_new (_("Line option 1"));
 
   g_object_set (line, "colour", line_palette[0], NULL);
-  _rugosa_window_apply_preferences (self);
+  rugosa_seed_settings (self->settings, rugosa_project_get_settings (self->project));
   rugosa_project_insert_line (self->project, 0, line);
 }
 
@@ -789,7 +758,6 @@ _rugosa_window_setup (RugosaWindow *self)
   GtkListItemFactory *factory;
 
   self->settings = rugosa_application_get_settings (RUGOSA_APPLICATION (app));
-  g_signal_connect_object (self->settings, "changed", G_CALLBACK (_rugosa_window_settings_changed), self, 0);
   g_settings_bind (self->settings, "service-age-max", self->age_adjustment, "upper", G_SETTINGS_BIND_GET);
   g_settings_bind (self->settings, "window-width", self, "default-width", G_SETTINGS_BIND_GET_NO_CHANGES);
   g_settings_bind (self->settings, "window-height", self, "default-height", G_SETTINGS_BIND_GET_NO_CHANGES);
@@ -811,10 +779,10 @@ _rugosa_window_setup (RugosaWindow *self)
   g_object_unref (factory);
   gtk_list_view_set_model (self->lines_view, GTK_SELECTION_MODEL (self->selection));
 
-  rugosa_canvas_set_project (self->canvas, self->project, self->settings);
+  rugosa_canvas_set_project (self->canvas, self->project);
   rugosa_canvas_set_selection (self->canvas, self->selection);
-  rugosa_results_table_set_context (self->results_table, self->project, self->settings, self->selection);
-  rugosa_line_panel_set_context (self->line_panel, self->project, self->settings);
+  rugosa_results_table_set_context (self->results_table, self->project, self->selection);
+  rugosa_line_panel_set_context (self->line_panel, self->project);
   g_object_bind_property (self->canvas, "probe-text", self->probe_label, "label", G_BINDING_DEFAULT);
   g_object_bind_property_full (self->canvas, "probe-text", self->probe_label, "visible", G_BINDING_DEFAULT,
                                _rugosa_window_probe_visible, NULL, NULL, NULL);
