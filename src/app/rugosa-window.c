@@ -7,6 +7,7 @@
 #include <math.h>
 
 #include "model/rugosa-display.h"
+#include "model/rugosa-fields.h"
 #include "rugosa-readout.h"
 #include "rugosa-seed.h"
 #include "rugosa-window-private.h"
@@ -553,20 +554,31 @@ _rugosa_window_edit_line (RugosaWindow *self,
   else
     g_value_set_variant (&v, value);
 
-  /* Out of the file format's range: refuse before the model warns. */
-  if (g_param_value_validate (pspec, &v))
-    {
-      if (G_IS_PARAM_SPEC_DOUBLE (pspec))
-        {
-          GParamSpecDouble *d = G_PARAM_SPEC_DOUBLE (pspec);
-          why = g_strdup_printf (_("Out of range: %s must lie between %g and %g %s."),
-                                 g_param_spec_get_blurb (pspec), d->minimum, d->maximum, "(SI)");
-        }
-      else
-        why = g_strdup_printf (_("Not an accepted value for %s."), g_param_spec_get_blurb (pspec));
-      _rugosa_window_refuse (self, property, why);
-      return;
-    }
+  /* Out of the row's range (the panel's entries check it already; other
+   * senders may not): refuse before the model warns, in the row's words
+   * and the project's unit. */
+  {
+    const RugosaField *row = rugosa_field_find (property);
+
+    if (row != NULL && row->kind == RUGOSA_FIELD_NUMBER)
+      {
+        RgError err = { 0 };
+        RugosaSettings *ps = rugosa_project_get_settings (self->project);
+
+        if (!rugosa_field_in_range (row, g_value_get_double (&v), rugosa_settings_get_unit (ps, row->display), &err))
+          {
+            _rugosa_window_refuse (self, property, err.text);
+            return;
+          }
+      }
+    else if (g_param_value_validate (pspec, &v))
+      {
+        why = g_strdup_printf (_("Not an accepted value for %s."),
+                               row ? rugosa_field_label (row) : property);
+        _rugosa_window_refuse (self, property, why);
+        return;
+      }
+  }
 
   /* A value the core cannot evaluate leaves the last valid one in force,
    * so the chart and the table never lose the line. */
