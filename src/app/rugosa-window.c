@@ -8,6 +8,7 @@
 
 #include "model/rugosa-display.h"
 #include "model/rugosa-fields.h"
+#include "rugosa-project-settings-window.h"
 #include "rugosa-readout.h"
 #include "rugosa-seed.h"
 #include "rugosa-window-private.h"
@@ -92,6 +93,12 @@ GtkSingleSelection *
 rugosa_window_get_selection (RugosaWindow *self)
 {
   return self->selection;
+}
+
+GtkWindow *
+rugosa_window_get_project_settings (RugosaWindow *self)
+{
+  return self->project_settings;
 }
 
 const char *
@@ -710,6 +717,24 @@ _rugosa_window_redo (GtkWidget  *widget,
   rugosa_history_redo (self->history);
 }
 
+/* One settings window a project window, brought back when asked again. */
+static void
+_rugosa_window_project_settings (GtkWidget  *widget,
+                                 const char *action_name,
+                                 GVariant   *param)
+{
+  RugosaWindow *self = RUGOSA_WINDOW (widget);
+
+  if (self->project_settings == NULL)
+    {
+      self->project_settings = GTK_WINDOW (rugosa_project_settings_window_new (self->history, self->settings));
+      gtk_window_set_transient_for (self->project_settings, GTK_WINDOW (self));
+      gtk_window_set_destroy_with_parent (self->project_settings, TRUE);
+      g_object_add_weak_pointer (G_OBJECT (self->project_settings), (gpointer *) &self->project_settings);
+    }
+  gtk_window_present (self->project_settings);
+}
+
 static void
 _rugosa_window_age_step (GtkWidget  *widget,
                          const char *action_name,
@@ -819,6 +844,12 @@ rugosa_window_dispose (GObject *object)
   RugosaWindow *self = RUGOSA_WINDOW (object);
 
   _rugosa_window_files_dispose (self);
+  if (self->project_settings != NULL)
+    {
+      g_object_remove_weak_pointer (G_OBJECT (self->project_settings), (gpointer *) &self->project_settings);
+      gtk_window_destroy (self->project_settings);
+      self->project_settings = NULL;
+    }
   g_clear_handle_id (&self->actions_source, g_source_remove);
   if (self->canvas)
     rugosa_canvas_set_selection (self->canvas, NULL);
@@ -872,6 +903,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   gtk_widget_class_install_action (widget_class, "win.line-move-down", NULL, _rugosa_window_line_move);
   gtk_widget_class_install_action (widget_class, "win.line-rename", NULL, _rugosa_window_line_rename);
   gtk_widget_class_install_action (widget_class, "win.age-step", "i", _rugosa_window_age_step);
+  gtk_widget_class_install_action (widget_class, "win.project-settings", NULL, _rugosa_window_project_settings);
 
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_F2, 0, "win.line-rename", NULL);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Up, GDK_ALT_MASK, "win.line-move-up", NULL);
