@@ -549,6 +549,8 @@ _rugosa_window_edit_line (RugosaWindow *self,
   g_value_init (&v, pspec->value_type);
   if (g_variant_is_of_type (value, G_VARIANT_TYPE_DOUBLE))
     g_value_set_double (&v, g_variant_get_double (value));
+  else if (g_variant_is_of_type (value, G_VARIANT_TYPE_INT32) && G_VALUE_HOLDS_ENUM (&v))
+    g_value_set_enum (&v, g_variant_get_int32 (value));
   else if (g_variant_is_of_type (value, G_VARIANT_TYPE_INT32))
     g_value_set_int (&v, g_variant_get_int32 (value));
   else if (g_variant_is_of_type (value, G_VARIANT_TYPE_STRING))
