@@ -70,6 +70,15 @@ rugosa_line_panel_get_entry (RugosaLinePanel *self,
 }
 
 const char *
+rugosa_line_panel_get_warnings (RugosaLinePanel *self)
+{
+  g_return_val_if_fail (RUGOSA_IS_LINE_PANEL (self), NULL);
+  if (!gtk_widget_get_visible (GTK_WIDGET (self->warnings_box)))
+    return NULL;
+  return gtk_label_get_text (self->warnings_label);
+}
+
+const char *
 rugosa_line_panel_get_fluid_readout (RugosaLinePanel *self)
 {
   return adw_action_row_get_subtitle (self->fluid_props_row);
@@ -584,32 +593,21 @@ _rugosa_line_panel_mark_chooser (GtkWidget  *row,
 /* An evaluation error names the inputs it is about (its subjects): the
  * fields of those inputs are marked with the sentence, and where a custom
  * value comes from a chosen catalog entry, its chooser is.  Marks of the
- * last refresh that no longer apply go. */
-static void
-_rugosa_line_panel_mark_subjects (RugosaLinePanel          *self,
-                                  const RugosaLineResults  *res)
+ * last call that no longer apply go. */
+void
+rugosa_line_panel_mark_subjects (RugosaLinePanel *self,
+                                 RgSubjects       subjects,
+                                 const char      *why)
 {
   g_autoptr (GHashTable) marked = g_hash_table_new (g_str_hash, g_str_equal);
-  RgSubjects subjects = 0;
-  const char *why = NULL;
   GHashTableIter iter;
   const char *property;
   gpointer widget;
 
-  if (res != NULL && !res->ok)
-    {
-      subjects = res->error_subjects;
-      why = res->error;
-    }
-  else if (res != NULL)
-    for (int k = 0; k < RUGOSA_N_FLOWS && why == NULL; k++)
-      if (res->points[k].present && !res->points[k].ok)
-        {
-          subjects = res->points[k].error_subjects;
-          why = res->points[k].error;
-        }
-
-  for (guint i = 0; subjects != 0; i++)
+  g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
+  if (why == NULL)
+    subjects = 0;
+  for (guint i = 0; subjects != 0 && self->line != NULL; i++)
     {
       const RugosaField *row = rugosa_field_for_subject (subjects, i);
       const RugosaField *partner;
@@ -632,6 +630,29 @@ _rugosa_line_panel_mark_subjects (RugosaLinePanel          *self,
       if (mark || gtk_widget_has_css_class (widget, "field-error"))
         _rugosa_line_panel_mark_chooser (widget, mark ? why : NULL);
     }
+}
+
+/* The error of the line, or of its first operating point that failed. */
+static void
+_rugosa_line_panel_mark_results (RugosaLinePanel         *self,
+                                 const RugosaLineResults *res)
+{
+  RgSubjects subjects = 0;
+  const char *why = NULL;
+
+  if (res != NULL && !res->ok)
+    {
+      subjects = res->error_subjects;
+      why = res->error;
+    }
+  else if (res != NULL)
+    for (int k = 0; k < RUGOSA_N_FLOWS && why == NULL; k++)
+      if (res->points[k].present && !res->points[k].ok)
+        {
+          subjects = res->points[k].error_subjects;
+          why = res->points[k].error;
+        }
+  rugosa_line_panel_mark_subjects (self, subjects, why);
 }
 
 void
@@ -719,7 +740,7 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
     }
   else
     adw_action_row_set_subtitle (self->fluid_props_row, res ? res->error : "");
-  _rugosa_line_panel_mark_subjects (self, res);
+  _rugosa_line_panel_mark_results (self, res);
 
   _rugosa_line_panel_fill_fittings (self);
 
@@ -738,7 +759,7 @@ rugosa_line_panel_refresh_results (RugosaLinePanel *self)
   g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
   if (self->line == NULL || self->project == NULL)
     return;
-  _rugosa_line_panel_mark_subjects (self, rugosa_readout_results (self->project, self->line));
+  _rugosa_line_panel_mark_results (self, rugosa_readout_results (self->project, self->line));
   warnings = rugosa_readout_warnings (self->project, self->line);
   gtk_widget_set_visible (GTK_WIDGET (self->warnings_box), warnings != NULL);
   if (g_strcmp0 (gtk_label_get_text (self->warnings_label), warnings ? warnings : "") != 0)

@@ -203,9 +203,9 @@ _rugosa_settings_page_usual_title (RugosaSettingsPage   *self,
 {
   const char *unit = rugosa_display_default_unit (dq, rugosa_settings_get_unit_system (self->settings));
 
-  /* TRANSLATORS: the first choice of a quantity's unit: whatever the unit
-   * system uses, e.g. "As the unit system (°C)" */
-  return g_strdup_printf (_("As the unit system (%s)"), rugosa_display_unit_symbol (unit));
+  /* TRANSLATORS: the first choice of a quantity's unit: the unit system's
+   * usual one, whatever the system is, e.g. "°C (usual)" */
+  return g_strdup_printf (_("%s (usual)"), rugosa_display_unit_symbol (unit));
 }
 
 static void
