@@ -272,6 +272,18 @@ test_us_project_opens_in_us (void)
   g_assert_cmpfloat_with_epsilon (leading_number (chart_velocity), p->result.velocity_m_s / FOOT_M,
                                   5e-4 * p->result.velocity_m_s / FOOT_M);
 
+  /* The CSV export names the same units. */
+  {
+    g_autofree char *csv = g_build_filename (tmpdir, "us.csv", NULL);
+    g_autofree char *text = NULL;
+    g_autoptr (GError) error = NULL;
+
+    g_assert_true (rugosa_window_export_csv_to (win, csv, &error));
+    g_assert_no_error (error);
+    g_assert_true (g_file_get_contents (csv, &text, NULL, NULL));
+    g_assert_nonnull (strstr (text, "velocity (ft/s)"));
+    g_assert_nonnull (strstr (text, "gradient (ft/100 ft)"));
+  }
   ui_harness_save_png (GTK_WIDGET (panel), "units-panel-us.png");
   ui_harness_close_window (win);
 }
