@@ -224,6 +224,10 @@ static const Special specials[] = {
     "a design flow below the lowest flow" },
   { "temperature", RG_FLUID_WATER, "bare-number-in-shown-unit", "30", 'a',
     "a number without unit is read in the unit the field shows (°C here)" },
+  { "length", RG_FLUID_WATER, "markup-characters", "<b>5</b> & m", 'r',
+    "text that would be markup is shown as typed" },
+  { "oil-expansion", RG_FLUID_OIL, "markup-characters", "<i>", 'r',
+    "text that would be markup is shown as typed" },
 };
 
 /* A spin button: where it is, its classes' outcomes (bare numbers). */
@@ -617,6 +621,12 @@ test_line_row (gconstpointer data)
 
       g_assert_true (gtk_widget_has_css_class (field, "error"));
       assert_one_sentence (error);
+      /* A sentence that quotes a short text quotes exactly that text. */
+      if (row->text != NULL && strlen (row->text) < 40 && strstr (error, "“") != NULL)
+        {
+          g_autofree char *quoted = g_strdup_printf ("“%s”", row->text);
+          g_assert_nonnull (strstr (error, quoted));
+        }
       /* Beside the field: the row's subtitle and the tooltip say it. */
       g_assert_nonnull (arow);
       g_assert_cmpstr (adw_action_row_get_subtitle (ADW_ACTION_ROW (arow)), ==, error);

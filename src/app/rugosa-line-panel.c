@@ -415,6 +415,9 @@ _rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
     {
       GtkWidget *row = adw_action_row_new ();
       GtkWidget *spin = gtk_spin_button_new_with_range (0, RUGOSA_FITTING_COUNT_MAX, 1);
+
+      /* A refusal under the title echoes the text typed: plain text. */
+      adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (row), FALSE);
       GtkWidget *remove = gtk_button_new_from_icon_name ("user-trash-symbolic");
       const RgFitting *fitting = NULL;
 
@@ -579,6 +582,8 @@ _rugosa_line_panel_mark_chooser (GtkWidget  *row,
 {
   GtkWidget *suffix = g_object_get_data (G_OBJECT (row), "rugosa-chooser");
 
+  /* The model's sentence may hold "<" or "&": plain text. */
+  adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (row), FALSE);
   adw_action_row_set_subtitle (ADW_ACTION_ROW (row), why ? why : "");
   if (why != NULL)
     gtk_widget_add_css_class (row, "field-error");
@@ -1046,6 +1051,8 @@ rugosa_line_panel_init (RugosaLinePanel *self)
   gtk_box_layout_set_spacing (GTK_BOX_LAYOUT (layout), 18);
   _rugosa_line_panel_fill_catalogs (self);
   _rugosa_line_panel_collect_fields (self, GTK_WIDGET (self));
+  /* It shows the model's sentences, which may hold "<" or "&". */
+  adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (self->fluid_props_row), FALSE);
   self->updating = FALSE;
   gtk_widget_set_sensitive (GTK_WIDGET (self), FALSE);
 }

@@ -5,6 +5,7 @@
 
 #include <adwaita.h>
 #include <glib/gi18n.h>
+#include <math.h>
 #include <string.h>
 
 #include "model/rugosa-display.h"
@@ -143,7 +144,9 @@ _rugosa_quantity_entry_update_marks (RugosaQuantityEntry *self)
     }
   if (row != NULL)
     {
-      /* The explanation sits under the field's title while it is wrong. */
+      /* The explanation sits under the field's title while it is wrong;
+       * it may echo what was typed ("<", "&"), so it is plain text. */
+      adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (row), FALSE);
       adw_action_row_set_subtitle (ADW_ACTION_ROW (row), why ? why : self->hint ? self->hint : "");
       if (why != NULL)
         gtk_widget_add_css_class (row, "field-error");
@@ -218,6 +221,43 @@ _rugosa_quantity_entry_sentence (const char *text)
   return rugosa_display_localize (s);
 }
 
+/* Workaround: for a plain-number row, rugosa_field_parse_text echoes
+ * the text through g_utf8_make_valid (text, 40), which reads 40 bytes
+ * whatever the text's length, so a short text echoes memory beyond it.
+ * Until the model reads at most the string (g_utf8_make_valid (text, -1),
+ * then the first 40 characters), text that is not a plain number is
+ * answered here, with the model's own sentence and echo length. */
+static gboolean
+_rugosa_quantity_entry_plain_number (const char *ascii)
+{
+  char *end = NULL;
+  double x;
+
+  while (g_ascii_isspace (*ascii))
+    ascii++;
+  if (*ascii == '\0')
+    return FALSE;
+  x = g_ascii_strtod (ascii, &end);
+  while (end != NULL && g_ascii_isspace (*end))
+    end++;
+  return end != NULL && end != ascii && *end == '\0' && isfinite (x);
+}
+
+static void
+_rugosa_quantity_entry_not_a_number (const RugosaField *field,
+                                     const char        *text,
+                                     RgError           *err)
+{
+  g_autofree char *valid = g_utf8_make_valid (text, -1);
+  g_autofree char *shown = g_utf8_substring (valid, 0, MIN (g_utf8_strlen (valid, -1), 40));
+  g_autofree char *msg = NULL;
+
+  g_strdelimit (shown, "\n\r\t", ' ');
+  /* TRANSLATORS: %s is what was typed, e.g. "abc" for a thermal expansion */
+  msg = g_strdup_printf (_("“%s” is not a number: type a plain number such as 0.00064."), shown);
+  rg_error_set_on (err, RG_ERR_PARSE, field->subjects, "%s", msg);
+}
+
 gboolean
 rugosa_quantity_entry_commit_text (RugosaQuantityEntry *self,
                                    const char          *text)
@@ -234,7 +274,10 @@ rugosa_quantity_entry_commit_text (RugosaQuantityEntry *self,
   ascii = rugosa_display_delocalize (stripped);
   /* A bare number means the unit the field shows: someone who sees
    * "102.3 mm" and types "150" means 150 mm, not 150 m. */
-  if (!rugosa_field_parse_text (self->field, ascii, self->unit, self->density, &stored, &err)
+  if (_rugosa_quantity_entry_info (self) == NULL && !_rugosa_quantity_entry_plain_number (ascii))
+    _rugosa_quantity_entry_not_a_number (self->field, ascii, &err);
+  if (err.text[0] != '\0'
+      || !rugosa_field_parse_text (self->field, ascii, self->unit, self->density, &stored, &err)
       || !rugosa_field_in_range (self->field, stored, self->unit, &err))
     {
       g_autofree char *why = _rugosa_quantity_entry_sentence (err.text);
