@@ -1,7 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* The bad-input matrix of the application's fields, driven in-process
  * under Xvfb: every quantity field of the line panel, the fitting counts
- * and plain K values, the oil expansion and the numeric preferences, each
+ * and plain K values, the numeric preferences and the slider's length, each
  * given every class of bad value (zero, negative, nan, inf, huge, tiny,
  * empty, an unknown unit, a unit of another kind, non-ASCII text, 100 kB of
  * digits) and the values that leave a correlation's range.
@@ -15,7 +15,8 @@
  *              above the line's fields;
  *   accepted — the value is taken (one undo step), no warning.
  * Spin buttons cannot hold bad text: "refused" there means the button puts
- * its last valid value back and nothing changes.
+ * its last valid value back and nothing changes.  A preference is refused
+ * when its key keeps its value and the field says why.
  * Whatever the outcome, no number on screen or in the line's results is
  * NaN or infinite: the results of every line, every results-table cell, the
  * chart's operating points and the warnings are scanned.
@@ -142,6 +143,9 @@ static const Field fields[] = {
   { "oil-nu2", RG_FLUID_OIL, "cSt", "m", "rrrrrrrrrrr" },
   { "oil-density-ref", RG_FLUID_OIL, "kg/m3", "m", "rrrrrrrrrrr" },
   { "oil-t-ref", RG_FLUID_OIL, "C", "kPa", "aarrrarrrrr" },
+  /* A plain number (1/K): the unit column is empty, another kind's unit
+   * is refused as text that is not a number. */
+  { "oil-expansion", RG_FLUID_OIL, "", "m", "arrrrarrrrr" },
   { "roughness", RG_FLUID_WATER, "mm", "L/s", "arrrrarrrrr" },
   { "aging-rate", RG_FLUID_WATER, "mm/yr", "L/s", "arrrrarrrrr" },
   { "inner-diameter", RG_FLUID_WATER, "mm", "L/s", "rrrrrrrrrrr" },
@@ -192,8 +196,10 @@ static const Special specials[] = {
     "the oil would thicken as it warms" },
   { "temperature", RG_FLUID_OIL, "outside-d341-points", "150 C", 'w',
     "ASTM D341 extrapolated beyond the two given temperatures" },
-  { "viscosity", RG_FLUID_CUSTOM, "kinematic-unit", "2 cSt", 'r',
-    "a kinematic viscosity in the dynamic-viscosity field" },
+  /* Source: definition of kinematic viscosity, ν = μ/ρ (any fluid
+   * mechanics text); 1 cSt = 1 mm²/s (NIST SP 811, 2008). */
+  { "viscosity", RG_FLUID_CUSTOM, "kinematic-unit", "2 cSt", 'a',
+    "a kinematic viscosity, converted with the fluid's density: 2 cSt · 998 kg/m³ ≈ 2 mPa·s" },
   /* From memory of Moody (1944), Trans. ASME 66: the chart's curves stop
    * at ε/D = 0.05; Colebrook (1939) was fitted for ε/D below about 0.05. */
   { "inner-diameter", RG_FLUID_WATER, "eps-over-d-above-0.1", "0.4 mm", 'r',
@@ -218,12 +224,15 @@ static const Special specials[] = {
     "a design flow below the lowest flow" },
   { "temperature", RG_FLUID_WATER, "bare-number-in-shown-unit", "30", 'a',
     "a number without unit is read in the unit the field shows (°C here)" },
+  { "length", RG_FLUID_WATER, "markup-characters", "<b>5</b> & m", 'r',
+    "text that would be markup is shown as typed" },
+  { "oil-expansion", RG_FLUID_OIL, "markup-characters", "<i>", 'r',
+    "text that would be markup is shown as typed" },
 };
 
 /* A spin button: where it is, its classes' outcomes (bare numbers). */
 typedef enum {
   SPIN_FITTING_COUNT,
-  SPIN_OIL_EXPANSION,
   SPIN_PREFERENCE,
 } SpinKind;
 
@@ -238,12 +247,26 @@ typedef struct {
 static const Spin spins[] = {
   /*                                                  z  n  N  i  h  t  e  u  k  a  l */
   { "fitting-count", SPIN_FITTING_COUNT,            "arrrrrrrrrr" },
-  { "oil-expansion", SPIN_OIL_EXPANSION,            "arrrrarrrrr" },
-  { "laminar-limit", SPIN_PREFERENCE,               "rrrrrrrrrrr" },
-  { "turbulent-limit", SPIN_PREFERENCE,             "rrrrrrrrrrr" },
-  { "velocity-limit", SPIN_PREFERENCE,              "rrrrrrrrrrr" },
-  { "gradient-limit", SPIN_PREFERENCE,              "rrrrrrrrrrr" },
   { "service-age-max", SPIN_PREFERENCE,             "rrrrrrrrrrr" },
+};
+
+/* A number of the preferences' page (the settings new projects start
+ * with): a field like the line panel's, whose row is a settings row; its
+ * key is its property.  Every class lies outside the row's range or is
+ * not a number. */
+typedef struct {
+  const char *property;
+  const char *unit;
+  const char *other_unit;
+  const char *expect;
+} PrefField;
+
+static const PrefField pref_fields[] = {
+  /*                                                  z  n  N  i  h  t  e  u  k  a  l */
+  { "re-laminar-max", "", "m",                      "rrrrrrrrrrr" },
+  { "re-turbulent-min", "", "m",                    "rrrrrrrrrrr" },
+  { "velocity-limit", "m/s", "kPa",                 "rrrrrrrrrrr" },
+  { "gradient-limit", "m/100 m", "m/s",             "rrrrrrrrrrr" },
 };
 
 /* The plain K of an "other loss" fitting: a bare number ≥ 0. */
@@ -254,7 +277,7 @@ static const char k_expect[] = "arrrrarrrrr";
   "## The application's fields\n\n" \
   "What the application does with every class of bad value typed into each of its " \
   "fields: the line panel's quantity fields, the plain K and the count of each fitting, " \
-  "the oil's expansion, and the numeric preferences. Written by " \
+  "the numbers of the preferences that new projects start with, and the slider's length. Written by " \
   "`xvfb-run -a dbus-run-session -- build/tests/test-ui-bad-input --markdown=docs/bad-input-app.md` " \
   "(with the environment of the `ui-bad-input` test in tests/meson.build); the same rows are " \
   "checked by that test (`meson test -C build ui-bad-input`), one test path a row: " \
@@ -263,8 +286,9 @@ static const char k_expect[] = "arrrrarrrrr";
   "[docs/bad-input.md](bad-input.md).\n\n" \
   "**refused**: the field gets the `error` style class and one sentence, shown under the " \
   "field's title and in its tooltip; the line keeps its last valid value; nothing enters " \
-  "the undo history. Spin buttons (fitting counts, the oil's expansion, the preferences) " \
-  "put their last value back and show the sentence the same way. " \
+  "the undo history. Spin buttons (fitting counts, the slider's length) " \
+  "put their last value back and show the sentence the same way. A refused preference keeps " \
+  "its key's value; no preference ever changes the open project. " \
   "**warning**: the value is taken (one undo step) and the warning stands above the " \
   "line's fields. **accepted**: the value is taken (one undo step), no warning. " \
   "Whatever the outcome, the run scans the results of every line, every cell of the " \
@@ -278,8 +302,11 @@ static const char k_expect[] = "arrrrarrrrr";
   "50 °C. Temperatures are typed in °C, so `0 C` and `1e-300 C` mean 0 °C. Spin buttons " \
   "that take whole numbers only let digits and a sign be typed: other text leaves them " \
   "empty, and empty is refused.\n\n" \
+  "Each field reads its value and checks its range as its row of the field tables says " \
+  "(docs/file-format.md); a refusal for the range names it in the unit the field shows. " \
   "A number typed without a unit is read in the unit the field shows (`30` in the " \
-  "temperature field shown in °C is 30 °C). Seawater is refused where pure water would " \
+  "temperature field shown in °C is 30 °C); the custom fluid's viscosity also takes a " \
+  "kinematic value, converted with its density. Seawater is refused where pure water would " \
   "boil at the line's pressure (its vapour pressure is about 2 % lower: a cautious " \
   "limit).\n\n"
 
@@ -450,11 +477,14 @@ assert_one_sentence (const char *text)
   g_assert_cmpuint (g_utf8_strlen (text, -1), <=, 300);
   g_assert_null (strchr (text, '\n'));
   first = g_utf8_get_char (text);
-  g_assert_true (g_unichar_isupper (first) || first == '\'' || first == 0x2018 || first == '"');
+  g_assert_true (g_unichar_isupper (first) || first == '\'' || first == 0x2018 || first == 0x201C
+                 || first == '"');
   g_assert_true (g_str_has_suffix (text, "."));
   g_assert_null (strstr (text, "(SI)"));
   g_assert_null (strstr (text, "(null)"));
-  g_assert_null (strchr (text, '%'));
+  /* A conversion left over from a format; "%" alone is a unit of
+   * gradient the parser lists. */
+  g_assert_false (g_regex_match_simple ("%[-+ #0-9.]*[sdgfu]", text, 0, 0));
 }
 
 /* The visible label of `root`'s tree whose text is `text`. */
@@ -591,6 +621,12 @@ test_line_row (gconstpointer data)
 
       g_assert_true (gtk_widget_has_css_class (field, "error"));
       assert_one_sentence (error);
+      /* A sentence that quotes a short text quotes exactly that text. */
+      if (row->text != NULL && strlen (row->text) < 40 && strstr (error, "“") != NULL)
+        {
+          g_autofree char *quoted = g_strdup_printf ("“%s”", row->text);
+          g_assert_nonnull (strstr (error, quoted));
+        }
       /* Beside the field: the row's subtitle and the tooltip say it. */
       g_assert_nonnull (arow);
       g_assert_cmpstr (adw_action_row_get_subtitle (ADW_ACTION_ROW (arow)), ==, error);
@@ -727,8 +763,6 @@ find_spin (GtkWidget  *root,
 
       if (spin->where == SPIN_FITTING_COUNT && has_index)
         return s;
-      if (spin->where == SPIN_OIL_EXPANSION && !has_index)
-        return s;
     }
   return NULL;
 }
@@ -785,7 +819,7 @@ test_spin_row (gconstpointer data)
     }
   else
     {
-      set_base (row->spin->where == SPIN_OIL_EXPANSION ? RG_FLUID_OIL : RG_FLUID_WATER);
+      set_base (RG_FLUID_WATER);
       spin = find_spin (GTK_WIDGET (the_panel ()), row->spin);
     }
   g_assert_nonnull (spin);
@@ -844,50 +878,107 @@ test_spin_row (gconstpointer data)
     }
 }
 
-/* The laminar limit typed above the turbulent one: both lie inside their
- * own ranges (2100 to 3000 overlap), but not in order. */
+/* --- numbers of the preferences ---------------------------------------- */
+
+typedef struct {
+  char *path;
+  const PrefField *field;
+  char *text;
+  char expect;
+} PrefRow;
+
+/* What the user sees of a preference's value: its key, the project open
+ * beside it, and nothing of the undo history. */
+static void
+test_pref_row (gconstpointer data)
+{
+  const PrefRow *row = data;
+  GSettings *settings = rugosa_application_get_settings (app);
+  RugosaProject *project = rugosa_window_get_project (win);
+  g_autofree char *project_before = NULL, *project_after = NULL;
+  RugosaPreferencesWindow *prefs;
+  RugosaQuantityEntry *entry;
+  const char *error;
+  double before, after;
+  char outcome;
+
+  set_base (RG_FLUID_WATER);
+  g_settings_reset (settings, row->field->property);
+  prefs = rugosa_preferences_window_new (settings);
+  entry = rugosa_settings_page_get_entry (rugosa_preferences_window_get_seed_page (prefs), row->field->property);
+  g_assert_nonnull (entry);
+  before = g_settings_get_double (settings, row->field->property);
+  project_before = rugosa_project_to_data (project, NULL);
+
+  rugosa_quantity_entry_commit_text (entry, row->text ? row->text : long_text);
+  ui_harness_drain ();
+
+  error = rugosa_quantity_entry_get_error_text (entry);
+  after = g_settings_get_double (settings, row->field->property);
+  project_after = rugosa_project_to_data (project, NULL);
+  outcome = error != NULL && after == before ? 'r' : 'a';
+  record (row->path + strlen ("/ui/bad-input/"), row->text, outcome, NULL, error);
+
+  g_assert_true (isfinite (after));
+  /* A preference never reaches the open project. */
+  g_assert_cmpstr (project_after, ==, project_before);
+  g_assert_false (rugosa_history_can_undo (rugosa_window_get_history (win)));
+  if (outcome != row->expect)
+    g_test_fail_printf ("%s: expected %s, got %s (%g -> %g)", row->path, outcome_name (row->expect),
+                        outcome_name (outcome), before, after);
+  else if (outcome == 'r')
+    {
+      GtkWidget *arow = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
+
+      g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (rugosa_quantity_entry_get_editable (entry)), "error"));
+      assert_one_sentence (error);
+      g_assert_nonnull (arow);
+      g_assert_cmpstr (adw_action_row_get_subtitle (ADW_ACTION_ROW (arow)), ==, error);
+    }
+  gtk_window_destroy (GTK_WINDOW (prefs));
+  g_settings_reset (settings, row->field->property);
+  ui_harness_drain ();
+}
+
+/* The end of laminar flow typed above the start of turbulent flow: both
+ * inside their rows' range, but not in order (rugosa_settings_check). */
 static void
 test_limits_out_of_order (void)
 {
   GSettings *settings = rugosa_application_get_settings (app);
+  RugosaSettings *ps = rugosa_project_get_settings (rugosa_window_get_project (win));
   RugosaPreferencesWindow *prefs;
-  GtkSpinButton *spin;
-  RugosaSettings *ps = NULL;
+  RugosaQuantityEntry *entry;
+  const char *error;
   double lam, turb, re_lam;
 
   set_base (RG_FLUID_WATER);
-  g_settings_reset (settings, "laminar-limit");
-  g_settings_set_double (settings, "turbulent-limit", 2500.0);
+  g_settings_reset (settings, "re-laminar-max");
+  g_settings_set_double (settings, "re-turbulent-min", 2500.0);
   ui_harness_drain ();
   prefs = rugosa_preferences_window_new (settings);
-  spin = find_pref_spin (GTK_WIDGET (prefs), settings, "laminar-limit");
-  g_assert_nonnull (spin);
-  ps = rugosa_project_get_settings (rugosa_window_get_project (win));
-  g_object_get (ps, "re-laminar-max", &re_lam, NULL);
+  entry = rugosa_settings_page_get_entry (rugosa_preferences_window_get_seed_page (prefs), "re-laminar-max");
+  g_assert_nonnull (entry);
+  re_lam = rugosa_settings_get_double (ps, "re-laminar-max");
 
-  gtk_editable_set_text (GTK_EDITABLE (spin), "2900");
-  gtk_spin_button_update (spin);
+  rugosa_quantity_entry_commit_text (entry, "2900");
   ui_harness_drain ();
 
-  lam = g_settings_get_double (settings, "laminar-limit");
-  turb = g_settings_get_double (settings, "turbulent-limit");
-  record ("laminar-limit/above-turbulent", "2900", lam < turb ? 'r' : 'a',
-          "inside its own range, but above the turbulent limit of 2500",
-          gtk_widget_get_tooltip_text (GTK_WIDGET (spin)));
+  lam = g_settings_get_double (settings, "re-laminar-max");
+  turb = g_settings_get_double (settings, "re-turbulent-min");
+  error = rugosa_quantity_entry_get_error_text (entry);
+  record ("re-laminar-max/above-turbulent", "2900", lam < turb ? 'r' : 'a',
+          "inside its own range, but above the start of turbulent flow, 2500", error);
   g_assert_cmpfloat (lam, <, turb);
-  g_assert_cmpfloat (gtk_spin_button_get_value (spin), ==, lam);
-  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (spin), "error"));
-  assert_one_sentence (gtk_widget_get_tooltip_text (GTK_WIDGET (spin)));
-  {
-    double after;
-    g_object_get (ps, "re-laminar-max", &after, NULL);
-    g_assert_cmpfloat (after, ==, re_lam);
-  }
+  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (rugosa_quantity_entry_get_editable (entry)), "error"));
+  assert_one_sentence (error);
+  /* The open project keeps its own limits. */
+  g_assert_cmpfloat (rugosa_settings_get_double (ps, "re-laminar-max"), ==, re_lam);
   assert_nothing_non_finite ();
 
   gtk_window_destroy (GTK_WINDOW (prefs));
-  g_settings_reset (settings, "laminar-limit");
-  g_settings_reset (settings, "turbulent-limit");
+  g_settings_reset (settings, "re-laminar-max");
+  g_settings_reset (settings, "re-turbulent-min");
   ui_harness_drain ();
 }
 
@@ -898,7 +989,7 @@ test_pictures (void)
 {
   GSettings *settings = rugosa_application_get_settings (app);
   RugosaPreferencesWindow *prefs;
-  GtkSpinButton *spin;
+  RugosaQuantityEntry *limit;
   GtkEntry *k;
   GtkWidget *expander;
 
@@ -935,13 +1026,22 @@ test_pictures (void)
   prefs = rugosa_preferences_window_new (settings);
   gtk_window_set_default_size (GTK_WINDOW (prefs), 700, 900);
   gtk_window_present (GTK_WINDOW (prefs));
-  spin = find_pref_spin (GTK_WIDGET (prefs), settings, "velocity-limit");
-  adw_preferences_window_set_visible_page (ADW_PREFERENCES_WINDOW (prefs),
-                                           ADW_PREFERENCES_PAGE (gtk_widget_get_ancestor (GTK_WIDGET (spin), ADW_TYPE_PREFERENCES_PAGE)));
-  gtk_editable_set_text (GTK_EDITABLE (spin), "fast");
-  gtk_spin_button_update (spin);
+  limit = rugosa_settings_page_get_entry (rugosa_preferences_window_get_seed_page (prefs), "velocity-limit");
+  g_assert_false (rugosa_quantity_entry_commit_text (limit, "fast"));
   ui_harness_drain ();
-  g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (spin), "error"));
+  {
+    /* Scroll the page so that the refused field is in sight. */
+    GtkWidget *scroller = gtk_widget_get_ancestor (GTK_WIDGET (limit), GTK_TYPE_SCROLLED_WINDOW);
+    graphene_point_t at;
+
+    gtk_test_widget_wait_for_draw (GTK_WIDGET (prefs));
+    g_assert_nonnull (scroller);
+    g_assert_true (gtk_widget_compute_point (GTK_WIDGET (limit), gtk_scrolled_window_get_child (GTK_SCROLLED_WINDOW (scroller)),
+                                             &GRAPHENE_POINT_INIT (0, 0), &at));
+    gtk_adjustment_set_value (gtk_scrolled_window_get_vadjustment (GTK_SCROLLED_WINDOW (scroller)), at.y - 200);
+    ui_harness_drain ();
+  }
+  g_assert_nonnull (rugosa_quantity_entry_get_error_text (limit));
   ui_harness_save_png (GTK_WIDGET (prefs), "bad-input-preferences.png");
   gtk_window_destroy (GTK_WINDOW (prefs));
   ui_harness_drain ();
@@ -996,7 +1096,18 @@ add_rows (void)
         row->expect = spins[s].expect[c];
         g_test_add_data_func (row->path, row, test_spin_row);
       }
-  g_test_add_func ("/ui/bad-input/laminar-limit/above-turbulent", test_limits_out_of_order);
+  for (guint f = 0; f < G_N_ELEMENTS (pref_fields); f++)
+    for (int c = 0; c < N_CLASSES; c++)
+      {
+        PrefRow *row = g_new0 (PrefRow, 1);
+
+        row->path = g_strdup_printf ("/ui/bad-input/%s/%s", pref_fields[f].property, class_ids[c]);
+        row->field = &pref_fields[f];
+        row->text = class_text (c, pref_fields[f].unit, pref_fields[f].other_unit);
+        row->expect = pref_fields[f].expect[c];
+        g_test_add_data_func (row->path, row, test_pref_row);
+      }
+  g_test_add_func ("/ui/bad-input/re-laminar-max/above-turbulent", test_limits_out_of_order);
   g_test_add_func ("/ui/bad-input/pictures", test_pictures);
 }
 

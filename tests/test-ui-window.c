@@ -357,10 +357,11 @@ check_picker (RugosaLinePanel *panel,
 static void
 test_picker_search_reopens (void)
 {
-  static const struct { const char *row, *expander; } pickers[] = {
-    { "Pipe size", NULL },
-    { "Material", NULL },
-    { "Add", "Fittings and other losses" },
+  /* The choosers' titles are their rows' labels (the line field table). */
+  const struct { const char *row, *expander; } pickers[] = {
+    { rugosa_field_label (rugosa_field_find ("pipe-designation")), NULL },
+    { rugosa_field_label (rugosa_field_find ("material-id")), NULL },
+    { "Add", rugosa_field_label (rugosa_field_find ("fittings")) },
   };
   RugosaWindow *win = ui_harness_open_demo (app);
   RugosaLinePanel *panel = select_line (win, 0);

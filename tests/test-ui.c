@@ -11,6 +11,7 @@
 #include "config.h"
 
 #include "core/units.h"
+#include "model/rugosa-units.h"
 
 #include <adwaita.h>
 #include <errno.h>
@@ -21,7 +22,6 @@
 #include "rugosa-application.h"
 #include "rugosa-canvas.h"
 #include "rugosa-line-panel.h"
-#include "rugosa-preferences-window.h"
 #include "rugosa-quantity-entry.h"
 #include "rugosa-readout.h"
 #include "rugosa-results-table.h"
@@ -223,12 +223,14 @@ test_bare_number_display_unit (void)
     {
       RugosaQuantityEntry *entry = rugosa_line_panel_get_entry (panel, cases[i].field);
       const char *unit = rugosa_quantity_entry_get_unit (entry);
+      const RugosaField *row = rugosa_quantity_entry_get_field (entry);
       double expected = 0.0;
 
       g_assert_nonnull (unit);
+      g_assert_nonnull (row);
       /* The expected SI value through the core's own conversion of the
        * field's display unit (the conversions are tested in test-units). */
-      g_assert_cmpint (rg_units_to_si (rugosa_quantity_entry_get_quantity (entry),
+      g_assert_cmpint (rg_units_to_si (rugosa_display_info (row->display)->quantity,
                                        g_ascii_strtod (cases[i].text, NULL), unit,
                                        &expected, NULL), ==, RG_OK);
       g_assert_true (rugosa_quantity_entry_commit_text (entry, cases[i].text));
@@ -441,8 +443,7 @@ test_probe_and_keys (void)
   /* The marker's tooltip gives the full readout. */
   {
     g_autofree char *tip = rugosa_readout_line_full (rugosa_window_get_project (win),
-                                                     rugosa_project_get_line (rugosa_window_get_project (win), pos),
-                                                     rugosa_application_get_settings (app));
+                                                     rugosa_project_get_line (rugosa_window_get_project (win), pos));
     g_assert_nonnull (strstr (tip, "Reynolds number"));
     g_assert_nonnull (strstr (tip, "Friction factor"));
     g_assert_nonnull (strstr (tip, "Head loss"));
@@ -458,22 +459,30 @@ test_probe_and_keys (void)
   ui_harness_close_window (win);
 }
 
+/* The project's unit for a quantity, changed as its settings window
+ * does (one undo step), reaches the panel's fields. */
 static void
-test_units_preference (void)
+test_project_flow_unit (void)
 {
   RugosaWindow *win = ui_harness_open_demo (app);
-  GSettings *settings = rugosa_application_get_settings (app);
+  RugosaProject *project = rugosa_window_get_project (win);
   guint pos = find_line (win, -1, FALSE);
   RugosaLinePanel *panel = select_line (win, pos);
   RugosaQuantityEntry *flow = rugosa_line_panel_get_entry (panel, "flow-design");
+  GVariantBuilder b;
   const char *text;
 
-  g_settings_set_string (settings, "unit-flow", "gpm");
+  g_variant_builder_init (&b, G_VARIANT_TYPE ("a{ss}"));
+  g_variant_builder_add (&b, "{ss}", "flow", "gpm");
+  rugosa_history_set (rugosa_window_get_history (win), rugosa_project_get_settings (project),
+                      "unit-overrides", g_variant_builder_end (&b), NULL);
   ui_harness_drain ();
   text = gtk_editable_get_text (rugosa_quantity_entry_get_editable (flow));
   g_assert_true (g_str_has_suffix (text, " gpm"));
-  g_settings_reset (settings, "unit-flow");
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
   ui_harness_drain ();
+  text = gtk_editable_get_text (rugosa_quantity_entry_get_editable (flow));
+  g_assert_false (g_str_has_suffix (text, " gpm"));
   ui_harness_close_window (win);
 }
 
@@ -922,37 +931,6 @@ test_outputs (void)
 }
 
 static void
-test_unit_system (void)
-{
-  GSettings *settings = rugosa_application_get_settings (app);
-  RugosaPreferencesWindow *prefs = rugosa_preferences_window_new (settings);
-  g_autofree char *flow = NULL, *temp = NULL, *system = NULL;
-
-  /* Choosing a system sets every quantity's unit to that system's. */
-  g_settings_set_string (settings, "unit-system", "us-customary");
-  ui_harness_drain ();
-  flow = g_settings_get_string (settings, "unit-flow");
-  temp = g_settings_get_string (settings, "unit-temperature");
-  g_assert_cmpstr (flow, ==, "gpm");
-  g_assert_cmpstr (temp, ==, "F");
-
-  /* Changing one unit by hand makes the system "chosen one by one". */
-  g_settings_set_string (settings, "unit-flow", "L/s");
-  ui_harness_drain ();
-  system = g_settings_get_string (settings, "unit-system");
-  g_assert_cmpstr (system, ==, "mixed");
-
-  gtk_window_destroy (GTK_WINDOW (prefs));
-  /* Back to SI for the tests that follow. */
-  rugosa_preferences_apply_unit_system (settings, "si");
-  g_settings_set_string (settings, "unit-system", "si");
-  ui_harness_drain ();
-  g_clear_pointer (&flow, g_free);
-  flow = g_settings_get_string (settings, "unit-flow");
-  g_assert_cmpstr (flow, ==, "L/s");
-}
-
-static void
 test_screenshot (void)
 {
   RugosaWindow *win = ui_harness_open_demo (app);
@@ -1015,8 +993,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/history/undo-redo", test_undo_redo);
   g_test_add_func ("/ui/files/autosave", test_autosave);
   g_test_add_func ("/ui/canvas/probe-and-keys", test_probe_and_keys);
-  g_test_add_func ("/ui/preferences/flow-unit", test_units_preference);
-  g_test_add_func ("/ui/preferences/unit-system", test_unit_system);
+  g_test_add_func ("/ui/project-settings/flow-unit", test_project_flow_unit);
   g_test_add_func ("/ui/files/export-print-csv", test_outputs);
   g_test_add_func ("/ui/files/recovery", test_recovery);
   g_test_add_func ("/ui/files/recovery-keeps-copy", test_recovery_keeps_copy);

@@ -20,7 +20,6 @@ struct _RugosaCanvas
 
   /* borrowed references */
   RugosaProject      *project;
-  GSettings          *settings;
   GtkSingleSelection *selection;
 
   /* owned references */
@@ -94,13 +93,11 @@ _rugosa_canvas_selection_changed (RugosaCanvas *self)
 
 void
 rugosa_canvas_set_project (RugosaCanvas  *self,
-                           RugosaProject *project,
-                           GSettings     *settings)
+                           RugosaProject *project)
 {
   g_return_if_fail (RUGOSA_IS_CANVAS (self));
 
   self->project = project;
-  self->settings = settings;
   rugosa_canvas_refresh (self);
 }
 
@@ -376,7 +373,7 @@ rugosa_canvas_query_tooltip (GtkWidget  *widget,
   if (hit < 0 || hit >= (int) self->input->n_lines)
     return FALSE;
   line = rugosa_project_get_line (self->project, self->input->line_index[hit]);
-  text = rugosa_readout_line_full (self->project, line, self->settings);
+  text = rugosa_readout_line_full (self->project, line);
   gtk_tooltip_set_text (tooltip, text);
   return TRUE;
 }

@@ -18,8 +18,7 @@ G_DECLARE_FINAL_TYPE (RugosaCanvas, rugosa_canvas, RUGOSA, CANVAS, GtkWidget)
 
 GtkWidget  *rugosa_canvas_new             (void);
 void        rugosa_canvas_set_project     (RugosaCanvas       *self,
-                                           RugosaProject      *project,
-                                           GSettings          *settings);
+                                           RugosaProject      *project);
 void        rugosa_canvas_set_selection   (RugosaCanvas       *self,
                                            GtkSingleSelection *selection);
 /* Rebuild the overlay from the project's results (cheap; the background is

@@ -11,18 +11,12 @@
 #include "core/fittings.h"
 #include "core/fluid.h"
 #include "model/rugosa-display.h"
+#include "model/rugosa-enums.h"
+#include "model/rugosa-fields.h"
+#include "rugosa-field-choices.h"
 #include "rugosa-line-panel.h"
 #include "rugosa-readout.h"
 #include "rugosa-spin-guard.h"
-
-/* The model stores roughness growth per year; the units parser works in
- * metres per second.  A Julian year of 365.25 days (IAU), the year
- * rg_units uses for "per year". */
-#define SECONDS_PER_YEAR (365.25 * 86400.0)
-
-/* The largest plain K taken, the bound rugosa-cli's --fitting K=… keeps
- * (docs/bad-input.md): far above any single fitting's published K. */
-#define K_PLAIN_MAX 10000.0
 
 struct _RugosaLinePanel
 {
@@ -34,36 +28,20 @@ struct _RugosaLinePanel
   GtkBox           *warnings_box;
   GtkLabel         *warnings_label;
   AdwComboRow      *fluid_kind_row;
-  AdwActionRow     *salinity_row;
-  AdwActionRow     *temperature_row;
-  AdwActionRow     *pressure_row;
-  AdwActionRow     *density_row;
-  AdwActionRow     *viscosity_row;
-  AdwActionRow     *oil_t1_row;
-  AdwActionRow     *oil_nu1_row;
-  AdwActionRow     *oil_t2_row;
-  AdwActionRow     *oil_nu2_row;
-  AdwActionRow     *oil_density_ref_row;
-  AdwActionRow     *oil_t_ref_row;
-  AdwActionRow     *oil_expansion_row;
-  GtkSpinButton    *oil_expansion_spin;
   AdwActionRow     *fluid_props_row;
   GtkDropDown      *material_dropdown;
   GtkDropDown      *aging_dropdown;
   GtkDropDown      *pipe_dropdown;
-  AdwActionRow     *roughness_row;
-  AdwActionRow     *aging_rate_row;
-  AdwActionRow     *inner_diameter_row;
   AdwExpanderRow   *fittings_row;
   GtkDropDown      *fitting_add_dropdown;
 
   /* borrowed references */
   RugosaProject *project;
-  GSettings     *settings;
 
   /* owned references */
   RugosaLine *line;
   GHashTable *entries;       /* property name -> RugosaQuantityEntry */
+  GHashTable *choosers;      /* property name -> the row choosing it */
   GPtrArray  *fitting_rows;  /* rows added to fittings_row */
   gboolean    updating;      /* set while widgets follow the line */
 };
@@ -77,42 +55,6 @@ enum {
 
 static guint signals[N_SIGNALS];
 
-/* The display unit of each edited quantity: a GSettings key, or a fixed
- * spelling where the preferences offer no choice. */
-static const struct {
-  const char *property;
-  const char *settings_key;
-  const char *fixed_unit;
-} entry_units[] = {
-  { "temperature", "unit-temperature", NULL },
-  { "pressure", "unit-pressure", NULL },
-  { "salinity", NULL, "g/kg" },
-  { "density", "unit-density", NULL },
-  { "viscosity", "unit-viscosity", NULL },
-  { "oil-t1", "unit-temperature", NULL },
-  { "oil-nu1", NULL, "cSt" },
-  { "oil-t2", "unit-temperature", NULL },
-  { "oil-nu2", NULL, "cSt" },
-  { "oil-density-ref", "unit-density", NULL },
-  { "oil-t-ref", "unit-temperature", NULL },
-  { "roughness", "unit-roughness", NULL },
-  { "aging-rate", NULL, "mm/yr" },
-  { "inner-diameter", "unit-diameter", NULL },
-  { "length", "unit-length", NULL },
-  { "elevation", "unit-length", NULL },
-  { "flow-design", "unit-flow", NULL },
-  { "flow-minimum", "unit-flow", NULL },
-  { "flow-maximum", "unit-flow", NULL },
-};
-
-static const char *fluid_titles[RG_FLUID_N_KINDS] = {
-  [RG_FLUID_WATER] = N_("Water (IAPWS-IF97)"),
-  [RG_FLUID_CUSTOM] = N_("Given density and viscosity"),
-  [RG_FLUID_SEAWATER] = N_("Seawater (Sharqawy et al. 2010)"),
-  [RG_FLUID_OIL] = N_("Petroleum oil (ASTM D341)"),
-  [RG_FLUID_AIR] = N_("Air (ideal gas)"),
-};
-
 GtkWidget *
 rugosa_line_panel_new (void)
 {
@@ -125,6 +67,15 @@ rugosa_line_panel_get_entry (RugosaLinePanel *self,
 {
   g_return_val_if_fail (RUGOSA_IS_LINE_PANEL (self), NULL);
   return g_hash_table_lookup (self->entries, property);
+}
+
+const char *
+rugosa_line_panel_get_warnings (RugosaLinePanel *self)
+{
+  g_return_val_if_fail (RUGOSA_IS_LINE_PANEL (self), NULL);
+  if (!gtk_widget_get_visible (GTK_WIDGET (self->warnings_box)))
+    return NULL;
+  return gtk_label_get_text (self->warnings_label);
 }
 
 const char *
@@ -151,18 +102,6 @@ _rugosa_line_panel_emit (RugosaLinePanel *self,
   g_signal_emit (self, signals[EDIT_LINE], 0, self->line, property, v);
 }
 
-/* The model's value of a double property, in the entry's SI. */
-static double
-_rugosa_line_panel_si_of (RugosaLinePanel *self,
-                          const char      *property)
-{
-  double v = rugosa_line_get_double (self->line, property);
-
-  if (g_strcmp0 (property, "aging-rate") == 0)
-    v /= SECONDS_PER_YEAR;
-  return v;
-}
-
 /* The project file keeps lowest ≤ design ≤ highest flow (0: not given)
  * and refuses to read anything else, so the panel does not take a flow
  * out of that order.  Returns the sentence, or NULL when in order. */
@@ -175,27 +114,26 @@ _rugosa_line_panel_flow_order (RugosaLinePanel     *self,
   double design = rugosa_line_get_double (self->line, "flow-design");
   double lo = rugosa_line_get_double (self->line, "flow-minimum");
   double hi = rugosa_line_get_double (self->line, "flow-maximum");
-  const char *unit = rugosa_quantity_entry_get_unit (entry);
   g_autofree char *shown = NULL;
 
   if (g_strcmp0 (property, "flow-minimum") == 0 && v > 0.0 && v > design)
     {
-      shown = rugosa_display_format_screen (RG_QTY_FLOW, design, unit);
+      shown = rugosa_quantity_entry_format (entry, design);
       return g_strdup_printf (_("The lowest flow must not exceed the design flow, %s."), shown);
     }
   if (g_strcmp0 (property, "flow-maximum") == 0 && v > 0.0 && v < design)
     {
-      shown = rugosa_display_format_screen (RG_QTY_FLOW, design, unit);
+      shown = rugosa_quantity_entry_format (entry, design);
       return g_strdup_printf (_("The highest flow must not be below the design flow, %s."), shown);
     }
   if (g_strcmp0 (property, "flow-design") == 0 && lo > 0.0 && v < lo)
     {
-      shown = rugosa_display_format_screen (RG_QTY_FLOW, lo, unit);
+      shown = rugosa_quantity_entry_format (entry, lo);
       return g_strdup_printf (_("The design flow must not be below the lowest flow, %s."), shown);
     }
   if (g_strcmp0 (property, "flow-design") == 0 && hi > 0.0 && v > hi)
     {
-      shown = rugosa_display_format_screen (RG_QTY_FLOW, hi, unit);
+      shown = rugosa_quantity_entry_format (entry, hi);
       return g_strdup_printf (_("The design flow must not exceed the highest flow, %s."), shown);
     }
   return NULL;
@@ -203,33 +141,16 @@ _rugosa_line_panel_flow_order (RugosaLinePanel     *self,
 
 static void
 _rugosa_line_panel_committed (RugosaQuantityEntry *entry,
-                              double               si,
+                              double               value,
                               RugosaLinePanel     *self)
 {
   const char *property = gtk_widget_get_name (GTK_WIDGET (entry));
-  double per_si = g_strcmp0 (property, "aging-rate") == 0 ? SECONDS_PER_YEAR : 1.0;
-  double v = si * per_si;
-  GParamSpec *pspec = self->line ? g_object_class_find_property (G_OBJECT_GET_CLASS (self->line), property) : NULL;
 
-  /* Outside the range the file format keeps: say so in the field's own
-   * words and unit, before the line is touched. */
-  if (G_IS_PARAM_SPEC_DOUBLE (pspec)
-      && (v < G_PARAM_SPEC_DOUBLE (pspec)->minimum || v > G_PARAM_SPEC_DOUBLE (pspec)->maximum))
-    {
-      int q = rugosa_quantity_entry_get_quantity (entry);
-      const char *unit = rugosa_quantity_entry_get_unit (entry);
-      GtkWidget *row = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
-      const char *title = row ? adw_preferences_row_get_title (ADW_PREFERENCES_ROW (row)) : property;
-      g_autofree char *lo = rugosa_display_format_screen (q, G_PARAM_SPEC_DOUBLE (pspec)->minimum / per_si, unit);
-      g_autofree char *hi = rugosa_display_format_screen (q, G_PARAM_SPEC_DOUBLE (pspec)->maximum / per_si, unit);
-      g_autofree char *why = g_strdup_printf (_("%s must lie between %s and %s."), title, lo, hi);
-
-      rugosa_quantity_entry_set_error (entry, why);
-      return;
-    }
+  /* The entry has read the text and checked the row's range; the flows'
+   * order is a relation between rows. */
   if (self->line && g_str_has_prefix (property, "flow-"))
     {
-      g_autofree char *why = _rugosa_line_panel_flow_order (self, entry, property, v);
+      g_autofree char *why = _rugosa_line_panel_flow_order (self, entry, property, value);
 
       if (why != NULL)
         {
@@ -237,19 +158,7 @@ _rugosa_line_panel_committed (RugosaQuantityEntry *entry,
           return;
         }
     }
-  _rugosa_line_panel_emit (self, property, g_variant_new_double (v));
-}
-
-static void
-_rugosa_line_panel_expansion_changed (GtkSpinButton   *spin,
-                                      RugosaLinePanel *self)
-{
-  double v = gtk_spin_button_get_value (spin);
-
-  /* A refused text put back re-emits the old value: not an edit. */
-  if (self->line == NULL || v == rugosa_line_get_double (self->line, "oil-expansion"))
-    return;
-  _rugosa_line_panel_emit (self, "oil-expansion", g_variant_new_double (v));
+  _rugosa_line_panel_emit (self, property, g_variant_new_double (value));
 }
 
 static void
@@ -257,9 +166,9 @@ _rugosa_line_panel_fluid_kind_changed (AdwComboRow     *row,
                                        GParamSpec      *pspec,
                                        RugosaLinePanel *self)
 {
-  guint kind = adw_combo_row_get_selected (row);
+  int kind = rugosa_field_choice_value (RUGOSA_TYPE_FLUID_KIND, adw_combo_row_get_selected (row));
 
-  if (kind >= RG_FLUID_N_KINDS)
+  if (kind < 0)
     return;
   _rugosa_line_panel_emit (self, "fluid-kind", g_variant_new_int32 (kind));
 }
@@ -433,17 +342,20 @@ _rugosa_line_panel_fitting_k (GtkEntry        *entry,
   /* A plain K is a bare number: no unit to parse. */
   while (end && *end == ' ')
     end++;
-  if (end == text || (end && *end != '\0') || !isfinite (k) || k < 0.0 || k > K_PLAIN_MAX)
+  if (end == text || (end && *end != '\0') || !isfinite (k) || k < 0.0 || k > RUGOSA_FITTING_K_MAX)
     {
       GtkWidget *row = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
       g_autofree char *echo = g_utf8_strlen (text, -1) > 24 ? g_utf8_substring (text, 0, 24) : g_strdup (text);
       g_autofree char *why = NULL;
+      g_autofree char *most = rugosa_display_significant_screen (RUGOSA_FITTING_K_MAX, 4);
 
       if (end == text && *g_strstrip (echo) == '\0')
-        why = g_strdup (_("The loss coefficient is empty: type a number K from 0 to 10000."));
+        /* TRANSLATORS: %s is the largest K taken, e.g. "10000" */
+        why = g_strdup_printf (_("The loss coefficient is empty: type a number K from 0 to %s."), most);
       else
-        why = g_strdup_printf (_("'%s%s' is not a loss coefficient: type a number K from 0 to 10000."),
-                               echo, g_utf8_strlen (text, -1) > 24 ? "…" : "");
+        /* TRANSLATORS: the text typed, "…" when cut short, and the largest K taken */
+        why = g_strdup_printf (_("'%s%s' is not a loss coefficient: type a number K from 0 to %s."),
+                               echo, g_utf8_strlen (text, -1) > 24 ? "…" : "", most);
 
       /* The sentence sits under the row's title and in the tooltip. */
       gtk_widget_add_css_class (GTK_WIDGET (entry), "error");
@@ -502,7 +414,10 @@ _rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
   while (g_variant_iter_next (&iter, "(&sdd)", &id, &k, &count))
     {
       GtkWidget *row = adw_action_row_new ();
-      GtkWidget *spin = gtk_spin_button_new_with_range (0, 999, 1);
+      GtkWidget *spin = gtk_spin_button_new_with_range (0, RUGOSA_FITTING_COUNT_MAX, 1);
+
+      /* A refusal under the title echoes the text typed: plain text. */
+      adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (row), FALSE);
       GtkWidget *remove = gtk_button_new_from_icon_name ("user-trash-symbolic");
       const RgFitting *fitting = NULL;
 
@@ -551,10 +466,16 @@ _rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
 
     if (res && res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
       {
-        g_autofree char *ksum = rugosa_display_significant_screen (res->points[RUGOSA_FLOW_DESIGN].minor_loss_k_total, 3);
-        sub = g_strdup_printf (ngettext ("%d item, ΣK %s at the design flow",
-                                         "%d items, ΣK %s at the design flow", (int) total),
-                               (int) total, ksum);
+        const RugosaOperatingPoint *p = &res->points[RUGOSA_FLOW_DESIGN];
+        g_autofree char *ksum = rugosa_display_significant_screen (p->minor_loss_k_total, 3);
+        g_autofree char *loss = rugosa_readout_format (self->project, RUGOSA_DISPLAY_HEAD, p->result.head_loss_minor_m);
+
+        /* TRANSLATORS: the fittings of a line: their count, the sum of
+         * their loss coefficients and the head they cost, e.g.
+         * "3 items, ΣK 1.45, loss 0.312 m at the design flow" */
+        sub = g_strdup_printf (ngettext ("%d item, ΣK %s, loss %s at the design flow",
+                                         "%d items, ΣK %s, loss %s at the design flow", (int) total),
+                               (int) total, ksum, loss);
       }
     else
       sub = g_strdup_printf (ngettext ("%d item", "%d items", (int) total), (int) total);
@@ -562,47 +483,33 @@ _rugosa_line_panel_fill_fittings (RugosaLinePanel *self)
   }
 }
 
+/* Each field is shown in the project's unit for its row's quantity. */
 static void
 _rugosa_line_panel_update_units (RugosaLinePanel *self)
 {
-  for (guint i = 0; i < G_N_ELEMENTS (entry_units); i++)
-    {
-      RugosaQuantityEntry *e = g_hash_table_lookup (self->entries, entry_units[i].property);
-      g_autofree char *unit = NULL;
+  GHashTableIter iter;
+  const char *property;
+  RugosaQuantityEntry *entry;
+  RugosaSettings *ps = self->project ? rugosa_project_get_settings (self->project) : NULL;
 
-      if (e == NULL)
+  g_hash_table_iter_init (&iter, self->entries);
+  while (g_hash_table_iter_next (&iter, (gpointer *) &property, (gpointer *) &entry))
+    {
+      const RugosaField *row = rugosa_field_find (property);
+
+      if (row == NULL)
         continue;
-      if (entry_units[i].settings_key && self->settings)
-        unit = g_settings_get_string (self->settings, entry_units[i].settings_key);
-      rugosa_quantity_entry_set_unit (e, unit ? unit : entry_units[i].fixed_unit);
-    }
-}
-
-static void
-_rugosa_line_panel_settings_changed (GSettings       *settings,
-                                     const char      *key,
-                                     RugosaLinePanel *self)
-{
-  if (g_str_has_prefix (key, "unit-"))
-    {
-      _rugosa_line_panel_update_units (self);
-      rugosa_line_panel_refresh (self);
+      rugosa_quantity_entry_set_unit (entry, ps ? rugosa_settings_get_unit (ps, row->display) : NULL);
     }
 }
 
 void
 rugosa_line_panel_set_context (RugosaLinePanel *self,
-                               RugosaProject   *project,
-                               GSettings       *settings)
+                               RugosaProject   *project)
 {
   g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
 
-  if (self->settings)
-    g_signal_handlers_disconnect_by_data (self->settings, self);
   self->project = project;
-  self->settings = settings;
-  if (settings)
-    g_signal_connect_object (settings, "changed", G_CALLBACK (_rugosa_line_panel_settings_changed), self, 0);
   _rugosa_line_panel_update_units (self);
 }
 
@@ -649,6 +556,110 @@ _rugosa_line_panel_select_catalogs (RugosaLinePanel *self)
   _rugosa_line_panel_select (self->pipe_dropdown, pipe, rg_pipe_count (), _pipe_at);
 }
 
+/* The row choosing a catalog entry for `row` (a custom value such as the
+ * roughness), when that chooser has an entry chosen; else NULL. */
+static const RugosaField *
+_rugosa_line_panel_chosen_partner (RugosaLinePanel   *self,
+                                   const RugosaField *row)
+{
+  guint n;
+  const RugosaField *rows = rugosa_line_fields (&n);
+
+  for (guint i = 0; i < n; i++)
+    if (rows[i].kind == RUGOSA_FIELD_CATALOG && g_strcmp0 (rows[i].partner, row->property) == 0)
+      {
+        g_autofree char *id = NULL;
+
+        g_object_get (self->line, rows[i].property, &id, NULL);
+        return id != NULL ? &rows[i] : NULL;
+      }
+  return NULL;
+}
+
+static void
+_rugosa_line_panel_mark_chooser (GtkWidget  *row,
+                                 const char *why)
+{
+  GtkWidget *suffix = g_object_get_data (G_OBJECT (row), "rugosa-chooser");
+
+  /* The model's sentence may hold "<" or "&": plain text. */
+  adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (row), FALSE);
+  adw_action_row_set_subtitle (ADW_ACTION_ROW (row), why ? why : "");
+  if (why != NULL)
+    gtk_widget_add_css_class (row, "field-error");
+  else
+    gtk_widget_remove_css_class (row, "field-error");
+  if (suffix != NULL && why != NULL)
+    gtk_widget_add_css_class (suffix, "error");
+  else if (suffix != NULL)
+    gtk_widget_remove_css_class (suffix, "error");
+}
+
+/* An evaluation error names the inputs it is about (its subjects): the
+ * fields of those inputs are marked with the sentence, and where a custom
+ * value comes from a chosen catalog entry, its chooser is.  Marks of the
+ * last call that no longer apply go. */
+void
+rugosa_line_panel_mark_subjects (RugosaLinePanel *self,
+                                 RgSubjects       subjects,
+                                 const char      *why)
+{
+  g_autoptr (GHashTable) marked = g_hash_table_new (g_str_hash, g_str_equal);
+  GHashTableIter iter;
+  const char *property;
+  gpointer widget;
+
+  g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
+  if (why == NULL)
+    subjects = 0;
+  for (guint i = 0; subjects != 0 && self->line != NULL; i++)
+    {
+      const RugosaField *row = rugosa_field_for_subject (subjects, i);
+      const RugosaField *partner;
+
+      if (row == NULL)
+        break;
+      if ((partner = _rugosa_line_panel_chosen_partner (self, row)) != NULL)
+        row = partner;
+      g_hash_table_add (marked, (gpointer) row->property);
+    }
+
+  g_hash_table_iter_init (&iter, self->entries);
+  while (g_hash_table_iter_next (&iter, (gpointer *) &property, &widget))
+    rugosa_quantity_entry_set_problem (widget, g_hash_table_contains (marked, property) ? why : NULL);
+  g_hash_table_iter_init (&iter, self->choosers);
+  while (g_hash_table_iter_next (&iter, (gpointer *) &property, &widget))
+    {
+      gboolean mark = g_hash_table_contains (marked, property);
+
+      if (mark || gtk_widget_has_css_class (widget, "field-error"))
+        _rugosa_line_panel_mark_chooser (widget, mark ? why : NULL);
+    }
+}
+
+/* The error of the line, or of its first operating point that failed. */
+static void
+_rugosa_line_panel_mark_results (RugosaLinePanel         *self,
+                                 const RugosaLineResults *res)
+{
+  RgSubjects subjects = 0;
+  const char *why = NULL;
+
+  if (res != NULL && !res->ok)
+    {
+      subjects = res->error_subjects;
+      why = res->error;
+    }
+  else if (res != NULL)
+    for (int k = 0; k < RUGOSA_N_FLOWS && why == NULL; k++)
+      if (res->points[k].present && !res->points[k].ok)
+        {
+          subjects = res->points[k].error_subjects;
+          why = res->points[k].error;
+        }
+  rugosa_line_panel_mark_subjects (self, subjects, why);
+}
+
 void
 rugosa_line_panel_refresh (RugosaLinePanel *self)
 {
@@ -666,6 +677,7 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
     return;
 
   self->updating = TRUE;
+  _rugosa_line_panel_update_units (self);
 
   if (!gtk_widget_has_focus (GTK_WIDGET (self->name_entry))
       || g_strcmp0 (gtk_editable_get_text (GTK_EDITABLE (self->name_entry)), rugosa_line_get_name (self->line)) != 0)
@@ -677,78 +689,63 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
   }
 
   kind = rugosa_line_get_fluid_kind (self->line);
-  adw_combo_row_set_selected (self->fluid_kind_row, kind);
-  gtk_widget_set_visible (GTK_WIDGET (self->temperature_row), kind != RG_FLUID_CUSTOM);
-  gtk_widget_set_visible (GTK_WIDGET (self->pressure_row), kind != RG_FLUID_CUSTOM);
-  gtk_widget_set_visible (GTK_WIDGET (self->salinity_row), kind == RG_FLUID_SEAWATER);
-  gtk_widget_set_visible (GTK_WIDGET (self->density_row), kind == RG_FLUID_CUSTOM);
-  gtk_widget_set_visible (GTK_WIDGET (self->viscosity_row), kind == RG_FLUID_CUSTOM);
-  gtk_widget_set_visible (GTK_WIDGET (self->oil_t1_row), kind == RG_FLUID_OIL);
-  gtk_widget_set_visible (GTK_WIDGET (self->oil_nu1_row), kind == RG_FLUID_OIL);
-  gtk_widget_set_visible (GTK_WIDGET (self->oil_t2_row), kind == RG_FLUID_OIL);
-  gtk_widget_set_visible (GTK_WIDGET (self->oil_nu2_row), kind == RG_FLUID_OIL);
-  gtk_widget_set_visible (GTK_WIDGET (self->oil_density_ref_row), kind == RG_FLUID_OIL);
-  gtk_widget_set_visible (GTK_WIDGET (self->oil_t_ref_row), kind == RG_FLUID_OIL);
-  gtk_widget_set_visible (GTK_WIDGET (self->oil_expansion_row), kind == RG_FLUID_OIL);
-  gtk_spin_button_set_value (self->oil_expansion_spin, rugosa_line_get_double (self->line, "oil-expansion"));
+  adw_combo_row_set_selected (self->fluid_kind_row, rugosa_field_choice_position (RUGOSA_TYPE_FLUID_KIND, kind));
 
   _rugosa_line_panel_select_catalogs (self);
 
   res = rugosa_readout_results (self->project, self->line);
 
   /* Entries show the line's own values; where a catalog entry decides a
-   * value, the entry shows that value and is read-only. */
+   * value, the entry shows that value and is read-only.  A field of the
+   * fluid's state is shown for the fluids its row describes. */
   g_hash_table_iter_init (&iter, self->entries);
   while (g_hash_table_iter_next (&iter, (gpointer *) &property, (gpointer *) &entry))
     {
-      double v = _rugosa_line_panel_si_of (self, property);
+      const RugosaField *row = rugosa_quantity_entry_get_field (entry);
+      GtkWidget *arow = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
+      double v = rugosa_line_get_double (self->line, property);
       gboolean from_catalog = FALSE;
 
-      if (res != NULL)
+      gtk_widget_set_visible (arow ? arow : GTK_WIDGET (entry),
+                              row->fluid_kinds == 0 || rugosa_field_applies_to_fluid (row, (RgFluidKind) kind));
+      if (res != NULL && _rugosa_line_panel_chosen_partner (self, row) != NULL)
         {
-          if (g_strcmp0 (property, "roughness") == 0 && rugosa_line_get_material_id (self->line))
-            from_catalog = TRUE, v = res->roughness_new_m;
-          else if (g_strcmp0 (property, "aging-rate") == 0 && rugosa_line_get_aging_class_id (self->line))
-            from_catalog = TRUE, v = res->aging_rate_m_per_year / SECONDS_PER_YEAR;
-          else if (g_strcmp0 (property, "inner-diameter") == 0 && rugosa_line_get_pipe_designation (self->line))
-            from_catalog = TRUE, v = res->inner_diameter_m;
+          /* The results hold the catalog's value in the row's stored unit. */
+          from_catalog = TRUE;
+          if (g_str_equal (property, "roughness"))
+            v = res->roughness_new_m;
+          else if (g_str_equal (property, "aging-rate"))
+            v = res->aging_rate_m_per_year;
+          else if (g_str_equal (property, "inner-diameter"))
+            v = res->inner_diameter_m;
+          else
+            from_catalog = FALSE;
         }
       /* A field showing an error keeps the user's text until it is fixed. */
-      if (rugosa_quantity_entry_get_error_text (entry) == NULL
-          || rugosa_quantity_entry_get_value (entry) != v)
-        {
-          if (rugosa_quantity_entry_get_error_text (entry) == NULL)
-            rugosa_quantity_entry_set_value (entry, v);
-        }
-      {
-        /* A catalog value is shown, greyed, with where it comes from;
-         * choosing "Custom …" above makes the field editable again. */
-        GtkWidget *row = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
-        const char *own = row ? g_object_get_data (G_OBJECT (row), "own-subtitle") : NULL;
-        const char *plain = from_catalog ? _("From the catalog entry chosen above") : own;
-
-        gtk_widget_set_sensitive (GTK_WIDGET (entry), !from_catalog);
-        if (row != NULL)
-          {
-            g_object_set_data_full (G_OBJECT (row), "plain-subtitle", g_strdup (plain), g_free);
-            if (rugosa_quantity_entry_get_error_text (entry) == NULL)
-              adw_action_row_set_subtitle (ADW_ACTION_ROW (row), plain ? plain : "");
-          }
-      }
+      if (rugosa_quantity_entry_get_error_text (entry) == NULL)
+        rugosa_quantity_entry_set_value (entry, v);
+      /* A catalog value is shown, greyed, with where it comes from;
+       * choosing "Custom …" above makes the field editable again. */
+      gtk_widget_set_sensitive (GTK_WIDGET (entry), !from_catalog);
+      rugosa_quantity_entry_set_hint (entry, from_catalog ? _("From the catalog entry chosen above") : _(row->help));
     }
+  /* A kinematic viscosity typed for the custom fluid is converted with
+   * its density. */
+  entry = g_hash_table_lookup (self->entries, "viscosity");
+  if (entry != NULL)
+    rugosa_quantity_entry_set_density (entry, rugosa_line_get_double (self->line, "density"));
 
   if (res != NULL && res->ok)
     {
-      g_autofree char *ud = self->settings ? g_settings_get_string (self->settings, "unit-density") : NULL;
-      g_autofree char *uv = self->settings ? g_settings_get_string (self->settings, "unit-viscosity") : NULL;
-      g_autofree char *rho = rugosa_display_format_screen (RG_QTY_DENSITY, res->density_kg_m3, ud);
-      g_autofree char *mu = rugosa_display_format_screen (RG_QTY_DYN_VISCOSITY, res->dynamic_viscosity_pa_s, uv);
+      g_autofree char *rho = rugosa_readout_format (self->project, RUGOSA_DISPLAY_DENSITY, res->density_kg_m3);
+      g_autofree char *mu = rugosa_readout_format (self->project, RUGOSA_DISPLAY_DYNAMIC_VISCOSITY, res->dynamic_viscosity_pa_s);
       g_autofree char *text = g_strdup_printf (_("ρ = %s · μ = %s"), rho, mu);
 
       adw_action_row_set_subtitle (self->fluid_props_row, text);
     }
   else
     adw_action_row_set_subtitle (self->fluid_props_row, res ? res->error : "");
+  _rugosa_line_panel_mark_results (self, res);
 
   _rugosa_line_panel_fill_fittings (self);
 
@@ -767,6 +764,7 @@ rugosa_line_panel_refresh_results (RugosaLinePanel *self)
   g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
   if (self->line == NULL || self->project == NULL)
     return;
+  _rugosa_line_panel_mark_results (self, rugosa_readout_results (self->project, self->line));
   warnings = rugosa_readout_warnings (self->project, self->line);
   gtk_widget_set_visible (GTK_WIDGET (self->warnings_box), warnings != NULL);
   if (g_strcmp0 (gtk_label_get_text (self->warnings_label), warnings ? warnings : "") != 0)
@@ -793,49 +791,50 @@ rugosa_line_panel_set_line (RugosaLinePanel *self,
   rugosa_line_panel_refresh (self);
 }
 
+/* Every widget named after a row of the line field table takes its
+ * title and help from that row: the quantity entries (through the entry),
+ * the choosers (whose rows are also where an evaluation error about them
+ * is shown), the name, the colour and the fittings. */
 static void
-_rugosa_line_panel_entry_error (RugosaQuantityEntry *entry,
-                                GParamSpec          *pspec,
-                                AdwActionRow        *row)
-{
-  const char *error = rugosa_quantity_entry_get_error_text (entry);
-  const char *plain = g_object_get_data (G_OBJECT (row), "plain-subtitle");
-
-  /* The explanation sits under the field's title while it is wrong. */
-  adw_action_row_set_subtitle (row, error ? error : plain ? plain : "");
-  if (error)
-    gtk_widget_add_css_class (GTK_WIDGET (row), "field-error");
-  else
-    gtk_widget_remove_css_class (GTK_WIDGET (row), "field-error");
-}
-
-static void
-_rugosa_line_panel_collect_entries (RugosaLinePanel *self,
-                                    GtkWidget       *widget)
+_rugosa_line_panel_collect_fields (RugosaLinePanel *self,
+                                   GtkWidget       *widget)
 {
   for (GtkWidget *child = gtk_widget_get_first_child (widget); child; child = gtk_widget_get_next_sibling (child))
     {
+      const RugosaField *row = rugosa_field_find (gtk_widget_get_name (child));
+
       if (RUGOSA_IS_QUANTITY_ENTRY (child))
         {
-          GtkWidget *row = gtk_widget_get_ancestor (child, ADW_TYPE_ACTION_ROW);
-
-          g_hash_table_insert (self->entries, (gpointer) gtk_widget_get_name (child), child);
-          if (row)
-            {
-              /* Screen readers name the field after its row. */
-              gtk_accessible_update_property (GTK_ACCESSIBLE (rugosa_quantity_entry_get_editable (RUGOSA_QUANTITY_ENTRY (child))),
-                                              GTK_ACCESSIBLE_PROPERTY_LABEL,
-                                              adw_preferences_row_get_title (ADW_PREFERENCES_ROW (row)), -1);
-              g_object_set_data_full (G_OBJECT (row), "plain-subtitle",
-                                      g_strdup (adw_action_row_get_subtitle (ADW_ACTION_ROW (row))), g_free);
-              g_object_set_data_full (G_OBJECT (row), "own-subtitle",
-                                      g_strdup (adw_action_row_get_subtitle (ADW_ACTION_ROW (row))), g_free);
-              g_signal_connect_object (child, "notify::error-text",
-                                       G_CALLBACK (_rugosa_line_panel_entry_error), row, 0);
-            }
+          g_return_if_fail (row != NULL);
+          rugosa_quantity_entry_set_field (RUGOSA_QUANTITY_ENTRY (child), row);
+          g_hash_table_insert (self->entries, (gpointer) row->property, child);
           continue;
         }
-      _rugosa_line_panel_collect_entries (self, child);
+      if (row != NULL)
+        {
+          const char *label = rugosa_field_label (row);
+
+          gtk_widget_set_tooltip_text (child, _(row->help));
+          if (ADW_IS_PREFERENCES_ROW (child))
+            adw_preferences_row_set_title (ADW_PREFERENCES_ROW (child), label);
+          if (ADW_IS_ACTION_ROW (child))
+            g_hash_table_insert (self->choosers, (gpointer) row->property, child);
+          else if (GTK_IS_DROP_DOWN (child))
+            {
+              GtkWidget *arow = gtk_widget_get_ancestor (child, ADW_TYPE_ACTION_ROW);
+
+              if (arow != NULL)
+                {
+                  adw_preferences_row_set_title (ADW_PREFERENCES_ROW (arow), label);
+                  g_object_set_data (G_OBJECT (arow), "rugosa-chooser", child);
+                  g_hash_table_insert (self->choosers, (gpointer) row->property, arow);
+                }
+            }
+          gtk_accessible_update_property (GTK_ACCESSIBLE (child),
+                                          GTK_ACCESSIBLE_PROPERTY_LABEL, label,
+                                          GTK_ACCESSIBLE_PROPERTY_DESCRIPTION, _(row->help), -1);
+        }
+      _rugosa_line_panel_collect_fields (self, child);
     }
 }
 
@@ -924,15 +923,14 @@ _rugosa_line_panel_popup_mapped (GtkWidget   *popover,
 static void
 _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
 {
-  g_autoptr (GtkStringList) kinds = gtk_string_list_new (NULL);
+  g_autoptr (GtkStringList) kinds = NULL;
   g_autoptr (GtkStringList) materials = gtk_string_list_new (NULL);
   g_autoptr (GtkStringList) agings = gtk_string_list_new (NULL);
   g_autoptr (GtkStringList) pipes = gtk_string_list_new (NULL);
   g_autoptr (GtkStringList) fittings = gtk_string_list_new (NULL);
   GtkExpression *expr;
 
-  for (int i = 0; i < RG_FLUID_N_KINDS; i++)
-    gtk_string_list_append (kinds, _(fluid_titles[i]));
+  kinds = rugosa_field_choice_titles (RUGOSA_TYPE_FLUID_KIND);
   adw_combo_row_set_model (self->fluid_kind_row, G_LIST_MODEL (kinds));
 
   gtk_string_list_append (materials, _("Custom roughness"));
@@ -987,11 +985,9 @@ rugosa_line_panel_dispose (GObject *object)
 {
   RugosaLinePanel *self = RUGOSA_LINE_PANEL (object);
 
-  if (self->settings)
-    g_signal_handlers_disconnect_by_data (self->settings, self);
-  self->settings = NULL;
   g_clear_object (&self->line);
   g_clear_pointer (&self->entries, g_hash_table_unref);
+  g_clear_pointer (&self->choosers, g_hash_table_unref);
   g_clear_pointer (&self->fitting_rows, g_ptr_array_unref);
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_LINE_PANEL);
   /* Template children without an id are not cleared by the call above. */
@@ -1021,31 +1017,14 @@ rugosa_line_panel_class_init (RugosaLinePanelClass *klass)
   BIND (warnings_box);
   BIND (warnings_label);
   BIND (fluid_kind_row);
-  BIND (salinity_row);
-  BIND (temperature_row);
-  BIND (pressure_row);
-  BIND (density_row);
-  BIND (viscosity_row);
-  BIND (oil_t1_row);
-  BIND (oil_nu1_row);
-  BIND (oil_t2_row);
-  BIND (oil_nu2_row);
-  BIND (oil_density_ref_row);
-  BIND (oil_t_ref_row);
-  BIND (oil_expansion_row);
-  BIND (oil_expansion_spin);
   BIND (fluid_props_row);
   BIND (material_dropdown);
   BIND (aging_dropdown);
   BIND (pipe_dropdown);
-  BIND (roughness_row);
-  BIND (aging_rate_row);
-  BIND (inner_diameter_row);
   BIND (fittings_row);
   BIND (fitting_add_dropdown);
 #undef BIND
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_committed);
-  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_expansion_changed);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_fluid_kind_changed);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_name_activate);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_name_leave);
@@ -1063,6 +1042,7 @@ rugosa_line_panel_init (RugosaLinePanel *self)
   GtkLayoutManager *layout;
 
   self->entries = g_hash_table_new (g_str_hash, g_str_equal);
+  self->choosers = g_hash_table_new (g_str_hash, g_str_equal);
   self->fitting_rows = g_ptr_array_new ();
   self->updating = TRUE;
   gtk_widget_init_template (GTK_WIDGET (self));
@@ -1070,8 +1050,9 @@ rugosa_line_panel_init (RugosaLinePanel *self)
   gtk_orientable_set_orientation (GTK_ORIENTABLE (layout), GTK_ORIENTATION_VERTICAL);
   gtk_box_layout_set_spacing (GTK_BOX_LAYOUT (layout), 18);
   _rugosa_line_panel_fill_catalogs (self);
-  _rugosa_line_panel_collect_entries (self, GTK_WIDGET (self));
-  rugosa_spin_guard (self->oil_expansion_spin);
+  _rugosa_line_panel_collect_fields (self, GTK_WIDGET (self));
+  /* It shows the model's sentences, which may hold "<" or "&". */
+  adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (self->fluid_props_row), FALSE);
   self->updating = FALSE;
   gtk_widget_set_sensitive (GTK_WIDGET (self), FALSE);
 }

@@ -20,8 +20,7 @@ G_DECLARE_FINAL_TYPE (RugosaLinePanel, rugosa_line_panel, RUGOSA, LINE_PANEL, Gt
 
 GtkWidget  *rugosa_line_panel_new          (void);
 void        rugosa_line_panel_set_context  (RugosaLinePanel *self,
-                                            RugosaProject   *project,
-                                            GSettings       *settings);
+                                            RugosaProject   *project);
 void        rugosa_line_panel_set_line     (RugosaLinePanel *self,
                                             RugosaLine      *line);
 RugosaLine *rugosa_line_panel_get_line     (RugosaLinePanel *self);
@@ -32,6 +31,16 @@ void        rugosa_line_panel_refresh_results (RugosaLinePanel *self);
 /* The quantity entry editing a double property ("temperature", …). */
 RugosaQuantityEntry *rugosa_line_panel_get_entry (RugosaLinePanel *self,
                                                   const char      *property);
+/* Mark the fields of an error's subjects (rugosa_field_for_subject) with
+ * `why`, or for a custom value whose catalog entry is chosen, that
+ * chooser; clear the other marks.  Each refresh does this with the
+ * line's results; public for tests. */
+void        rugosa_line_panel_mark_subjects (RugosaLinePanel *self,
+                                             RgSubjects       subjects,
+                                             const char      *why);
+/* The warnings shown above the fields, one a line, or NULL when none is
+ * shown (tests). */
+const char *rugosa_line_panel_get_warnings (RugosaLinePanel *self);
 /* The density · viscosity readout text (tests). */
 const char *rugosa_line_panel_get_fluid_readout (RugosaLinePanel *self);
 

@@ -7,6 +7,7 @@
 #include <math.h>
 
 #include "model/rugosa-display.h"
+#include "model/rugosa-units.h"
 #include "rugosa-readout.h"
 
 const RugosaLineResults *
@@ -54,24 +55,26 @@ rugosa_readout_change (double ratio_to_new)
   return rugosa_display_localize (g_strdup_printf ("%s %%", buf));
 }
 
-static char *
-_unit (GSettings *s, const char *key)
+char *
+rugosa_readout_format (RugosaProject        *project,
+                       RugosaDisplayQuantity dq,
+                       double                si)
 {
-  return s ? g_settings_get_string (s, key) : NULL;
+  const RugosaDisplayInfo *info = rugosa_display_info (dq);
+  RugosaSettings *ps = project ? rugosa_project_get_settings (project) : NULL;
+
+  if (info == NULL)
+    return rugosa_display_significant_screen (si, 4);
+  return rugosa_display_format_screen (info->quantity, si, ps ? rugosa_settings_get_unit (ps, dq) : NULL);
 }
 
 char *
 rugosa_readout_line_full (RugosaProject *project,
-                          RugosaLine    *line,
-                          GSettings     *settings)
+                          RugosaLine    *line)
 {
   const RugosaLineResults *res = rugosa_readout_results (project, line);
   const RugosaOperatingPoint *p;
   GString *s = g_string_new (NULL);
-  g_autofree char *uf = _unit (settings, "unit-flow");
-  g_autofree char *uv = _unit (settings, "unit-velocity");
-  g_autofree char *uh = _unit (settings, "unit-head");
-  g_autofree char *up = _unit (settings, "unit-pressure");
   g_autofree char *flow = NULL, *vel = NULL, *head = NULL, *newhead = NULL;
   g_autofree char *dp = NULL, *grad = NULL, *re = NULL, *f = NULL, *change = NULL;
   g_autofree char *rr = NULL, *age = NULL;
@@ -89,12 +92,14 @@ rugosa_readout_line_full (RugosaProject *project,
       return g_string_free (s, FALSE);
     }
 
-  flow = rugosa_display_format_screen (RG_QTY_FLOW, p->flow_m3_s, uf);
-  vel = rugosa_display_format_screen (RG_QTY_VELOCITY, p->result.velocity_m_s, uv);
-  head = rugosa_display_format_screen (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
-  newhead = rugosa_display_format_screen (RG_QTY_LENGTH, p->result_new.head_loss_total_m, uh);
-  dp = rugosa_display_format_screen (RG_QTY_PRESSURE, p->result.pressure_drop_pa, up);
-  grad = rugosa_display_significant_screen (p->result.gradient_m_per_100m, 3);
+  flow = rugosa_readout_format (project, RUGOSA_DISPLAY_FLOW, p->flow_m3_s);
+  vel = rugosa_readout_format (project, RUGOSA_DISPLAY_VELOCITY, p->result.velocity_m_s);
+  head = rugosa_readout_format (project, RUGOSA_DISPLAY_HEAD, p->result.head_loss_total_m);
+  newhead = rugosa_readout_format (project, RUGOSA_DISPLAY_HEAD, p->result_new.head_loss_total_m);
+  dp = rugosa_readout_format (project, RUGOSA_DISPLAY_PRESSURE, p->result.pressure_drop_pa);
+  /* A gradient is a ratio: converted as one, whatever the head unit, as
+   * the chart's callout and the results table do. */
+  grad = rugosa_readout_format (project, RUGOSA_DISPLAY_GRADIENT, p->result.gradient_m_per_100m);
   re = rugosa_display_significant_screen (p->result.reynolds, 4);
   f = rugosa_display_significant_screen (p->result.friction.f, 4);
   rr = rugosa_display_significant_screen (p->result.relative_roughness, 3);
@@ -108,9 +113,8 @@ rugosa_readout_line_full (RugosaProject *project,
                           rugosa_readout_regime (p->result.friction.regime),
                           rugosa_readout_zone (p->result.friction.zone));
   g_string_append_printf (s, _("Head loss %s (new: %s, change %s)\n"), head, newhead, change);
-  /* A ratio: head lost per 100 of the same length unit. */
-  g_string_append_printf (s, _("Gradient %s %s per 100 %s\n"), grad,
-                          rugosa_display_unit_symbol (uh ? uh : "m"), rugosa_display_unit_symbol (uh ? uh : "m"));
+  /* TRANSLATORS: the pipe-friction gradient, e.g. "Gradient 3.4 m/100 m" */
+  g_string_append_printf (s, _("Gradient %s\n"), grad);
   g_string_append_printf (s, _("Pressure drop %s"), dp);
   if (p->warnings.count > 0)
     for (int i = 0; i < p->warnings.count; i++)

@@ -1,5 +1,6 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
-/* Human-readable readouts of model results in the display units. */
+/* Human-readable readouts of model results in the project's display
+ * units (its settings: rugosa_settings_get_unit). */
 #pragma once
 
 #include <gio/gio.h>
@@ -11,8 +12,12 @@ G_BEGIN_DECLS
 /* Several lines of text: the full readout of the design point of `line`
  * at the settings' service age (used by the chart tooltip). */
 char *rugosa_readout_line_full   (RugosaProject *project,
-                                  RugosaLine    *line,
-                                  GSettings     *settings);
+                                  RugosaLine    *line);
+/* "1.42 m/s": an SI value of `dq` in the project's unit for it, for the
+ * screen (the locale's decimal separator). */
+char *rugosa_readout_format      (RugosaProject        *project,
+                                  RugosaDisplayQuantity dq,
+                                  double                si);
 /* The model's results of `line`, or NULL when the line is no longer part
  * of the project (a row or panel may still hold it while a load or an
  * undo replaces the lines). */

@@ -8,6 +8,8 @@
 #include <string.h>
 
 #include "model/rugosa-display.h"
+#include "model/rugosa-output.h"
+#include "model/rugosa-units.h"
 #include "rugosa-readout.h"
 #include "rugosa-results-table.h"
 
@@ -20,35 +22,33 @@ struct _RugosaResultsTable
 
   /* borrowed references */
   RugosaProject *project;
-  GSettings     *settings;
 
   /* owned references */
   GPtrArray  *bound;   /* GtkInscription cells on screen */
-  GHashTable *units;   /* settings key -> unit, read once per change */
 };
 
 G_DEFINE_FINAL_TYPE (RugosaResultsTable, rugosa_results_table, GTK_TYPE_WIDGET)
 
 typedef struct {
   const char *id;
-  const char *title;
-  const char *unit_key;   /* GSettings key whose unit goes in the title */
+  const char *title;      /* the compact table's own short heading */
+  const char *output;     /* the output key of its value, or NULL */
   gboolean numeric;
 } Column;
 
 static const Column columns[] = {
   { "name", N_("Line option"), NULL, FALSE },
-  { "velocity", N_("Velocity"), "unit-velocity", TRUE },
-  { "head-loss", N_("Head loss"), "unit-head", TRUE },
+  { "velocity", N_("Velocity"), "velocity", TRUE },
+  { "head-loss", N_("Head loss"), "head_loss_total", TRUE },
   { "change", N_("Loss vs new"), NULL, TRUE },
-  { "gradient", N_("Gradient"), "unit-gradient", TRUE },
-  { "pressure-drop", N_("Pressure drop"), "unit-pressure", TRUE },
-  { "reynolds", N_("Re"), NULL, TRUE },
-  { "f", N_("f (Darcy)"), NULL, TRUE },
+  { "gradient", N_("Gradient"), "gradient", TRUE },
+  { "pressure-drop", N_("Pressure drop"), "pressure_drop", TRUE },
+  { "reynolds", N_("Re"), "reynolds", TRUE },
+  { "f", N_("f (Darcy)"), "friction_factor", TRUE },
   { "regime", N_("Regime"), NULL, FALSE },
   { "zone", N_("Roughness zone"), NULL, FALSE },
-  { "elasticity", N_("∂ln f/∂ln ε"), NULL, TRUE },
-  { "flow", N_("Design flow"), "unit-flow", TRUE },
+  { "elasticity", N_("∂ln f/∂ln ε"), "roughness_elasticity", TRUE },
+  { "flow", N_("Design flow"), NULL, TRUE },
   { "warnings", N_("Remarks"), NULL, FALSE },
 };
 
@@ -58,21 +58,41 @@ rugosa_results_table_new (void)
   return g_object_new (RUGOSA_TYPE_RESULTS_TABLE, NULL);
 }
 
-static char *
-_unit (RugosaResultsTable *self, const char *key)
+static const Column *
+_rugosa_results_table_column (const char *id)
 {
-  const char *unit;
+  for (guint i = 0; i < G_N_ELEMENTS (columns); i++)
+    if (g_strcmp0 (columns[i].id, id) == 0)
+      return &columns[i];
+  return NULL;
+}
 
-  if (self->settings == NULL)
-    return NULL;
-  /* A slider move refreshes every cell: keep GSettings out of that loop. */
-  unit = g_hash_table_lookup (self->units, key);
-  if (unit == NULL)
-    {
-      unit = g_settings_get_string (self->settings, key);
-      g_hash_table_insert (self->units, (gpointer) key, (gpointer) unit);
-    }
-  return g_strdup (unit);
+/* The display quantity of a column (RUGOSA_DISPLAY_NUMBER: none). */
+static RugosaDisplayQuantity
+_rugosa_results_table_display (const Column *col)
+{
+  const RugosaOutputKey *key = col->output ? rugosa_output_key_find (col->output) : NULL;
+
+  if (key != NULL)
+    return key->display;
+  /* The design flow is an input, not an output key. */
+  if (g_strcmp0 (col->id, "flow") == 0)
+    return RUGOSA_DISPLAY_FLOW;
+  return RUGOSA_DISPLAY_NUMBER;
+}
+
+/* A number in the project's unit for `display`, for the screen. */
+static char *
+_rugosa_results_table_number (RugosaResultsTable   *self,
+                              RugosaDisplayQuantity display,
+                              double                si)
+{
+  const RugosaDisplayInfo *info = rugosa_display_info (display);
+
+  if (info == NULL)
+    return rugosa_display_significant_screen (si, 4);
+  return rugosa_display_number_screen (info->quantity, si,
+                                       rugosa_settings_get_unit (rugosa_project_get_settings (self->project), display));
 }
 
 char *
@@ -82,8 +102,11 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
 {
   const RugosaLineResults *res;
   const RugosaOperatingPoint *p;
-  const RgLineResult *r;
+  const Column *col = _rugosa_results_table_column (column);
+  const RugosaOutputKey *key;
 
+  if (col == NULL)
+    return g_strdup ("");
   if (g_strcmp0 (column, "name") == 0)
     return g_strdup (rugosa_line_get_name (line));
   if (self->project == NULL)
@@ -109,46 +132,28 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
   p = &res->points[RUGOSA_FLOW_DESIGN];
   if (!p->present || !p->ok)
     return g_strdup ("—");
-  r = &p->result;
 
   if (g_strcmp0 (column, "flow") == 0)
-    {
-      g_autofree char *u = _unit (self, "unit-flow");
-      return rugosa_display_number_screen (RG_QTY_FLOW, p->flow_m3_s, u);
-    }
-  if (g_strcmp0 (column, "velocity") == 0)
-    {
-      g_autofree char *u = _unit (self, "unit-velocity");
-      return rugosa_display_number_screen (RG_QTY_VELOCITY, r->velocity_m_s, u);
-    }
+    return _rugosa_results_table_number (self, RUGOSA_DISPLAY_FLOW, p->flow_m3_s);
   if (g_strcmp0 (column, "reynolds") == 0)
     {
       char buf[G_ASCII_DTOSTR_BUF_SIZE];
-      return g_strdup (g_ascii_formatd (buf, sizeof buf, "%.0f", r->reynolds));
+      /* Whole, as the trade writes it. */
+      return g_strdup (g_ascii_formatd (buf, sizeof buf, "%.0f", p->result.reynolds));
     }
-  if (g_strcmp0 (column, "f") == 0)
-    return rugosa_display_significant_screen (r->friction.f, 4);
   if (g_strcmp0 (column, "regime") == 0)
-    return g_strdup (rugosa_readout_regime (r->friction.regime));
+    return g_strdup (rugosa_readout_regime (p->result.friction.regime));
   if (g_strcmp0 (column, "zone") == 0)
-    return g_strdup (rugosa_readout_zone (r->friction.zone));
-  if (g_strcmp0 (column, "head-loss") == 0)
-    {
-      g_autofree char *u = _unit (self, "unit-head");
-      return rugosa_display_number_screen (RG_QTY_LENGTH, r->head_loss_total_m, u);
-    }
-  if (g_strcmp0 (column, "pressure-drop") == 0)
-    {
-      g_autofree char *u = _unit (self, "unit-pressure");
-      return rugosa_display_number_screen (RG_QTY_PRESSURE, r->pressure_drop_pa, u);
-    }
-  if (g_strcmp0 (column, "gradient") == 0)
-    /* m per 100 m and ft per 100 ft are the same ratio. */
-    return rugosa_display_significant_screen (r->gradient_m_per_100m, 3);
-  if (g_strcmp0 (column, "elasticity") == 0)
-    return rugosa_display_significant_screen (r->friction.roughness_elasticity, 3);
+    return g_strdup (rugosa_readout_zone (p->result.friction.zone));
   if (g_strcmp0 (column, "change") == 0)
     return rugosa_readout_change (p->head_loss_ratio_to_new);
+  key = col->output ? rugosa_output_key_find (col->output) : NULL;
+  if (key != NULL && key->kind == RUGOSA_OUTPUT_NUMBER)
+    {
+      if (!rugosa_output_present (key, p))
+        return g_strdup ("—");
+      return _rugosa_results_table_number (self, key->display, key->number (res, p));
+    }
   return g_strdup ("");
 }
 
@@ -175,10 +180,13 @@ _rugosa_results_table_update_label (RugosaResultsTable *self,
     }
 }
 
+static void _rugosa_results_table_update_titles (RugosaResultsTable *self);
+
 void
 rugosa_results_table_refresh (RugosaResultsTable *self)
 {
   g_return_if_fail (RUGOSA_IS_RESULTS_TABLE (self));
+  _rugosa_results_table_update_titles (self);
   for (guint i = 0; i < self->bound->len; i++)
     _rugosa_results_table_update_label (self, GTK_INSCRIPTION (g_ptr_array_index (self->bound, i)));
 }
@@ -252,6 +260,21 @@ _rugosa_results_table_unbind (GtkSignalListItemFactory *factory,
   g_object_set_data (G_OBJECT (label), "line", NULL);
 }
 
+static char *
+_rugosa_results_table_title (RugosaResultsTable *self,
+                             const Column       *col)
+{
+  RugosaDisplayQuantity display = _rugosa_results_table_display (col);
+  const char *unit = NULL;
+
+  if (self->project != NULL && rugosa_display_info (display) != NULL)
+    unit = rugosa_settings_get_unit (rugosa_project_get_settings (self->project), display);
+  if (unit != NULL)
+    /* TRANSLATORS: a column title and its unit, e.g. "Velocity (ft/s)" */
+    return g_strdup_printf (_("%s (%s)"), _(col->title), rugosa_display_unit_symbol (unit));
+  return g_strdup (_(col->title));
+}
+
 static void
 _rugosa_results_table_update_titles (RugosaResultsTable *self)
 {
@@ -260,47 +283,43 @@ _rugosa_results_table_update_titles (RugosaResultsTable *self)
   for (guint i = 0; i < g_list_model_get_n_items (cols); i++)
     {
       g_autoptr (GtkColumnViewColumn) c = g_list_model_get_item (cols, i);
-      const Column *col = g_object_get_data (G_OBJECT (c), "column");
-      g_autofree char *unit = col->unit_key ? _unit (self, col->unit_key) : NULL;
-      g_autofree char *title = NULL;
+      g_autofree char *title = _rugosa_results_table_title (self, g_object_get_data (G_OBJECT (c), "column"));
 
-      if (unit)
-        title = g_strdup_printf ("%s (%s)", _(col->title), rugosa_display_unit_symbol (unit));
-      else
-        title = g_strdup (_(col->title));
-      gtk_column_view_column_set_title (c, title);
+      /* Titles change with the project's units only: a slider move
+       * leaves the header alone. */
+      if (g_strcmp0 (gtk_column_view_column_get_title (c), title) != 0)
+        gtk_column_view_column_set_title (c, title);
     }
 }
 
-static void
-_rugosa_results_table_settings_changed (GSettings          *settings,
-                                        const char         *key,
-                                        RugosaResultsTable *self)
+const char *
+rugosa_results_table_get_column_title (RugosaResultsTable *self,
+                                       const char         *column)
 {
-  if (g_str_has_prefix (key, "unit-"))
+  GListModel *cols;
+
+  g_return_val_if_fail (RUGOSA_IS_RESULTS_TABLE (self), NULL);
+  cols = gtk_column_view_get_columns (self->view);
+  for (guint i = 0; i < g_list_model_get_n_items (cols); i++)
     {
-      g_hash_table_remove_all (self->units);
-      _rugosa_results_table_update_titles (self);
-      rugosa_results_table_refresh (self);
+      g_autoptr (GtkColumnViewColumn) c = g_list_model_get_item (cols, i);
+      const Column *col = g_object_get_data (G_OBJECT (c), "column");
+
+      if (g_strcmp0 (col->id, column) == 0)
+        return gtk_column_view_column_get_title (c);
     }
+  return NULL;
 }
 
 void
 rugosa_results_table_set_context (RugosaResultsTable *self,
                                   RugosaProject      *project,
-                                  GSettings          *settings,
                                   GtkSingleSelection *selection)
 {
   g_return_if_fail (RUGOSA_IS_RESULTS_TABLE (self));
 
-  if (self->settings)
-    g_signal_handlers_disconnect_by_data (self->settings, self);
   self->project = project;
-  self->settings = settings;
-  if (settings)
-    g_signal_connect_object (settings, "changed", G_CALLBACK (_rugosa_results_table_settings_changed), self, 0);
   gtk_column_view_set_model (self->view, GTK_SELECTION_MODEL (selection));
-  _rugosa_results_table_update_titles (self);
   rugosa_results_table_refresh (self);
 }
 
@@ -309,15 +328,11 @@ rugosa_results_table_dispose (GObject *object)
 {
   RugosaResultsTable *self = RUGOSA_RESULTS_TABLE (object);
 
-  if (self->settings)
-    g_signal_handlers_disconnect_by_data (self->settings, self);
-  self->settings = NULL;
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_RESULTS_TABLE);
   /* Template children without an id are not cleared by the call above. */
   for (GtkWidget *child; (child = gtk_widget_get_first_child (GTK_WIDGET (self))) != NULL;)
     gtk_widget_unparent (child);
   g_clear_pointer (&self->bound, g_ptr_array_unref);
-  g_clear_pointer (&self->units, g_hash_table_unref);
   G_OBJECT_CLASS (rugosa_results_table_parent_class)->dispose (object);
 }
 
@@ -338,7 +353,6 @@ static void
 rugosa_results_table_init (RugosaResultsTable *self)
 {
   self->bound = g_ptr_array_new ();
-  self->units = g_hash_table_new_full (g_str_hash, g_str_equal, NULL, g_free);
   gtk_widget_init_template (GTK_WIDGET (self));
 
   for (guint i = 0; i < G_N_ELEMENTS (columns); i++)

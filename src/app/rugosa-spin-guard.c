@@ -33,6 +33,8 @@ rugosa_spin_guard_mark (GtkSpinButton *spin,
       gtk_widget_set_tooltip_text (GTK_WIDGET (spin), why);
       if (row != NULL)
         {
+          /* The sentence echoes the text typed: plain text. */
+          adw_preferences_row_set_use_markup (ADW_PREFERENCES_ROW (row), FALSE);
           adw_action_row_set_subtitle (ADW_ACTION_ROW (row), why);
           gtk_widget_add_css_class (row, "field-error");
         }

@@ -127,7 +127,8 @@ _rugosa_window_export_run (RugosaWindow    *self,
       gtk_window_present (GTK_WINDOW (msg));
     }
   else if (job->csv)
-    _rugosa_window_toast (self, _("Results exported (CSV, SI units)."));
+    /* The CSV's columns name their units: the project's (model/rugosa-output.h). */
+    _rugosa_window_toast (self, _("Results exported as CSV, in the project’s units."));
   else
     {
       g_autofree char *base = g_path_get_basename (job->path);

@@ -38,6 +38,7 @@ struct _RugosaWindow
   RugosaHistory      *history;
   GtkSingleSelection *selection;
   GFile              *file;
+  GtkWindow          *project_settings; /* while open; weak */
   GPtrArray          *bound_rows;   /* line list rows on screen */
   char               *autosave_id;  /* unique per window */
 

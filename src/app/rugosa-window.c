@@ -7,7 +7,10 @@
 #include <math.h>
 
 #include "model/rugosa-display.h"
+#include "model/rugosa-fields.h"
+#include "rugosa-project-settings-window.h"
 #include "rugosa-readout.h"
+#include "rugosa-seed.h"
 #include "rugosa-window-private.h"
 
 G_DEFINE_FINAL_TYPE (RugosaWindow, rugosa_window, ADW_TYPE_APPLICATION_WINDOW)
@@ -90,6 +93,12 @@ GtkSingleSelection *
 rugosa_window_get_selection (RugosaWindow *self)
 {
   return self->selection;
+}
+
+GtkWindow *
+rugosa_window_get_project_settings (RugosaWindow *self)
+{
+  return self->project_settings;
 }
 
 const char *
@@ -224,10 +233,8 @@ _rugosa_window_update_row (RugosaWindow *self,
   if (res && res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
     {
       const RugosaOperatingPoint *p = &res->points[RUGOSA_FLOW_DESIGN];
-      g_autofree char *uv = g_settings_get_string (self->settings, "unit-velocity");
-      g_autofree char *uh = g_settings_get_string (self->settings, "unit-head");
-      g_autofree char *v = rugosa_display_format_screen (RG_QTY_VELOCITY, p->result.velocity_m_s, uv);
-      g_autofree char *h = rugosa_display_format_screen (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
+      g_autofree char *v = rugosa_readout_format (self->project, RUGOSA_DISPLAY_VELOCITY, p->result.velocity_m_s);
+      g_autofree char *h = rugosa_readout_format (self->project, RUGOSA_DISPLAY_HEAD, p->result.head_loss_total_m);
 
       sub = g_strdup_printf (_("%s · loss %s"), v, h);
     }
@@ -361,8 +368,7 @@ _rugosa_window_update_age_summary (RugosaWindow *self)
       if (res && res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
         {
           const RugosaOperatingPoint *p = &res->points[RUGOSA_FLOW_DESIGN];
-          g_autofree char *uh = g_settings_get_string (self->settings, "unit-head");
-          g_autofree char *h = rugosa_display_format_screen (RG_QTY_LENGTH, p->result.head_loss_total_m, uh);
+          g_autofree char *h = rugosa_readout_format (self->project, RUGOSA_DISPLAY_HEAD, p->result.head_loss_total_m);
           g_autofree char *change = rugosa_readout_change (p->head_loss_ratio_to_new);
           g_autofree char *text = g_strdup_printf (_("%s: head loss %s, %s vs new"),
                                                    rugosa_line_get_name (line), h, change);
@@ -543,6 +549,8 @@ _rugosa_window_edit_line (RugosaWindow *self,
   g_value_init (&v, pspec->value_type);
   if (g_variant_is_of_type (value, G_VARIANT_TYPE_DOUBLE))
     g_value_set_double (&v, g_variant_get_double (value));
+  else if (g_variant_is_of_type (value, G_VARIANT_TYPE_INT32) && G_VALUE_HOLDS_ENUM (&v))
+    g_value_set_enum (&v, g_variant_get_int32 (value));
   else if (g_variant_is_of_type (value, G_VARIANT_TYPE_INT32))
     g_value_set_int (&v, g_variant_get_int32 (value));
   else if (g_variant_is_of_type (value, G_VARIANT_TYPE_STRING))
@@ -555,20 +563,31 @@ _rugosa_window_edit_line (RugosaWindow *self,
   else
     g_value_set_variant (&v, value);
 
-  /* Out of the file format's range: refuse before the model warns. */
-  if (g_param_value_validate (pspec, &v))
-    {
-      if (G_IS_PARAM_SPEC_DOUBLE (pspec))
-        {
-          GParamSpecDouble *d = G_PARAM_SPEC_DOUBLE (pspec);
-          why = g_strdup_printf (_("Out of range: %s must lie between %g and %g %s."),
-                                 g_param_spec_get_blurb (pspec), d->minimum, d->maximum, "(SI)");
-        }
-      else
-        why = g_strdup_printf (_("Not an accepted value for %s."), g_param_spec_get_blurb (pspec));
-      _rugosa_window_refuse (self, property, why);
-      return;
-    }
+  /* Out of the row's range (the panel's entries check it already; other
+   * senders may not): refuse before the model warns, in the row's words
+   * and the project's unit. */
+  {
+    const RugosaField *row = rugosa_field_find (property);
+
+    if (row != NULL && row->kind == RUGOSA_FIELD_NUMBER)
+      {
+        RgError err = { 0 };
+        RugosaSettings *ps = rugosa_project_get_settings (self->project);
+
+        if (!rugosa_field_in_range (row, g_value_get_double (&v), rugosa_settings_get_unit (ps, row->display), &err))
+          {
+            _rugosa_window_refuse (self, property, err.text);
+            return;
+          }
+      }
+    else if (g_param_value_validate (pspec, &v))
+      {
+        why = g_strdup_printf (_("Not an accepted value for %s."),
+                               row ? rugosa_field_label (row) : property);
+        _rugosa_window_refuse (self, property, why);
+        return;
+      }
+  }
 
   /* A value the core cannot evaluate leaves the last valid one in force,
    * so the chart and the table never lose the line. */
@@ -700,6 +719,24 @@ _rugosa_window_redo (GtkWidget  *widget,
   rugosa_history_redo (self->history);
 }
 
+/* One settings window a project window, brought back when asked again. */
+static void
+_rugosa_window_project_settings (GtkWidget  *widget,
+                                 const char *action_name,
+                                 GVariant   *param)
+{
+  RugosaWindow *self = RUGOSA_WINDOW (widget);
+
+  if (self->project_settings == NULL)
+    {
+      self->project_settings = GTK_WINDOW (rugosa_project_settings_window_new (self->history, self->settings));
+      gtk_window_set_transient_for (self->project_settings, GTK_WINDOW (self));
+      gtk_window_set_destroy_with_parent (self->project_settings, TRUE);
+      g_object_add_weak_pointer (G_OBJECT (self->project_settings), (gpointer *) &self->project_settings);
+    }
+  gtk_window_present (self->project_settings);
+}
+
 static void
 _rugosa_window_age_step (GtkWidget  *widget,
                          const char *action_name,
@@ -727,46 +764,17 @@ _rugosa_window_items_changed (RugosaWindow *self,
     gtk_single_selection_set_selected (self->selection, position);
 }
 
-/* --- preferences that change the document ------------------------------ */
+/* --- a new project ------------------------------------------------------ */
 
-static void
-_rugosa_window_apply_preferences (RugosaWindow *self)
-{
-  RugosaSettings *ps = rugosa_project_get_settings (self->project);
-  double lam = g_settings_get_double (self->settings, "laminar-limit");
-  double turb = g_settings_get_double (self->settings, "turbulent-limit");
-
-  g_object_set (ps,
-                "friction-model", g_settings_get_enum (self->settings, "friction-model"),
-                "velocity-limit", g_settings_get_double (self->settings, "velocity-limit"),
-                "gradient-limit", g_settings_get_double (self->settings, "gradient-limit"),
-                NULL);
-  /* A pair out of order (the preferences put it back) keeps the last one;
-   * the other preferences still apply. */
-  if (lam < turb)
-    g_object_set (ps, "re-laminar-max", lam, "re-turbulent-min", turb, NULL);
-}
-
-static void
-_rugosa_window_settings_changed (GSettings    *settings,
-                                 const char   *key,
-                                 RugosaWindow *self)
-{
-  if (g_str_equal (key, "friction-model") || g_str_equal (key, "laminar-limit")
-      || g_str_equal (key, "turbulent-limit") || g_str_equal (key, "velocity-limit")
-      || g_str_equal (key, "gradient-limit"))
-    _rugosa_window_apply_preferences (self);
-  else if (g_str_has_prefix (key, "unit-"))
-    _rugosa_window_refresh_all (self);
-}
-
+/* A new project starts from the preferences (rugosa-seed.h) and one line
+ * option; nothing else reads them, so an open project keeps its own. */
 static void
 _rugosa_window_fill_new_project (RugosaWindow *self)
 {
   g_autoptr (RugosaLine) line = rugosa_line_new (_("Line option 1"));
 
   g_object_set (line, "colour", line_palette[0], NULL);
-  _rugosa_window_apply_preferences (self);
+  rugosa_seed_settings (self->settings, rugosa_project_get_settings (self->project));
   rugosa_project_insert_line (self->project, 0, line);
 }
 
@@ -789,7 +797,6 @@ _rugosa_window_setup (RugosaWindow *self)
   GtkListItemFactory *factory;
 
   self->settings = rugosa_application_get_settings (RUGOSA_APPLICATION (app));
-  g_signal_connect_object (self->settings, "changed", G_CALLBACK (_rugosa_window_settings_changed), self, 0);
   g_settings_bind (self->settings, "service-age-max", self->age_adjustment, "upper", G_SETTINGS_BIND_GET);
   g_settings_bind (self->settings, "window-width", self, "default-width", G_SETTINGS_BIND_GET_NO_CHANGES);
   g_settings_bind (self->settings, "window-height", self, "default-height", G_SETTINGS_BIND_GET_NO_CHANGES);
@@ -811,10 +818,10 @@ _rugosa_window_setup (RugosaWindow *self)
   g_object_unref (factory);
   gtk_list_view_set_model (self->lines_view, GTK_SELECTION_MODEL (self->selection));
 
-  rugosa_canvas_set_project (self->canvas, self->project, self->settings);
+  rugosa_canvas_set_project (self->canvas, self->project);
   rugosa_canvas_set_selection (self->canvas, self->selection);
-  rugosa_results_table_set_context (self->results_table, self->project, self->settings, self->selection);
-  rugosa_line_panel_set_context (self->line_panel, self->project, self->settings);
+  rugosa_results_table_set_context (self->results_table, self->project, self->selection);
+  rugosa_line_panel_set_context (self->line_panel, self->project);
   g_object_bind_property (self->canvas, "probe-text", self->probe_label, "label", G_BINDING_DEFAULT);
   g_object_bind_property_full (self->canvas, "probe-text", self->probe_label, "visible", G_BINDING_DEFAULT,
                                _rugosa_window_probe_visible, NULL, NULL, NULL);
@@ -839,6 +846,12 @@ rugosa_window_dispose (GObject *object)
   RugosaWindow *self = RUGOSA_WINDOW (object);
 
   _rugosa_window_files_dispose (self);
+  if (self->project_settings != NULL)
+    {
+      g_object_remove_weak_pointer (G_OBJECT (self->project_settings), (gpointer *) &self->project_settings);
+      gtk_window_destroy (self->project_settings);
+      self->project_settings = NULL;
+    }
   g_clear_handle_id (&self->actions_source, g_source_remove);
   if (self->canvas)
     rugosa_canvas_set_selection (self->canvas, NULL);
@@ -892,6 +905,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   gtk_widget_class_install_action (widget_class, "win.line-move-down", NULL, _rugosa_window_line_move);
   gtk_widget_class_install_action (widget_class, "win.line-rename", NULL, _rugosa_window_line_rename);
   gtk_widget_class_install_action (widget_class, "win.age-step", "i", _rugosa_window_age_step);
+  gtk_widget_class_install_action (widget_class, "win.project-settings", NULL, _rugosa_window_project_settings);
 
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_F2, 0, "win.line-rename", NULL);
   gtk_widget_class_add_binding_action (widget_class, GDK_KEY_Up, GDK_ALT_MASK, "win.line-move-up", NULL);

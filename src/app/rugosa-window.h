@@ -63,6 +63,9 @@ GtkWidget     *rugosa_window_get_line_panel (RugosaWindow *self);
 GtkWidget     *rugosa_window_get_results    (RugosaWindow *self);
 GtkRange      *rugosa_window_get_age_scale  (RugosaWindow *self);
 GtkSingleSelection *rugosa_window_get_selection (RugosaWindow *self);
+/* The project settings window, opened by the menu's Project Settings
+ * (tests: present it through "win.project-settings" first); or NULL. */
+GtkWindow     *rugosa_window_get_project_settings (RugosaWindow *self);
 /* The text beside the slider ("+18.2 % head loss against new"). */
 const char    *rugosa_window_get_age_summary (RugosaWindow *self);
 

@@ -1,0 +1,76 @@
+/* SPDX-License-Identifier: GPL-3.0-or-later */
+#define G_LOG_DOMAIN "rugosa-field-choices"
+
+#include "config.h"
+
+#include <glib/gi18n.h>
+
+#include "core/fluid.h"
+#include "core/friction.h"
+#include "model/rugosa-enums.h"
+#include "rugosa-field-choices.h"
+
+/* The fluids by the property model behind each. */
+static const char *fluid_titles[RG_FLUID_N_KINDS] = {
+  [RG_FLUID_WATER] = N_("Water (IAPWS-IF97)"),
+  [RG_FLUID_CUSTOM] = N_("Given density and viscosity"),
+  [RG_FLUID_SEAWATER] = N_("Seawater (Sharqawy et al. 2010)"),
+  [RG_FLUID_OIL] = N_("Petroleum oil (ASTM D341)"),
+  [RG_FLUID_AIR] = N_("Air (ideal gas)"),
+};
+
+static const char *system_titles[] = {
+  [RUGOSA_UNIT_SYSTEM_SI] = N_("SI (metric)"),
+  [RUGOSA_UNIT_SYSTEM_US] = N_("US customary"),
+};
+
+const char *
+rugosa_field_choice_title (GType enum_type,
+                           int   value)
+{
+  if (enum_type == RUGOSA_TYPE_FLUID_KIND && value >= 0 && value < RG_FLUID_N_KINDS)
+    return _(fluid_titles[value]);
+  if (enum_type == RUGOSA_TYPE_UNIT_SYSTEM && value >= 0 && value < (int) G_N_ELEMENTS (system_titles))
+    return _(system_titles[value]);
+  /* Published names, the same in every language. */
+  if (enum_type == RUGOSA_TYPE_FRICTION_MODEL && value >= 0 && value < RG_FRICTION_N_MODELS)
+    return rg_friction_model_title ((RgFrictionModel) value);
+  return rugosa_enum_nick (enum_type, value);
+}
+
+GtkStringList *
+rugosa_field_choice_titles (GType enum_type)
+{
+  GEnumClass *klass = g_type_class_ref (enum_type);
+  GtkStringList *list = gtk_string_list_new (NULL);
+
+  for (guint i = 0; i < klass->n_values; i++)
+    gtk_string_list_append (list, rugosa_field_choice_title (enum_type, klass->values[i].value));
+  g_type_class_unref (klass);
+  return list;
+}
+
+int
+rugosa_field_choice_value (GType enum_type,
+                           guint position)
+{
+  GEnumClass *klass = g_type_class_ref (enum_type);
+  int value = position < klass->n_values ? klass->values[position].value : -1;
+
+  g_type_class_unref (klass);
+  return value;
+}
+
+guint
+rugosa_field_choice_position (GType enum_type,
+                              int   value)
+{
+  GEnumClass *klass = g_type_class_ref (enum_type);
+  guint position = GTK_INVALID_LIST_POSITION;
+
+  for (guint i = 0; i < klass->n_values; i++)
+    if (klass->values[i].value == value)
+      position = i;
+  g_type_class_unref (klass);
+  return position;
+}
