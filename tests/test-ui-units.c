@@ -536,7 +536,8 @@ test_air_compressibility_warning (void)
    * about 10 % of the inlet pressure the incompressible equations are not
    * reliable; not checked against the document.  This line is far past it. */
   g_assert_cmpfloat (p->result.pressure_drop_pa, >, 0.10 * 200.0e3);
-  /* The panel shows the core's sentence for it. */
+  /* The panel shows the core's sentence for it, in the project's units. */
+  expected.units = rugosa_settings_get_unit_choice (rugosa_project_get_settings (project));
   g_assert_cmpint (rg_air_compressibility_warning (p->result.pressure_drop_pa, 200.0e3, &expected), >, 0);
   warnings = rugosa_line_panel_get_warnings (panel);
   g_assert_nonnull (warnings);

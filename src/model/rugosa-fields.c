@@ -475,10 +475,15 @@ rugosa_field_parse_text (const RugosaField *field, const char *text,
     {
       if (!is_bare_number (text, &x))
         {
-          g_autofree char *shown = g_utf8_make_valid (text, 40);
+          g_autofree char *valid = g_utf8_make_valid (text, -1);
+          g_autofree char *shown = NULL;
           g_autofree char *msg = NULL;
 
-          g_strdelimit (shown, "\n\r\t", ' ');
+          /* an excerpt of what was typed, on one line */
+          shown = g_utf8_strlen (valid, -1) > 40 ? g_utf8_substring (valid, 0, 40) : g_strdup (valid);
+          for (char *c = shown; *c != '\0'; c++)
+            if ((unsigned char) *c < 0x20 || *c == 0x7F)
+              *c = ' ';
           /* TRANSLATORS: %s is what was typed, e.g. "abc" for a thermal expansion */
           msg = g_strdup_printf (_("“%s” is not a number: type a plain number such as 0.00064."), shown);
           rg_error_set_on (err, RG_ERR_PARSE, field->subjects, "%s", msg);
