@@ -31,6 +31,8 @@ typedef enum {
   RUGOSA_FIELD_CATALOG,    /* a catalog id, or NULL for the custom value `partner` */
   RUGOSA_FIELD_FITTINGS,   /* the fittings list, RUGOSA_LINE_FITTINGS_TYPE */
   RUGOSA_FIELD_UNIT_MAP,   /* quantity id -> unit spelling, "a{ss}" */
+  RUGOSA_FIELD_CURVE,      /* (flow, head) points in SI, flows increasing,
+                            * RUGOSA_LINE_CURVE_TYPE */
 } RugosaFieldKind;
 
 typedef enum {
@@ -131,6 +133,12 @@ const char *rugosa_field_label (const RugosaField *field);
  * each lie in 0 … this (far above any single fitting's published K). */
 #define RUGOSA_FITTING_K_MAX 1.0e4
 #define RUGOSA_FITTING_COUNT_MAX 1.0e4
+/* A point of a pump curve: its flow lies in the range of a line's flows
+ * (the row "flow-design"), its head in 0 … this many metres (Common
+ * practice (no single source): far above any single pump's head, about
+ * 1000 bar of water); a curve holds at most this many points. */
+#define RUGOSA_CURVE_HEAD_MAX 1.0e4
+#define RUGOSA_CURVE_POINTS_MAX 50
 /* The chart window a project may ask for, which the chart engine draws
  * (src/chart includes this header for these numbers alone): the Reynolds
  * axis within the turbulent correlations' domain and spanning at least
