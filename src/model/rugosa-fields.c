@@ -291,7 +291,7 @@ static RugosaField settings_fields[] = {
     N_("The price of one kilowatt hour of electricity, in the project's currency."),
     "/kWh", "--energy-price", 0, NULL, NULL, 0, S (energy_price), -1, 0 },
   { "service-life", "energy.service_life_years", RUGOSA_FIELD_NUMBER,
-    RUGOSA_DISPLAY_AGE, SECONDS_PER_YEAR, 1.0, 100.0, 30.0, NULL, RUGOSA_FIELD_SEEDED,
+    RUGOSA_DISPLAY_AGE, SECONDS_PER_YEAR, 1.0, RUGOSA_LIFE_YEARS_MAX, 30.0, NULL, RUGOSA_FIELD_SEEDED,
     N_("Service life"),
     N_("The years of service over which the energy cost is summed, year by year as the roughness grows, and discounted."),
     NULL, "--life", 0, NULL, NULL, 0, S (service_life), -1, 0 },

@@ -139,6 +139,10 @@ const char *rugosa_field_label (const RugosaField *field);
  * 1000 bar of water); a curve holds at most this many points. */
 #define RUGOSA_CURVE_HEAD_MAX 1.0e4
 #define RUGOSA_CURVE_POINTS_MAX 50
+/* The longest service life whose energy is summed, years (the range of
+ * the row "service-life"; the year-by-year costs are kept in arrays of
+ * this size). */
+#define RUGOSA_LIFE_YEARS_MAX 100
 /* The chart window a project may ask for, which the chart engine draws
  * (src/chart includes this header for these numbers alone): the Reynolds
  * axis within the turbulent correlations' domain and spanning at least
