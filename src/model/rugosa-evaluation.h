@@ -42,6 +42,16 @@ typedef struct {
   double electric_power_new_w; /* the same when new */
 } RugosaOperatingPoint;
 
+/* How the search for a duty point ended. */
+typedef enum {
+  RUGOSA_DUTY_NONE = 0,       /* no pump curve of three or more points */
+  RUGOSA_DUTY_FOUND,
+  RUGOSA_DUTY_PUMP_BELOW,     /* the pump's head is below the line's over
+                               * the pump's whole range: no crossing */
+  RUGOSA_DUTY_PUMP_ABOVE,     /* … above it up to the pump's largest flow */
+  RUGOSA_DUTY_FAILED,         /* the line did not evaluate in that range */
+} RugosaDutyOutcome;
+
 /* Pumping energy, costs and the pump's duty point of a line (computed by
  * rugosa-life-cycle.c, whose opening comment gives the methods).  Money is
  * in the project's currency. */
@@ -62,6 +72,7 @@ typedef struct {
   double duty_flow_m3_s, duty_head_m;
   gboolean duty_new_ok;       /* … and when new */
   double duty_new_flow_m3_s, duty_new_head_m;
+  RugosaDutyOutcome duty_outcome, duty_new_outcome;
 } RugosaLineEnergy;
 
 typedef struct {

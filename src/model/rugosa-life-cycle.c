@@ -334,14 +334,7 @@ brent_step (Brent *s, DutyFunction *f, double tol)
     }
 }
 
-typedef enum {
-  DUTY_FOUND,
-  DUTY_PUMP_BELOW,   /* the pump's head is below the line's over its range */
-  DUTY_PUMP_ABOVE,   /* … above it up to the largest given flow */
-  DUTY_FAILED,       /* the line did not evaluate at a flow of the range */
-} DutyOutcome;
-
-static DutyOutcome
+static RugosaDutyOutcome
 duty_point (const RugosaLineSetup *setup, const RugosaPumpFit *fit, double age,
             gboolean new, double *flow, double *head, RgError *err)
 {
@@ -357,7 +350,7 @@ duty_point (const RugosaLineSetup *setup, const RugosaPumpFit *fit, double age,
       qs[i] = q0 + (q1 - q0) * i / DUTY_SAMPLES;
       g[i] = duty_g (&f, qs[i]);
       if (f.failed)
-        return DUTY_FAILED;
+        return RUGOSA_DUTY_FAILED;
       any_above |= g[i] >= 0.0;
       /* the crossing at the largest flow: where a rising system curve meets
        * a falling pump curve, the stable point of operation */
@@ -365,7 +358,7 @@ duty_point (const RugosaLineSetup *setup, const RugosaPumpFit *fit, double age,
         crossing = i - 1;
     }
   if (crossing < 0)
-    return any_above ? DUTY_PUMP_ABOVE : DUTY_PUMP_BELOW;
+    return any_above ? RUGOSA_DUTY_PUMP_ABOVE : RUGOSA_DUTY_PUMP_BELOW;
 
   s.a = s.c = qs[crossing];
   s.fa = s.fc = g[crossing];
@@ -391,36 +384,44 @@ duty_point (const RugosaLineSetup *setup, const RugosaPumpFit *fit, double age,
         break;
       brent_step (&s, &f, tol);
       if (f.failed)
-        return DUTY_FAILED;
+        return RUGOSA_DUTY_FAILED;
     }
   *flow = s.b;
   *head = rugosa_pump_fit_head (fit, s.b);
-  return DUTY_FOUND;
+  return RUGOSA_DUTY_FOUND;
 }
 
-static void
-duty_warning (RugosaOperatingPoint *p, DutyOutcome outcome, gboolean new,
-              const RgError *err)
+const char *
+rugosa_duty_outcome_sentence (RugosaDutyOutcome outcome, gboolean new)
 {
   switch (outcome)
     {
-    case DUTY_PUMP_BELOW:
-      rg_warnings_add (&p->warnings, "%s", new
-                       ? _("When new, the pump curve lies below the system curve over the pump's whole range of flow: the curves do not cross, and there is no duty point.")
-                       : _("At the service age, the pump curve lies below the system curve over the pump's whole range of flow: the curves do not cross, and there is no duty point."));
-      break;
-    case DUTY_PUMP_ABOVE:
-      rg_warnings_add (&p->warnings, "%s", new
-                       ? _("When new, the pump curve lies above the system curve up to the pump's largest given flow: the curves do not cross in the pump's range, and there is no duty point.")
-                       : _("At the service age, the pump curve lies above the system curve up to the pump's largest given flow: the curves do not cross in the pump's range, and there is no duty point."));
-      break;
-    case DUTY_FAILED:
-      rg_warnings_add (&p->warnings, "%s", err->text);
-      break;
-    case DUTY_FOUND:
+    case RUGOSA_DUTY_PUMP_BELOW:
+      return new
+        ? _("When new, the pump curve lies below the system curve over the pump's whole range of flow: the curves do not cross, and there is no duty point.")
+        : _("At the service age, the pump curve lies below the system curve over the pump's whole range of flow: the curves do not cross, and there is no duty point.");
+    case RUGOSA_DUTY_PUMP_ABOVE:
+      return new
+        ? _("When new, the pump curve lies above the system curve up to the pump's largest given flow: the curves do not cross in the pump's range, and there is no duty point.")
+        : _("At the service age, the pump curve lies above the system curve up to the pump's largest given flow: the curves do not cross in the pump's range, and there is no duty point.");
+    case RUGOSA_DUTY_NONE:
+    case RUGOSA_DUTY_FOUND:
+    case RUGOSA_DUTY_FAILED:
     default:
-      break;
+      return NULL;
     }
+}
+
+static void
+duty_warning (RugosaOperatingPoint *p, RugosaDutyOutcome outcome, gboolean new,
+              const RgError *err)
+{
+  const char *sentence = rugosa_duty_outcome_sentence (outcome, new);
+
+  if (sentence != NULL)
+    rg_warnings_add (&p->warnings, "%s", sentence);
+  else if (outcome == RUGOSA_DUTY_FAILED && err != NULL)
+    rg_warnings_add (&p->warnings, "%s", err->text);
 }
 
 /* ---- the service life -------------------------------------------------- */
@@ -504,8 +505,12 @@ _rugosa_life_cycle_compute (RugosaProject *self, RugosaLine *line,
 
   life->has_pump = rugosa_pump_fit_init (&fit, line->pump_curve);
   if (life->has_pump)
-    life->duty_new_ok = duty_point (&setup, &fit, 0.0, TRUE, &life->duty_new_flow_m3_s,
-                                    &life->duty_new_head_m, &err) == DUTY_FOUND;
+    {
+      rg_error_clear (&life->duty_new_error);
+      life->duty_new_outcome = duty_point (&setup, &fit, 0.0, TRUE, &life->duty_new_flow_m3_s,
+                                           &life->duty_new_head_m, &life->duty_new_error);
+      life->duty_new_ok = life->duty_new_outcome == RUGOSA_DUTY_FOUND;
+    }
   _rugosa_line_setup_clear (&setup);
 }
 
@@ -580,25 +585,19 @@ _rugosa_life_cycle_fill (RugosaProject *self, RugosaLine *line,
   if (en->has_pump && design->ok)
     {
       RgError err;
-      DutyOutcome at_age;
 
       rg_error_clear (&err);
+      /* when new: the same search at age 0, cached with the life sums */
       en->duty_new_ok = life->duty_new_ok;
+      en->duty_new_outcome = life->duty_new_outcome;
       en->duty_new_flow_m3_s = life->duty_new_flow_m3_s;
       en->duty_new_head_m = life->duty_new_head_m;
-      at_age = duty_point (setup, &fit, r->age_years, FALSE, &en->duty_flow_m3_s,
-                           &en->duty_head_m, &err);
-      en->duty_ok = at_age == DUTY_FOUND;
-      /* when new: the same search at age 0, cached with the life sums */
-      if (r->age_years > 0.0 && !life->duty_new_ok)
-        {
-          RgError err_new;
-          double q, h;
-
-          rg_error_clear (&err_new);
-          duty_warning (design, duty_point (setup, &fit, 0.0, TRUE, &q, &h, &err_new),
-                        TRUE, &err_new);
-        }
-      duty_warning (design, at_age, FALSE, &err);
+      en->duty_outcome = duty_point (setup, &fit, r->age_years, FALSE, &en->duty_flow_m3_s,
+                                     &en->duty_head_m, &err);
+      en->duty_ok = en->duty_outcome == RUGOSA_DUTY_FOUND;
+      /* at age 0 the two searches are one: said once */
+      if (r->age_years > 0.0)
+        duty_warning (design, life->duty_new_outcome, TRUE, &life->duty_new_error);
+      duty_warning (design, en->duty_outcome, FALSE, &err);
     }
 }

@@ -65,7 +65,15 @@ typedef struct {
   gboolean has_pump;
   gboolean duty_new_ok;
   double duty_new_flow_m3_s, duty_new_head_m;
+  RugosaDutyOutcome duty_new_outcome;
+  RgError duty_new_error;      /* when the outcome is RUGOSA_DUTY_FAILED */
 } RugosaLifeCycle;
+
+/* The warning for a duty point not found (the sentence the results give),
+ * when new or at the service age; NULL for RUGOSA_DUTY_NONE, _FOUND and
+ * _FAILED (whose sentence is the evaluation's). */
+const char *rugosa_duty_outcome_sentence (RugosaDutyOutcome outcome,
+                                          gboolean new);
 
 /* Computed once per change of the line or the settings; borrowed. */
 const RugosaLifeCycle *rugosa_project_get_life_cycle (RugosaProject *self,
