@@ -435,6 +435,24 @@ rugosa_field_label (const RugosaField *field)
   return _(field->label);
 }
 
+/* Four significant figures without trailing zeros ("100", "0.15"). */
+static char *
+plain_number (double x)
+{
+  char *s = rugosa_display_significant (x, 4);
+
+  if (strchr (s, '.') != NULL && strchr (s, 'e') == NULL)
+    {
+      char *end = s + strlen (s) - 1;
+
+      while (*end == '0')
+        *end-- = '\0';
+      if (*end == '.')
+        *end = '\0';
+    }
+  return s;
+}
+
 gboolean
 rugosa_field_in_range (const RugosaField *field, double stored,
                        const char *unit, RgError *err)
@@ -456,15 +474,26 @@ rugosa_field_in_range (const RugosaField *field, double stored,
   if (err == NULL)
     return FALSE;
 
-  if (info != NULL)
+  if (info != NULL && unit == NULL && field->to_si != 1.0)
+    {
+      /* kept per year (a service age, a life): the range in years, as
+       * the row stores it, rather than in seconds */
+      g_autofree char *a = plain_number (field->min);
+      g_autofree char *b = plain_number (field->max);
+      const char *stored_unit = rugosa_field_si_unit (field);
+
+      lo = g_strdup_printf ("%s %s", a, stored_unit);
+      hi = g_strdup_printf ("%s %s", b, stored_unit);
+    }
+  else if (info != NULL)
     {
       lo = rugosa_display_format (info->quantity, field->min * field->to_si, unit);
       hi = rugosa_display_format (info->quantity, field->max * field->to_si, unit);
     }
   else
     {
-      g_autofree char *a = rugosa_display_significant (field->min, 4);
-      g_autofree char *b = rugosa_display_significant (field->max, 4);
+      g_autofree char *a = plain_number (field->min);
+      g_autofree char *b = plain_number (field->max);
 
       lo = field->unit_text ? g_strdup_printf ("%s %s", a, field->unit_text) : g_strdup (a);
       hi = field->unit_text ? g_strdup_printf ("%s %s", b, field->unit_text) : g_strdup (b);
@@ -531,7 +560,10 @@ rugosa_field_parse_text (const RugosaField *field, const char *text,
         trimmed[strlen (trimmed) - strlen (field->unit_text)] = '\0';
       if (!is_bare_number (trimmed, &x))
         {
-          g_autofree char *shown = g_utf8_make_valid (text, 40);
+          /* the text as typed, at most 40 characters of it (a length
+           * given to g_utf8_make_valid would read past a shorter text) */
+          g_autofree char *valid = g_utf8_make_valid (text, -1);
+          g_autofree char *shown = g_utf8_substring (valid, 0, MIN (g_utf8_strlen (valid, -1), 40));
           g_autofree char *msg = NULL;
 
           g_strdelimit (shown, "\n\r\t", ' ');

@@ -504,6 +504,74 @@ printable (const char *s)
   return g_string_free (out, FALSE);
 }
 
+/* The pumping energy and costs, one row per line (the values of the whole
+ * line, given with its design point). */
+static void
+format_energy_table (RugosaProject *self, double age, int name_width, GString *out)
+{
+  static const struct { const char *key; int width; } cols[] = {
+    { "pump_power", 9 }, { "energy", 15 }, { "energy_cost_per_year", 11 },
+    { "capital_cost", 11 }, { "life_energy_cost_pv", 13 }, { "life_cycle_cost", 14 },
+    { "duty_flow_new", 14 }, { "duty_flow", 14 },
+  };
+  /* TRANSLATORS: short column titles of rugosa-cli's energy table: electric
+   * power at the design flow, energy and cost of a year, capital cost,
+   * present value of the energy over the service life, life-cycle cost,
+   * the pump's duty flow when new and at the service age */
+  static const char *const titles[] = {
+    N_("P"), N_("energy"), N_("cost/yr"), N_("capital"), N_("energy PV"),
+    N_("life cycle"), N_("duty new"), N_("duty aged"),
+  };
+  RugosaSettings *units = self->settings;
+
+  G_STATIC_ASSERT (G_N_ELEMENTS (cols) == G_N_ELEMENTS (titles));
+  {
+    char life[G_ASCII_DTOSTR_BUF_SIZE], rate[G_ASCII_DTOSTR_BUF_SIZE];
+    g_autofree char *head = NULL;
+
+    g_ascii_formatd (life, sizeof life, "%.4g", rugosa_settings_get_double (units, "service-life"));
+    g_ascii_formatd (rate, sizeof rate, "%.4g", rugosa_settings_get_double (units, "discount-rate"));
+    /* TRANSLATORS: the service life in years, then the discount rate in per cent */
+    head = g_strdup_printf (_("Pumping energy and cost; service life %s years, discount rate %s %% a year."),
+                            life, rate);
+    g_string_append_c (out, '\n');
+    g_string_append (out, head);
+    g_string_append_c (out, '\n');
+  }
+  append_cell (out, _("line"), name_width);
+  for (guint c = 0; c < G_N_ELEMENTS (cols); c++)
+    {
+      const RugosaOutputKey *k = rugosa_output_key_find (cols[c].key);
+      const char *unit = rugosa_output_unit (units, k->display);
+      g_autofree char *t = unit ? g_strdup_printf ("%s %s", _(titles[c]), rugosa_display_unit_label (k->display, unit))
+                                : g_strdup (_(titles[c]));
+      append_cell (out, t, cols[c].width);
+    }
+  g_string_append_c (out, '\n');
+  for (guint i = 0; i < self->lines->len; i++)
+    {
+      RugosaLine *line = g_ptr_array_index (self->lines, i);
+      const RugosaLineResults *r = rugosa_project_get_results_at (self, line, age);
+      const RugosaOperatingPoint *p = &r->points[RUGOSA_FLOW_DESIGN];
+      g_autofree char *name = printable (rugosa_line_get_name (line));
+
+      append_cell (out, name, name_width);
+      for (guint c = 0; c < G_N_ELEMENTS (cols); c++)
+        {
+          const RugosaOutputKey *k = rugosa_output_key_find (cols[c].key);
+
+          g_autofree char *v = NULL;
+
+          /* whole units of money and energy, four figures of the rest */
+          if (r->ok && p->ok && rugosa_output_present_for (k, r, p))
+            v = rugosa_display_significant (in_unit (k->display, k->number (r, p),
+                                                     rugosa_output_unit (units, k->display)), 4);
+          append_cell (out, v != NULL ? v : "—", cols[c].width);
+        }
+      g_string_append_c (out, '\n');
+    }
+}
+
 static void
 format_table (RugosaProject *self, double age, GString *out)
 {
@@ -592,6 +660,7 @@ format_table (RugosaProject *self, double age, GString *out)
             g_string_append_printf (out, "    ! %s\n", p->warnings.text[w]);
         }
     }
+  format_energy_table (self, age, name_width, out);
 }
 
 gboolean
