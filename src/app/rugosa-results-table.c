@@ -8,6 +8,7 @@
 #include <string.h>
 
 #include "model/rugosa-display.h"
+#include "model/rugosa-units.h"
 #include "rugosa-readout.h"
 #include "rugosa-results-table.h"
 
@@ -34,6 +35,10 @@ typedef struct {
   const char *title;
   const char *unit_key;   /* GSettings key whose unit goes in the title */
   gboolean numeric;
+  /* pumping and cost columns: the title names the project's unit of
+   * `project_unit` (rugosa_settings_get_unit) */
+  gboolean by_project;
+  RugosaDisplayQuantity project_unit;
 } Column;
 
 static const Column columns[] = {
@@ -41,6 +46,12 @@ static const Column columns[] = {
   { "velocity", N_("Velocity"), "unit-velocity", TRUE },
   { "head-loss", N_("Head loss"), "unit-head", TRUE },
   { "change", N_("Loss vs new"), NULL, TRUE },
+  /* the pumping energy and cost of the line (rugosa-life-cycle.c) */
+  { "pump-power", N_("Pump power"), NULL, TRUE, TRUE, RUGOSA_DISPLAY_POWER },
+  { "energy", N_("Energy"), NULL, TRUE, TRUE, RUGOSA_DISPLAY_ENERGY_PER_YEAR },
+  { "energy-cost", N_("Energy cost a year"), NULL, TRUE, TRUE, RUGOSA_DISPLAY_MONEY },
+  { "life-cycle-cost", N_("Life-cycle cost"), NULL, TRUE, TRUE, RUGOSA_DISPLAY_MONEY },
+  { "duty-flow", N_("Duty flow, new → aged"), NULL, TRUE, TRUE, RUGOSA_DISPLAY_FLOW },
   { "gradient", N_("Gradient"), "unit-gradient", TRUE },
   { "pressure-drop", N_("Pressure drop"), "unit-pressure", TRUE },
   { "reynolds", N_("Re"), NULL, TRUE },
@@ -149,6 +160,36 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
     return rugosa_display_significant_screen (r->friction.roughness_elasticity, 3);
   if (g_strcmp0 (column, "change") == 0)
     return rugosa_readout_change (p->head_loss_ratio_to_new);
+  {
+    RugosaSettings *ps = rugosa_project_get_settings (self->project);
+    const RugosaLineEnergy *en = &res->energy;
+
+    if (g_strcmp0 (column, "pump-power") == 0)
+      return rugosa_display_number_screen (RG_QTY_POWER, p->electric_power_w,
+                                           rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_POWER));
+    if (g_strcmp0 (column, "energy") == 0)
+      return en->ok ? rugosa_display_number_screen (RG_QTY_ENERGY, en->energy_j_per_year,
+                                                    rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_ENERGY_PER_YEAR))
+                    : g_strdup ("—");
+    if (g_strcmp0 (column, "energy-cost") == 0)
+      return en->ok ? rugosa_display_money_screen (en->cost_per_year, NULL) : g_strdup ("—");
+    if (g_strcmp0 (column, "life-cycle-cost") == 0)
+      return en->life_ok && en->has_capital ? rugosa_display_money_screen (en->life_cycle_cost, NULL)
+                                            : g_strdup ("—");
+    if (g_strcmp0 (column, "duty-flow") == 0)
+      {
+        const char *u = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_FLOW);
+        g_autofree char *qn = en->duty_new_ok ? rugosa_display_number_screen (RG_QTY_FLOW, en->duty_new_flow_m3_s, u)
+                                              : g_strdup ("—");
+        g_autofree char *qa = en->duty_ok ? rugosa_display_number_screen (RG_QTY_FLOW, en->duty_flow_m3_s, u)
+                                          : g_strdup ("—");
+
+        if (!en->has_pump)
+          return g_strdup ("—");
+        /* TRANSLATORS: the duty flow when new and at the service age */
+        return g_strdup_printf (_("%s → %s"), qn, qa);
+      }
+  }
   return g_strdup ("");
 }
 
@@ -175,10 +216,14 @@ _rugosa_results_table_update_label (RugosaResultsTable *self,
     }
 }
 
+static void _rugosa_results_table_update_titles (RugosaResultsTable *self);
+
 void
 rugosa_results_table_refresh (RugosaResultsTable *self)
 {
   g_return_if_fail (RUGOSA_IS_RESULTS_TABLE (self));
+  /* the project's units and currency may have changed */
+  _rugosa_results_table_update_titles (self);
   for (guint i = 0; i < self->bound->len; i++)
     _rugosa_results_table_update_label (self, GTK_INSCRIPTION (g_ptr_array_index (self->bound, i)));
 }
@@ -225,6 +270,8 @@ _rugosa_results_table_setup (GtkSignalListItemFactory *factory,
     }
   if (g_strcmp0 (col->id, "zone") == 0)
     gtk_inscription_set_nat_chars (ins, 20);
+  if (g_strcmp0 (col->id, "duty-flow") == 0)
+    gtk_inscription_set_nat_chars (ins, 15);
   g_object_set_data (G_OBJECT (label), "column", (gpointer) col->id);
   gtk_list_item_set_child (item, label);
 }
@@ -264,11 +311,19 @@ _rugosa_results_table_update_titles (RugosaResultsTable *self)
       g_autofree char *unit = col->unit_key ? _unit (self, col->unit_key) : NULL;
       g_autofree char *title = NULL;
 
-      if (unit)
+      if (col->by_project && self->project != NULL)
+        {
+          const char *u = rugosa_settings_get_unit (rugosa_project_get_settings (self->project), col->project_unit);
+          const char *label = rugosa_display_unit_label (col->project_unit, u);
+
+          title = *label != '\0' ? g_strdup_printf ("%s (%s)", _(col->title), label) : g_strdup (_(col->title));
+        }
+      else if (unit)
         title = g_strdup_printf ("%s (%s)", _(col->title), rugosa_display_unit_symbol (unit));
       else
         title = g_strdup (_(col->title));
-      gtk_column_view_column_set_title (c, title);
+      if (g_strcmp0 (gtk_column_view_column_get_title (c), title) != 0)
+        gtk_column_view_column_set_title (c, title);
     }
 }
 
