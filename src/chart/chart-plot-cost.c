@@ -11,7 +11,6 @@
  * such change from dearer to cheaper counts for a pair. */
 #include "chart-plot-private.h"
 
-#include <glib/gi18n-lib.h>
 #include <math.h>
 #include <stdio.h>
 #include <string.h>

@@ -13,7 +13,6 @@
  * the rest to the bottom. */
 #include "chart-plot-private.h"
 
-#include <glib/gi18n-lib.h>
 #include <math.h>
 #include <string.h>
 

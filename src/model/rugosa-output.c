@@ -120,7 +120,7 @@ static const RugosaOutputKey KEYS[] = {
   LINE_NUMBER ("energy_cost_new_per_year", N_("Energy cost per year when new"), MONEY, get_cost_new_per_year, has_energy),
   LINE_NUMBER ("capital_cost", N_("Capital cost"), MONEY, get_capital, has_capital),
   LINE_NUMBER ("life_energy_cost", N_("Energy cost over the service life"), MONEY, get_life_energy_cost, has_life),
-  LINE_NUMBER ("life_energy_cost_pv", N_("Energy cost over the service life, present value"), MONEY, get_life_energy_cost_pv, has_life),
+  LINE_NUMBER ("life_energy_cost_pv", N_("Present value of the energy cost over the service life"), MONEY, get_life_energy_cost_pv, has_life),
   LINE_NUMBER ("life_cycle_cost", N_("Life-cycle cost (capital and present value of energy)"), MONEY, get_life_cycle_cost, has_life_cycle),
   LINE_NUMBER ("duty_flow", N_("Duty flow at the service age"), FLOW, get_duty_flow_m3_s, has_duty),
   LINE_NUMBER ("duty_head", N_("Duty head at the service age"), HEAD, get_duty_head_m, has_duty),
