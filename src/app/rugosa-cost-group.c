@@ -34,6 +34,8 @@ struct _RugosaCostGroup
   /* owned references */
   RugosaLine *line;
   GPtrArray  *point_rows;   /* rows added to pump_row, in point order */
+  GVariant   *shown_curve;  /* the curve the rows show, or NULL */
+  char       *shown_units;  /* the flow and head units they show it in */
   GHashTable *errors;       /* field -> sentence (owned) */
   gboolean    updating;     /* set while widgets follow the line */
 };
@@ -418,6 +420,23 @@ static void
 _rugosa_cost_group_fill_points (RugosaCostGroup *self)
 {
   g_autoptr (GArray) points = _rugosa_cost_group_points (self);
+  g_autoptr (GVariant) curve = NULL;
+  g_autofree char *units = g_strdup_printf ("%s|%s", _rugosa_cost_group_unit (self, RUGOSA_DISPLAY_FLOW),
+                                            _rugosa_cost_group_unit (self, RUGOSA_DISPLAY_HEAD));
+
+  /* rows are rebuilt only when the curve or its units changed: a slider
+   * move or an edit elsewhere leaves them (and a field being typed in)
+   * alone */
+  if (self->line != NULL)
+    g_object_get (self->line, "pump-curve", &curve, NULL);
+  if (curve != NULL && self->shown_curve != NULL && g_variant_equal (curve, self->shown_curve)
+      && g_strcmp0 (units, self->shown_units) == 0)
+    return;
+  g_clear_pointer (&self->shown_curve, g_variant_unref);
+  if (curve != NULL)
+    self->shown_curve = g_variant_ref (curve);
+  g_free (self->shown_units);
+  self->shown_units = g_steal_pointer (&units);
 
   for (guint i = 0; i < self->point_rows->len; i++)
     adw_expander_row_remove (self->pump_row, g_ptr_array_index (self->point_rows, i));
@@ -524,7 +543,8 @@ rugosa_cost_group_refresh (RugosaCostGroup *self)
           if (g_strcmp0 (gtk_editable_get_text (GTK_EDITABLE (entries[i])), text ? text : "") != 0)
             gtk_editable_set_text (GTK_EDITABLE (entries[i]), text ? text : "");
         }
-      adw_expander_row_set_subtitle (self->pump_row, summary);
+      if (g_strcmp0 (adw_expander_row_get_subtitle (self->pump_row), summary) != 0)
+        adw_expander_row_set_subtitle (self->pump_row, summary);
       _rugosa_cost_group_fill_points (self);
     }
   self->updating = FALSE;
@@ -552,8 +572,23 @@ rugosa_cost_group_set_line (RugosaCostGroup *self,
       _rugosa_cost_group_mark (self, "cost-per-metre", GTK_WIDGET (self->per_metre_entry), self->per_metre_row, NULL);
       _rugosa_cost_group_mark (self, "cost-lump-sum", GTK_WIDGET (self->lump_sum_entry), self->lump_sum_row, NULL);
     }
+  if (self->line != line)
+    g_clear_pointer (&self->shown_curve, g_variant_unref);
   g_set_object (&self->line, line);
   rugosa_cost_group_refresh (self);
+}
+
+void
+rugosa_cost_group_refresh_results (RugosaCostGroup *self)
+{
+  g_autofree char *summary = NULL;
+
+  g_return_if_fail (RUGOSA_IS_COST_GROUP (self));
+  if (self->line == NULL)
+    return;
+  summary = _rugosa_cost_group_pump_summary (self);
+  if (g_strcmp0 (adw_expander_row_get_subtitle (self->pump_row), summary) != 0)
+    adw_expander_row_set_subtitle (self->pump_row, summary);
 }
 
 gboolean
@@ -614,6 +649,8 @@ rugosa_cost_group_dispose (GObject *object)
   RugosaCostGroup *self = RUGOSA_COST_GROUP (object);
 
   g_clear_object (&self->line);
+  g_clear_pointer (&self->shown_curve, g_variant_unref);
+  g_clear_pointer (&self->shown_units, g_free);
   g_clear_pointer (&self->point_rows, g_ptr_array_unref);
   g_clear_pointer (&self->errors, g_hash_table_unref);
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_COST_GROUP);

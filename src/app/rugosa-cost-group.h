@@ -23,6 +23,8 @@ void        rugosa_cost_group_set_line     (RugosaCostGroup *self,
                                             RugosaLine      *line);
 /* Re-read the line, its results and the display units. */
 void        rugosa_cost_group_refresh      (RugosaCostGroup *self);
+/* Re-read only what the service age changes (the duty flows). */
+void        rugosa_cost_group_refresh_results (RugosaCostGroup *self);
 /* Commit `text` to a field as if typed and activated (tests): "cost-per-
  * metre", "cost-lump-sum", or "flow:N" / "head:N" of point N. */
 gboolean    rugosa_cost_group_commit_text  (RugosaCostGroup *self,

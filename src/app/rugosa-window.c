@@ -388,13 +388,18 @@ _rugosa_window_refresh_all (RugosaWindow *self)
   for (int v = 0; v < RUGOSA_CHART_N_VIEWS; v++)
     if (self->plot_views[v] != NULL)
       rugosa_plot_view_refresh (self->plot_views[v]);
-  rugosa_cost_group_refresh (self->cost_group);
   rugosa_results_table_refresh (self->results_table);
   /* A slider move changes results, not inputs: the panel's fields stay. */
   if (self->age_changing)
-    rugosa_line_panel_refresh_results (self->line_panel);
+    {
+      rugosa_line_panel_refresh_results (self->line_panel);
+      rugosa_cost_group_refresh_results (self->cost_group);
+    }
   else
-    rugosa_line_panel_refresh (self->line_panel);
+    {
+      rugosa_line_panel_refresh (self->line_panel);
+      rugosa_cost_group_refresh (self->cost_group);
+    }
   _rugosa_window_refresh_rows (self);
   _rugosa_window_update_age_summary (self);
   _rugosa_window_update_actions (self);
