@@ -938,6 +938,10 @@ test_cost_group (void)
   }
   g_assert_false (rugosa_cost_group_commit_text (group, "flow:1", "2 L/s"));
   g_assert_nonnull (strstr (rugosa_cost_group_get_error (group, "flow:1"), "same flow"));
+  adw_expander_row_set_expanded (ADW_EXPANDER_ROW (ui_harness_find_descendant (GTK_WIDGET (group), ADW_TYPE_EXPANDER_ROW)),
+                                 TRUE);
+  ui_harness_wait (600);
+  ui_harness_save_png (GTK_WIDGET (group), "rugosa-cost-group.png");
   ui_harness_close_window (win);
 }
 

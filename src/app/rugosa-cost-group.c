@@ -161,7 +161,7 @@ _rugosa_cost_group_money_commit (RugosaCostGroup *self,
   }
   if (*text != '\0'
       && (!rugosa_field_parse_text (row, text, NULL, 0.0, &v, &err)
-          || !rugosa_field_in_range (row, v, NULL, &err)))
+          || !rugosa_field_in_range (row, v, _rugosa_cost_group_unit (self, RUGOSA_DISPLAY_MONEY), &err)))
     {
       _rugosa_cost_group_mark (self, property, GTK_WIDGET (entry), arow, err.text);
       return FALSE;
@@ -401,7 +401,8 @@ _rugosa_cost_group_value_entry (RugosaCostGroup *self,
   g_autofree char *text = rugosa_display_format_screen (rugosa_display_info (dq)->quantity, si, unit);
 
   gtk_editable_set_text (GTK_EDITABLE (entry), text);
-  gtk_editable_set_width_chars (GTK_EDITABLE (entry), 8);
+  gtk_editable_set_width_chars (GTK_EDITABLE (entry), 6);
+  gtk_editable_set_max_width_chars (GTK_EDITABLE (entry), 8);
   gtk_entry_set_alignment (GTK_ENTRY (entry), 1.0);
   gtk_widget_set_valign (entry, GTK_ALIGN_CENTER);
   gtk_widget_set_tooltip_text (entry, flow ? _("The pump's flow at this point") : _("The pump's head at this point"));
@@ -472,6 +473,11 @@ _rugosa_cost_group_fill_points (RugosaCostGroup *self)
       adw_expander_row_add_row (self->pump_row, row);
       g_ptr_array_add (self->point_rows, row);
     }
+  /* the row that adds a point comes after the points */
+  g_object_ref (self->point_add_row);
+  adw_expander_row_remove (self->pump_row, GTK_WIDGET (self->point_add_row));
+  adw_expander_row_add_row (self->pump_row, GTK_WIDGET (self->point_add_row));
+  g_object_unref (self->point_add_row);
   gtk_widget_set_sensitive (GTK_WIDGET (self->point_add_row), points->len < RUGOSA_CURVE_POINTS_MAX);
 }
 

@@ -474,7 +474,20 @@ rugosa_field_in_range (const RugosaField *field, double stored,
   if (err == NULL)
     return FALSE;
 
-  if (info != NULL && unit == NULL && field->to_si != 1.0)
+  if (field->display == RUGOSA_DISPLAY_MONEY)
+    {
+      /* money in whole units, with the currency label given as `unit`
+       * ("€", so "€/m" for a price per metre) or the row's unit alone */
+      g_autofree char *a = fabs (field->min) >= 1.0e4 ? rugosa_display_money (field->min, NULL)
+                                                      : plain_number (field->min);
+      g_autofree char *b = fabs (field->max) >= 1.0e4 ? rugosa_display_money (field->max, NULL)
+                                                      : plain_number (field->max);
+      g_autofree char *label = g_strconcat (unit ? unit : "", field->unit_text ? field->unit_text : "", NULL);
+
+      lo = *label ? g_strdup_printf ("%s %s", a, label) : g_strdup (a);
+      hi = *label ? g_strdup_printf ("%s %s", b, label) : g_strdup (b);
+    }
+  else if (info != NULL && unit == NULL && field->to_si != 1.0)
     {
       /* kept per year (a service age, a life): the range in years, as
        * the row stores it, rather than in seconds */

@@ -157,7 +157,8 @@ const char *rugosa_field_label (const RugosaField *field);
 
 /* Whether `stored` lies in the field's range; with `why` (may be NULL),
  * one sentence naming the field by its label and giving the range in
- * `unit` (a display spelling for the field's quantity; NULL: SI), and
+ * `unit` (a display spelling for the field's quantity, the currency label
+ * for money; NULL: SI), and
  * `err` (may be NULL) filled the same way with the field's subjects. */
 gboolean rugosa_field_in_range (const RugosaField *field, double stored,
                                 const char *unit, RgError *err);
