@@ -249,6 +249,29 @@ test_capital (void)
   g_assert_false (rugosa_output_present_for (lcc, r, &r->points[RUGOSA_FLOW_MINIMUM]));
 }
 
+/* An efficiency of 0 set around its row (which refuses it) gives no
+ * energy rather than an infinite one: nothing that is not a number
+ * leaves the program. */
+static void
+test_no_efficiency (void)
+{
+  g_autoptr (RugosaLine) line = laminar_line ();
+  g_autoptr (RugosaProject) p = project_with (line);
+  g_autoptr (GString) out = g_string_new (NULL);
+  const RugosaLineResults *r;
+
+  g_object_set (rugosa_project_get_settings (p), "pump-efficiency", 0.0, NULL);
+  r = rugosa_project_get_results (p, line);
+  g_assert_true (r->ok);
+  g_assert_false (r->energy.ok);
+  g_assert_false (r->energy.life_ok);
+  g_assert_true (rugosa_project_format_eval (p, -1.0, RUGOSA_EVAL_FORMAT_JSON, out, NULL));
+  g_assert_null (strstr (out->str, "inf"));
+  g_assert_null (strstr (out->str, "nan"));
+  g_assert_null (strstr (out->str, "null"));
+  g_assert_null (strstr (out->str, "energy_kWh_per_year"));
+}
+
 /* ---- the duty point -------------------------------------------------- */
 
 /* A water-like line with plain K fittings (no catalog) and aging, and a
@@ -469,6 +492,7 @@ main (int argc, char **argv)
   g_test_add_func ("/life-cycle/present-value", test_present_value);
   g_test_add_func ("/life-cycle/life-bounds", test_life_bounds);
   g_test_add_func ("/life-cycle/capital", test_capital);
+  g_test_add_func ("/life-cycle/no-efficiency", test_no_efficiency);
   g_test_add_func ("/life-cycle/duty-point", test_duty_point);
   g_test_add_func ("/life-cycle/no-crossing", test_no_crossing);
   g_test_add_func ("/life-cycle/system-curve", test_system_curve);

@@ -220,10 +220,19 @@ pump_power (const RugosaLineSetup *setup, double q, const RgLineResult *r,
   *hydraulic = setup->props.density_kg_m3 * RG_GRAVITY * q * h;
 }
 
+/* The pump and motor efficiency as a fraction; its row keeps it above 0
+ * (a value set around the row would give no energy, not an infinite one:
+ * the callers check `usable_efficiency` first). */
 static double
 efficiency (RugosaSettings *settings)
 {
   return settings->pump_efficiency / 100.0;
+}
+
+static gboolean
+usable_efficiency (RugosaSettings *settings)
+{
+  return settings->pump_efficiency > 0.0 && settings->pump_efficiency <= 100.0;
 }
 
 /* The hours a year at each flow case of a line with the cases `present`. */
@@ -476,6 +485,12 @@ _rugosa_life_cycle_compute (RugosaProject *self, RugosaLine *line,
   life->service_life_years = n;
   life->capital = line->cost_per_metre * line->length + line->cost_lump_sum;
   life->has_capital = line->cost_per_metre > 0.0 || line->cost_lump_sum > 0.0;
+  if (!usable_efficiency (settings))
+    {
+      rugosa_field_in_range (rugosa_field_find ("pump-efficiency"), settings->pump_efficiency, NULL, &err);
+      g_strlcpy (life->error, err.text, sizeof life->error);
+      return;
+    }
   if (!_rugosa_line_setup_init (self, line, &setup, &err))
     {
       g_strlcpy (life->error, err.text, sizeof life->error);
@@ -529,7 +544,7 @@ _rugosa_life_cycle_fill (RugosaProject *self, RugosaLine *line,
   RugosaPumpFit fit;
   gsize n_points;
 
-  if (!r->ok)
+  if (!r->ok || !usable_efficiency (settings))
     return;
   en->ok = TRUE;
   for (int c = 0; c < RUGOSA_N_FLOWS; c++)
