@@ -47,7 +47,7 @@ main (void)
 {
   enum { FULL_RUNS = 41, OVERLAY_RUNS = 201, LINES = 10, CURVES = 30 };
   RugosaChartSpec spec;
-  RgError err;
+  RgError err = { 0 };
   static SampleSet sets[2];
   static double t_full[FULL_RUNS], t_over[OVERLAY_RUNS];
 

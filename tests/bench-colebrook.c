@@ -107,7 +107,7 @@ main (void)
   double t_cb[BENCH_REPS], t_ha[BENCH_REPS], ratio[BENCH_REPS];
   volatile double sink = 0.0;
   uint64_t seed = UINT64_C (0x9e3779b97f4a7c15);
-  RgError err;
+  RgError err = { 0 };
 
   if (re == NULL || rr == NULL)
     {

@@ -102,7 +102,13 @@ LINE_KEYS = {"velocity_m_s", "reynolds", "relative_roughness", "friction_factor"
              "head_loss_major_m", "head_loss_minor_m", "head_loss_total_m", "pressure_drop_Pa",
              "gradient_m_per_100m", "wall_shear_Pa", "density_kg_m3", "dynamic_viscosity_Pa_s",
              "roughness_elasticity", "inner_diameter_m", "roughness_m", "roughness_new_m",
-             "head_loss_ratio_to_new", "minor_loss_k_total", "warnings"}
+             "head_loss_ratio_to_new", "minor_loss_k_total",
+             # pumping (the default energy settings); values of the whole
+             # line come with its design point
+             "pump_head_m", "hydraulic_power_kW", "pump_power_kW", "pump_power_new_kW",
+             "energy_kWh_per_year", "energy_new_kWh_per_year", "energy_cost_per_year",
+             "energy_cost_new_per_year", "life_energy_cost", "life_energy_cost_pv",
+             "warnings"}
 G = 9.80665  # Source: standard gravity, CGPM 1901
 
 code, out, err = run("line", "--flow", "150 gpm", "--diameter", "4 in", "--length", "1000 ft",
@@ -131,6 +137,15 @@ if doc:
     check("line gradient", close(doc["gradient_m_per_100m"], 100 * hmaj / length, 1e-12))
     check("line shear", close(doc["wall_shear_Pa"], f * rho * v * v / 8, 1e-12))
     check("line regime", doc["regime"] == "turbulent")
+    # Source: hand arithmetic: H = losses + Δz, P_h = ρ·g·Q·H, P_e = P_h/η
+    # with the default η = 70 %, E = P_e · 8000 h (the default hours), in kW
+    # and kWh as the keys say, cost at the default 0.15 per kWh
+    head = hmaj + hmin + 3.0
+    p_e = rho * G * q * head / 0.70 / 1000.0
+    check("line pump head", close(doc["pump_head_m"], head, 1e-12))
+    check("line pump power kW", close(doc["pump_power_kW"], p_e, 1e-12))
+    check("line energy kWh", close(doc["energy_kWh_per_year"], p_e * 8000.0, 1e-12))
+    check("line energy cost", close(doc["energy_cost_per_year"], p_e * 8000.0 * 0.15, 1e-12))
 
 # custom fluid with kinematic viscosity: μ = ν·ρ
 code, out, err = run("line", "--flow", "0.2", "--diameter", "0.2", "--length", "500",
@@ -195,6 +210,62 @@ for line in project["lines"]:
         check(f"eval vs line {line['name']} {key}", key in ref and close(row[key], ref[key], 1e-12),
               f"{row.get(key)} vs {ref.get(key)}")
 
+# --- eval: pumping energy, life-cycle cost and the duty point ---------------
+ENERGY_KEYS = {"pump_power_kW", "energy_kWh_per_year", "energy_cost_per_year", "life_energy_cost",
+               "life_energy_cost_pv", "life_cycle_cost", "capital_cost", "duty_flow_m3_s", "duty_head_m",
+               "duty_flow_new_m3_s", "duty_head_new_m"}
+code, out, err = run("eval", demo, "--format", "json")
+doc = json.loads(out) if code == 0 else {"results": []}
+for line in project["lines"]:
+    rows = {r["case"]: r for r in doc["results"] if r["line"] == line["name"]}
+    design = rows.get("design", {})
+    # the demo gives every line a capital cost and a pump that meets it
+    check(f"eval energy keys {line['name']}", ENERGY_KEYS <= set(design), sorted(ENERGY_KEYS - set(design)))
+    for case, row in rows.items():
+        if case != "design":
+            check(f"eval line values only at design {line['name']} {case}",
+                  "life_cycle_cost" not in row and "duty_flow_m3_s" not in row and "pump_power_kW" in row)
+    if ENERGY_KEYS <= set(design):
+        cost = line["cost"]
+        capital = cost.get("price_per_m", 0) * line["length_m"] + cost.get("lump_sum", 0)
+        # Source: hand arithmetic: capital = price per metre × length + lump sum;
+        # life-cycle cost = capital + present value of the energy
+        check(f"eval capital {line['name']}", close(design["capital_cost"], capital, 1e-15))
+        check(f"eval life-cycle {line['name']}",
+              close(design["life_cycle_cost"], capital + design["life_energy_cost_pv"], 1e-14))
+        # Common practice (no single source): a rougher pipe delivers less
+        # from the same pump (the demo's lines do not get smoother)
+        check(f"eval duty aged <= new {line['name']}",
+              design["duty_flow_m3_s"] <= design["duty_flow_new_m3_s"] * (1 + 1e-12))
+
+# one run's energy settings: a doubled price doubles the cost (Source: hand
+# arithmetic, cost = energy × price), the file is not changed
+code, out2, err = run("eval", demo, "--format", "json", "--energy-price", "0.32 /kWh", "--currency", "USD")
+doc2 = json.loads(out2) if code == 0 else {"results": []}
+check("eval --energy-price exit", code == 0, err)
+before = open(demo, encoding="utf-8").read()
+for a, b in zip(doc["results"], doc2["results"]):
+    if a["case"] == "design" and "energy_cost_per_year" in a:
+        check(f"eval --energy-price {a['line']}",
+              close(b["energy_cost_per_year"], a["energy_cost_per_year"] * 2.0, 1e-14)
+              and close(b["energy_kWh_per_year"], a["energy_kWh_per_year"], 1e-15))
+check("eval overrides leave the file alone", open(demo, encoding="utf-8").read() == before)
+code, out, err = run("eval", demo, "--format", "csv", "--currency", "USD")
+check("eval csv names the currency", code == 0 and "life_cycle_cost (USD)" in out.splitlines()[0], out[:300])
+check("eval csv names kWh per year", code == 0 and "energy (kWh/yr)" in out.splitlines()[0], out[:300])
+for name, args, needle in [
+    ("efficiency 0", ["--efficiency", "0"], "--efficiency"),
+    ("efficiency above 100", ["--efficiency", "101 %"], "--efficiency"),
+    ("hours beyond a year", ["--hours", "8000", "--hours-maximum", "1000"], "--hours"),
+    ("negative price", ["--energy-price", "-1"], "--energy-price"),
+    ("life 0", ["--life", "0"], "--life"),
+    ("rate not a number", ["--discount-rate", "five"], "--discount-rate"),
+    ("currency too long", ["--currency", "X" * 40], "--currency"),
+]:
+    code, out, err = run("eval", demo, *args)
+    check(f"eval refuses {name}", code == 2 and out == "" and len(err.splitlines()) == 1
+          and err.startswith("rugosa-cli: " + needle), f"{code} {err!r}")
+
 code, out, err = run("eval", "/nonexistent/x.rugosa")
 check("eval missing file", code == 2 and out == "" and len(err.splitlines()) == 1, err)
 
@@ -211,11 +282,25 @@ def run_env(extra, *args):
     return p.returncode, p.stdout, p.stderr
 
 
-for ext, magic in (("png", b"\x89PNG"), ("svg", b"<?xml"), ("pdf", b"%PDF")):
-    path = os.path.join(tmp, "demo." + ext)
-    code, out, err = run_env(env_date, "render", demo, "-o", path, "--width", "1200", "--height", "800")
-    ok = code == 0 and out == "" and os.path.exists(path)
-    check(f"render {ext}", ok and open(path, "rb").read(5).startswith(magic), err)
+for view in ("friction", "system", "cost"):
+    for ext, magic in (("png", b"\x89PNG"), ("svg", b"<?xml"), ("pdf", b"%PDF")):
+        path = os.path.join(tmp, f"demo-{view}." + ext)
+        code, out, err = run_env(env_date, "render", demo, "-o", path, "--width", "1200",
+                                 "--height", "800", "--view", view)
+        ok = code == 0 and out == "" and os.path.exists(path)
+        check(f"render {view} {ext}", ok and open(path, "rb").read(5).startswith(magic), err)
+    if view == "friction":
+        shutil.copyfile(os.path.join(tmp, "demo-friction.pdf"), os.path.join(tmp, "demo.pdf"))
+pdftotext_views = shutil.which("pdftotext")
+if pdftotext_views:
+    # Common practice (no single source): each view carries its axis titles,
+    # the caution with the date, and the system view the names of the lines
+    for view, needles in (("system", ("Flow", "Head", "PE100 200 SDR 11", "licensed engineer", "2025-12-02")),
+                          ("cost", ("Years of service", "Cumulative cost", "pays back after", "licensed engineer"))):
+        text = subprocess.run([pdftotext_views, os.path.join(tmp, f"demo-{view}.pdf"), "-"],
+                              capture_output=True, text=True).stdout
+        for needle in needles:
+            check(f"render {view} pdf text {needle}", needle in text, text[:200])
 pdftotext = shutil.which("pdftotext")
 if pdftotext:
     text = subprocess.run([pdftotext, os.path.join(tmp, "demo.pdf"), "-"], capture_output=True,
@@ -235,6 +320,7 @@ for name, args, needle in [
     ("tiny width", ["render", demo, "-o", a, "--width", "10"], "--width"),
     ("nan height", ["render", demo, "-o", a, "--height", "nan"], "--height"),
     ("bad theme", ["render", demo, "-o", a, "--theme", "sepia"], "--theme"),
+    ("bad view", ["render", demo, "-o", a, "--view", "pump"], "--view"),
     ("bad age", ["render", demo, "-o", a, "--age", "-3"], "--age"),
     ("missing project", ["render", "/nonexistent.rugosa", "-o", a], "nonexistent"),
 ]:

@@ -17,7 +17,7 @@ static RugosaChart *
 chart_with (double w, double h, unsigned show, RugosaChartTheme theme)
 {
   RugosaChartSpec spec;
-  RgError err;
+  RgError err = { 0 };
   rugosa_chart_spec_init (&spec);
   spec.width = w;
   spec.height = h;
@@ -75,7 +75,7 @@ static void
 test_spec_defaults (void)
 {
   RugosaChartSpec spec;
-  RgError err;
+  RgError err = { 0 };
   rugosa_chart_spec_init (&spec);
   /* Common practice (no single source): friction charts run Re from the
    * laminar range (a few hundred) to 1e8 and f from about 0.006 to 0.1. */
@@ -150,7 +150,7 @@ test_rr_through (void)
    * solver's 1e-13 in f by up to 1e3 in ε/D, plus cancellation. */
   static const double RE[] = { 4e3, 1e4, 1e5, 1e6, 1e7, 1e8 };
   static const double RR[] = { 1e-5, 1e-4, 1e-3, 1e-2, 5e-2 };
-  RgError err;
+  RgError err = { 0 };
   for (size_t i = 0; i < G_N_ELEMENTS (RE); i++)
     for (size_t j = 0; j < G_N_ELEMENTS (RR); j++)
       {

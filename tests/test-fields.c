@@ -85,6 +85,7 @@ test_properties (void)
               break;
             case RUGOSA_FIELD_FITTINGS:
             case RUGOSA_FIELD_UNIT_MAP:
+            case RUGOSA_FIELD_CURVE:
               g_assert_true (G_IS_PARAM_SPEC_VARIANT (p));
               break;
             default:
@@ -232,10 +233,11 @@ test_reader_ranges (void)
           d_below = document_with (f, t, below);
           d_lo = document_with (f, t, lo);
           /* the settings' relations (the transition in order, the chart's
-           * axes wide enough) refuse some lone ends; the flows' order too:
-           * the range alone is checked for those by the refusals below */
+           * axes wide enough, the hours within a year) refuse some lone
+           * ends; the flows' order too: the range alone is checked for
+           * those by the refusals below */
           if (!g_str_has_prefix (f->path, "chart.") && !g_str_has_prefix (f->path, "transition.")
-              && !g_str_has_prefix (f->path, "flow."))
+              && !g_str_has_prefix (f->path, "flow.") && !g_str_has_prefix (f->path, "energy.hours"))
             {
               g_assert_true (loads (d_lo, &error));
               g_assert_no_error (error);
@@ -279,12 +281,15 @@ test_writer (void)
             double v = rows[i].dflt + 0.25 * (rows[i].max - rows[i].dflt);
 
             if (g_str_has_prefix (rows[i].path, "chart.") || g_str_has_prefix (rows[i].path, "transition.")
-                || g_str_has_prefix (rows[i].path, "flow."))
+                || g_str_has_prefix (rows[i].path, "flow.") || g_str_has_prefix (rows[i].path, "energy.hours"))
               continue;
             g_object_set (target, rows[i].property, v, NULL);
           }
     }
-  g_object_set (line, "flow-minimum", 0.005, "flow-maximum", 0.02, NULL);
+  g_object_set (line, "flow-minimum", 0.005, "flow-maximum", 0.02,
+                "pump-curve", g_variant_new_parsed ("[(0.0, 40.0), (0.01, 35.5), (0.02, 22.25)]"), NULL);
+  g_object_set (rugosa_project_get_settings (p), "currency", "Ł$",
+                "hours-design", 5000.0, "hours-minimum", 1500.5, "hours-maximum", 250.0, NULL);
   text = rugosa_project_to_data (p, &length);
   q = rugosa_project_new_from_data (text, length, &error);
   g_assert_no_error (error);
@@ -343,6 +348,8 @@ test_schema (void)
       else if (f->kind == RUGOSA_FIELD_ENUM)
         g_assert_cmpstr (g_variant_get_string (dflt, NULL), ==,
                          rugosa_enum_nick (f->enum_type (), (int) f->dflt));
+      else if (f->kind == RUGOSA_FIELD_TEXT)
+        g_assert_cmpstr (g_variant_get_string (dflt, NULL), ==, f->dflt_text);
     }
   /* a unit key for every display quantity */
   for (int q = 0; q < RUGOSA_N_DISPLAY; q++)
@@ -356,6 +363,81 @@ test_schema (void)
       g_strdelimit (name, "_", '-');
       g_assert_true (g_settings_schema_has_key (schema, name));
     }
+}
+
+/* A curve row (the pump curve): points read in order with their kept
+ * members, written back, and every malformed point refused at its path.
+ * The expected values are the document's own. */
+static void
+test_curve (void)
+{
+  const RugosaField *row = rugosa_field_find ("pump-curve");
+  static const struct { const char *value; const char *where; } bad[] = {
+    { "{}", "lines[0].pump.curve: " },
+    { "[{\"flow_m3_s\": 0.02, \"head_m\": 30}, {\"flow_m3_s\": 0.01, \"head_m\": 35}]",
+      "lines[0].pump.curve[1].flow_m3_s: " },
+    { "[{\"flow_m3_s\": 0.01, \"head_m\": 30}, {\"flow_m3_s\": 0.01, \"head_m\": 35}]",
+      "lines[0].pump.curve[1].flow_m3_s: " },
+    { "[{\"flow_m3_s\": 0.01}]", "lines[0].pump.curve[0].head_m: " },
+    { "[{\"flow_m3_s\": -0.01, \"head_m\": 3}]", "lines[0].pump.curve[0].flow_m3_s: " },
+    { "[{\"flow_m3_s\": 0.01, \"head_m\": 1e5}]", "lines[0].pump.curve[0].head_m: " },
+    { "[{\"flow_m3_s\": \"10 L/s\", \"head_m\": 3}]", "lines[0].pump.curve[0].flow_m3_s: " },
+    { "[3]", "lines[0].pump.curve[0]: " },
+  };
+  g_autofree char *good = document_with (row, FALSE,
+                                         "[{\"flow_m3_s\": 0, \"head_m\": 40, \"x_rated\": true},"
+                                         " {\"flow_m3_s\": 0.01, \"head_m\": 35.5},"
+                                         " {\"flow_m3_s\": 0.02, \"head_m\": 22.25}]");
+  g_autoptr (GError) error = NULL;
+  g_autoptr (RugosaProject) p = rugosa_project_new_from_data (good, strlen (good), &error);
+  g_autoptr (GVariant) curve = NULL;
+  g_autofree char *text = NULL;
+  g_autoptr (RugosaProject) empty = rugosa_project_new ();
+  g_autoptr (RugosaLine) plain = rugosa_line_new ("L");
+  g_autofree char *plain_text = NULL;
+  GString *many = g_string_new ("[");
+
+  g_assert_no_error (error);
+  g_object_get (rugosa_project_get_line (p, 0), "pump-curve", &curve, NULL);
+  g_assert_cmpuint (g_variant_n_children (curve), ==, 3);
+  {
+    double q, h;
+
+    g_variant_get_child (curve, 2, "(dd)", &q, &h);
+    g_assert_cmpfloat (q, ==, 0.02);
+    g_assert_cmpfloat (h, ==, 22.25);
+  }
+  /* a member this build does not know stays with its point */
+  text = rugosa_project_to_data (p, NULL);
+  g_assert_nonnull (strstr (text, "\"x_rated\""));
+  g_assert_nonnull (strstr (text, "22.25"));
+
+  for (guint i = 0; i < G_N_ELEMENTS (bad); i++)
+    {
+      g_autofree char *doc = document_with (row, FALSE, bad[i].value);
+
+      g_test_message ("%s", bad[i].value);
+      g_assert_false (loads (doc, &error));
+      g_assert_true (g_str_has_prefix (error->message, bad[i].where));
+      g_clear_error (&error);
+    }
+  for (int i = 0; i <= RUGOSA_CURVE_POINTS_MAX; i++)
+    g_string_append_printf (many, "%s{\"flow_m3_s\": %d, \"head_m\": 1}", i ? ", " : "", i);
+  g_string_append_c (many, ']');
+  {
+    g_autofree char *doc = document_with (row, FALSE, many->str);
+
+    g_assert_false (loads (doc, &error));
+    g_assert_true (g_str_has_prefix (error->message, "lines[0].pump.curve: "));
+    g_clear_error (&error);
+  }
+  g_string_free (many, TRUE);
+
+  /* a line with no cost and no pump writes neither object */
+  rugosa_project_insert_line (empty, 0, plain);
+  plain_text = rugosa_project_to_data (empty, NULL);
+  g_assert_null (strstr (plain_text, "\"cost\""));
+  g_assert_null (strstr (plain_text, "\"pump\""));
 }
 
 /* Each display quantity's usual units are units of its quantity. */
@@ -384,5 +466,6 @@ main (int argc, char **argv)
   g_test_add_func ("/fields/writer", test_writer);
   g_test_add_func ("/fields/schema", test_schema);
   g_test_add_func ("/fields/display-units", test_display_units);
+  g_test_add_func ("/fields/curve", test_curve);
   return g_test_run ();
 }

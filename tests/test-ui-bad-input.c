@@ -352,6 +352,8 @@ set_base (int kind)
                 "inner-diameter", 0.15, "length", 100.0, "elevation", 2.0,
                 "flow-design", 0.012, "flow-minimum", 0.006, "flow-maximum", 0.015,
                 "fittings", g_variant_builder_end (&b),
+                /* no pump: the base line warns of nothing */
+                "pump-curve", NULL,
                 NULL);
   rugosa_history_clear (rugosa_window_get_history (win));
   /* Errors belong to the line shown: showing it again clears them. */

@@ -579,6 +579,10 @@ test_panel_agrees_with_field_table (void)
           if (row->kind != RUGOSA_FIELD_NUMBER)
             continue;
           entry = rugosa_line_panel_get_entry (panel, row->property);
+          /* the capital cost has a group of its own beside the panel,
+           * checked by /ui/panel/cost-group */
+          if (entry == NULL && g_str_has_prefix (row->path, "cost."))
+            continue;
           g_assert_nonnull (entry);
           g_assert_true (rugosa_quantity_entry_get_field (entry) == row);
           arow = gtk_widget_get_ancestor (GTK_WIDGET (entry), ADW_TYPE_ACTION_ROW);
@@ -628,7 +632,8 @@ test_panel_agrees_with_field_table (void)
     }
   /* Every number row of the table was seen. */
   for (guint i = 0; i < n; i++)
-    if (rows[i].kind == RUGOSA_FIELD_NUMBER && !g_hash_table_contains (checked, rows[i].property))
+    if (rows[i].kind == RUGOSA_FIELD_NUMBER && !g_hash_table_contains (checked, rows[i].property)
+        && !g_str_has_prefix (rows[i].path, "cost."))
       g_test_fail_printf ("%s was never shown", rows[i].property);
   g_assert_false (rugosa_history_can_undo (rugosa_window_get_history (win)));
   ui_harness_close_window (win);

@@ -15,10 +15,17 @@
 
 #include <adwaita.h>
 #include <glib/gstdio.h>
+#include <math.h>
 #include <string.h>
 
+#include "model/rugosa-display.h"
+#include "model/rugosa-history.h"
+#include "model/rugosa-units.h"
 #include "rugosa-application.h"
+#include "rugosa-cost-group.h"
 #include "rugosa-line-panel.h"
+#include "rugosa-plot-view.h"
+#include "rugosa-results-table.h"
 #include "rugosa-quantity-entry.h"
 #include "rugosa-window.h"
 #include "ui-harness.h"
@@ -793,6 +800,152 @@ test_slider_is_a_view (void)
   ui_harness_close_window (win);
 }
 
+/* ---- the chart area's views, the results and the cost group ---------- */
+
+static RugosaPlotView *
+show_view (RugosaWindow   *win,
+           RugosaChartView view)
+{
+  GtkWidget *switcher = ui_harness_find_descendant (GTK_WIDGET (win), GTK_TYPE_STACK_SWITCHER);
+  GtkWidget *button = NULL;
+  GtkStack *stack;
+
+  g_assert_nonnull (switcher);
+  /* the switcher's button that shows the view's name */
+  for (GtkWidget *c = gtk_widget_get_first_child (switcher); c != NULL; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkWidget *label = ui_harness_find_descendant (c, GTK_TYPE_LABEL);
+
+      if (label != NULL && g_strcmp0 (gtk_label_get_text (GTK_LABEL (label)), rugosa_chart_view_title (view)) == 0)
+        button = c;
+    }
+  ui_harness_click (button);
+  ui_harness_drain ();
+  stack = gtk_stack_switcher_get_stack (GTK_STACK_SWITCHER (switcher));
+  g_assert_cmpstr (gtk_stack_get_visible_child_name (stack), ==, rugosa_chart_view_id (view));
+  if (view == RUGOSA_CHART_VIEW_FRICTION)
+    return NULL;
+  gtk_test_widget_wait_for_draw (gtk_stack_get_visible_child (stack));
+  return RUGOSA_PLOT_VIEW (gtk_stack_get_visible_child (stack));
+}
+
+/* The two views draw every line option of the demo with the numbers of
+ * the results (the same the results table and rugosa-cli eval give), and
+ * the window exports the view it shows. */
+static void
+test_views (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaResultsTable *table = RUGOSA_RESULTS_TABLE (rugosa_window_get_results (win));
+  g_autofree char *png = g_build_filename (tmpdir, "cost-view.png", NULL);
+  g_autoptr (GError) error = NULL;
+  const RugosaPlotInput *input;
+  RugosaPlotView *view;
+  guint n = rugosa_project_get_n_lines (project);
+
+  view = show_view (win, RUGOSA_CHART_VIEW_SYSTEM);
+  input = rugosa_plot_view_get_input (view);
+  g_assert_nonnull (input);
+  g_assert_cmpuint (input->n_series, ==, n);
+  for (guint i = 0; i < input->n_series; i++)
+    {
+      const RugosaLineResults *r = rugosa_project_get_results (project, rugosa_project_get_line (project, input->line_index[i]));
+      double q;
+
+      /* Source: data/demo.rugosa gives every option the same pump, which
+       * meets every line's system curve when new */
+      g_assert_true (input->series[i].has_duty_new);
+      g_assert_true (r->energy.duty_new_ok);
+      /* Source: the model's results of the line, in the project's unit */
+      g_assert_cmpint (rg_units_from_si (RG_QTY_FLOW, r->energy.duty_new_flow_m3_s,
+                                         rugosa_settings_get_unit (rugosa_project_get_settings (project), RUGOSA_DISPLAY_FLOW),
+                                         &q, NULL), ==, RG_OK);
+      g_assert_cmpfloat (input->series[i].duty_new.x, ==, q);
+    }
+  ui_harness_save_png (GTK_WIDGET (win), "rugosa-window-system.png");
+
+  view = show_view (win, RUGOSA_CHART_VIEW_COST);
+  input = rugosa_plot_view_get_input (view);
+  g_assert_cmpuint (input->n_series, ==, n);
+  for (guint i = 0; i < input->n_series; i++)
+    {
+      RugosaLine *line = rugosa_project_get_line (project, input->line_index[i]);
+      const RugosaLineResults *r = rugosa_project_get_results (project, line);
+      const RugosaPlotSeries *s = &input->series[i];
+      g_autofree char *cell = rugosa_results_table_format_cell (table, line, "life-cycle-cost");
+      g_autofree char *want = rugosa_display_money_screen (r->energy.life_cycle_cost, NULL);
+
+      /* Source: the model's results: the curve starts at the capital and
+       * ends at the life-cycle cost, which the table shows */
+      g_assert_true (r->energy.has_capital && r->energy.life_ok);
+      g_assert_cmpfloat (s->cost[0].y, ==, r->energy.capital);
+      g_assert_cmpfloat (fabs (s->cost[s->n_cost - 1].y - r->energy.life_cycle_cost), <=,
+                         1e-9 * r->energy.life_cycle_cost);
+      g_assert_cmpstr (cell, ==, want);
+    }
+  ui_harness_save_png (GTK_WIDGET (win), "rugosa-window-cost.png");
+
+  g_assert_true (rugosa_window_export_chart_to (win, png, RUGOSA_CHART_FORMAT_PNG, 960, 600, &error));
+  g_assert_no_error (error);
+  /* Source: ISO/IEC 15948 §5.2, the PNG signature */
+  g_assert_true (starts_with (png, "\x89PNG\r\n\x1a\n", 8));
+  show_view (win, RUGOSA_CHART_VIEW_FRICTION);
+  ui_harness_close_window (win);
+}
+
+/* The cost group edits the line through the undo history, and refuses
+ * what the file could not hold with a sentence under the field. */
+static void
+test_cost_group (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  RugosaCostGroup *group = RUGOSA_COST_GROUP (ui_harness_find_descendant (GTK_WIDGET (win), RUGOSA_TYPE_COST_GROUP));
+  RugosaLine *line;
+  double before;
+  g_autoptr (GVariant) curve = NULL;
+
+  g_assert_nonnull (group);
+  select_line (win, 1);
+  line = rugosa_project_get_line (rugosa_window_get_project (win), 1);
+  before = rugosa_line_get_double (line, "cost-per-metre");
+  /* an invented price, away from the demo's */
+  g_assert_true (rugosa_cost_group_commit_text (group, "cost-per-metre", "287.5"));
+  ui_harness_drain ();
+  g_assert_cmpfloat (rugosa_line_get_double (line, "cost-per-metre"), ==, 287.5);
+  g_assert_true (rugosa_window_get_modified (win));
+  rugosa_history_undo (rugosa_window_get_history (win));
+  ui_harness_drain ();
+  g_assert_cmpfloat (rugosa_line_get_double (line, "cost-per-metre"), ==, before);
+
+  /* not a number, or out of the row's range: refused, the line kept */
+  g_assert_false (rugosa_cost_group_commit_text (group, "cost-lump-sum", "lots"));
+  g_assert_nonnull (rugosa_cost_group_get_error (group, "cost-lump-sum"));
+  g_assert_false (rugosa_cost_group_commit_text (group, "cost-per-metre", "-5"));
+  g_assert_nonnull (strstr (rugosa_cost_group_get_error (group, "cost-per-metre"), "must lie between"));
+  g_assert_cmpfloat (rugosa_line_get_double (line, "cost-per-metre"), ==, before);
+
+  /* a point of the pump curve, in the display unit; the curve stays in
+   * order of flow, and two points may not share a flow */
+  g_assert_true (rugosa_cost_group_commit_text (group, "flow:0", "2 L/s"));
+  ui_harness_drain ();
+  g_object_get (line, "pump-curve", &curve, NULL);
+  {
+    double q, h;
+
+    g_variant_get_child (curve, 0, "(dd)", &q, &h);
+    /* Source: the text typed, 2 L/s = 0.002 m³/s (NIST SP 811 B.8, litre) */
+    g_assert_cmpfloat (fabs (q - 0.002), <, 1e-15);
+  }
+  g_assert_false (rugosa_cost_group_commit_text (group, "flow:1", "2 L/s"));
+  g_assert_nonnull (strstr (rugosa_cost_group_get_error (group, "flow:1"), "same flow"));
+  adw_expander_row_set_expanded (ADW_EXPANDER_ROW (ui_harness_find_descendant (GTK_WIDGET (group), ADW_TYPE_EXPANDER_ROW)),
+                                 TRUE);
+  ui_harness_wait (600);
+  ui_harness_save_png (GTK_WIDGET (group), "rugosa-cost-group.png");
+  ui_harness_close_window (win);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -819,6 +972,8 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/files/quit-save-as", test_quit_save_as);
   g_test_add_func ("/ui/window/maximized-restored", test_maximized_restored);
   g_test_add_func ("/ui/slider/view-not-edit", test_slider_is_a_view);
+  g_test_add_func ("/ui/views/system-and-cost", test_views);
+  g_test_add_func ("/ui/panel/cost-group", test_cost_group);
 
   status = g_test_run ();
   g_object_unref (app);

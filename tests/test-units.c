@@ -122,6 +122,22 @@ static const Factor FACTORS[] = {
   { RG_QTY_SALINITY, "kg/kg", 1.0 },
   { RG_QTY_SALINITY, "g/kg", 1.0e-3 },
   { RG_QTY_SALINITY, "ppt", 1.0e-3 },
+  /* Source: SI definition and prefixes (SI Brochure, 9th ed., Table 7) */
+  { RG_QTY_POWER, "W", 1.0 },
+  { RG_QTY_POWER, "kW", 1.0e3 },
+  { RG_QTY_POWER, "MW", 1.0e6 },
+  /* Source: NIST SP 811 (2008) B.8, horsepower (550 ft·lbf/s) =
+   * 7.456 999 E+02 W; exactly 550 ft × lbf per second with the foot and
+   * the pound-force above */
+  { RG_QTY_POWER, "hp", 550.0 * FT * LBF },
+  /* Source: SI definition and prefixes */
+  { RG_QTY_ENERGY, "J", 1.0 },
+  { RG_QTY_ENERGY, "MJ", 1.0e6 },
+  { RG_QTY_ENERGY, "GJ", 1.0e9 },
+  /* Source: NIST SP 811 (2008) B.8, kilowatt hour = 3.6 E+06 J (exact) */
+  { RG_QTY_ENERGY, "kWh", 3.6e6 },
+  { RG_QTY_ENERGY, "MWh", 3.6e9 },
+  { RG_QTY_ENERGY, "GWh", 3.6e12 },
 };
 
 static const Factor *
@@ -356,6 +372,16 @@ test_spellings (void)
     { RG_QTY_SALINITY, "35 ppt", 0.035 },
     { RG_QTY_SALINITY, "35 ‰", 0.035 },
     { RG_QTY_SALINITY, "0.035 kg/kg", 0.035 },
+    /* Source: SI prefixes; NIST SP 811 (2008) B.8, horsepower (550 ft·lbf/s) */
+    { RG_QTY_POWER, "15 kW", 15.0e3 },
+    { RG_QTY_POWER, "15 KW", 15.0e3 },
+    { RG_QTY_POWER, "20 hp", 20.0 * 550.0 * FT * LBF },
+    /* Source: NIST SP 811 (2008) B.8, kilowatt hour = 3.6 E+06 J */
+    { RG_QTY_ENERGY, "12 kWh", 12.0 * 3.6e6 },
+    { RG_QTY_ENERGY, "12 kW·h", 12.0 * 3.6e6 },
+    { RG_QTY_ENERGY, "12 kW h", 12.0 * 3.6e6 },
+    { RG_QTY_ENERGY, "12 kwh", 12.0 * 3.6e6 },
+    { RG_QTY_ENERGY, "3 MWh", 3.0 * 3.6e9 },
   };
 
   for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
@@ -434,6 +460,8 @@ test_bad_input (void)
   expect_error (RG_QTY_PRESSURE, "2 barg", RG_ERR_UNIT, "gauge", NULL);
   expect_error (RG_QTY_PRESSURE, "2 bar(g)", RG_ERR_UNIT, "gauge", NULL);
   expect_error (RG_QTY_FLOW, "2 psig", RG_ERR_UNIT, "(pressure)", NULL);
+  expect_error (RG_QTY_POWER, "12 kWh", RG_ERR_UNIT, "(energy)", "kW");
+  expect_error (RG_QTY_ENERGY, "15 kW", RG_ERR_UNIT, "(power)", "kWh");
   expect_error (RG_QTY_TEMPERATURE, "-300 °C", RG_ERR_DOMAIN,
                 "absolute zero", NULL);
   expect_error (RG_QTY_TEMPERATURE, "-500 F", RG_ERR_DOMAIN,

@@ -7,6 +7,7 @@
 #include <math.h>
 
 #include "model/rugosa-display.h"
+#include "model/rugosa-life-cycle.h"
 #include "model/rugosa-units.h"
 #include "rugosa-readout.h"
 
@@ -68,6 +69,77 @@ rugosa_readout_format (RugosaProject        *project,
   return rugosa_display_format_screen (info->quantity, si, ps ? rugosa_settings_get_unit (ps, dq) : NULL);
 }
 
+/* The pumping lines of the readout, in the project's units: power,
+ * energy and cost of a year, the costs over the service life, the duty
+ * point. */
+static void
+_rugosa_readout_energy (GString                    *s,
+                        RugosaProject              *project,
+                        const RugosaLineResults    *res,
+                        const RugosaOperatingPoint *p)
+{
+  RugosaSettings *ps = rugosa_project_get_settings (project);
+  const RugosaLineEnergy *en = &res->energy;
+  const char *currency = rugosa_settings_get_string (ps, "currency");
+  const char *u_power = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_POWER);
+  g_autofree char *power = rugosa_display_format_screen (RG_QTY_POWER, p->electric_power_w, u_power);
+  g_autofree char *power_new = rugosa_display_format_screen (RG_QTY_POWER, p->electric_power_new_w, u_power);
+
+  if (!en->ok)
+    {
+      g_string_append_c (s, '\n');
+      /* TRANSLATORS: the electric input power at the design flow, at the
+       * service age and when new */
+      g_string_append_printf (s, _("Pump power %s at the design flow (new: %s)"), power, power_new);
+      return;
+    }
+  {
+    const char *u_energy = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_ENERGY_PER_YEAR);
+    g_autofree char *energy = rugosa_display_format_screen (RG_QTY_ENERGY, en->energy_j_per_year, u_energy);
+    g_autofree char *cost = rugosa_display_money_screen (en->cost_per_year, currency);
+
+    g_string_append_c (s, '\n');
+    /* TRANSLATORS: electric power at the design flow (at the service age,
+     * when new), then the energy and its cost of a year of operation */
+    g_string_append_printf (s, _("Pump power %s at the design flow (new: %s); a year takes %s and costs %s"),
+                            power, power_new, energy, cost);
+  }
+  if (en->life_ok)
+    {
+      g_autofree char *years = rugosa_display_significant_screen (rugosa_settings_get_double (ps, "service-life"), 3);
+      g_autofree char *pv = rugosa_display_money_screen (en->life_energy_cost_pv, currency);
+
+      g_string_append_c (s, '\n');
+      if (en->has_capital)
+        {
+          g_autofree char *capital = rugosa_display_money_screen (en->capital, currency);
+          g_autofree char *lcc = rugosa_display_money_screen (en->life_cycle_cost, currency);
+
+          /* TRANSLATORS: life-cycle cost, then the capital cost, the
+           * present value of the energy and the service life in years */
+          g_string_append_printf (s, _("Life-cycle cost %s: capital %s and energy %s (present value over %s years)"),
+                                  lcc, capital, pv, years);
+        }
+      else
+        /* TRANSLATORS: the present value of the energy and the service life */
+        g_string_append_printf (s, _("Energy %s (present value over %s years); no capital cost given"), pv, years);
+    }
+  if (en->has_pump)
+    {
+      const char *u_flow = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_FLOW);
+      g_autofree char *qn = rugosa_display_format_screen (RG_QTY_FLOW, en->duty_new_flow_m3_s, u_flow);
+      g_autofree char *qa = rugosa_display_format_screen (RG_QTY_FLOW, en->duty_flow_m3_s, u_flow);
+      g_autofree char *age = rugosa_display_significant_screen (res->age_years, 3);
+
+      if (en->duty_ok && en->duty_new_ok)
+        {
+          g_string_append_c (s, '\n');
+          /* TRANSLATORS: the pump's duty flow when new and at the service age */
+          g_string_append_printf (s, _("Duty flow %s when new, %s after %s years"), qn, qa, age);
+        }
+    }
+}
+
 char *
 rugosa_readout_line_full (RugosaProject *project,
                           RugosaLine    *line)
@@ -116,6 +188,7 @@ rugosa_readout_line_full (RugosaProject *project,
   /* TRANSLATORS: the pipe-friction gradient, e.g. "Gradient 3.4 m/100 m" */
   g_string_append_printf (s, _("Gradient %s\n"), grad);
   g_string_append_printf (s, _("Pressure drop %s"), dp);
+  _rugosa_readout_energy (s, project, res, p);
   if (p->warnings.count > 0)
     for (int i = 0; i < p->warnings.count; i++)
       g_string_append_printf (s, "\n⚠ %s", p->warnings.text[i]);

@@ -34,6 +34,10 @@ typedef struct {
   const char *title;      /* the compact table's own short heading */
   const char *output;     /* the output key of its value, or NULL */
   gboolean numeric;
+  /* pumping and cost columns: the title names the project's unit of
+   * `project_unit` (rugosa_settings_get_unit) */
+  gboolean by_project;
+  RugosaDisplayQuantity project_unit;
 } Column;
 
 static const Column columns[] = {
@@ -41,6 +45,12 @@ static const Column columns[] = {
   { "velocity", N_("Velocity"), "velocity", TRUE },
   { "head-loss", N_("Head loss"), "head_loss_total", TRUE },
   { "change", N_("Loss vs new"), NULL, TRUE },
+  /* the pumping energy and cost of the line (rugosa-life-cycle.c) */
+  { "pump-power", N_("Pump power"), "pump_power", TRUE },
+  { "energy", N_("Energy"), "energy", TRUE },
+  { "energy-cost", N_("Energy cost a year"), "energy_cost_per_year", TRUE },
+  { "life-cycle-cost", N_("Life-cycle cost"), "life_cycle_cost", TRUE },
+  { "duty-flow", N_("Duty flow, new → aged"), NULL, TRUE },
   { "gradient", N_("Gradient"), "gradient", TRUE },
   { "pressure-drop", N_("Pressure drop"), "pressure_drop", TRUE },
   { "reynolds", N_("Re"), "reynolds", TRUE },
@@ -75,8 +85,8 @@ _rugosa_results_table_display (const Column *col)
 
   if (key != NULL)
     return key->display;
-  /* The design flow is an input, not an output key. */
-  if (g_strcmp0 (col->id, "flow") == 0)
+  /* The design flow is an input, the duty flows a pair of output keys. */
+  if (g_strcmp0 (col->id, "flow") == 0 || g_strcmp0 (col->id, "duty-flow") == 0)
     return RUGOSA_DISPLAY_FLOW;
   return RUGOSA_DISPLAY_NUMBER;
 }
@@ -147,11 +157,29 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
     return g_strdup (rugosa_readout_zone (p->result.friction.zone));
   if (g_strcmp0 (column, "change") == 0)
     return rugosa_readout_change (p->head_loss_ratio_to_new);
+  if (g_strcmp0 (column, "duty-flow") == 0)
+    {
+      const RugosaOutputKey *kn = rugosa_output_key_find ("duty_flow_new");
+      const RugosaOutputKey *ka = rugosa_output_key_find ("duty_flow");
+      g_autofree char *qn = rugosa_output_present_for (kn, res, p)
+                              ? _rugosa_results_table_number (self, RUGOSA_DISPLAY_FLOW, kn->number (res, p))
+                              : g_strdup ("—");
+      g_autofree char *qa = rugosa_output_present_for (ka, res, p)
+                              ? _rugosa_results_table_number (self, RUGOSA_DISPLAY_FLOW, ka->number (res, p))
+                              : g_strdup ("—");
+
+      if (!res->energy.has_pump)
+        return g_strdup ("—");
+      /* TRANSLATORS: the duty flow when new and at the service age */
+      return g_strdup_printf (_("%s → %s"), qn, qa);
+    }
   key = col->output ? rugosa_output_key_find (col->output) : NULL;
   if (key != NULL && key->kind == RUGOSA_OUTPUT_NUMBER)
     {
-      if (!rugosa_output_present (key, p))
+      if (!rugosa_output_present_for (key, res, p))
         return g_strdup ("—");
+      if (key->display == RUGOSA_DISPLAY_MONEY)
+        return rugosa_display_money_screen (key->number (res, p), NULL);
       return _rugosa_results_table_number (self, key->display, key->number (res, p));
     }
   return g_strdup ("");
@@ -186,6 +214,7 @@ void
 rugosa_results_table_refresh (RugosaResultsTable *self)
 {
   g_return_if_fail (RUGOSA_IS_RESULTS_TABLE (self));
+  /* the project's units and currency may have changed */
   _rugosa_results_table_update_titles (self);
   for (guint i = 0; i < self->bound->len; i++)
     _rugosa_results_table_update_label (self, GTK_INSCRIPTION (g_ptr_array_index (self->bound, i)));
@@ -233,6 +262,8 @@ _rugosa_results_table_setup (GtkSignalListItemFactory *factory,
     }
   if (g_strcmp0 (col->id, "zone") == 0)
     gtk_inscription_set_nat_chars (ins, 20);
+  if (g_strcmp0 (col->id, "duty-flow") == 0)
+    gtk_inscription_set_nat_chars (ins, 15);
   g_object_set_data (G_OBJECT (label), "column", (gpointer) col->id);
   gtk_list_item_set_child (item, label);
 }
@@ -267,11 +298,13 @@ _rugosa_results_table_title (RugosaResultsTable *self,
   RugosaDisplayQuantity display = _rugosa_results_table_display (col);
   const char *unit = NULL;
 
-  if (self->project != NULL && rugosa_display_info (display) != NULL)
+  /* money shows the project's currency label */
+  if (self->project != NULL
+      && (rugosa_display_info (display) != NULL || display == RUGOSA_DISPLAY_MONEY))
     unit = rugosa_settings_get_unit (rugosa_project_get_settings (self->project), display);
   if (unit != NULL)
     /* TRANSLATORS: a column title and its unit, e.g. "Velocity (ft/s)" */
-    return g_strdup_printf (_("%s (%s)"), _(col->title), rugosa_display_unit_symbol (unit));
+    return g_strdup_printf (_("%s (%s)"), _(col->title), rugosa_display_unit_label (display, unit));
   return g_strdup (_(col->title));
 }
 

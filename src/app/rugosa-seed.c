@@ -65,6 +65,15 @@ rugosa_seed_settings (GSettings      *prefs,
               _rugosa_seed_reset (settings, row);
           }
           break;
+        case RUGOSA_FIELD_TEXT:
+          {
+            g_autofree char *text = g_settings_get_string (prefs, row->property);
+
+            /* a text the row would refuse in a file is not taken */
+            if (rugosa_field_text_ok (row, text))
+              g_object_set (settings, row->property, text, NULL);
+          }
+          break;
         case RUGOSA_FIELD_UNIT_MAP:
           {
             GVariantBuilder b;
@@ -138,6 +147,14 @@ rugosa_seed_store (RugosaSettings *settings,
           break;
         case RUGOSA_FIELD_NUMBER:
           g_settings_set_double (prefs, row->property, rugosa_settings_get_double (settings, row->property));
+          break;
+        case RUGOSA_FIELD_TEXT:
+          {
+            g_autofree char *text = NULL;
+
+            g_object_get (settings, row->property, &text, NULL);
+            g_settings_set_string (prefs, row->property, text ? text : "");
+          }
           break;
         case RUGOSA_FIELD_UNIT_MAP:
           {

@@ -21,6 +21,7 @@ struct _RugosaSettingsPage
   RugosaSettings *settings;
   GHashTable     *entries;   /* property -> RugosaQuantityEntry */
   GHashTable     *choices;   /* property or unit key -> AdwComboRow */
+  GHashTable     *texts;     /* property -> GtkEntry */
   GHashTable     *groups;    /* group title -> AdwPreferencesGroup */
   RugosaSettingsApply apply;
   gpointer        apply_data;
@@ -41,6 +42,7 @@ static const struct {
   { "transition.", N_("Regime thresholds") },
   { "limits.", N_("Design limits") },
   { "chart.", N_("Chart window") },
+  { "energy.", N_("Energy and costs") },
 };
 
 static AdwPreferencesGroup *
@@ -143,6 +145,75 @@ _rugosa_settings_page_add_number (RugosaSettingsPage *self,
   g_signal_connect_object (entry, "committed", G_CALLBACK (_rugosa_settings_page_committed), self, 0);
   adw_preferences_group_add (_rugosa_settings_page_group (self, row), arow);
   g_hash_table_insert (self->entries, (gpointer) row->property, entry);
+}
+
+/* --- texts -------------------------------------------------------------- */
+
+static void
+_rugosa_settings_page_text_commit (RugosaSettingsPage *self,
+                                   GtkEditable        *editable)
+{
+  const RugosaField *row = g_object_get_data (G_OBJECT (editable), "rugosa-field");
+  const char *text = gtk_editable_get_text (editable);
+  g_autofree char *current = NULL;
+  g_auto (GValue) v = G_VALUE_INIT;
+
+  g_object_get (self->settings, row->property, &current, NULL);
+  if (self->updating || g_strcmp0 (text, current) == 0)
+    return;
+  if (!rugosa_field_text_ok (row, text))
+    {
+      g_autofree char *why = g_strdup_printf (_("%s takes at most %d characters, without control characters."),
+                                              rugosa_field_label (row), row->max_chars);
+
+      gtk_widget_add_css_class (GTK_WIDGET (editable), "error");
+      gtk_widget_set_tooltip_text (GTK_WIDGET (editable), why);
+      return;
+    }
+  gtk_widget_remove_css_class (GTK_WIDGET (editable), "error");
+  gtk_widget_set_tooltip_text (GTK_WIDGET (editable), _(row->help));
+  g_value_init (&v, G_TYPE_STRING);
+  g_value_set_string (&v, text);
+  _rugosa_settings_page_apply (self, row->property, &v);
+}
+
+static void
+_rugosa_settings_page_text_activate (GtkEntry           *entry,
+                                     RugosaSettingsPage *self)
+{
+  _rugosa_settings_page_text_commit (self, GTK_EDITABLE (entry));
+}
+
+static void
+_rugosa_settings_page_text_leave (GtkEventControllerFocus *focus,
+                                  RugosaSettingsPage      *self)
+{
+  _rugosa_settings_page_text_commit (self, GTK_EDITABLE (gtk_event_controller_get_widget (GTK_EVENT_CONTROLLER (focus))));
+}
+
+static void
+_rugosa_settings_page_add_text (RugosaSettingsPage *self,
+                                const RugosaField  *row)
+{
+  GtkWidget *arow = adw_action_row_new ();
+  GtkWidget *entry = gtk_entry_new ();
+  GtkEventController *focus = gtk_event_controller_focus_new ();
+
+  adw_preferences_row_set_title (ADW_PREFERENCES_ROW (arow), rugosa_field_label (row));
+  adw_action_row_set_subtitle (ADW_ACTION_ROW (arow), _(row->help));
+  adw_action_row_set_subtitle_lines (ADW_ACTION_ROW (arow), 4);
+  gtk_editable_set_width_chars (GTK_EDITABLE (entry), 8);
+  gtk_widget_set_valign (entry, GTK_ALIGN_CENTER);
+  gtk_widget_set_tooltip_text (entry, _(row->help));
+  gtk_widget_set_name (entry, row->property);
+  g_object_set_data (G_OBJECT (entry), "rugosa-field", (gpointer) row);
+  g_signal_connect_object (entry, "activate", G_CALLBACK (_rugosa_settings_page_text_activate), self, 0);
+  g_signal_connect_object (focus, "leave", G_CALLBACK (_rugosa_settings_page_text_leave), self, 0);
+  gtk_widget_add_controller (entry, focus);
+  adw_action_row_add_suffix (ADW_ACTION_ROW (arow), entry);
+  adw_action_row_set_activatable_widget (ADW_ACTION_ROW (arow), entry);
+  adw_preferences_group_add (_rugosa_settings_page_group (self, row), arow);
+  g_hash_table_insert (self->texts, (gpointer) row->property, entry);
 }
 
 /* --- enumerations -------------------------------------------------------- */
@@ -355,6 +426,17 @@ _rugosa_settings_page_refresh (RugosaSettingsPage *self)
       if (rugosa_quantity_entry_get_error_text (entry) == NULL)
         rugosa_quantity_entry_set_value (entry, rugosa_settings_get_double (self->settings, row->property));
     }
+  g_hash_table_iter_init (&iter, self->texts);
+  while (g_hash_table_iter_next (&iter, &key, &widget))
+    {
+      const RugosaField *row = g_object_get_data (G_OBJECT (widget), "rugosa-field");
+      g_autofree char *text = NULL;
+
+      g_object_get (self->settings, row->property, &text, NULL);
+      if (!gtk_widget_has_css_class (widget, "error")
+          && g_strcmp0 (gtk_editable_get_text (GTK_EDITABLE (widget)), text ? text : "") != 0)
+        gtk_editable_set_text (GTK_EDITABLE (widget), text ? text : "");
+    }
   g_hash_table_iter_init (&iter, self->choices);
   while (g_hash_table_iter_next (&iter, &key, &widget))
     {
@@ -417,6 +499,9 @@ rugosa_settings_page_build (RugosaSettingsPage *self,
             break;
           case RUGOSA_FIELD_UNIT_MAP:
             _rugosa_settings_page_add_units (self, row);
+            break;
+          case RUGOSA_FIELD_TEXT:
+            _rugosa_settings_page_add_text (self, row);
             break;
           default:
             g_warn_if_reached ();
@@ -484,6 +569,7 @@ rugosa_settings_page_dispose (GObject *object)
   rugosa_settings_page_set_apply_func (self, NULL, NULL, NULL);
   g_clear_pointer (&self->entries, g_hash_table_unref);
   g_clear_pointer (&self->choices, g_hash_table_unref);
+  g_clear_pointer (&self->texts, g_hash_table_unref);
   g_clear_pointer (&self->groups, g_hash_table_unref);
   g_clear_object (&self->settings);
   G_OBJECT_CLASS (rugosa_settings_page_parent_class)->dispose (object);
@@ -502,5 +588,6 @@ rugosa_settings_page_init (RugosaSettingsPage *self)
 {
   self->entries = g_hash_table_new (g_str_hash, g_str_equal);
   self->choices = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL);
+  self->texts = g_hash_table_new (g_str_hash, g_str_equal);
   self->groups = g_hash_table_new (g_str_hash, g_str_equal);
 }

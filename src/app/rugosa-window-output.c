@@ -7,6 +7,7 @@
 #include <string.h>
 
 #include "chart/rugosa-chart-input.h"
+#include "chart/rugosa-plot-input.h"
 #include "rugosa-window-private.h"
 
 /* Sizes offered for an exported chart, logical pixels (PNG pixels; SVG and
@@ -35,10 +36,20 @@ rugosa_window_export_chart_to (RugosaWindow       *self,
                                GError            **error)
 {
   guint pos = gtk_single_selection_get_selected (self->selection);
+  const int selected = pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos;
+  const RugosaChartView view = _rugosa_window_chart_view (self);
   g_autoptr (RugosaChartInput) input = NULL;
   g_autofree char *date = _rugosa_window_today ();
 
-  input = rugosa_chart_input_new (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
+  /* the view the chart area shows */
+  if (view != RUGOSA_CHART_VIEW_FRICTION)
+    {
+      g_autoptr (RugosaPlotInput) plot = rugosa_plot_input_new (self->project, view, selected);
+
+      return rugosa_plot_export (&plot->spec, plot->series, plot->n_series, format,
+                                 width, height, date, path, error);
+    }
+  input = rugosa_chart_input_new (self->project, selected, NULL);
   return rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
                               width, height, date, path, error);
 }
@@ -245,7 +256,13 @@ _rugosa_window_export_chart (GtkWidget  *widget,
   gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "format", export_formats[0].id);
   gtk_file_chooser_add_choice (GTK_FILE_CHOOSER (dialog), "size", _("Size"), size_ids, size_labels);
   gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "size", "1280x800");
-  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), _("friction chart.png"));
+  {
+    /* TRANSLATORS: the file name offered for an exported chart: the view's
+     * name, e.g. "System curves.png" */
+    g_autofree char *name = g_strdup_printf (_("%s.png"), rugosa_chart_view_title (_rugosa_window_chart_view (self)));
+
+    gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), name);
+  }
   g_signal_connect (dialog, "response", G_CALLBACK (_rugosa_window_export_response), self);
   gtk_native_dialog_show (GTK_NATIVE_DIALOG (dialog));
 }
@@ -298,9 +315,31 @@ _rugosa_window_draw_page (GtkPrintOperation *op,
   guint pos = gtk_single_selection_get_selected (self->selection);
   g_autoptr (RugosaChartInput) input = NULL;
   g_autofree char *date = _rugosa_window_today ();
-  RugosaChart *chart = rugosa_chart_new ();
+  RugosaChart *chart;
   RgError err = { 0 };
 
+  /* the view the chart area shows, as its export draws it */
+  if (_rugosa_window_chart_view (self) != RUGOSA_CHART_VIEW_FRICTION)
+    {
+      g_autoptr (RugosaPlotInput) plot = rugosa_plot_input_new (self->project, _rugosa_window_chart_view (self),
+                                                                pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos);
+      RugosaPlot *p = rugosa_plot_new ();
+
+      plot->spec.width = MAX (w, 200);
+      plot->spec.height = MAX (h, 150);
+      plot->spec.theme = RUGOSA_CHART_THEME_LIGHT;
+      g_strlcpy (plot->spec.footer_date, date, sizeof plot->spec.footer_date);
+      if (rugosa_plot_set_spec (p, &plot->spec, &err) == RG_OK)
+        {
+          rugosa_plot_set_series (p, plot->series, plot->n_series);
+          rugosa_plot_draw (p, cr);
+        }
+      else
+        g_warning ("Cannot print the chart: %s", err.text);
+      rugosa_plot_free (p);
+      return;
+    }
+  chart = rugosa_chart_new ();
   input = rugosa_chart_input_new (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
   /* The page in points; the chart keeps its own proportions below 200 × 150. */
   input->spec.width = MAX (w, 200);
@@ -328,7 +367,7 @@ _rugosa_window_print_operation (RugosaWindow *self)
   gtk_page_setup_set_orientation (setup, GTK_PAGE_ORIENTATION_LANDSCAPE);
   gtk_print_operation_set_default_page_setup (op, setup);
   gtk_print_operation_set_n_pages (op, 1);
-  gtk_print_operation_set_job_name (op, _("Friction chart"));
+  gtk_print_operation_set_job_name (op, rugosa_chart_view_title (_rugosa_window_chart_view (self)));
   gtk_print_operation_set_embed_page_setup (op, TRUE);
   g_signal_connect (op, "draw-page", G_CALLBACK (_rugosa_window_draw_page), self);
   return op;

@@ -5,7 +5,9 @@
 #pragma once
 
 #include "rugosa-canvas.h"
+#include "rugosa-cost-group.h"
 #include "rugosa-line-panel.h"
+#include "rugosa-plot-view.h"
 #include "rugosa-results-table.h"
 #include "rugosa-window.h"
 
@@ -29,6 +31,11 @@ struct _RugosaWindow
   RugosaLinePanel    *line_panel;
   GtkMenuButton      *primary_menu_button;
   GMenu              *recent_section;
+  GtkStack           *chart_stack;
+  GtkStackPage       *friction_page;
+  RugosaCostGroup    *cost_group;
+  /* the chart area's other views, added to chart_stack by the window */
+  RugosaPlotView     *plot_views[RUGOSA_CHART_N_VIEWS];
 
   /* borrowed references */
   GSettings *settings;
@@ -70,6 +77,9 @@ void     _rugosa_window_mark_modified     (RugosaWindow   *self);
 void     _rugosa_window_set_file          (RugosaWindow   *self,
                                            GFile          *file);
 void     _rugosa_window_remove_autosave   (RugosaWindow   *self);
+
+/* The view the chart area shows (the one exports and prints draw). */
+RugosaChartView _rugosa_window_chart_view (RugosaWindow *self);
 
 /* rugosa-window-output.c */
 void     _rugosa_window_output_class_init (GtkWidgetClass *widget_class);

@@ -391,12 +391,21 @@ void
 _rugosa_window_refresh_all (RugosaWindow *self)
 {
   rugosa_canvas_refresh (self->canvas);
+  for (int v = 0; v < RUGOSA_CHART_N_VIEWS; v++)
+    if (self->plot_views[v] != NULL)
+      rugosa_plot_view_refresh (self->plot_views[v]);
   rugosa_results_table_refresh (self->results_table);
   /* A slider move changes results, not inputs: the panel's fields stay. */
   if (self->age_changing)
-    rugosa_line_panel_refresh_results (self->line_panel);
+    {
+      rugosa_line_panel_refresh_results (self->line_panel);
+      rugosa_cost_group_refresh_results (self->cost_group);
+    }
   else
-    rugosa_line_panel_refresh (self->line_panel);
+    {
+      rugosa_line_panel_refresh (self->line_panel);
+      rugosa_cost_group_refresh (self->cost_group);
+    }
   _rugosa_window_refresh_rows (self);
   _rugosa_window_update_age_summary (self);
   _rugosa_window_update_actions (self);
@@ -441,6 +450,7 @@ static void
 _rugosa_window_selection_changed (RugosaWindow *self)
 {
   rugosa_line_panel_set_line (self->line_panel, _rugosa_window_selected_line (self));
+  rugosa_cost_group_set_line (self->cost_group, _rugosa_window_selected_line (self));
   _rugosa_window_update_age_summary (self);
   _rugosa_window_update_actions (self);
 }
@@ -778,6 +788,40 @@ _rugosa_window_fill_new_project (RugosaWindow *self)
   rugosa_project_insert_line (self->project, 0, line);
 }
 
+/* --- the chart area's views ----------------------------------------- */
+
+/* The views beside the friction chart, one page each, named and titled
+ * as the chart engine names them. */
+static void
+_rugosa_window_add_views (RugosaWindow *self)
+{
+  gtk_stack_page_set_name (self->friction_page, rugosa_chart_view_id (RUGOSA_CHART_VIEW_FRICTION));
+  gtk_stack_page_set_title (self->friction_page, rugosa_chart_view_title (RUGOSA_CHART_VIEW_FRICTION));
+  for (int v = 0; v < RUGOSA_CHART_N_VIEWS; v++)
+    {
+      GtkWidget *view;
+
+      if (v == RUGOSA_CHART_VIEW_FRICTION)
+        continue;
+      view = g_object_new (RUGOSA_TYPE_PLOT_VIEW, "view-id", rugosa_chart_view_id ((RugosaChartView) v), NULL);
+      self->plot_views[v] = RUGOSA_PLOT_VIEW (view);
+      gtk_stack_add_titled (self->chart_stack, view, rugosa_chart_view_id ((RugosaChartView) v),
+                            rugosa_chart_view_title ((RugosaChartView) v));
+      rugosa_plot_view_set_project (self->plot_views[v], self->project, self->settings);
+      rugosa_plot_view_set_selection (self->plot_views[v], self->selection);
+    }
+}
+
+RugosaChartView
+_rugosa_window_chart_view (RugosaWindow *self)
+{
+  RugosaChartView view = RUGOSA_CHART_VIEW_FRICTION;
+
+  if (!rugosa_chart_view_from_id (gtk_stack_get_visible_child_name (self->chart_stack), &view))
+    view = RUGOSA_CHART_VIEW_FRICTION;
+  return view;
+}
+
 /* --- object ---------------------------------------------------------- */
 
 static gboolean
@@ -822,6 +866,8 @@ _rugosa_window_setup (RugosaWindow *self)
   rugosa_canvas_set_selection (self->canvas, self->selection);
   rugosa_results_table_set_context (self->results_table, self->project, self->selection);
   rugosa_line_panel_set_context (self->line_panel, self->project);
+  rugosa_cost_group_set_project (self->cost_group, self->project);
+  _rugosa_window_add_views (self);
   g_object_bind_property (self->canvas, "probe-text", self->probe_label, "label", G_BINDING_DEFAULT);
   g_object_bind_property_full (self->canvas, "probe-text", self->probe_label, "visible", G_BINDING_DEFAULT,
                                _rugosa_window_probe_visible, NULL, NULL, NULL);
@@ -855,6 +901,12 @@ rugosa_window_dispose (GObject *object)
   g_clear_handle_id (&self->actions_source, g_source_remove);
   if (self->canvas)
     rugosa_canvas_set_selection (self->canvas, NULL);
+  for (int v = 0; v < RUGOSA_CHART_N_VIEWS; v++)
+    if (self->plot_views[v] != NULL)
+      {
+        rugosa_plot_view_set_selection (self->plot_views[v], NULL);
+        self->plot_views[v] = NULL;
+      }
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_WINDOW);
   g_clear_pointer (&self->bound_rows, g_ptr_array_unref);
   g_clear_object (&self->selection);
@@ -876,6 +928,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   g_type_ensure (RUGOSA_TYPE_CANVAS);
   g_type_ensure (RUGOSA_TYPE_LINE_PANEL);
   g_type_ensure (RUGOSA_TYPE_RESULTS_TABLE);
+  g_type_ensure (RUGOSA_TYPE_COST_GROUP);
 
   gtk_widget_class_set_template_from_resource (widget_class, "/org/rugosa/Rugosa/rugosa-window.ui");
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, window_title);
@@ -891,6 +944,9 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, line_panel);
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, primary_menu_button);
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, recent_section);
+  gtk_widget_class_bind_template_child (widget_class, RugosaWindow, chart_stack);
+  gtk_widget_class_bind_template_child (widget_class, RugosaWindow, friction_page);
+  gtk_widget_class_bind_template_child (widget_class, RugosaWindow, cost_group);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_line_activated);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_place_probe);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_age_changed);

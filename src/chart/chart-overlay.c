@@ -340,6 +340,12 @@ shape_path (cairo_t *cr, int shape, double x, double y, double r)
     }
 }
 
+void
+_rugosa_chart_shape_path (cairo_t *cr, int shape, double x, double y, double r)
+{
+  shape_path (cr, shape, x, y, r);
+}
+
 static void
 draw_marker (cairo_t *cr, int shape, double x, double y, double r,
              const RugosaChartRgba *fill, const RugosaChartRgba *halo,

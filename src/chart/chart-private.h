@@ -150,7 +150,20 @@ void _rugosa_chart_draw_curve_labels (RugosaChart *chart, cairo_t *cr,
 /* chart-background.c */
 void _rugosa_chart_draw_background (RugosaChart *chart, cairo_t *cr);
 
+/* chart-export.c: the surface of `format` at width × height, `draw`
+ * called on it, the file written; FALSE and one sentence otherwise. */
+typedef void (*ChartExportDraw) (cairo_t *cr, gpointer data);
+gboolean _rugosa_chart_export_surface (RugosaChartFormat format, double width,
+                                       double height, const char *date,
+                                       const char *title, const char *path,
+                                       ChartExportDraw draw, gpointer data,
+                                       GError **error);
+
 /* chart-overlay.c */
+/* The marker shape `shape` (a line's index: circle, square, diamond,
+ * triangles) of radius r at (x, y), as a path. */
+void _rugosa_chart_shape_path (cairo_t *cr, int shape, double x, double y,
+                               double r);
 void _rugosa_chart_place_labels (RugosaChart *chart);
 void _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached);
 void _rugosa_chart_draw_footer (RugosaChart *chart, cairo_t *cr);

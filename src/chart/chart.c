@@ -14,8 +14,6 @@
 #include <stdlib.h>
 #include <string.h>
 
-#include <cairo-pdf.h>
-#include <cairo-svg.h>
 
 /* Marked for translation; shown through _() where drawn. */
 const char *const RUGOSA_CHART_CAUTION =
@@ -366,11 +364,10 @@ rugosa_chart_legend_box (RugosaChart *chart)
 
 /* --- export --- */
 
-static cairo_status_t
-finish_surface (cairo_surface_t *surface)
+static void
+export_draw (cairo_t *cr, gpointer data)
 {
-  cairo_surface_finish (surface);
-  return cairo_surface_status (surface);
+  rugosa_chart_draw_direct (data, cr);
 }
 
 gboolean
@@ -380,9 +377,9 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
                      GError **error)
 {
   RugosaChartSpec s = *spec;
-  RgError err;
-  cairo_surface_t *surface = NULL;
-  cairo_status_t cst;
+  RgError err = { 0 };
+  RugosaChart *chart;
+  gboolean ok;
 
   s.width = width;
   s.height = height;
@@ -401,61 +398,11 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
       return FALSE;
     }
 
-  RugosaChart *chart = rugosa_chart_new ();
+  chart = rugosa_chart_new ();
   rugosa_chart_set_spec (chart, &s, NULL);
   rugosa_chart_set_lines (chart, lines, n_lines);
-
-  switch (format)
-    {
-    case RUGOSA_CHART_FORMAT_SVG:
-      surface = cairo_svg_surface_create (path, width, height);
-      break;
-    case RUGOSA_CHART_FORMAT_PDF:
-      surface = cairo_pdf_surface_create (path, width, height);
-      if (cairo_surface_status (surface) == CAIRO_STATUS_SUCCESS)
-        {
-          cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_TITLE,
-                                          _("Friction chart"));
-          cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_CREATOR,
-                                          "Rugosa");
-          /* the caller's date, so that output is reproducible */
-          int yy, mm, dd;
-          if (sscanf (s.footer_date, "%4d-%2d-%2d", &yy, &mm, &dd) == 3)
-            {
-              char iso[40];
-              snprintf (iso, sizeof iso, "%04d-%02d-%02dT00:00:00Z", yy, mm, dd);
-              cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_CREATE_DATE, iso);
-            }
-        }
-      break;
-    case RUGOSA_CHART_FORMAT_PNG:
-    default:
-      surface = cairo_image_surface_create (CAIRO_FORMAT_ARGB32, (int) ceil (width),
-                                            (int) ceil (height));
-      break;
-    }
-
-  cst = cairo_surface_status (surface);
-  if (cst == CAIRO_STATUS_SUCCESS)
-    {
-      cairo_t *cr = cairo_create (surface);
-      rugosa_chart_draw_direct (chart, cr);
-      cst = cairo_status (cr);
-      cairo_destroy (cr);
-    }
-  if (cst == CAIRO_STATUS_SUCCESS && format == RUGOSA_CHART_FORMAT_PNG)
-    cst = cairo_surface_write_to_png (surface, path);
-  if (cst == CAIRO_STATUS_SUCCESS)
-    cst = finish_surface (surface);
-  cairo_surface_destroy (surface);
+  ok = _rugosa_chart_export_surface (format, width, height, s.footer_date,
+                                     _("Friction chart"), path, export_draw, chart, error);
   rugosa_chart_free (chart);
-
-  if (cst != CAIRO_STATUS_SUCCESS)
-    {
-      g_set_error (error, RUGOSA_CHART_ERROR, RUGOSA_CHART_ERROR_WRITE,
-                   _("Could not write the chart to “%s”: %s."), path,
-                   cairo_status_to_string (cst));
-      return FALSE;
-    }
-  return TRUE;
+  return ok;
 }

@@ -432,7 +432,7 @@ cli_cmd_fluid (int argc, char **argv)
   g_autoptr (RugosaLine) line = rugosa_line_new (NULL);
   g_autoptr (RugosaSettings) settings = rugosa_settings_new ();
   RgError err = { 0 };
-  RgWarnings warnings;
+  RgWarnings warnings = { 0 };
   RgFluidSpec spec;
   RgFluidProps props;
   const char *option = NULL;

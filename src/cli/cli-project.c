@@ -9,14 +9,105 @@
 
 #include "cli.h"
 #include "chart/rugosa-chart-input.h"
+#include "chart/rugosa-plot-input.h"
 #include "model/rugosa-fields.h"
 #include "model/rugosa-project.h"
 
-static const CliOption eval_options[] = {
-  { "--age", TRUE, FALSE },
-  { "--format", TRUE, FALSE },
-  { NULL, FALSE, FALSE },
-};
+/* The settings that `eval` may change for one run: the energy settings,
+ * each with the option and the range of its row. */
+static gboolean
+is_energy_row (const RugosaField *row)
+{
+  return row->cli != NULL && g_str_has_prefix (row->path, "energy.");
+}
+
+/* eval's own options, then one per energy row; built once. */
+static const CliOption *
+eval_options (void)
+{
+  static CliOption *options;
+  GArray *a;
+  guint n;
+  const RugosaField *rows;
+
+  if (options != NULL)
+    return options;
+  a = g_array_new (TRUE, TRUE, sizeof (CliOption));
+  {
+    const CliOption own[] = { { "--age", TRUE, FALSE }, { "--format", TRUE, FALSE } };
+
+    g_array_append_vals (a, own, G_N_ELEMENTS (own));
+  }
+  rows = rugosa_settings_fields (&n);
+  for (guint i = 0; i < n; i++)
+    if (is_energy_row (&rows[i]))
+      {
+        CliOption o = { rows[i].cli, TRUE, FALSE };
+
+        g_array_append_val (a, o);
+      }
+  options = (CliOption *) g_array_free (a, FALSE);
+  return options;
+}
+
+/* Set the energy settings given as options on the loaded project, each
+ * checked against its row's range, then their relations; CLI_EXIT_OK or
+ * the refusal already reported. */
+static int
+apply_energy_options (const CliArgs *args, RugosaProject *project)
+{
+  RugosaSettings *settings = rugosa_project_get_settings (project);
+  const RugosaField *rows;
+  const char *failed = NULL;
+  RgError err = { 0 };
+  guint n;
+
+  rows = rugosa_settings_fields (&n);
+  for (guint i = 0; i < n; i++)
+    {
+      const RugosaField *row = &rows[i];
+      const char *text;
+
+      if (!is_energy_row (row) || (text = cli_args_get (args, row->cli)) == NULL)
+        continue;
+      if (row->kind == RUGOSA_FIELD_TEXT)
+        {
+          gboolean control = FALSE;
+
+          for (const char *c = text; *c != '\0'; c++)
+            control |= (unsigned char) *c < 0x20 || *c == 0x7f;
+          if (!g_utf8_validate (text, -1, NULL) || control
+              || g_utf8_strlen (text, -1) > row->max_chars)
+            {
+              g_autofree char *msg = g_strdup_printf (_("%s must be a text of at most %d characters, without control characters."),
+                                                      rugosa_field_label (row), row->max_chars);
+              return cli_fail_option (row->cli, msg);
+            }
+          g_object_set (settings, row->property, text, NULL);
+          continue;
+        }
+      {
+        double stored = 0.0;
+
+        if (!rugosa_field_parse_text (row, text, NULL, 0.0, &stored, &err)
+            || !rugosa_field_in_range (row, stored, NULL, &err))
+          return cli_fail_option (row->cli, err.text);
+        g_object_set (settings, row->property, stored, NULL);
+      }
+    }
+  if (rugosa_settings_check (settings, &failed, &err) != RG_OK)
+    {
+      /* name the options given among the fields of the relation */
+      g_autoptr (GString) options = g_string_new (NULL);
+
+      for (guint i = 0; i < n; i++)
+        if (is_energy_row (&rows[i]) && cli_args_has (args, rows[i].cli)
+            && g_str_has_prefix (rows[i].property, "hours-"))
+          g_string_append_printf (options, "%s%s", options->len ? ", " : "", rows[i].cli);
+      return cli_fail_option (options->len ? options->str : rugosa_field_find (failed)->cli, err.text);
+    }
+  return CLI_EXIT_OK;
+}
 
 /* Loads PROJECT (the one positional argument) or reports why not. */
 RugosaProject *
@@ -73,8 +164,9 @@ cli_cmd_eval (int argc, char **argv)
   RugosaEvalFormat format = RUGOSA_EVAL_FORMAT_TABLE;
   const char *format_text;
   double age;
+  int status;
 
-  if (!cli_args_parse (&args, "eval", eval_options, argc, argv, 2, msg))
+  if (!cli_args_parse (&args, "eval", eval_options (), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (!cli_parse_age_option (&args, &age))
     return CLI_EXIT_USAGE;
@@ -89,6 +181,8 @@ cli_cmd_eval (int argc, char **argv)
     return cli_fail (_("--format must be table, csv or json, not \"%s\"."), format_text);
   if ((project = cli_load_project (&args, "eval")) == NULL)
     return CLI_EXIT_USAGE;
+  if ((status = apply_energy_options (&args, project)) != CLI_EXIT_OK)
+    return status;
   if (!rugosa_project_format_eval (project, age, format, out, &error))
     return cli_fail ("%s", error->message);
   return cli_write_stdout (out->str);
@@ -101,6 +195,7 @@ static const CliOption render_options[] = {
   { "--height", TRUE, FALSE },
   { "--age", TRUE, FALSE },
   { "--theme", TRUE, FALSE },
+  { "--view", TRUE, FALSE },
   { NULL, FALSE, FALSE },
 };
 
@@ -152,8 +247,10 @@ cli_cmd_render (int argc, char **argv)
   g_autofree char *date = NULL;
   RugosaChartFormat format;
   RugosaChartTheme theme = RUGOSA_CHART_THEME_LIGHT;
-  const char *path, *theme_text;
+  RugosaChartView view = RUGOSA_CHART_VIEW_FRICTION;
+  const char *path, *theme_text, *view_text;
   double age, width, height;
+  gboolean ok;
 
   if (!cli_args_parse (&args, "render", render_options, argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
@@ -181,16 +278,34 @@ cli_cmd_render (int argc, char **argv)
     theme = RUGOSA_CHART_THEME_DARK;
   else
     return cli_fail (_("--theme must be light or dark, not \"%s\"."), theme_text);
+  view_text = cli_args_get (&args, "--view");
+  if (view_text != NULL && !rugosa_chart_view_from_id (view_text, &view))
+    {
+      g_autofree char *shown = cli_echo (view_text);
+      return cli_fail (_("--view must be friction, system or cost, not \"%s\"."), shown);
+    }
   if ((project = cli_load_project (&args, "render")) == NULL)
     return CLI_EXIT_USAGE;
   if (age >= 0.0)
     g_object_set (rugosa_project_get_settings (project), "service-age", age, NULL);
 
-  input = rugosa_chart_input_new (project, -1, NULL);
-  input->spec.theme = theme;
   date = footer_date ();
-  if (!rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
-                            width, height, date, path, &error))
+  if (view == RUGOSA_CHART_VIEW_FRICTION)
+    {
+      input = rugosa_chart_input_new (project, -1, NULL);
+      input->spec.theme = theme;
+      ok = rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
+                                width, height, date, path, &error);
+    }
+  else
+    {
+      g_autoptr (RugosaPlotInput) plot = rugosa_plot_input_new (project, view, -1);
+
+      plot->spec.theme = theme;
+      ok = rugosa_plot_export (&plot->spec, plot->series, plot->n_series, format,
+                               width, height, date, path, &error);
+    }
+  if (!ok)
     {
       (void) fprintf (stderr, "rugosa-cli: %s\n", error->message);
       return error->code == RUGOSA_CHART_ERROR_WRITE ? CLI_EXIT_FAILURE : CLI_EXIT_USAGE;

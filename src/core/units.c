@@ -36,7 +36,12 @@
  * T/K = (t/°F + 459.67)/1.8 and T/K = t/°C + 273.15).  The year is the
  * Julian year of 365.25 d = 31 557 600 s (the "a" of the IAU; NIST SP 811
  * lists 365-day and tropical years too, so the choice is ours and stated
- * here).  Salinity: 1 g/kg = 1 ppt (parts per thousand by mass) = 1e-3. */
+ * here).  Salinity: 1 g/kg = 1 ppt (parts per thousand by mass) = 1e-3.
+ * Power and energy: NIST SP 811 (2008) B.8, horsepower (550 ft·lbf/s)
+ * = 550 × 0.3048 m × 4.4482216152605 N per second = 745.69987158227022 W
+ * exactly (the mechanical horsepower of US pump and motor practice; the
+ * table rounds it to 7.456 999 E+02 W), and kilowatt hour = 3.6 E+06 J
+ * exactly (1 W·h = 3600 J). */
 #include "units.h"
 
 #include <errno.h>
@@ -59,6 +64,9 @@
 #define S_PER_YEAR RG_UNITS_SECONDS_PER_YEAR /* Julian year, 365.25 d */
 /* 3.785411784e-3 / 60 is the exact decimal 6.30901964e-5. */
 #define M3S_PER_GPM 6.30901964e-5
+/* 550 ft·lbf/s = 550 × 0.3048 × 4.4482216152605 W, an exact decimal. */
+#define W_PER_HP 745.69987158227022
+#define J_PER_WH 3600.0
 
 typedef struct {
   RgQuantity q;
@@ -187,6 +195,23 @@ static const UnitDef UNITS[] = {
   { RG_QTY_SALINITY, "g/kg", 1.0e-3, 0.0 },
   { RG_QTY_SALINITY, "ppt", 1.0e-3, 0.0 },
   { RG_QTY_SALINITY, "permil", 1.0e-3, 0.0 },
+  /* power, W */
+  { RG_QTY_POWER, "W", 1.0, 0.0 },
+  { RG_QTY_POWER, "kW", 1.0e3, 0.0 },
+  { RG_QTY_POWER, "MW", 1.0e6, 0.0 },
+  { RG_QTY_POWER, "hp", W_PER_HP, 0.0 },
+  /* energy, J */
+  { RG_QTY_ENERGY, "J", 1.0, 0.0 },
+  { RG_QTY_ENERGY, "kJ", 1.0e3, 0.0 },
+  { RG_QTY_ENERGY, "MJ", 1.0e6, 0.0 },
+  { RG_QTY_ENERGY, "GJ", 1.0e9, 0.0 },
+  { RG_QTY_ENERGY, "Wh", J_PER_WH, 0.0 },
+  { RG_QTY_ENERGY, "W.h", J_PER_WH, 0.0 },
+  { RG_QTY_ENERGY, "kWh", 1.0e3 * J_PER_WH, 0.0 },
+  { RG_QTY_ENERGY, "kW.h", 1.0e3 * J_PER_WH, 0.0 },
+  { RG_QTY_ENERGY, "MWh", 1.0e6 * J_PER_WH, 0.0 },
+  { RG_QTY_ENERGY, "MW.h", 1.0e6 * J_PER_WH, 0.0 },
+  { RG_QTY_ENERGY, "GWh", 1.0e9 * J_PER_WH, 0.0 },
 };
 enum { N_UNITS = sizeof UNITS / sizeof UNITS[0] };
 
@@ -211,6 +236,8 @@ static const char *const CHOICES[RG_QTY_N][8] = {
   [RG_QTY_TIME] = { "s", "min", "h", "d", "yr" },
   [RG_QTY_ROUGHNESS_RATE] = { "m/s", "mm/yr", "µm/yr" },
   [RG_QTY_SALINITY] = { "kg/kg", "g/kg", "ppt" },
+  [RG_QTY_POWER] = { "W", "kW", "MW", "hp" },
+  [RG_QTY_ENERGY] = { "J", "MJ", "GJ", "kWh", "MWh", "GWh" },
 };
 
 /* The accepted units as a list for messages; the words in parentheses are
@@ -229,6 +256,8 @@ static const char *const ACCEPTED[RG_QTY_N] = {
   [RG_QTY_TIME] = RG_N_ ("s, min, h, d, yr (or year, a)"),
   [RG_QTY_ROUGHNESS_RATE] = RG_N_ ("m/s, mm/yr, µm/yr"),
   [RG_QTY_SALINITY] = RG_N_ ("kg/kg, g/kg, ppt"),
+  [RG_QTY_POWER] = RG_N_ ("W, kW, MW, hp (550 ft·lbf/s)"),
+  [RG_QTY_ENERGY] = RG_N_ ("J, kJ, MJ, GJ, Wh, kWh, MWh, GWh"),
 };
 
 static const char *const SI_SYMBOL[RG_QTY_N] = {
@@ -245,6 +274,8 @@ static const char *const SI_SYMBOL[RG_QTY_N] = {
   [RG_QTY_TIME] = "s",
   [RG_QTY_ROUGHNESS_RATE] = "m/s",
   [RG_QTY_SALINITY] = "kg/kg",
+  [RG_QTY_POWER] = "W",
+  [RG_QTY_ENERGY] = "J",
 };
 
 /* The name of each quantity, shown in parentheses inside a sentence ("has
@@ -264,6 +295,8 @@ static const char *const QTY_NAME[RG_QTY_N] = {
   [RG_QTY_TIME] = RG_N_ ("time"),
   [RG_QTY_ROUGHNESS_RATE] = RG_N_ ("roughness growth rate"),
   [RG_QTY_SALINITY] = RG_N_ ("salinity"),
+  [RG_QTY_POWER] = RG_N_ ("power"),
+  [RG_QTY_ENERGY] = RG_N_ ("energy"),
 };
 
 /* The accepted units of a viscosity that may be dynamic or kinematic. */

@@ -24,6 +24,8 @@ typedef enum {
   RG_QTY_TIME,             /* s */
   RG_QTY_ROUGHNESS_RATE,   /* m/s (aging rate) */
   RG_QTY_SALINITY,         /* kg/kg */
+  RG_QTY_POWER,            /* W (pump power) */
+  RG_QTY_ENERGY,           /* J (pumping energy) */
   RG_QTY_N
 } RgQuantity;
 

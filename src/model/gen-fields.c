@@ -35,6 +35,7 @@ kind_name (const RugosaField *f)
     case RUGOSA_FIELD_CATALOG: return "string (catalog id)";
     case RUGOSA_FIELD_FITTINGS: return "array";
     case RUGOSA_FIELD_UNIT_MAP: return "object of strings";
+    case RUGOSA_FIELD_CURVE: return "array of points";
     default: return "?";
     }
 }
@@ -83,6 +84,7 @@ range_text (const RugosaField *f)
     case RUGOSA_FIELD_UNIT_MAP:
       return g_strdup_printf ("≤ %d characters each", f->max_chars);
     case RUGOSA_FIELD_FITTINGS:
+    case RUGOSA_FIELD_CURVE:
       return g_strdup ("see below");
     case RUGOSA_FIELD_COLOUR:
     default:
@@ -108,6 +110,7 @@ default_text (const RugosaField *f)
       return g_strdup ("none");
     case RUGOSA_FIELD_FITTINGS:
     case RUGOSA_FIELD_UNIT_MAP:
+    case RUGOSA_FIELD_CURVE:
     default:
       return g_strdup ("empty");
     }
@@ -260,6 +263,15 @@ cmd_gschema (const char *template_path, const char *app_id)
             g_autofree char *range = g_strdup_printf ("      <range min=\"%s\" max=\"%s\"/>\n", lo, hi);
 
             schema_key (keys, f->property, "type=\"d\"", d, range, f->label, f->help);
+          }
+          break;
+        case RUGOSA_FIELD_TEXT:
+          {
+            g_autoptr (GVariant) v = g_variant_ref_sink (g_variant_new_string (f->dflt_text ? f->dflt_text : ""));
+            g_autofree char *d = g_variant_print (v, FALSE);
+            g_autofree char *escaped = g_markup_escape_text (d, -1);
+
+            schema_key (keys, f->property, "type=\"s\"", escaped, NULL, f->label, f->help);
           }
           break;
         case RUGOSA_FIELD_UNIT_MAP:

@@ -98,6 +98,44 @@ rugosa_display_format (RgQuantity  q,
 }
 
 char *
+rugosa_display_money (double amount, const char *currency)
+{
+  char buf[G_ASCII_DTOSTR_BUF_SIZE];
+  GString *out = g_string_new (NULL);
+  const char *digits, *end;
+
+  if (!isfinite (amount))
+    g_string_append (out, "—");
+  else
+    {
+      g_ascii_formatd (buf, sizeof buf, fabs (amount) < 100.0 ? "%.2f" : "%.0f", amount);
+      digits = buf[0] == '-' ? buf + 1 : buf;
+      if (digits != buf)
+        g_string_append (out, "−");
+      end = digits;
+      while (g_ascii_isdigit (*end))
+        end++;
+      for (const char *c = digits; c < end; c++)
+        {
+          /* Common practice (no single source): no grouping below 10 000 */
+          if (c > digits && (end - c) % 3 == 0 && end - digits > 4)
+            g_string_append (out, "\u202f");
+          g_string_append_c (out, *c);
+        }
+      g_string_append (out, end);
+    }
+  if (currency != NULL && *currency != '\0')
+    g_string_append_printf (out, " %s", currency);
+  return g_string_free (out, FALSE);
+}
+
+char *
+rugosa_display_money_screen (double amount, const char *currency)
+{
+  return rugosa_display_localize (rugosa_display_money (amount, currency));
+}
+
+char *
 rugosa_display_scientific (double x,
                            int    digits)
 {

@@ -23,6 +23,12 @@ const char *rugosa_display_unit_symbol   (const char *unit);
 char       *rugosa_display_significant   (double      x,
                                           int         digits);
 
+/* An amount of money: whole units from 100 up, spaced in thousands from
+ * 10 000 by a narrow no-break space ("183 421"), two decimals below 100;
+ * then the currency label, when there is one ("183 421 €"). */
+char       *rugosa_display_money         (double      amount,
+                                          const char *currency);
+
 /* "2.8 × 10⁶", "7.7 × 10⁻⁵" outside 1e-3 … 1e5; plain digits inside. */
 char       *rugosa_display_scientific    (double      x,
                                           int         digits);
@@ -41,6 +47,8 @@ char       *rugosa_display_significant_screen (double      x,
                                                int         digits);
 char       *rugosa_display_scientific_screen  (double      x,
                                                int         digits);
+char       *rugosa_display_money_screen       (double      amount,
+                                               const char *currency);
 /* An ASCII display text (or any text) for the screen: each '.' between two
  * digits becomes the locale's decimal separator.  Takes `text`. */
 char       *rugosa_display_localize           (char       *text);

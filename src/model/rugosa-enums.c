@@ -56,7 +56,10 @@ static const char *
 display_nick (int i)
 {
   const RugosaDisplayInfo *info = rugosa_display_info ((RugosaDisplayQuantity) i);
-  return info != NULL ? info->id : "number";
+
+  if (info != NULL)
+    return info->id;
+  return i == RUGOSA_DISPLAY_MONEY ? "money" : "number";
 }
 
 #define DEFINE_ENUM(func, name, prefix, n, nick)                        \

@@ -49,6 +49,11 @@ typedef enum {
   RUGOSA_DISPLAY_SALINITY,
   RUGOSA_DISPLAY_ROUGHNESS_RATE,
   RUGOSA_DISPLAY_AGE,            /* years of service */
+  RUGOSA_DISPLAY_POWER,          /* pump power */
+  RUGOSA_DISPLAY_ENERGY_PER_YEAR, /* pumping energy of one year */
+  RUGOSA_DISPLAY_MONEY,          /* no unit to convert: shown with the
+                                  * project's currency label (no entry in
+                                  * the display table, rugosa-units.h) */
   RUGOSA_DISPLAY_NUMBER,         /* dimensionless: shown as it is */
   RUGOSA_N_DISPLAY
 } RugosaDisplayQuantity;

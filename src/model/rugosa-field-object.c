@@ -11,9 +11,16 @@
 const GVariantType *
 _rugosa_fields_variant_type (const RugosaField *row)
 {
-  return row->kind == RUGOSA_FIELD_FITTINGS
-           ? G_VARIANT_TYPE (RUGOSA_LINE_FITTINGS_TYPE)
-           : G_VARIANT_TYPE ("a{ss}");
+  switch (row->kind)
+    {
+    case RUGOSA_FIELD_FITTINGS:
+      return G_VARIANT_TYPE (RUGOSA_LINE_FITTINGS_TYPE);
+    case RUGOSA_FIELD_CURVE:
+      return G_VARIANT_TYPE (RUGOSA_LINE_CURVE_TYPE);
+    case RUGOSA_FIELD_UNIT_MAP:
+    default:
+      return G_VARIANT_TYPE ("a{ss}");
+    }
 }
 
 static GVariant *
@@ -52,6 +59,7 @@ _rugosa_fields_install (const RugosaField *rows, guint n,
           break;
         case RUGOSA_FIELD_FITTINGS:
         case RUGOSA_FIELD_UNIT_MAP:
+        case RUGOSA_FIELD_CURVE:
           p = g_param_spec_variant (r->property, NULL, r->help,
                                     _rugosa_fields_variant_type (r), NULL, flags);
           break;
@@ -84,6 +92,7 @@ _rugosa_fields_init (const RugosaField *rows, guint n, gpointer instance)
           break;
         case RUGOSA_FIELD_FITTINGS:
         case RUGOSA_FIELD_UNIT_MAP:
+        case RUGOSA_FIELD_CURVE:
           *_rugosa_fields_variant (r, instance) = empty_variant (r);
           break;
         default:
@@ -105,6 +114,7 @@ _rugosa_fields_clear (const RugosaField *rows, guint n, gpointer instance)
         break;
       case RUGOSA_FIELD_FITTINGS:
       case RUGOSA_FIELD_UNIT_MAP:
+      case RUGOSA_FIELD_CURVE:
         g_clear_pointer (_rugosa_fields_variant (&rows[i], instance), g_variant_unref);
         break;
       case RUGOSA_FIELD_NUMBER:
@@ -132,6 +142,7 @@ _rugosa_fields_get (const RugosaField *r, gpointer instance, GValue *value)
       break;
     case RUGOSA_FIELD_FITTINGS:
     case RUGOSA_FIELD_UNIT_MAP:
+    case RUGOSA_FIELD_CURVE:
       g_value_set_variant (value, *_rugosa_fields_variant (r, instance));
       break;
     default:
@@ -186,6 +197,7 @@ _rugosa_fields_set (const RugosaField *r, gpointer instance,
       }
     case RUGOSA_FIELD_FITTINGS:
     case RUGOSA_FIELD_UNIT_MAP:
+    case RUGOSA_FIELD_CURVE:
       {
         GVariant **slot = _rugosa_fields_variant (r, instance);
         GVariant *v = g_value_get_variant (value);
@@ -232,6 +244,7 @@ _rugosa_fields_equal (const RugosaField *rows, guint n, gpointer a, gpointer b)
           break;
         case RUGOSA_FIELD_FITTINGS:
         case RUGOSA_FIELD_UNIT_MAP:
+        case RUGOSA_FIELD_CURVE:
           if (!g_variant_equal (*_rugosa_fields_variant (r, a), *_rugosa_fields_variant (r, b)))
             return FALSE;
           break;

@@ -48,7 +48,7 @@ _rugosa_fields_variant (const RugosaField *row, gpointer instance)
   return (GVariant **) G_STRUCT_MEMBER_P (instance, row->offset);
 }
 
-/* The GVariant type of a FITTINGS or UNIT_MAP row. */
+/* The GVariant type of a FITTINGS, UNIT_MAP or CURVE row. */
 const GVariantType *_rugosa_fields_variant_type (const RugosaField *row);
 
 G_END_DECLS

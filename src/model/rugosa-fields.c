@@ -17,7 +17,17 @@
  * 2000–4000 is the common textbook choice, the chart window spans the usual
  * friction-chart range, and 3 m/s and 5 m per 100 m are rule-of-thumb
  * warning limits for water lines that the user is expected to change.
- * Common practice (no single source) for all of these. */
+ * Common practice (no single source) for all of these.
+ *
+ * Energy and cost (rugosa-life-cycle.c): a pump and motor together turn
+ * about 70 % of the electric power into hydraulic power; a pumped main
+ * runs most of the year (8000 h of the 8766 h of a Julian year); 0.15 per
+ * kWh is a typical tariff; pipe works are judged over 30 years at a 5 %
+ * discount rate.  Common practice (no single source), to be changed: the
+ * currency label, the price, the service life and the discount rate are
+ * the user's or the organisation's, so new projects take them from the
+ * preferences (RUGOSA_FIELD_SEEDED); the efficiency and the hours belong
+ * to the pump and the duty of one project, so they are not seeded. */
 #define G_LOG_DOMAIN "rugosa-model"
 
 #include "config.h"
@@ -42,6 +52,7 @@
 #include "rugosa-units.h"
 
 #define SECONDS_PER_YEAR RG_UNITS_SECONDS_PER_YEAR
+#define HOURS_PER_YEAR (RG_UNITS_SECONDS_PER_YEAR / 3600.0) /* the same year in hours */
 
 /* The temperature and pressure rows hold the state of several fluids:
  * their range spans the fluids' ranges (the core checks each fluid's). */
@@ -192,6 +203,22 @@ static RugosaField line_fields[] = {
        RUGOSA_FIELD_MIN_OPEN | RUGOSA_FIELD_ZERO_ABSENT, N_("Highest flow"),
        N_("The highest flow of operation, at least the design flow; none when not given."),
        NULL, SUBJ (FLOW), L (flow_maximum), -1),
+  /* Money has no unit to convert: plain numbers in the project's currency
+   * (the settings' "currency"). */
+  { "cost-per-metre", "cost.price_per_m", RUGOSA_FIELD_NUMBER, RUGOSA_DISPLAY_MONEY,
+    1.0, 0.0, 1.0e7, 0.0, NULL, RUGOSA_FIELD_ZERO_ABSENT,
+    N_("Capital cost per metre"),
+    N_("The cost of laying one metre of the line, in the project's currency; the capital cost is this times the length plus the lump sum. None when not given."),
+    "/m", NULL, 0, NULL, NULL, 0, L (cost_per_metre), -1, 0 },
+  { "cost-lump-sum", "cost.lump_sum", RUGOSA_FIELD_NUMBER, RUGOSA_DISPLAY_MONEY,
+    1.0, 0.0, 1.0e12, 0.0, NULL, RUGOSA_FIELD_ZERO_ABSENT,
+    N_("Capital cost, lump sum"),
+    N_("A capital cost of the line as a whole (pumps, valves, works), in the project's currency, added to the cost per metre. None when not given."),
+    NULL, NULL, 0, NULL, NULL, 0, L (cost_lump_sum), -1, 0 },
+  { "pump-curve", "pump.curve", RUGOSA_FIELD_CURVE, RUGOSA_DISPLAY_NUMBER, 1.0, 0,
+    0, 0, NULL, 0, N_("Pump curve"),
+    N_("The head of the line's pump against its flow: three or more points in order of increasing flow, through which a smooth curve is drawn to find the duty point. None when not given."),
+    NULL, NULL, 0, NULL, NULL, 0, L (pump_curve), -1, 0 },
 };
 
 static RugosaField settings_fields[] = {
@@ -247,6 +274,45 @@ static RugosaField settings_fields[] = {
        RUGOSA_FIELD_SEEDED, N_("Gradient limit"),
        N_("A pipe-friction loss per 100 length units of line above this gives a warning."),
        NULL, 0, S (gradient_limit), -1),
+  { "pump-efficiency", "energy.efficiency_percent", RUGOSA_FIELD_NUMBER,
+    RUGOSA_DISPLAY_NUMBER, 1.0, 0.0, 100.0, 70.0, NULL, RUGOSA_FIELD_MIN_OPEN,
+    N_("Pump and motor efficiency"),
+    N_("The share of the electric power drawn that the pump gives to the water (pump times motor efficiency), in per cent."),
+    "%", "--efficiency", 0, NULL, NULL, 0, S (pump_efficiency), -1, 0 },
+  { "hours-design", "energy.hours_design_per_year", RUGOSA_FIELD_NUMBER,
+    RUGOSA_DISPLAY_NUMBER, 1.0, 0.0, HOURS_PER_YEAR, 8000.0, NULL, 0,
+    N_("Hours a year at design flow"),
+    N_("How many hours a year the lines run at their design flow."),
+    "h/yr", "--hours", 0, NULL, NULL, 0, S (hours_design), -1, 0 },
+  { "hours-minimum", "energy.hours_minimum_per_year", RUGOSA_FIELD_NUMBER,
+    RUGOSA_DISPLAY_NUMBER, 1.0, 0.0, HOURS_PER_YEAR, 0.0, NULL, 0,
+    N_("Hours a year at the lowest flow"),
+    N_("How many hours a year the lines run at their lowest flow; a line without a lowest flow runs them at its design flow."),
+    "h/yr", "--hours-minimum", 0, NULL, NULL, 0, S (hours_minimum), -1, 0 },
+  { "hours-maximum", "energy.hours_maximum_per_year", RUGOSA_FIELD_NUMBER,
+    RUGOSA_DISPLAY_NUMBER, 1.0, 0.0, HOURS_PER_YEAR, 0.0, NULL, 0,
+    N_("Hours a year at the highest flow"),
+    N_("How many hours a year the lines run at their highest flow; a line without a highest flow runs them at its design flow."),
+    "h/yr", "--hours-maximum", 0, NULL, NULL, 0, S (hours_maximum), -1, 0 },
+  { "currency", "energy.currency", RUGOSA_FIELD_TEXT, RUGOSA_DISPLAY_NUMBER, 1.0,
+    0, 0, 0, "€", RUGOSA_FIELD_SEEDED, N_("Currency"),
+    N_("The label of the currency that prices and costs are given in, shown beside them (\"€\", \"USD\")."),
+    NULL, "--currency", 0, NULL, NULL, 12, S (currency), -1, 0 },
+  { "energy-price", "energy.price_per_kWh", RUGOSA_FIELD_NUMBER,
+    RUGOSA_DISPLAY_MONEY, 1.0, 0.0, 100.0, 0.15, NULL, RUGOSA_FIELD_SEEDED,
+    N_("Energy price"),
+    N_("The price of one kilowatt hour of electricity, in the project's currency."),
+    "/kWh", "--energy-price", 0, NULL, NULL, 0, S (energy_price), -1, 0 },
+  { "service-life", "energy.service_life_years", RUGOSA_FIELD_NUMBER,
+    RUGOSA_DISPLAY_AGE, SECONDS_PER_YEAR, 1.0, RUGOSA_LIFE_YEARS_MAX, 30.0, NULL, RUGOSA_FIELD_SEEDED,
+    N_("Service life"),
+    N_("The years of service over which the energy cost is summed, year by year as the roughness grows, and discounted."),
+    NULL, "--life", 0, NULL, NULL, 0, S (service_life), -1, 0 },
+  { "discount-rate", "energy.discount_rate_percent", RUGOSA_FIELD_NUMBER,
+    RUGOSA_DISPLAY_NUMBER, 1.0, 0.0, 50.0, 5.0, NULL, RUGOSA_FIELD_SEEDED,
+    N_("Discount rate"),
+    N_("The yearly rate, in per cent, at which a future year's energy cost is discounted to its present value."),
+    "%/yr", "--discount-rate", 0, NULL, NULL, 0, S (discount_rate), -1, 0 },
 };
 
 /* The core's defaults of the fluid state, read once. */
@@ -382,6 +448,24 @@ rugosa_field_label (const RugosaField *field)
   return _(field->label);
 }
 
+/* Four significant figures without trailing zeros ("100", "0.15"). */
+static char *
+plain_number (double x)
+{
+  char *s = rugosa_display_significant (x, 4);
+
+  if (strchr (s, '.') != NULL && strchr (s, 'e') == NULL)
+    {
+      char *end = s + strlen (s) - 1;
+
+      while (*end == '0')
+        *end-- = '\0';
+      if (*end == '.')
+        *end = '\0';
+    }
+  return s;
+}
+
 gboolean
 rugosa_field_in_range (const RugosaField *field, double stored,
                        const char *unit, RgError *err)
@@ -403,19 +487,39 @@ rugosa_field_in_range (const RugosaField *field, double stored,
   if (err == NULL)
     return FALSE;
 
-  /* A value kept per year (a service age, a growth rate) is shown per year
-   * when no unit is asked for, not in seconds. */
-  if (info != NULL && unit == NULL && field->to_si != 1.0)
-    unit = info->si_unit;
-  if (info != NULL)
+  if (field->display == RUGOSA_DISPLAY_MONEY)
+    {
+      /* money in whole units, with the currency label given as `unit`
+       * ("€", so "€/m" for a price per metre) or the row's unit alone */
+      g_autofree char *a = fabs (field->min) >= 1.0e4 ? rugosa_display_money (field->min, NULL)
+                                                      : plain_number (field->min);
+      g_autofree char *b = fabs (field->max) >= 1.0e4 ? rugosa_display_money (field->max, NULL)
+                                                      : plain_number (field->max);
+      g_autofree char *label = g_strconcat (unit ? unit : "", field->unit_text ? field->unit_text : "", NULL);
+
+      lo = *label ? g_strdup_printf ("%s %s", a, label) : g_strdup (a);
+      hi = *label ? g_strdup_printf ("%s %s", b, label) : g_strdup (b);
+    }
+  else if (info != NULL && unit == NULL && field->to_si != 1.0)
+    {
+      /* kept per year (a service age, a life): the range in years, as
+       * the row stores it, rather than in seconds */
+      g_autofree char *a = plain_number (field->min);
+      g_autofree char *b = plain_number (field->max);
+      const char *stored_unit = rugosa_field_si_unit (field);
+
+      lo = g_strdup_printf ("%s %s", a, stored_unit);
+      hi = g_strdup_printf ("%s %s", b, stored_unit);
+    }
+  else if (info != NULL)
     {
       lo = rugosa_display_format (info->quantity, field->min * field->to_si, unit);
       hi = rugosa_display_format (info->quantity, field->max * field->to_si, unit);
     }
   else
     {
-      g_autofree char *a = rugosa_display_significant (field->min, 4);
-      g_autofree char *b = rugosa_display_significant (field->max, 4);
+      g_autofree char *a = plain_number (field->min);
+      g_autofree char *b = plain_number (field->max);
 
       lo = field->unit_text ? g_strdup_printf ("%s %s", a, field->unit_text) : g_strdup (a);
       hi = field->unit_text ? g_strdup_printf ("%s %s", b, field->unit_text) : g_strdup (b);
@@ -470,10 +574,17 @@ rugosa_field_parse_text (const RugosaField *field, const char *text,
   g_return_val_if_fail (field->kind == RUGOSA_FIELD_NUMBER, FALSE);
   info = rugosa_display_info (field->display);
 
-  /* A plain number: no unit to read. */
+  /* A plain number: no unit to read, but the row's own unit may follow
+   * it as it is shown ("70 %", "0.15 /kWh"). */
   if (info == NULL)
     {
-      if (!is_bare_number (text, &x))
+      g_autofree char *trimmed = g_strstrip (g_strdup (text));
+
+      if (field->unit_text != NULL && *field->unit_text != '\0'
+          && g_str_has_suffix (trimmed, field->unit_text)
+          && strlen (trimmed) > strlen (field->unit_text))
+        trimmed[strlen (trimmed) - strlen (field->unit_text)] = '\0';
+      if (!is_bare_number (trimmed, &x))
         {
           g_autofree char *valid = g_utf8_make_valid (text, -1);
           g_autofree char *shown = NULL;
@@ -525,5 +636,24 @@ rugosa_field_parse_text (const RugosaField *field, const char *text,
       return FALSE;
     }
   *stored = si / field->to_si;
+  return TRUE;
+}
+
+gboolean
+rugosa_field_text_ok (const RugosaField *field, const char *text)
+{
+  if (text == NULL || !g_utf8_validate (text, -1, NULL))
+    return FALSE;
+  if (field->max_chars > 0 && g_utf8_strlen (text, -1) > field->max_chars)
+    return FALSE;
+  for (const char *p = text; *p != '\0'; p = g_utf8_next_char (p))
+    {
+      gunichar c = g_utf8_get_char (p);
+
+      if ((field->flags & RUGOSA_FIELD_MULTILINE) && (c == '\n' || c == '\t'))
+        continue;
+      if (g_unichar_iscntrl (c))
+        return FALSE;
+    }
   return TRUE;
 }

@@ -31,6 +31,8 @@ typedef enum {
   RUGOSA_FIELD_CATALOG,    /* a catalog id, or NULL for the custom value `partner` */
   RUGOSA_FIELD_FITTINGS,   /* the fittings list, RUGOSA_LINE_FITTINGS_TYPE */
   RUGOSA_FIELD_UNIT_MAP,   /* quantity id -> unit spelling, "a{ss}" */
+  RUGOSA_FIELD_CURVE,      /* (flow, head) points in SI, flows increasing,
+                            * RUGOSA_LINE_CURVE_TYPE */
 } RugosaFieldKind;
 
 typedef enum {
@@ -89,6 +91,11 @@ typedef struct {
 
 #define RUGOSA_FLUID_BIT(kind) (1u << (unsigned) (kind))
 
+/* Whether `text` is a value the TEXT, COLOUR or CATALOG row takes: valid
+ * UTF-8, within its length, without control characters (but line breaks
+ * and tabs in a multi-line text). */
+gboolean rugosa_field_text_ok (const RugosaField *field, const char *text);
+
 /* Whether the row is part of the state of `kind` (shown for it, taken by
  * rugosa-cli for it). */
 gboolean rugosa_field_applies_to_fluid (const RugosaField *field,
@@ -131,6 +138,16 @@ const char *rugosa_field_label (const RugosaField *field);
  * each lie in 0 … this (far above any single fitting's published K). */
 #define RUGOSA_FITTING_K_MAX 1.0e4
 #define RUGOSA_FITTING_COUNT_MAX 1.0e4
+/* A point of a pump curve: its flow lies in the range of a line's flows
+ * (the row "flow-design"), its head in 0 … this many metres (Common
+ * practice (no single source): far above any single pump's head, about
+ * 1000 bar of water); a curve holds at most this many points. */
+#define RUGOSA_CURVE_HEAD_MAX 1.0e4
+#define RUGOSA_CURVE_POINTS_MAX 50
+/* The longest service life whose energy is summed, years (the range of
+ * the row "service-life"; the year-by-year costs are kept in arrays of
+ * this size). */
+#define RUGOSA_LIFE_YEARS_MAX 100
 /* The chart window a project may ask for, which the chart engine draws
  * (src/chart includes this header for these numbers alone): the Reynolds
  * axis within the turbulent correlations' domain and spanning at least
@@ -145,7 +162,8 @@ const char *rugosa_field_label (const RugosaField *field);
 
 /* Whether `stored` lies in the field's range; with `why` (may be NULL),
  * one sentence naming the field by its label and giving the range in
- * `unit` (a display spelling for the field's quantity; NULL: SI), and
+ * `unit` (a display spelling for the field's quantity, the currency label
+ * for money; NULL: SI), and
  * `err` (may be NULL) filled the same way with the field's subjects. */
 gboolean rugosa_field_in_range (const RugosaField *field, double stored,
                                 const char *unit, RgError *err);

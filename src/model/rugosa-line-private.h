@@ -30,6 +30,8 @@ struct _RugosaLine
   double inner_diameter, length, elevation;
   GVariant *fittings;     /* RUGOSA_LINE_FITTINGS_TYPE, never NULL */
   double flow_design, flow_minimum, flow_maximum;
+  double cost_per_metre, cost_lump_sum; /* in the project's currency */
+  GVariant *pump_curve;   /* RUGOSA_LINE_CURVE_TYPE, never NULL */
 
   /* owned, not fields */
   cJSON *extra;           /* unknown file fields, or NULL */

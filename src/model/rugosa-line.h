@@ -16,6 +16,9 @@ G_DECLARE_FINAL_TYPE (RugosaLine, rugosa_line, RUGOSA, LINE, GObject)
 /* The GVariant type of the "fittings" property: an array of
  * (catalog id or "" for a plain K, plain K, count). */
 #define RUGOSA_LINE_FITTINGS_TYPE "a(sdd)"
+/* The GVariant type of a curve ("pump-curve"): an array of (flow m³/s,
+ * head m), flows increasing. */
+#define RUGOSA_LINE_CURVE_TYPE "a(dd)"
 
 RugosaLine *rugosa_line_new (const char *name);
 /* A deep copy (all properties and the kept unknown file fields). */

@@ -42,6 +42,39 @@ static double get_roughness_new (const RugosaLineResults *r, const RugosaOperati
 static double get_ratio (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->head_loss_ratio_to_new; }
 static double get_k_total (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->minor_loss_k_total; }
 
+/* Pumping (rugosa-life-cycle.c): SI values (W, J, money). */
+static double get_pump_head (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->pump_head_m; }
+static double get_hydraulic_power (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->hydraulic_power_w; }
+static double get_pump_power (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->electric_power_w; }
+static double get_pump_power_new (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->electric_power_new_w; }
+#define E(field) static double get_##field (const RugosaLineResults *r, const RugosaOperatingPoint *p) { (void) p; return r->energy.field; }
+E (energy_j_per_year)
+E (energy_new_j_per_year)
+E (cost_per_year)
+E (cost_new_per_year)
+E (capital)
+E (life_energy_cost)
+E (life_energy_cost_pv)
+E (life_cycle_cost)
+E (duty_flow_m3_s)
+E (duty_head_m)
+E (duty_new_flow_m3_s)
+E (duty_new_head_m)
+#undef E
+
+static gboolean
+is_design (const RugosaLineResults *r, const RugosaOperatingPoint *p)
+{
+  return p == &r->points[RUGOSA_FLOW_DESIGN];
+}
+
+static gboolean has_energy (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return is_design (r, p) && r->energy.ok; }
+static gboolean has_capital (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return is_design (r, p) && r->energy.has_capital; }
+static gboolean has_life (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return is_design (r, p) && r->energy.life_ok; }
+static gboolean has_life_cycle (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return has_life (r, p) && r->energy.has_capital; }
+static gboolean has_duty (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return is_design (r, p) && r->energy.duty_ok; }
+static gboolean has_duty_new (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return is_design (r, p) && r->energy.duty_new_ok; }
+
 static const char *id_regime (const RugosaOperatingPoint *p) { return rg_regime_id (p->result.friction.regime); }
 static const char *id_zone (const RugosaOperatingPoint *p) { return rg_roughness_zone_id (p->result.friction.zone); }
 
@@ -49,7 +82,10 @@ static gboolean has_laminar (const RugosaOperatingPoint *p) { return p->result.f
 static gboolean is_turbulent (const RugosaOperatingPoint *p) { return p->result.friction.regime == RG_REGIME_TURBULENT; }
 
 #define NUMBER(name, label, disp, get, present) \
-  { name, label, RUGOSA_DISPLAY_##disp, RUGOSA_OUTPUT_NUMBER, get, NULL, present }
+  { name, label, RUGOSA_DISPLAY_##disp, RUGOSA_OUTPUT_NUMBER, get, NULL, present, NULL }
+/* A value of the whole line, given with its design point. */
+#define LINE_NUMBER(name, label, disp, get, present) \
+  { name, label, RUGOSA_DISPLAY_##disp, RUGOSA_OUTPUT_NUMBER, get, NULL, NULL, present }
 
 static const RugosaOutputKey KEYS[] = {
   NUMBER ("velocity", N_("Mean velocity"), VELOCITY, get_velocity_m_s, NULL),
@@ -74,7 +110,23 @@ static const RugosaOutputKey KEYS[] = {
   NUMBER ("roughness_new", N_("Roughness when new"), ROUGHNESS, get_roughness_new, NULL),
   NUMBER ("head_loss_ratio_to_new", N_("Head loss, ratio to new"), NUMBER, get_ratio, NULL),
   NUMBER ("minor_loss_k_total", N_("ΣK of fittings"), NUMBER, get_k_total, NULL),
-  { "warnings", N_("Warnings"), RUGOSA_DISPLAY_NUMBER, RUGOSA_OUTPUT_WARNINGS, NULL, NULL, NULL },
+  NUMBER ("pump_head", N_("Pump head (losses and elevation change)"), HEAD, get_pump_head, NULL),
+  NUMBER ("hydraulic_power", N_("Hydraulic power ρgQH"), POWER, get_hydraulic_power, NULL),
+  NUMBER ("pump_power", N_("Electric input power"), POWER, get_pump_power, NULL),
+  NUMBER ("pump_power_new", N_("Electric input power when new"), POWER, get_pump_power_new, NULL),
+  LINE_NUMBER ("energy", N_("Energy per year"), ENERGY_PER_YEAR, get_energy_j_per_year, has_energy),
+  LINE_NUMBER ("energy_new", N_("Energy per year when new"), ENERGY_PER_YEAR, get_energy_new_j_per_year, has_energy),
+  LINE_NUMBER ("energy_cost_per_year", N_("Energy cost per year"), MONEY, get_cost_per_year, has_energy),
+  LINE_NUMBER ("energy_cost_new_per_year", N_("Energy cost per year when new"), MONEY, get_cost_new_per_year, has_energy),
+  LINE_NUMBER ("capital_cost", N_("Capital cost"), MONEY, get_capital, has_capital),
+  LINE_NUMBER ("life_energy_cost", N_("Energy cost over the service life"), MONEY, get_life_energy_cost, has_life),
+  LINE_NUMBER ("life_energy_cost_pv", N_("Present value of the energy cost over the service life"), MONEY, get_life_energy_cost_pv, has_life),
+  LINE_NUMBER ("life_cycle_cost", N_("Life-cycle cost (capital and present value of energy)"), MONEY, get_life_cycle_cost, has_life_cycle),
+  LINE_NUMBER ("duty_flow", N_("Duty flow at the service age"), FLOW, get_duty_flow_m3_s, has_duty),
+  LINE_NUMBER ("duty_head", N_("Duty head at the service age"), HEAD, get_duty_head_m, has_duty),
+  LINE_NUMBER ("duty_flow_new", N_("Duty flow when new"), FLOW, get_duty_new_flow_m3_s, has_duty_new),
+  LINE_NUMBER ("duty_head_new", N_("Duty head when new"), HEAD, get_duty_new_head_m, has_duty_new),
+  { "warnings", N_("Warnings"), RUGOSA_DISPLAY_NUMBER, RUGOSA_OUTPUT_WARNINGS, NULL, NULL, NULL, NULL },
 };
 
 const RugosaOutputKey *
@@ -113,10 +165,26 @@ rugosa_output_present (const RugosaOutputKey *key, const RugosaOperatingPoint *p
   return key->present == NULL || key->present (p);
 }
 
+gboolean
+rugosa_output_present_for (const RugosaOutputKey *key, const RugosaLineResults *r,
+                           const RugosaOperatingPoint *p)
+{
+  if (key->line_present != NULL)
+    return key->line_present (r, p);
+  return rugosa_output_present (key, p);
+}
+
 const char *
 rugosa_output_unit (RugosaSettings *units, RugosaDisplayQuantity display)
 {
   const RugosaDisplayInfo *info = rugosa_display_info (display);
+
+  if (display == RUGOSA_DISPLAY_MONEY)
+    {
+      const char *currency = units != NULL ? rugosa_settings_get_unit (units, display) : NULL;
+
+      return currency != NULL && *currency != '\0' ? currency : NULL;
+    }
 
   if (info == NULL)
     return NULL;
@@ -210,8 +278,9 @@ rugosa_output_point_json (GString *out, const RugosaLineResults *r,
   for (guint i = 0; i < G_N_ELEMENTS (KEYS); i++)
     {
       const RugosaOutputKey *k = &KEYS[i];
+      const RugosaDisplayInfo *info = rugosa_display_info (k->display);
 
-      if (!rugosa_output_present (k, p))
+      if (!rugosa_output_present_for (k, r, p))
         continue;
       g_string_append_printf (out, "%s%s\"%s\": ", first ? "" : ",", indent,
                               rugosa_output_json_key (k));
@@ -219,7 +288,10 @@ rugosa_output_point_json (GString *out, const RugosaLineResults *r,
       switch (k->kind)
         {
         case RUGOSA_OUTPUT_NUMBER:
-          append_number (out, k->number (r, p));
+          /* SI, or the unit the key names where that is not SI (kW) */
+          append_number (out, info != NULL && info->json_unit != NULL
+                                ? in_unit (k->display, k->number (r, p), info->json_unit)
+                                : k->number (r, p));
           break;
         case RUGOSA_OUTPUT_ID:
           append_json_string (out, k->id (p));
@@ -263,7 +335,7 @@ rugosa_output_point_table (GString *out, const RugosaLineResults *r,
       const char *unit = rugosa_output_unit (units, k->display);
       g_autofree char *value = NULL;
 
-      if (!rugosa_output_present (k, p))
+      if (!rugosa_output_present_for (k, r, p))
         continue;
       if (k->kind == RUGOSA_OUTPUT_WARNINGS)
         {
@@ -289,7 +361,7 @@ rugosa_output_point_table (GString *out, const RugosaLineResults *r,
       if (unit != NULL)
         {
           g_string_append_c (out, ' ');
-          g_string_append (out, rugosa_display_unit_symbol (unit));
+          g_string_append (out, rugosa_display_unit_label (k->display, unit));
         }
       g_string_append_c (out, '\n');
     }
@@ -354,7 +426,7 @@ append_csv_header (GString *out, const char *name, RugosaDisplayQuantity display
   g_string_append_c (out, ',');
   g_string_append (out, name);
   if (unit != NULL)
-    g_string_append_printf (out, " (%s)", rugosa_display_unit_symbol (unit));
+    g_string_append_printf (out, " (%s)", rugosa_display_unit_label (display, unit));
 }
 
 static void
@@ -389,7 +461,7 @@ format_csv (RugosaProject *self, double age, GString *out)
               const RugosaOutputKey *key = &KEYS[k];
 
               g_string_append_c (out, ',');
-              if (!ok || !rugosa_output_present (key, p))
+              if (!ok || !rugosa_output_present_for (key, r, p))
                 continue;
               if (key->kind == RUGOSA_OUTPUT_ID)
                 g_string_append (out, key->id (p));
@@ -430,6 +502,74 @@ printable (const char *s)
         g_string_append_unichar (out, c);
     }
   return g_string_free (out, FALSE);
+}
+
+/* The pumping energy and costs, one row per line (the values of the whole
+ * line, given with its design point). */
+static void
+format_energy_table (RugosaProject *self, double age, int name_width, GString *out)
+{
+  static const struct { const char *key; int width; } cols[] = {
+    { "pump_power", 9 }, { "energy", 15 }, { "energy_cost_per_year", 11 },
+    { "capital_cost", 11 }, { "life_energy_cost_pv", 13 }, { "life_cycle_cost", 14 },
+    { "duty_flow_new", 14 }, { "duty_flow", 14 },
+  };
+  /* TRANSLATORS: short column titles of rugosa-cli's energy table: electric
+   * power at the design flow, energy and cost of a year, capital cost,
+   * present value of the energy over the service life, life-cycle cost,
+   * the pump's duty flow when new and at the service age */
+  static const char *const titles[] = {
+    N_("P"), N_("energy"), N_("cost/yr"), N_("capital"), N_("energy PV"),
+    N_("life cycle"), N_("duty new"), N_("duty aged"),
+  };
+  RugosaSettings *units = self->settings;
+
+  G_STATIC_ASSERT (G_N_ELEMENTS (cols) == G_N_ELEMENTS (titles));
+  {
+    char life[G_ASCII_DTOSTR_BUF_SIZE], rate[G_ASCII_DTOSTR_BUF_SIZE];
+    g_autofree char *head = NULL;
+
+    g_ascii_formatd (life, sizeof life, "%.4g", rugosa_settings_get_double (units, "service-life"));
+    g_ascii_formatd (rate, sizeof rate, "%.4g", rugosa_settings_get_double (units, "discount-rate"));
+    /* TRANSLATORS: the service life in years, then the discount rate in per cent */
+    head = g_strdup_printf (_("Pumping energy and cost; service life %s years, discount rate %s %% a year."),
+                            life, rate);
+    g_string_append_c (out, '\n');
+    g_string_append (out, head);
+    g_string_append_c (out, '\n');
+  }
+  append_cell (out, _("line"), name_width);
+  for (guint c = 0; c < G_N_ELEMENTS (cols); c++)
+    {
+      const RugosaOutputKey *k = rugosa_output_key_find (cols[c].key);
+      const char *unit = rugosa_output_unit (units, k->display);
+      g_autofree char *t = unit ? g_strdup_printf ("%s %s", _(titles[c]), rugosa_display_unit_label (k->display, unit))
+                                : g_strdup (_(titles[c]));
+      append_cell (out, t, cols[c].width);
+    }
+  g_string_append_c (out, '\n');
+  for (guint i = 0; i < self->lines->len; i++)
+    {
+      RugosaLine *line = g_ptr_array_index (self->lines, i);
+      const RugosaLineResults *r = rugosa_project_get_results_at (self, line, age);
+      const RugosaOperatingPoint *p = &r->points[RUGOSA_FLOW_DESIGN];
+      g_autofree char *name = printable (rugosa_line_get_name (line));
+
+      append_cell (out, name, name_width);
+      for (guint c = 0; c < G_N_ELEMENTS (cols); c++)
+        {
+          const RugosaOutputKey *k = rugosa_output_key_find (cols[c].key);
+
+          g_autofree char *v = NULL;
+
+          /* whole units of money and energy, four figures of the rest */
+          if (r->ok && p->ok && rugosa_output_present_for (k, r, p))
+            v = rugosa_display_significant (in_unit (k->display, k->number (r, p),
+                                                     rugosa_output_unit (units, k->display)), 4);
+          append_cell (out, v != NULL ? v : "—", cols[c].width);
+        }
+      g_string_append_c (out, '\n');
+    }
 }
 
 static void
@@ -520,6 +660,7 @@ format_table (RugosaProject *self, double age, GString *out)
             g_string_append_printf (out, "    ! %s\n", p->warnings.text[w]);
         }
     }
+  format_energy_table (self, age, name_width, out);
 }
 
 gboolean

@@ -30,6 +30,11 @@ typedef struct {
   const char *(*id) (const RugosaOperatingPoint *p);
   /* NULL: always present; else whether the point has this value */
   gboolean (*present) (const RugosaOperatingPoint *p);
+  /* NULL: as `present`; else whether the point `p` of the line `r` has
+   * this value (a value of the whole line is given with its design point
+   * alone) */
+  gboolean (*line_present) (const RugosaLineResults *r,
+                            const RugosaOperatingPoint *p);
 } RugosaOutputKey;
 
 const RugosaOutputKey *rugosa_output_keys (guint *n);
@@ -38,9 +43,15 @@ const RugosaOutputKey *rugosa_output_key_find (const char *name);
 const char *rugosa_output_json_key (const RugosaOutputKey *key);
 gboolean rugosa_output_present (const RugosaOutputKey *key,
                                 const RugosaOperatingPoint *p);
+/* The same for a point of the line `r` (keys of the whole line are
+ * present at its design point only). */
+gboolean rugosa_output_present_for (const RugosaOutputKey *key,
+                                    const RugosaLineResults *r,
+                                    const RugosaOperatingPoint *p);
 
 /* The unit of a display quantity in `units` (NULL: the SI unit), or NULL
- * for a plain number. */
+ * for a plain number; for money the currency label of `units` (NULL when
+ * `units` is NULL or the label is empty). */
 const char *rugosa_output_unit (RugosaSettings *units,
                                 RugosaDisplayQuantity display);
 

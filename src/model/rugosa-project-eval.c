@@ -25,6 +25,7 @@
 #include "core/fluid.h"
 #include "core/line.h"
 #include "rugosa-display.h"
+#include "rugosa-eval-private.h"
 #include "rugosa-fields.h"
 #include "rugosa-line-private.h"
 #include "rugosa-project-private.h"
@@ -45,6 +46,7 @@ typedef struct {
   guint64 settings_revision;
   guint n;
   AgeEntry *ages[AGES_PER_LINE];
+  RugosaLifeCycle *life;    /* the sums over the service life, or NULL */
 } LineCache;
 
 static void
@@ -54,6 +56,7 @@ line_cache_free (gpointer data)
 
   for (guint i = 0; i < c->n; i++)
     g_free (c->ages[i]);
+  g_free (c->life);
   g_free (c);
 }
 
@@ -174,21 +177,143 @@ point_error (RugosaOperatingPoint *p, RgFluidKind kind, const RgError *err)
   set_text (p->error, err->text);
 }
 
+gboolean
+_rugosa_line_setup_init (RugosaProject *self, RugosaLine *line,
+                         RugosaLineSetup *setup, RgError *err)
+{
+  RugosaSettings *settings = self->settings;
+  GVariant *fittings;
+
+  memset (setup, 0, sizeof *setup);
+  rugosa_line_get_fluid_spec (line, &setup->spec);
+  rg_warnings_clear (&setup->fluid_warnings);
+  /* the core's sentences show values in the project's units */
+  setup->fluid_warnings.units = rugosa_settings_get_unit_choice (settings);
+  if (rg_fluid_properties (&setup->spec, &setup->props, &setup->fluid_warnings, err) != RG_OK)
+    return FALSE;
+
+  if (line->pipe_designation != NULL)
+    {
+      const RgPipe *pipe;
+
+      if (lookup_pipe (self, line->pipe_designation, &pipe, err) != RG_OK)
+        return FALSE;
+      setup->diameter_m = pipe->inner_diameter_m;
+    }
+  else
+    setup->diameter_m = line->inner_diameter;
+
+  if (line->material_id != NULL)
+    {
+      const RgMaterial *material;
+
+      if (rg_material_lookup (line->material_id, &material, err) != RG_OK)
+        return FALSE;
+      setup->roughness_new_m = material->roughness_m;
+    }
+  else
+    setup->roughness_new_m = line->roughness;
+
+  if (line->aging_class_id != NULL)
+    {
+      const RgAgingClass *aging;
+
+      if (rg_aging_class_lookup (line->aging_class_id, &aging, err) != RG_OK)
+        return FALSE;
+      setup->rate_m_per_year = aging->rate_m_per_year;
+    }
+  else
+    setup->rate_m_per_year = line->aging_rate;
+
+  setup->length_m = line->length;
+  setup->elevation_m = line->elevation;
+  setup->model = (RgFrictionModel) settings->friction_model;
+  setup->transition.re_laminar_max = settings->re_laminar_max;
+  setup->transition.re_turbulent_min = settings->re_turbulent_min;
+  if (rg_transition_check (&setup->transition, err) != RG_OK)
+    return FALSE;
+
+  fittings = line->fittings;
+  setup->n_uses = g_variant_n_children (fittings);
+  setup->uses = g_new0 (RgFittingUse, MAX (setup->n_uses, 1));
+  for (gsize i = 0; i < setup->n_uses; i++)
+    {
+      const char *fid;
+      double k, count;
+
+      g_variant_get_child (fittings, i, "(&sdd)", &fid, &k, &count);
+      setup->uses[i].k_plain = k;
+      setup->uses[i].count = count;
+      if (*fid != '\0' && rg_fitting_lookup (fid, &setup->uses[i].fitting, err) != RG_OK)
+        {
+          _rugosa_line_setup_clear (setup);
+          return FALSE;
+        }
+    }
+  return TRUE;
+}
+
+void
+_rugosa_line_setup_clear (RugosaLineSetup *setup)
+{
+  g_clear_pointer (&setup->uses, g_free);
+  setup->n_uses = 0;
+}
+
+RgStatus
+_rugosa_line_setup_input (const RugosaLineSetup *setup, double q,
+                          RgLineInput *in, RgWarnings *warnings, RgError *err)
+{
+  const double d = setup->diameter_m;
+  /* ΣK of 3-K fittings depends on Re, which does not depend on the
+   * roughness: one ΣK serves the new and the aged line. */
+  const double re = setup->props.density_kg_m3 * (4.0 * q / (G_PI * d * d)) * d
+                    / setup->props.dynamic_viscosity_pa_s;
+  double k_sum = 0.0;
+  RgWarnings scratch = { 0 };
+  RgStatus st;
+
+  if (warnings == NULL)
+    {
+      rg_warnings_clear (&scratch);
+      warnings = &scratch;
+    }
+  if ((st = rg_fittings_k_sum_checked (setup->uses, (int) setup->n_uses, re, d,
+                                       &k_sum, warnings, err)) != RG_OK)
+    return st;
+  rg_line_input_init (in);
+  in->flow_m3_s = q;
+  in->diameter_m = d;
+  in->length_m = setup->length_m;
+  in->roughness_m = setup->roughness_new_m;
+  in->k_sum = k_sum;
+  in->elevation_m = setup->elevation_m;
+  in->density_kg_m3 = setup->props.density_kg_m3;
+  in->viscosity_pa_s = setup->props.dynamic_viscosity_pa_s;
+  in->model = setup->model;
+  in->transition = setup->transition;
+  return RG_OK;
+}
+
+RgStatus
+_rugosa_line_setup_at (const RugosaLineSetup *setup, double q, double age_years,
+                       RgAgingResult *out, RgError *err)
+{
+  RgLineInput in;
+  RgStatus st;
+
+  if ((st = _rugosa_line_setup_input (setup, q, &in, NULL, err)) != RG_OK)
+    return st;
+  return rg_aging_evaluate (&in, setup->rate_m_per_year, age_years, out, err);
+}
+
 static void
 evaluate_line (RugosaProject *self, RugosaLine *line, double age,
                RugosaLineResults *r)
 {
   RugosaSettings *settings = self->settings;
   RgError err = { 0 };
-  RgFluidSpec spec;
-  RgFluidProps props;
-  RgWarnings fluid_warnings = { 0 };
-  RgTransition transition;
-  RgFrictionModel model;
-  double diameter, roughness_new, rate;
-  GVariant *fittings;
-  RgFittingUse *uses;
-  gsize n_uses;
+  RugosaLineSetup setup;
 
   const RgUnitChoice *units = rugosa_settings_get_unit_choice (settings);
 
@@ -201,74 +326,18 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
   for (RugosaFlowCase c = 0; c < RUGOSA_N_FLOWS; c++)
     r->points[c].warnings.units = units;
 
-  rugosa_line_get_fluid_spec (line, &spec);
-  rg_warnings_clear (&fluid_warnings);
-  fluid_warnings.units = units;
-  if (rg_fluid_properties (&spec, &props, &fluid_warnings, &err) != RG_OK)
+  if (!_rugosa_line_setup_init (self, line, &setup, &err))
     return line_error (r, &err);
-  r->density_kg_m3 = props.density_kg_m3;
-  r->dynamic_viscosity_pa_s = props.dynamic_viscosity_pa_s;
-
-  if (line->pipe_designation != NULL)
+  r->density_kg_m3 = setup.props.density_kg_m3;
+  r->dynamic_viscosity_pa_s = setup.props.dynamic_viscosity_pa_s;
+  r->inner_diameter_m = setup.diameter_m;
+  r->roughness_new_m = setup.roughness_new_m;
+  r->aging_rate_m_per_year = setup.rate_m_per_year;
+  if (rg_aging_roughness (setup.roughness_new_m, setup.rate_m_per_year, age,
+                          &r->roughness_m, &err) != RG_OK)
     {
-      const RgPipe *pipe;
-
-      if (lookup_pipe (self, line->pipe_designation, &pipe, &err) != RG_OK)
-        return line_error (r, &err);
-      diameter = pipe->inner_diameter_m;
-    }
-  else
-    diameter = line->inner_diameter;
-  r->inner_diameter_m = diameter;
-
-  if (line->material_id != NULL)
-    {
-      const RgMaterial *material;
-
-      if (rg_material_lookup (line->material_id, &material, &err) != RG_OK)
-        return line_error (r, &err);
-      roughness_new = material->roughness_m;
-    }
-  else
-    roughness_new = line->roughness;
-  r->roughness_new_m = roughness_new;
-
-  if (line->aging_class_id != NULL)
-    {
-      const RgAgingClass *aging;
-
-      if (rg_aging_class_lookup (line->aging_class_id, &aging, &err) != RG_OK)
-        return line_error (r, &err);
-      rate = aging->rate_m_per_year;
-    }
-  else
-    rate = line->aging_rate;
-  r->aging_rate_m_per_year = rate;
-  if (rg_aging_roughness (roughness_new, rate, age, &r->roughness_m, &err) != RG_OK)
-    return line_error (r, &err);
-
-  model = (RgFrictionModel) settings->friction_model;
-  transition.re_laminar_max = settings->re_laminar_max;
-  transition.re_turbulent_min = settings->re_turbulent_min;
-  if (rg_transition_check (&transition, &err) != RG_OK)
-    return line_error (r, &err);
-
-  fittings = line->fittings;
-  n_uses = g_variant_n_children (fittings);
-  uses = g_new0 (RgFittingUse, MAX (n_uses, 1));
-  for (gsize i = 0; i < n_uses; i++)
-    {
-      const char *fid;
-      double k, count;
-
-      g_variant_get_child (fittings, i, "(&sdd)", &fid, &k, &count);
-      uses[i].k_plain = k;
-      uses[i].count = count;
-      if (*fid != '\0' && rg_fitting_lookup (fid, &uses[i].fitting, &err) != RG_OK)
-        {
-          g_free (uses);
-          return line_error (r, &err);
-        }
+      _rugosa_line_setup_clear (&setup);
+      return line_error (r, &err);
     }
   r->ok = TRUE;
 
@@ -296,43 +365,70 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
           continue;
         }
 
-      /* ΣK of 3-K fittings depends on Re, which does not depend on the
-       * roughness: one ΣK serves the new and the aged line. */
-      double re = props.density_kg_m3 * (4.0 * q / (G_PI * diameter * diameter))
-                  * diameter / props.dynamic_viscosity_pa_s;
-      if (rg_fittings_k_sum_checked (uses, (int) n_uses, re, diameter,
-                                     &p->minor_loss_k_total, &p->warnings,
-                                     &err) != RG_OK)
+      if (_rugosa_line_setup_input (&setup, q, &in, &p->warnings, &err) != RG_OK)
         {
-          point_error (p, spec.kind, &err);
+          point_error (p, setup.spec.kind, &err);
           continue;
         }
-
-      rg_line_input_init (&in);
-      in.flow_m3_s = q;
-      in.diameter_m = diameter;
-      in.length_m = line->length;
-      in.roughness_m = roughness_new;
-      in.k_sum = p->minor_loss_k_total;
-      in.elevation_m = line->elevation;
-      in.density_kg_m3 = props.density_kg_m3;
-      in.viscosity_pa_s = props.dynamic_viscosity_pa_s;
-      in.model = model;
-      in.transition = transition;
-      if (rg_aging_evaluate (&in, rate, age, &ar, &err) != RG_OK)
+      p->minor_loss_k_total = in.k_sum;
+      if (rg_aging_evaluate (&in, setup.rate_m_per_year, age, &ar, &err) != RG_OK)
         {
-          point_error (p, spec.kind, &err);
+          point_error (p, setup.spec.kind, &err);
           continue;
         }
       p->ok = TRUE;
       p->result = ar.result;
       p->result_new = ar.result_new;
       p->head_loss_ratio_to_new = ar.head_loss_ratio_to_new;
-      for (int w = 0; w < fluid_warnings.count; w++)
-        rg_warnings_add (&p->warnings, "%s", fluid_warnings.text[w]);
-      add_point_warnings (p, &spec, model, settings);
+      for (int w = 0; w < setup.fluid_warnings.count; w++)
+        rg_warnings_add (&p->warnings, "%s", setup.fluid_warnings.text[w]);
+      add_point_warnings (p, &setup.spec, setup.model, settings);
     }
-  g_free (uses);
+  _rugosa_life_cycle_fill (self, line, &setup, r);
+  _rugosa_line_setup_clear (&setup);
+}
+
+/* The cache of `line`, emptied when the line or a setting changed since
+ * it was filled; NULL when the line is not part of the project. */
+static LineCache *
+line_cache (RugosaProject *self, RugosaLine *line)
+{
+  LineCache *c = g_hash_table_lookup (self->eval_cache, line);
+
+  if (c == NULL)
+    {
+      g_return_val_if_fail (rugosa_project_find_line (self, line) >= 0, NULL);
+      c = g_new0 (LineCache, 1);
+      g_hash_table_insert (self->eval_cache, line, c);
+    }
+  if (c->line_revision != line->revision
+      || c->settings_revision != self->settings->revision)
+    {
+      for (guint i = 0; i < c->n; i++)
+        g_clear_pointer (&c->ages[i], g_free);
+      c->n = 0;
+      g_clear_pointer (&c->life, g_free);
+      c->line_revision = line->revision;
+      c->settings_revision = self->settings->revision;
+    }
+  return c;
+}
+
+const RugosaLifeCycle *
+rugosa_project_get_life_cycle (RugosaProject *self, RugosaLine *line)
+{
+  LineCache *c;
+
+  g_return_val_if_fail (RUGOSA_IS_PROJECT (self), NULL);
+  g_return_val_if_fail (RUGOSA_IS_LINE (line), NULL);
+  if ((c = line_cache (self, line)) == NULL)
+    return NULL;
+  if (c->life == NULL)
+    {
+      c->life = g_new0 (RugosaLifeCycle, 1);
+      _rugosa_life_cycle_compute (self, line, c->life);
+    }
+  return c->life;
 }
 
 const RugosaLineResults *
@@ -348,22 +444,8 @@ rugosa_project_get_results_at (RugosaProject *self, RugosaLine *line,
   if (age_years < 0.0 || !isfinite (age_years))
     age_years = self->settings->service_age;
 
-  c = g_hash_table_lookup (self->eval_cache, line);
-  if (c == NULL)
-    {
-      g_return_val_if_fail (rugosa_project_find_line (self, line) >= 0, NULL);
-      c = g_new0 (LineCache, 1);
-      g_hash_table_insert (self->eval_cache, line, c);
-    }
-  if (c->line_revision != line->revision
-      || c->settings_revision != self->settings->revision)
-    {
-      for (guint i = 0; i < c->n; i++)
-        g_clear_pointer (&c->ages[i], g_free);
-      c->n = 0;
-      c->line_revision = line->revision;
-      c->settings_revision = self->settings->revision;
-    }
+  if ((c = line_cache (self, line)) == NULL)
+    return NULL;
 
   self->eval_clock++;
   for (guint i = 0; i < c->n; i++)

@@ -332,6 +332,120 @@ error:
   return FALSE;
 }
 
+/* A number member of a curve point, in 0 … max. */
+static gboolean
+curve_number (Ctx *ctx, const cJSON *e, const char *key, const char *unit,
+              double max, double *out)
+{
+  const cJSON *v = cJSON_GetObjectItemCaseSensitive (e, key);
+  gsize len = push_key (ctx, key);
+
+  if (v == NULL)
+    return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                 _("this required field is missing (a number in %s)"), unit);
+  if (!cJSON_IsNumber (v))
+    return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                 _("expected a number in %s, found %s"), unit, type_name (v));
+  if (!(v->valuedouble >= 0.0 && v->valuedouble <= max))
+    {
+      char a[G_ASCII_DTOSTR_BUF_SIZE], hi[G_ASCII_DTOSTR_BUF_SIZE];
+
+      return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                   _("%s is out of range: expected %s to %s %s"),
+                   g_ascii_formatd (a, sizeof a, "%.6g", v->valuedouble), "0",
+                   g_ascii_formatd (hi, sizeof hi, "%g", max), unit);
+    }
+  *out = v->valuedouble;
+  pop (ctx, len);
+  return TRUE;
+}
+
+/* A curve: an array of {"flow_m3_s", "head_m"} objects, flows increasing;
+ * members no build knows yet are kept in *extras_out (an array mirroring
+ * the points), as for the fittings. */
+static gboolean
+load_curve (Ctx *ctx, const cJSON *arr, GVariant **out, cJSON **extras_out)
+{
+  static const char *const known[] = { "flow_m3_s", "head_m", NULL };
+  const double flow_max = rugosa_field_find ("flow-design")->max;
+  GVariantBuilder b;
+  cJSON *extras = NULL;
+  gboolean any_extra = FALSE;
+  double last_flow = -1.0;
+  int i = 0;
+
+  if (!cJSON_IsArray (arr))
+    return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                 _("expected an array, found %s"), type_name (arr));
+  if (cJSON_GetArraySize (arr) > RUGOSA_CURVE_POINTS_MAX)
+    return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                 _("more than %d points"), RUGOSA_CURVE_POINTS_MAX);
+  extras = cJSON_CreateArray ();
+  g_variant_builder_init (&b, G_VARIANT_TYPE (RUGOSA_LINE_CURVE_TYPE));
+  for (const cJSON *e = arr->child; e != NULL; e = e->next, i++)
+    {
+      gsize len = push_index (ctx, i);
+      cJSON *e_extra = NULL;
+      double q = 0.0, h = 0.0;
+
+      if (!expect_object (ctx, e)
+          || !curve_number (ctx, e, "flow_m3_s", "m³/s", flow_max, &q)
+          || !curve_number (ctx, e, "head_m", "m", RUGOSA_CURVE_HEAD_MAX, &h))
+        {
+          g_variant_builder_clear (&b);
+          cJSON_Delete (extras);
+          return FALSE;
+        }
+      if (!(q > last_flow))
+        {
+          push_key (ctx, "flow_m3_s");
+          g_variant_builder_clear (&b);
+          cJSON_Delete (extras);
+          return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                       _("the flows of a curve must increase from one point to the next"));
+        }
+      last_flow = q;
+      for (const cJSON *m = e->child; m != NULL; m = m->next)
+        if (!g_strv_contains (known, m->string))
+          {
+            if (e_extra == NULL)
+              e_extra = cJSON_CreateObject ();
+            cJSON_AddItemToObject (e_extra, m->string, cJSON_Duplicate (m, 1));
+          }
+      any_extra |= e_extra != NULL;
+      cJSON_AddItemToArray (extras, e_extra ? e_extra : cJSON_CreateObject ());
+      g_variant_builder_add (&b, "(dd)", q, h);
+      pop (ctx, len);
+    }
+  *out = g_variant_ref_sink (g_variant_builder_end (&b));
+  if (any_extra)
+    *extras_out = extras;
+  else
+    cJSON_Delete (extras);
+  return TRUE;
+}
+
+/* Put `item` at the dotted `path` below *obj (created as needed). */
+static void
+add_at_path (cJSON **obj, const char *path, cJSON *item)
+{
+  g_auto (GStrv) parts = g_strsplit (path, ".", -1);
+  cJSON *o;
+
+  if (*obj == NULL)
+    *obj = cJSON_CreateObject ();
+  o = *obj;
+  for (guint k = 0; parts[k + 1] != NULL; k++)
+    {
+      cJSON *sub = cJSON_GetObjectItemCaseSensitive (o, parts[k]);
+
+      if (sub == NULL)
+        sub = cJSON_AddObjectToObject (o, parts[k]);
+      o = sub;
+    }
+  cJSON_AddItemToObject (o, parts[g_strv_length (parts) - 1], item);
+}
+
 static gboolean
 load_unit_map (Ctx *ctx, const cJSON *obj, const RugosaField *row,
                GVariant **out)
@@ -411,7 +525,18 @@ collect_unknown (const RugosaField *rows, guint n, const cJSON *obj,
         continue;
       if (*extra == NULL)
         *extra = cJSON_CreateObject ();
-      cJSON_AddItemToObject (*extra, m->string, sub);
+      /* a group may hold kept members of a curve's points already */
+      {
+        cJSON *have = cJSON_GetObjectItemCaseSensitive (*extra, m->string);
+
+        if (have != NULL && cJSON_IsObject (have) && cJSON_IsObject (sub))
+          {
+            _rugosa_json_merge_missing (have, sub);
+            cJSON_Delete (sub);
+          }
+        else
+          cJSON_AddItemToObject (*extra, m->string, sub);
+      }
     }
 }
 
@@ -548,6 +673,19 @@ load_rows (Ctx *ctx, const cJSON *obj, const RugosaField *rows, guint n,
               return FALSE;
             g_object_set (target, row->property, map, NULL);
             g_variant_unref (map);
+          }
+          break;
+        case RUGOSA_FIELD_CURVE:
+          {
+            GVariant *curve = NULL;
+            cJSON *curve_extra = NULL;
+
+            if (!load_curve (ctx, v, &curve, &curve_extra))
+              return FALSE;
+            g_object_set (target, row->property, curve, NULL);
+            g_variant_unref (curve);
+            if (curve_extra != NULL)
+              add_at_path (extra, row->path, curve_extra);
           }
           break;
         default:

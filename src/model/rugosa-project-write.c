@@ -68,6 +68,32 @@ group_for (cJSON *obj, const char *path, const char **leaf)
   return obj;
 }
 
+/* Drop the objects that hold rows but received none of them (every member
+ * absent: a line with no cost given writes no "cost": {}), deepest first. */
+static void
+prune_empty_groups (cJSON *o, const RugosaField *rows, guint n)
+{
+  for (int pass = 0; pass < 4; pass++)
+    for (guint i = 0; i < n; i++)
+      {
+        g_auto (GStrv) parts = g_strsplit (rows[i].path, ".", -1);
+        guint depth = g_strv_length (parts);
+        cJSON *parent = o, *group = NULL;
+
+        /* the group `pass` levels above the row's value */
+        if (depth < 2 + (guint) pass)
+          continue;
+        for (guint k = 0; k + 1 + (guint) pass < depth && parent != NULL; k++)
+          {
+            group = cJSON_GetObjectItemCaseSensitive (parent, parts[k]);
+            if (k + 2 + (guint) pass < depth)
+              parent = group;
+          }
+        if (group != NULL && parent != NULL && cJSON_IsObject (group) && group->child == NULL)
+          cJSON_DeleteItemFromObjectCaseSensitive (parent, parts[depth - 2 - (guint) pass]);
+      }
+}
+
 static cJSON *
 object_to_json (gpointer instance, const RugosaField *rows, guint n,
                 const cJSON *extra)
@@ -125,6 +151,30 @@ object_to_json (gpointer instance, const RugosaField *rows, guint n,
               }
           }
           break;
+        case RUGOSA_FIELD_CURVE:
+          {
+            GVariant *curve = *_rugosa_fields_variant (row, instance);
+            GVariantIter iter;
+            double q, h;
+
+            /* an empty curve (none given) is left out */
+            if (g_variant_n_children (curve) == 0)
+              break;
+            {
+              cJSON *arr = cJSON_AddArrayToObject (g, leaf);
+
+              g_variant_iter_init (&iter, curve);
+              while (g_variant_iter_next (&iter, "(dd)", &q, &h))
+                {
+                  cJSON *e = cJSON_CreateObject ();
+
+                  add_number (e, "flow_m3_s", q);
+                  add_number (e, "head_m", h);
+                  cJSON_AddItemToArray (arr, e);
+                }
+            }
+          }
+          break;
         case RUGOSA_FIELD_UNIT_MAP:
           {
             cJSON *map = cJSON_AddObjectToObject (g, leaf);
@@ -140,6 +190,7 @@ object_to_json (gpointer instance, const RugosaField *rows, guint n,
           g_assert_not_reached ();
         }
     }
+  prune_empty_groups (o, rows, n);
   _rugosa_json_merge_missing (o, extra);
   return o;
 }

@@ -22,6 +22,12 @@ struct _RugosaSettings
   double chart_re_min, chart_re_max, chart_f_min, chart_f_max;
   double service_age;
   double velocity_limit, gradient_limit;
+  double pump_efficiency;   /* per cent */
+  double hours_design, hours_minimum, hours_maximum; /* hours per year */
+  char *currency;
+  double energy_price;      /* currency per kWh */
+  double service_life;      /* years */
+  double discount_rate;     /* per cent per year */
 
   /* owned, not fields */
   cJSON *extra;

@@ -11,6 +11,7 @@
 #include <string.h>
 
 #include "core/regime.h"
+#include "rugosa-display.h"
 #include "rugosa-field-object.h"
 #include "rugosa-model-private.h"
 #include "rugosa-settings-private.h"
@@ -120,12 +121,27 @@ rugosa_settings_get_double (RugosaSettings *self, const char *property)
 }
 
 const char *
+rugosa_settings_get_string (RugosaSettings *self, const char *property)
+{
+  const RugosaField *row = rugosa_field_find (property);
+  const char *s;
+
+  g_return_val_if_fail (RUGOSA_IS_SETTINGS (self), "");
+  g_return_val_if_fail (row != NULL && row >= rows && row < rows + n_rows
+                        && row->kind == RUGOSA_FIELD_TEXT, "");
+  s = *_rugosa_fields_string (row, self);
+  return s != NULL ? s : "";
+}
+
+const char *
 rugosa_settings_get_unit (RugosaSettings *self, RugosaDisplayQuantity dq)
 {
   const RugosaDisplayInfo *info = rugosa_display_info (dq);
   const char *unit = NULL;
 
   g_return_val_if_fail (RUGOSA_IS_SETTINGS (self), NULL);
+  if (dq == RUGOSA_DISPLAY_MONEY)
+    return self->currency;
   if (info == NULL)
     return NULL;
   /* An override this build cannot read (a later build's unit, a hand
@@ -179,6 +195,20 @@ rugosa_settings_check (RugosaSettings *self, const char **failed_property,
       failed = "chart-f-max";
       rg_error_set_on (err, RG_ERR_DOMAIN, 0, "%s",
                        _("The chart's largest friction factor must be at least 1.5 times its smallest."));
+    }
+  else if (!(self->hours_design + self->hours_minimum + self->hours_maximum
+             <= rugosa_field_find ("hours-design")->max))
+    {
+      /* A year holds as many hours as one of the rows may: the rows' range
+       * is that year. */
+      g_autofree char *year = rugosa_display_significant (rugosa_field_find ("hours-design")->max, 4);
+      g_autofree char *text = NULL;
+
+      failed = "hours-design";
+      /* TRANSLATORS: %s is the hours of a year, "8766" */
+      text = g_strdup_printf (_("The hours a year at the design, lowest and highest flow add up to more than the %s hours of a year."),
+                              year);
+      rg_error_set_on (err, RG_ERR_DOMAIN, 0, "%s", text);
     }
   if (failed_property != NULL)
     *failed_property = failed;

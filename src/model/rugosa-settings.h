@@ -22,9 +22,13 @@ RugosaUnitSystem rugosa_settings_get_unit_system (RugosaSettings *self);
 int rugosa_settings_get_friction_model (RugosaSettings *self);
 /* Any number field by property name ("service-age", "velocity-limit", …). */
 double rugosa_settings_get_double (RugosaSettings *self, const char *property);
+/* Any text field by property name ("currency"); never NULL. */
+const char *rugosa_settings_get_string (RugosaSettings *self,
+                                        const char *property);
 
 /* The unit `dq` is shown in: the project's override for it when one is set
- * (and valid), else the unit system's usual unit; NULL for a plain number.
+ * (and valid), else the unit system's usual unit; for money the project's
+ * currency label (a text, not a unit to convert); NULL for a plain number.
  * The string lives as long as the settings are unchanged. */
 const char *rugosa_settings_get_unit (RugosaSettings *self,
                                       RugosaDisplayQuantity dq);
@@ -36,7 +40,8 @@ const char *rugosa_settings_get_unit (RugosaSettings *self,
 const RgUnitChoice *rugosa_settings_get_unit_choice (RugosaSettings *self);
 
 /* The relations between fields that no single range expresses (the
- * transition limits in order, the chart's axes wide enough); RG_OK or
+ * transition limits in order, the chart's axes wide enough, the hours of
+ * operation within a year); RG_OK or
  * one sentence in `err` whose subjects point at the field to change.
  * `failed_property` (may be NULL) receives that field's property name. */
 RgStatus rugosa_settings_check (RugosaSettings *self,

@@ -7,6 +7,7 @@
 
 #include <string.h>
 
+#include "rugosa-display.h"
 #include "rugosa-units.h"
 
 /* The usual unit of each quantity in each system.  SI: the units common in
@@ -29,6 +30,12 @@ static const RugosaDisplayInfo DISPLAY[RUGOSA_N_DISPLAY] = {
   [RUGOSA_DISPLAY_SALINITY] = { "salinity", N_("Salinity"), RG_QTY_SALINITY, "g/kg", "g/kg", "kg_kg" },
   [RUGOSA_DISPLAY_ROUGHNESS_RATE] = { "roughness_rate", N_("Roughness growth"), RG_QTY_ROUGHNESS_RATE, "mm/yr", "mm/yr", "m_per_year" },
   [RUGOSA_DISPLAY_AGE] = { "age", N_("Service age"), RG_QTY_TIME, "yr", "yr", "years" },
+  /* Pump power in kW, or horsepower in US practice; the JSON keys of
+   * eval name the kilowatt ("pump_power_kW"), so their values are in kW. */
+  [RUGOSA_DISPLAY_POWER] = { "power", N_("Power"), RG_QTY_POWER, "kW", "hp", "kW", "kW", NULL },
+  /* Electricity is billed in kWh in both systems. */
+  [RUGOSA_DISPLAY_ENERGY_PER_YEAR] = { "energy_per_year", N_("Energy per year"), RG_QTY_ENERGY,
+                                       "kWh", "kWh", "kWh_per_year", "kWh", "/yr" },
 };
 
 const RugosaDisplayInfo *
@@ -70,6 +77,20 @@ rugosa_display_unit_choice (RugosaDisplayQuantity dq, int i)
   if (info == NULL || i < 0)
     return NULL;
   return rg_units_choice (info->quantity, i);
+}
+
+const char *
+rugosa_display_unit_label (RugosaDisplayQuantity dq, const char *unit)
+{
+  const RugosaDisplayInfo *info = rugosa_display_info (dq);
+  g_autofree char *label = NULL;
+
+  if (unit == NULL)
+    return "";
+  if (info == NULL || info->per == NULL)
+    return g_intern_string (rugosa_display_unit_symbol (unit));
+  label = g_strconcat (rugosa_display_unit_symbol (unit), info->per, NULL);
+  return g_intern_string (label);
 }
 
 gboolean

@@ -19,7 +19,13 @@ typedef struct {
   RgQuantity quantity;  /* how its text is parsed and converted */
   const char *si_unit;  /* usual unit of the SI system (a spelling rg_units accepts) */
   const char *us_unit;  /* usual unit of the US customary system */
-  const char *key_unit; /* the SI unit as JSON keys end ("m3_s" in "flow_m3_s") */
+  const char *key_unit; /* the unit as JSON keys end ("m3_s" in "flow_m3_s") */
+  /* The unit of JSON values when it is not SI (a spelling rg_units accepts,
+   * "kW" for "pump_power_kW"); NULL: SI. */
+  const char *json_unit;
+  /* Shown after the unit for a quantity counted per year ("/yr" in
+   * "kWh/yr"); NULL: nothing. */
+  const char *per;
 } RugosaDisplayInfo;
 
 /* NULL for RUGOSA_DISPLAY_NUMBER and out-of-range values. */
@@ -39,5 +45,11 @@ const char *rugosa_display_unit_choice (RugosaDisplayQuantity dq, int i);
 /* True when `unit` is a spelling of a unit of dq's quantity. */
 gboolean rugosa_display_unit_valid (RugosaDisplayQuantity dq,
                                     const char *unit);
+
+/* How `unit` (a spelling of dq's quantity, or for RUGOSA_DISPLAY_MONEY the
+ * currency label) reads beside a value of dq: "m³/s", "kWh/yr", "€".
+ * Interned; "" for NULL. */
+const char *rugosa_display_unit_label (RugosaDisplayQuantity dq,
+                                       const char *unit);
 
 G_END_DECLS

@@ -38,7 +38,7 @@ check_pipe (const char *text)
 {
   static const RgPipe sentinel;
   const RgPipe *p = &sentinel, *again = &sentinel;
-  RgError err;
+  RgError err = { 0 };
   RgStatus st;
   int i, n = rg_pipe_count ();
 
@@ -70,7 +70,7 @@ check_material (const char *text)
 {
   static const RgMaterial sentinel;
   const RgMaterial *m = &sentinel;
-  RgError err;
+  RgError err = { 0 };
   RgStatus st;
   int i, n = rg_material_count ();
 
@@ -98,7 +98,7 @@ check_fitting (const char *text)
 {
   static const RgFitting sentinel;
   const RgFitting *f = &sentinel;
-  RgError err;
+  RgError err = { 0 };
   RgStatus st;
   int i, n = rg_fitting_count ();
 
@@ -126,7 +126,7 @@ check_aging (const char *text)
 {
   static const RgAgingClass sentinel;
   const RgAgingClass *a = &sentinel;
-  RgError err;
+  RgError err = { 0 };
   RgStatus st;
   int i, n = rg_aging_class_count ();
 

@@ -53,7 +53,7 @@ LLVMFuzzerTestOneInput (const uint8_t *data, size_t size)
   char *text;
   const char *what;
   unsigned sel;
-  RgError err;
+  RgError err = { 0 };
   RgStatus st;
   double v;
 
