@@ -17,6 +17,8 @@
 #include <cairo-pdf.h>
 #include <cairo-svg.h>
 
+#include "model/rugosa-file.h"
+
 /* Marked for translation; shown through _() where drawn. */
 const char *const RUGOSA_CHART_CAUTION =
   N_("Estimates from published correlations, valid only inside their stated "
@@ -366,6 +368,26 @@ rugosa_chart_legend_box (RugosaChart *chart)
 
 /* --- export --- */
 
+/* The export's bytes go to an atomic file writer (model/rugosa-file.h):
+ * the target is replaced only once the whole file is written and flushed,
+ * so a full disk or any other failure leaves the previous file as it was
+ * and no temporary file behind. */
+typedef struct {
+  RugosaFileWriter *writer;
+  GError *error;   /* the writer's first failure */
+} ExportSink;
+
+static cairo_status_t
+sink_write (void *closure, const unsigned char *data, unsigned int length)
+{
+  ExportSink *sink = closure;
+
+  if (sink->error != NULL
+      || !rugosa_file_writer_write (sink->writer, data, length, &sink->error))
+    return CAIRO_STATUS_WRITE_ERROR;
+  return CAIRO_STATUS_SUCCESS;
+}
+
 static cairo_status_t
 finish_surface (cairo_surface_t *surface)
 {
@@ -381,6 +403,7 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
 {
   RugosaChartSpec s = *spec;
   RgError err;
+  ExportSink sink = { NULL, NULL };
   cairo_surface_t *surface = NULL;
   cairo_status_t cst;
 
@@ -400,6 +423,13 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
                            err.text);
       return FALSE;
     }
+  if ((sink.writer = rugosa_file_writer_new (path, RUGOSA_FILE_WRITE_DEFAULT, &sink.error)) == NULL)
+    {
+      g_set_error_literal (error, RUGOSA_CHART_ERROR, RUGOSA_CHART_ERROR_WRITE,
+                           sink.error->message);
+      g_error_free (sink.error);
+      return FALSE;
+    }
 
   RugosaChart *chart = rugosa_chart_new ();
   rugosa_chart_set_spec (chart, &s, NULL);
@@ -408,10 +438,10 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
   switch (format)
     {
     case RUGOSA_CHART_FORMAT_SVG:
-      surface = cairo_svg_surface_create (path, width, height);
+      surface = cairo_svg_surface_create_for_stream (sink_write, &sink, width, height);
       break;
     case RUGOSA_CHART_FORMAT_PDF:
-      surface = cairo_pdf_surface_create (path, width, height);
+      surface = cairo_pdf_surface_create_for_stream (sink_write, &sink, width, height);
       if (cairo_surface_status (surface) == CAIRO_STATUS_SUCCESS)
         {
           cairo_pdf_surface_set_metadata (surface, CAIRO_PDF_METADATA_TITLE,
@@ -444,17 +474,36 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
       cairo_destroy (cr);
     }
   if (cst == CAIRO_STATUS_SUCCESS && format == RUGOSA_CHART_FORMAT_PNG)
-    cst = cairo_surface_write_to_png (surface, path);
+    cst = cairo_surface_write_to_png_stream (surface, sink_write, &sink);
   if (cst == CAIRO_STATUS_SUCCESS)
     cst = finish_surface (surface);
   cairo_surface_destroy (surface);
   rugosa_chart_free (chart);
 
+  if (sink.error != NULL)
+    {
+      /* the writer's own sentence: the file, the reason, what is left */
+      rugosa_file_writer_abort (sink.writer);
+      g_set_error_literal (error, RUGOSA_CHART_ERROR, RUGOSA_CHART_ERROR_WRITE,
+                           sink.error->message);
+      g_error_free (sink.error);
+      return FALSE;
+    }
   if (cst != CAIRO_STATUS_SUCCESS)
     {
+      g_autofree char *display = rugosa_file_display_name (path);
+
+      rugosa_file_writer_abort (sink.writer);
       g_set_error (error, RUGOSA_CHART_ERROR, RUGOSA_CHART_ERROR_WRITE,
-                   _("Could not write the chart to “%s”: %s."), path,
-                   cairo_status_to_string (cst));
+                   _("The chart for “%s” could not be drawn (%s); nothing was written."),
+                   display, cairo_status_to_string (cst));
+      return FALSE;
+    }
+  if (!rugosa_file_writer_commit (sink.writer, &sink.error))
+    {
+      g_set_error_literal (error, RUGOSA_CHART_ERROR, RUGOSA_CHART_ERROR_WRITE,
+                           sink.error->message);
+      g_error_free (sink.error);
       return FALSE;
     }
   return TRUE;

@@ -192,7 +192,8 @@ cli_cmd_render (int argc, char **argv)
   if (!rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
                             width, height, date, path, &error))
     {
-      (void) fprintf (stderr, "rugosa-cli: %s\n", error->message);
+      /* one line, whatever the file name holds */
+      cli_fail ("%s", error->message);
       return error->code == RUGOSA_CHART_ERROR_WRITE ? CLI_EXIT_FAILURE : CLI_EXIT_USAGE;
     }
   return CLI_EXIT_OK;

@@ -104,6 +104,11 @@ io_reason (int errsv, const char *what)
       return g_strdup (_("the disk is read-only"));
     case EISDIR:
       return g_strdup (_("a folder has that name"));
+    case ENOENT:
+    case ENOTDIR:
+      return g_strdup (_("its folder does not exist"));
+    case ENAMETOOLONG:
+      return g_strdup (_("its name is too long"));
     default:
       return g_strdup_printf (_("%s failed (%s)"), _(what), g_strerror (errsv));
     }
