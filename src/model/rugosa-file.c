@@ -14,7 +14,13 @@
  *  5. rename the staged file over NAME~, then fsync the folder so that the
  *     renames last.
  * Any failure before step 4 removes every file the write made and leaves
- * NAME (and NAME~) byte for byte as they were. */
+ * NAME (and NAME~) byte for byte as they were.
+ *
+ * Reading is bounded: a file is opened without blocking and checked to be
+ * a regular file of at most the caller's limit before a byte is read; a
+ * stream the user named is read in chunks and refused as soon as it
+ * passes the limit.  Nothing can hang on a FIFO or fill the memory from a
+ * sparse file or /dev/zero. */
 #define G_LOG_DOMAIN "rugosa-model"
 
 #include "config.h"
@@ -23,6 +29,7 @@
 
 #include <errno.h>
 #include <fcntl.h>
+#include <poll.h>
 #include <string.h>
 #include <sys/stat.h>
 #include <unistd.h>
@@ -367,4 +374,152 @@ rugosa_file_write_atomic (const char *path, const void *data, gsize length,
   if (!rugosa_file_writer_write (w, data, length, error))
     return FALSE;
   return rugosa_file_writer_commit (g_steal_pointer (&w), error);
+}
+
+/* ---- reading ---- */
+
+G_DEFINE_QUARK (rugosa-file-error-quark, rugosa_file_error)
+
+static gboolean
+read_error (GError **error, int code, int errsv, const char *display)
+{
+  g_set_error (error, RUGOSA_FILE_ERROR, code, _("Cannot read “%s”: %s."),
+               display, g_strerror (errsv));
+  return FALSE;
+}
+
+static gboolean
+kind_error (GError **error, mode_t mode, const char *display)
+{
+  g_set_error (error, RUGOSA_FILE_ERROR, RUGOSA_FILE_ERROR_KIND,
+               S_ISDIR (mode)
+                 ? _("Cannot read “%s”: it is a folder, not a file.")
+                 : _("Cannot read “%s”: it is not a regular file (a pipe, a device or a socket)."),
+               display);
+  return FALSE;
+}
+
+static gboolean
+size_error (GError **error, gsize limit, const char *display)
+{
+  g_autofree char *size = g_format_size_full (limit, G_FORMAT_SIZE_IEC_UNITS);
+
+  g_set_error (error, RUGOSA_FILE_ERROR, RUGOSA_FILE_ERROR_SIZE,
+               _("Cannot read “%s”: it is larger than %s."), display, size);
+  return FALSE;
+}
+
+gboolean
+rugosa_file_read_bounded (const char *path, gsize limit, char **data,
+                          gsize *length, GError **error)
+{
+  g_autofree char *base = NULL;
+  g_autofree char *display = NULL;
+  g_autofree char *buf = NULL;
+  struct stat st;
+  gsize want, done = 0;
+  int fd;
+
+  g_return_val_if_fail (path != NULL && data != NULL && length != NULL, FALSE);
+
+  base = g_path_get_basename (path);
+  display = rugosa_file_display_name (base);
+  /* O_NONBLOCK: opening a FIFO with no writer returns at once (and is
+   * then refused below) instead of waiting for one. */
+  fd = open (path, O_RDONLY | O_NONBLOCK | O_CLOEXEC | O_NOCTTY);
+  if (fd < 0)
+    return read_error (error, RUGOSA_FILE_ERROR_READ, errno, display);
+  if (fstat (fd, &st) != 0)
+    {
+      int errsv = errno;
+      close (fd);
+      return read_error (error, RUGOSA_FILE_ERROR_READ, errsv, display);
+    }
+  if (!S_ISREG (st.st_mode))
+    {
+      close (fd);
+      return kind_error (error, st.st_mode, display);
+    }
+  /* The size before a byte is read: a sparse file of a terabyte costs
+   * nothing to refuse. */
+  if ((guint64) st.st_size > limit)
+    {
+      close (fd);
+      return size_error (error, limit, display);
+    }
+  /* The size may change while reading: never take more than it had. */
+  want = (gsize) st.st_size;
+  buf = g_malloc (want + 1);
+  while (done < want)
+    {
+      ssize_t n = read (fd, buf + done, want - done);
+
+      if (n < 0 && errno == EINTR)
+        continue;
+      if (n < 0)
+        {
+          int errsv = errno;
+          close (fd);
+          return read_error (error, RUGOSA_FILE_ERROR_READ, errsv, display);
+        }
+      if (n == 0)
+        break;
+      done += (gsize) n;
+    }
+  close (fd);
+  buf[done] = '\0';
+  *data = g_steal_pointer (&buf);
+  *length = done;
+  return TRUE;
+}
+
+gboolean
+rugosa_file_read_stream (int fd, const char *name, gsize limit, char **data,
+                         gsize *length, GError **error)
+{
+  enum { CHUNK = 64 * 1024 };
+  g_autofree char *display = NULL;
+  g_autoptr (GByteArray) buf = NULL;
+  struct stat st;
+
+  g_return_val_if_fail (fd >= 0 && name != NULL, FALSE);
+  g_return_val_if_fail (data != NULL && length != NULL, FALSE);
+
+  display = rugosa_file_display_name (name);
+  if (fstat (fd, &st) != 0)
+    return read_error (error, RUGOSA_FILE_ERROR_READ, errno, display);
+  if (S_ISDIR (st.st_mode))
+    return kind_error (error, st.st_mode, display);
+  if (S_ISREG (st.st_mode) && (guint64) st.st_size > limit)
+    return size_error (error, limit, display);
+
+  buf = g_byte_array_new ();
+  for (;;)
+    {
+      ssize_t n;
+
+      /* never hold more than the limit and one chunk */
+      g_byte_array_set_size (buf, buf->len + CHUNK);
+      n = read (fd, buf->data + buf->len - CHUNK, CHUNK);
+      g_byte_array_set_size (buf, buf->len - CHUNK + (guint) MAX (n, 0));
+      if (n < 0 && errno == EINTR)
+        continue;
+      if (n < 0 && (errno == EAGAIN || errno == EWOULDBLOCK))
+        {
+          /* a stream left non-blocking by whoever passed it: wait for it */
+          struct pollfd pfd = { fd, POLLIN, 0 };
+          (void) poll (&pfd, 1, -1);
+          continue;
+        }
+      if (n < 0)
+        return read_error (error, RUGOSA_FILE_ERROR_READ, errno, display);
+      if (n == 0)
+        break;
+      if (buf->len > limit)
+        return size_error (error, limit, display);
+    }
+  *length = buf->len;
+  g_byte_array_append (buf, (const guint8 *) "", 1);
+  *data = (char *) g_byte_array_free (g_steal_pointer (&buf), FALSE);
+  return TRUE;
 }

@@ -48,6 +48,30 @@ gboolean rugosa_file_write_atomic (const char *path, const void *data,
                                    gsize length, RugosaFileWriteFlags flags,
                                    GError **error);
 
+/* Reading a file of bounded size without blocking.  Errors are in
+ * RUGOSA_FILE_ERROR, one sentence naming the file (its base name). */
+#define RUGOSA_FILE_ERROR (rugosa_file_error_quark ())
+GQuark rugosa_file_error_quark (void);
+typedef enum {
+  RUGOSA_FILE_ERROR_READ,  /* the system's reason: missing, not allowed, I/O */
+  RUGOSA_FILE_ERROR_KIND,  /* a folder, a pipe, a device or a socket */
+  RUGOSA_FILE_ERROR_SIZE,  /* more than the limit */
+} RugosaFileError;
+
+/* The whole regular file at `path`, at most `limit` bytes: opened without
+ * blocking (a FIFO with no writer cannot hang it), checked to be a
+ * regular file and to be no larger than `limit` before a byte is read,
+ * and never more than `limit` bytes read should it grow meanwhile.
+ * *data is NUL-terminated; free with g_free. */
+gboolean rugosa_file_read_bounded (const char *path, gsize limit, char **data,
+                                   gsize *length, GError **error);
+/* The same from a stream the user named explicitly (standard input):
+ * read to its end, and refused as soon as more than `limit` bytes came
+ * (a regular file behind the stream is measured first).  `name` names it
+ * in messages. */
+gboolean rugosa_file_read_stream (int fd, const char *name, gsize limit,
+                                  char **data, gsize *length, GError **error);
+
 /* `path` as a message shows it: in UTF-8, control characters shown as '?'
  * (one line whatever the name holds), at most 120 characters (a longer
  * path keeps its end, where the file name is).  Free with g_free. */

@@ -677,9 +677,10 @@ _rugosa_project_load_tree (Ctx *ctx, const cJSON *root, RugosaProject *project)
   if (!cJSON_IsArray (lines))
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
                  _("expected an array, found %s"), type_name (lines));
+  /* The reader counts them before parsing; a key it could not see
+   * (spelled with escapes) is counted here. */
   if (cJSON_GetArraySize (lines) > RUGOSA_FILE_MAX_LINES)
-    return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 _("more than %d line options"), RUGOSA_FILE_MAX_LINES);
+    return _rugosa_project_fail_lines (ctx);
   for (const cJSON *e = lines->child; e != NULL; e = e->next, i++)
     {
       g_autoptr (RugosaLine) line = rugosa_line_new (NULL);

@@ -61,6 +61,11 @@ RugosaProject *rugosa_project_new_from_data (const char *data, gsize length,
  * `self` is left exactly as it was. */
 gboolean rugosa_project_load (RugosaProject *self, const char *path,
                               GError **error);
+/* The same from a stream the user named explicitly (standard input: `fd`
+ * 0), read to its end and refused as soon as it passes the size limit;
+ * `name` names it in messages. */
+gboolean rugosa_project_load_stream (RugosaProject *self, int fd,
+                                     const char *name, GError **error);
 /* The file text (UTF-8, ends with a newline); free with g_free. */
 char *rugosa_project_to_data (RugosaProject *self, gsize *length);
 /* Write atomically (temporary file in the same folder, fsync, rename) and
