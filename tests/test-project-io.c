@@ -268,6 +268,30 @@ static const BadFile bad_files[] = {
     RUGOSA_PROJECT_ERROR_VALUE, "x_extra[1].a: the string holds a NUL character (\\u0000)" },
   { "nul-in-key", DOC ("{\"name\": \"L\", \"na\\u0000me\": 1}"), -1,
     RUGOSA_PROJECT_ERROR_VALUE, "lines[0].na: the key holds a NUL character (\\u0000)" },
+  /* Control characters (Unicode Cc: C0, DEL, C1) in every kind of text
+   * the file holds; only a note takes line breaks and tabs. */
+  { "escape-in-name", DOC ("{\"name\": \"a\\u001b[2Jb\"}"), -1, RUGOSA_PROJECT_ERROR_VALUE,
+    "lines[0].name: the text holds a control character (a line break, a tab or another)" },
+  { "newline-in-name", DOC ("{\"name\": \"two\\nlines\"}"), -1, RUGOSA_PROJECT_ERROR_VALUE,
+    "lines[0].name: the text holds a control character" },
+  { "del-in-name", DOC ("{\"name\": \"a\x7f\"}"), -1, RUGOSA_PROJECT_ERROR_VALUE,
+    "lines[0].name: the text holds a control character" },
+  { "c1-in-designation", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"designation\": \"NPS 2\\u009b Sch 40\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].pipe.designation: the text holds a control character" },
+  { "tab-in-material-id", DOC ("{\"name\": \"L\", \"material\": {\"catalog\": \"cast\\tiron\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].material.catalog: the text holds a control character" },
+  { "escape-in-aging-class", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"aging\": {\"class\": \"\\u001bmoderate\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].aging.class: the text holds a control character" },
+  { "escape-in-fluid-kind", DOC ("{\"name\": \"L\", \"fluid\": {\"kind\": \"water\\u001b\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].fluid.kind: the text holds a control character" },
+  { "escape-in-note", DOC ("{\"name\": \"L\", \"note\": \"fine\\n\\tand\\u001b[31m red\"}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].note: the text holds a control character other than a line break or a tab" },
+  { "bell-in-fitting-id", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"fittings\": [{\"catalog\": \"elbow-90-standard\\u0007\", \"count\": 1}]}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].fittings[0].catalog: expected a fitting id of the catalog" },
+  { "escape-in-unit-override", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"units\": {\"overrides\": {\"flow\": \"L/s\\u001b[0m\"}}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.units.overrides.flow: the text holds a control character" },
+  { "escape-in-unit-system", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"units\": {\"system\": \"si\\u009b\"}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.units.system: the text holds a control character" },
   /* An escaped backslash before "u0000" is no NUL: the file loads as far
    * as its fields (the name is two backslashes and "u0000"). */
   { "escaped-backslash-not-nul", DOC ("{\"name\": \"\\\\u0000\", \"material\": 3}"), -1,
@@ -355,6 +379,20 @@ test_bad_file (gconstpointer data)
 
   g_unlink (path);
   g_rmdir (dir);
+}
+
+/* A note keeps its line breaks and tabs through a save and a load. */
+static void
+test_note_multiline (void)
+{
+  static const char doc[] = DOC ("{\"name\": \"L\", \"note\": \"first\\n\\tsecond\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"flow\": {\"design_m3_s\": 0.01}}");
+  g_autoptr (GError) error = NULL;
+  g_autoptr (RugosaProject) p = rugosa_project_new_from_data (doc, strlen (doc), &error);
+  g_autofree char *note = NULL;
+
+  g_assert_no_error (error);
+  g_object_get (rugosa_project_get_line (p, 0), "note", &note, NULL);
+  g_assert_cmpstr (note, ==, "first\n\tsecond");
 }
 
 static void
@@ -566,6 +604,7 @@ main (int argc, char **argv)
   g_test_add_func ("/project/io/demo-round-trip", test_demo_round_trip);
   g_test_add_func ("/project/io/unknown-fields-kept", test_unknown_fields_kept);
   g_test_add_func ("/project/io/missing-file", test_missing_file);
+  g_test_add_func ("/project/io/note-multiline", test_note_multiline);
   g_test_add_func ("/project/io/read/fifo", test_read_fifo);
   g_test_add_func ("/project/io/read/sparse-1gib", test_read_sparse);
   g_test_add_func ("/project/io/read/not-regular", test_read_not_regular);
