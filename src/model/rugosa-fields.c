@@ -458,7 +458,10 @@ rugosa_field_parse_text (const RugosaField *field, const char *text,
     {
       if (!is_bare_number (text, &x))
         {
-          g_autofree char *shown = g_utf8_make_valid (text, 40);
+          /* at most 40 characters of it (a byte count given to
+           * g_utf8_make_valid would read past a shorter text) */
+          g_autofree char *valid = g_utf8_make_valid (text, -1);
+          g_autofree char *shown = g_utf8_substring (valid, 0, MIN (g_utf8_strlen (valid, -1), 40));
           g_autofree char *msg = NULL;
 
           g_strdelimit (shown, "\n\r\t", ' ');
