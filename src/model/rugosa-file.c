@@ -38,7 +38,7 @@
 
 #include "rugosa-file.h"
 
-struct _RugosaFileWriter {
+struct RugosaFileWriter {
   char *path;
   char *tmp;          /* the temporary file; NULL once removed or renamed */
   int fd;             /* -1 once closed */

@@ -26,7 +26,7 @@ typedef enum {
  * G_FILE_ERROR, one sentence naming the file, the reason and what is left
  * on disk: "Cannot save “/home/ana/chart.png” because the disk is full;
  * the previous file is unchanged." */
-typedef struct _RugosaFileWriter RugosaFileWriter;
+typedef struct RugosaFileWriter RugosaFileWriter;
 
 /* Creates the temporary file; NULL and an error when it cannot. */
 RugosaFileWriter *rugosa_file_writer_new (const char *path,
