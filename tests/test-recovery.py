@@ -270,10 +270,20 @@ def scenario_instances(binary, source, top, procs):
     shutil.copyfile(os.path.join(source, "data", "demo.rugosa"), project)
     before = n_lines(project)
 
+    alive = {}  # pid of rugosa -> its dbus-run-session, expected to stay up
+
     def start(*args):
         wrapper, pid = start_own_session(binary, env, *args)
         procs.append(wrapper)
+        alive[pid] = wrapper
+        RUNNING[:] = list(alive.values())
         return pid
+
+    def kill(pid):
+        wrapper = alive.pop(pid)
+        RUNNING[:] = list(alive.values())
+        os.kill(pid, signal.SIGKILL)
+        wrapper.wait(timeout=TIMEOUT_S)
 
     # 1. A edits; its copy appears.
     a = start(project)
@@ -297,7 +307,7 @@ def scenario_instances(binary, source, top, procs):
     no_offer_from(d, "D, started with the project file,")
     if recovery_copies(state) != [a_copy] or read_bytes(a_copy) != a_bytes:
         fail("A's live copy changed or went while B and D started")
-    os.kill(d, signal.SIGKILL)
+    kill(d)
 
     # B's own unsaved work: a second live copy.
     press(b_wid, "ctrl+equal")
@@ -309,15 +319,14 @@ def scenario_instances(binary, source, top, procs):
 
     # 3. A ends without warning; C offers its copy, E (while C's offer is
     # open) does not.
-    os.kill(a, signal.SIGKILL)
-    time.sleep(0.5)
+    kill(a)
     c = start()
     dialog = wait_for("C's offer of A's copy",
                       lambda: window_named(Pid(c), "Recover unsaved work?"))
     e = start()
     wait_for("E's window", lambda: window_named(Pid(e), "Unsaved project"))
     no_offer_from(e, "E, while C's offer was open,")
-    os.kill(e, signal.SIGKILL)
+    kill(e)
 
     # 4. C recovers A's work; B's copy is untouched.
     press(dialog, "Return")
@@ -329,6 +338,7 @@ def scenario_instances(binary, source, top, procs):
         fail("B's live copy changed or went")
     wait_for("C's window to show the recovered, unsaved plant.rugosa",
              lambda: window_named(Pid(c), "• plant.rugosa"))
+    RUNNING[:] = []
 
 
 def main():

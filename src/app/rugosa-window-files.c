@@ -276,10 +276,11 @@ rugosa_window_autosave_now (RugosaWindow  *self,
   }
   data = rugosa_project_to_data (self->project, &length);
   /* Written atomically: a crash during the write leaves the previous copy
-   * whole. */
-  if (!rugosa_file_write_atomic (path, data, length, RUGOSA_FILE_WRITE_PRIVATE, error))
+   * whole.  The origin first, so that whoever finds a copy finds where it
+   * came from beside it. */
+  if (!rugosa_file_write_atomic (meta, origin, strlen (origin), RUGOSA_FILE_WRITE_PRIVATE, error))
     return FALSE;
-  return rugosa_file_write_atomic (meta, origin, strlen (origin), RUGOSA_FILE_WRITE_PRIVATE, error);
+  return rugosa_file_write_atomic (path, data, length, RUGOSA_FILE_WRITE_PRIVATE, error);
 }
 
 static gboolean
