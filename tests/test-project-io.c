@@ -5,7 +5,11 @@
 #include "config.h"
 
 #include <errno.h>
+#include <fcntl.h>
 #include <string.h>
+#include <sys/resource.h>
+#include <sys/stat.h>
+#include <unistd.h>
 
 #include <cjson/cJSON.h>
 #include <glib/gstdio.h>
@@ -245,7 +249,53 @@ static const BadFile bad_files[] = {
   { "duplicate-key-nested", DOC ("{\"name\": \"L\", \"flow\": {\"design_m3_s\": 1, \"design_m3_s\": 2}}"), -1,
     RUGOSA_PROJECT_ERROR_FORMAT, "lines[0].flow: the key \"design_m3_s\" appears more than once" },
   { "deep-nesting", NULL, -1, RUGOSA_PROJECT_ERROR_SYNTAX, "nested deeper than 32 levels at line 1, column 98" },
-  { "too-many-lines", NULL, -1, RUGOSA_PROJECT_ERROR_VALUE, "lines: more than 1000 line options" },
+  /* Common practice (no single source): the file format's own limits,
+   * RUGOSA_FILE_MAX_LINES (10 000) line options and 200 fittings. */
+  { "too-many-lines", NULL, -1, RUGOSA_PROJECT_ERROR_VALUE, "lines: more than 10000 line options" },
+  /* Counted while reading: refused before the text after the line option
+   * too many is parsed (here it is not even JSON). */
+  { "too-many-lines-early", NULL, -1, RUGOSA_PROJECT_ERROR_VALUE, "lines: more than 10000 line options" },
+  /* A key spelled with escapes is counted by the loader after parsing. */
+  { "too-many-lines-escaped-key", NULL, -1, RUGOSA_PROJECT_ERROR_VALUE, "lines: more than 10000 line options" },
+  /* cJSON cuts a string at \u0000: the reader refuses it with its path. */
+  { "nul-in-name", DOC ("{\"name\": \"L\\u0000x\"}"), -1, RUGOSA_PROJECT_ERROR_VALUE,
+    "lines[0].name: the string holds a NUL character (\\u0000)" },
+  { "nul-in-format", "{\"format\": \"rugosa-line-options\\u0000junk\", \"version\": 1, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "format: the string holds a NUL character (\\u0000)" },
+  { "nul-in-catalog-id", DOC ("{\"name\": \"L\", \"material\": {\"catalog\": \"pe\\u0000x\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].material.catalog: the string holds a NUL character (\\u0000)" },
+  { "nul-in-unknown-field", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"x_extra\": [1, {\"a\": \"\\u0000\"}], \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "x_extra[1].a: the string holds a NUL character (\\u0000)" },
+  { "nul-in-key", DOC ("{\"name\": \"L\", \"na\\u0000me\": 1}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].na: the key holds a NUL character (\\u0000)" },
+  /* Control characters (Unicode Cc: C0, DEL, C1) in every kind of text
+   * the file holds; only a note takes line breaks and tabs. */
+  { "escape-in-name", DOC ("{\"name\": \"a\\u001b[2Jb\"}"), -1, RUGOSA_PROJECT_ERROR_VALUE,
+    "lines[0].name: the text holds a control character (a line break, a tab or another)" },
+  { "newline-in-name", DOC ("{\"name\": \"two\\nlines\"}"), -1, RUGOSA_PROJECT_ERROR_VALUE,
+    "lines[0].name: the text holds a control character" },
+  { "del-in-name", DOC ("{\"name\": \"a\x7f\"}"), -1, RUGOSA_PROJECT_ERROR_VALUE,
+    "lines[0].name: the text holds a control character" },
+  { "c1-in-designation", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"designation\": \"NPS 2\\u009b Sch 40\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].pipe.designation: the text holds a control character" },
+  { "tab-in-material-id", DOC ("{\"name\": \"L\", \"material\": {\"catalog\": \"cast\\tiron\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].material.catalog: the text holds a control character" },
+  { "escape-in-aging-class", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"aging\": {\"class\": \"\\u001bmoderate\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].aging.class: the text holds a control character" },
+  { "escape-in-fluid-kind", DOC ("{\"name\": \"L\", \"fluid\": {\"kind\": \"water\\u001b\"}}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].fluid.kind: the text holds a control character" },
+  { "escape-in-note", DOC ("{\"name\": \"L\", \"note\": \"fine\\n\\tand\\u001b[31m red\"}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].note: the text holds a control character other than a line break or a tab" },
+  { "bell-in-fitting-id", DOC ("{\"name\": \"L\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"fittings\": [{\"catalog\": \"elbow-90-standard\\u0007\", \"count\": 1}]}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].fittings[0].catalog: expected a fitting id of the catalog" },
+  { "escape-in-unit-override", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"units\": {\"overrides\": {\"flow\": \"L/s\\u001b[0m\"}}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.units.overrides.flow: the text holds a control character" },
+  { "escape-in-unit-system", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"units\": {\"system\": \"si\\u009b\"}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.units.system: the text holds a control character" },
+  /* An escaped backslash before "u0000" is no NUL: the file loads as far
+   * as its fields (the name is two backslashes and "u0000"). */
+  { "escaped-backslash-not-nul", DOC ("{\"name\": \"\\\\u0000\", \"material\": 3}"), -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "lines[0].material: expected an object, found a number" },
   { "too-many-fittings", NULL, -1, RUGOSA_PROJECT_ERROR_VALUE, "lines[0].fittings: more than 200 fittings" },
   { "long-name", NULL, -1, RUGOSA_PROJECT_ERROR_VALUE, "lines[0].name: the string is longer than 200 characters" },
 };
@@ -264,12 +314,18 @@ build_bad (const BadFile *bad, gsize *length)
         g_string_append_c (s, ']');
       g_string_append_c (s, '}');
     }
-  else if (strcmp (bad->name, "too-many-lines") == 0)
+  else if (g_str_has_prefix (bad->name, "too-many-lines"))
     {
-      g_string_append (s, "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": [");
-      for (int i = 0; i < 1001; i++)
+      gboolean escaped = strcmp (bad->name, "too-many-lines-escaped-key") == 0;
+
+      g_string_append_printf (s, "{\"format\": \"rugosa-line-options\", \"version\": 1, \"%s\": [",
+                              escaped ? "line\\u0073" : "lines");
+      for (int i = 0; i < 10001; i++)
         g_string_append (s, i ? ", {}" : "{}");
-      g_string_append (s, "]}");
+      if (strcmp (bad->name, "too-many-lines-early") == 0)
+        g_string_append (s, ", this is no JSON");
+      else
+        g_string_append (s, "]}");
     }
   else if (strcmp (bad->name, "too-many-fittings") == 0)
     {
@@ -325,6 +381,20 @@ test_bad_file (gconstpointer data)
   g_rmdir (dir);
 }
 
+/* A note keeps its line breaks and tabs through a save and a load. */
+static void
+test_note_multiline (void)
+{
+  static const char doc[] = DOC ("{\"name\": \"L\", \"note\": \"first\\n\\tsecond\", \"material\": {\"roughness_m\": 0}, \"pipe\": {\"inner_diameter_m\": 0.1}, \"length_m\": 10, \"flow\": {\"design_m3_s\": 0.01}}");
+  g_autoptr (GError) error = NULL;
+  g_autoptr (RugosaProject) p = rugosa_project_new_from_data (doc, strlen (doc), &error);
+  g_autofree char *note = NULL;
+
+  g_assert_no_error (error);
+  g_object_get (rugosa_project_get_line (p, 0), "note", &note, NULL);
+  g_assert_cmpstr (note, ==, "first\n\tsecond");
+}
+
 static void
 test_missing_file (void)
 {
@@ -336,6 +406,196 @@ test_missing_file (void)
   g_assert_nonnull (strstr (error->message, "Cannot read “x.rugosa”"));
 }
 
+/* ---- bounded reading ---- */
+
+/* The most memory a refusal below may cost the process, in KiB of peak
+ * resident size (getrusage).  Common practice (no single source): far
+ * below the 1 GiB that reading the files whole would take, well above a
+ * test program's own size (under AddressSanitizer too). */
+#define REFUSAL_RSS_MAX_KIB (256 * 1024)
+
+static long
+peak_rss_kib (void)
+{
+  struct rusage ru;
+
+  g_assert_cmpint (getrusage (RUSAGE_SELF, &ru), ==, 0);
+  return ru.ru_maxrss;
+}
+
+/* One sentence on one line. */
+static void
+assert_one_line (const GError *error)
+{
+  g_assert_nonnull (error);
+  g_assert_null (strchr (error->message, '\n'));
+  g_assert_true (g_str_has_suffix (error->message, "."));
+}
+
+/* A FIFO with no writer would block a plain open() for ever: the load
+ * runs in a subprocess with a timeout and must come back refused. */
+static void
+test_read_fifo (void)
+{
+  if (g_test_subprocess ())
+    {
+      g_autoptr (RugosaProject) p = rugosa_project_new ();
+      g_autoptr (GError) error = NULL;
+
+      g_assert_false (rugosa_project_load (p, g_getenv ("RUGOSA_READ_PATH"), &error));
+      g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_IO);
+      g_assert_cmpstr (error->message, ==,
+                       "Cannot read “pipe.rugosa”: it is not a regular file (a pipe, a device or a socket).");
+      return;
+    }
+  {
+    g_autofree char *dir = g_dir_make_tmp ("rugosa-XXXXXX", NULL);
+    g_autofree char *path = g_build_filename (dir, "pipe.rugosa", NULL);
+
+    g_assert_cmpint (mkfifo (path, 0600), ==, 0);
+    g_setenv ("RUGOSA_READ_PATH", path, TRUE);
+    /* 10 s: a hang, not a slow machine, fails this */
+    g_test_trap_subprocess (NULL, 10 * G_USEC_PER_SEC, G_TEST_SUBPROCESS_INHERIT_STDERR);
+    g_unsetenv ("RUGOSA_READ_PATH");
+    g_unlink (path);
+    g_rmdir (dir);
+    g_test_trap_assert_passed ();
+  }
+}
+
+/* A sparse file of 1 GiB is refused from its size, before a byte is
+ * read: no memory, no time. */
+static void
+test_read_sparse (void)
+{
+  if (g_test_subprocess ())
+    {
+      g_autoptr (RugosaProject) p = rugosa_project_new ();
+      g_autoptr (GError) error = NULL;
+      gint64 start = g_get_monotonic_time ();
+
+      g_assert_false (rugosa_project_load (p, g_getenv ("RUGOSA_READ_PATH"), &error));
+      g_test_message ("refused in %.3f ms, peak resident size %ld KiB",
+                      (double) (g_get_monotonic_time () - start) / 1000.0, peak_rss_kib ());
+      g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_ENCODING);
+      g_assert_cmpstr (error->message, ==, "“sparse.rugosa” is larger than 16 MiB: it is not a Rugosa project.");
+      g_assert_cmpint (peak_rss_kib (), <, REFUSAL_RSS_MAX_KIB);
+      return;
+    }
+  {
+    g_autofree char *dir = g_dir_make_tmp ("rugosa-XXXXXX", NULL);
+    g_autofree char *path = g_build_filename (dir, "sparse.rugosa", NULL);
+    int fd = open (path, O_WRONLY | O_CREAT | O_TRUNC, 0600);
+
+    g_assert_cmpint (fd, >=, 0);
+    /* 1 GiB of holes: no disk space taken */
+    g_assert_cmpint (ftruncate (fd, (off_t) 1 << 30), ==, 0);
+    close (fd);
+    g_setenv ("RUGOSA_READ_PATH", path, TRUE);
+    g_test_trap_subprocess (NULL, 10 * G_USEC_PER_SEC, G_TEST_SUBPROCESS_INHERIT_STDERR);
+    g_unsetenv ("RUGOSA_READ_PATH");
+    g_unlink (path);
+    g_rmdir (dir);
+    g_test_trap_assert_passed ();
+  }
+}
+
+/* A link to /dev/zero (endless) and a folder are refused before reading. */
+static void
+test_read_not_regular (void)
+{
+  g_autofree char *dir = g_dir_make_tmp ("rugosa-XXXXXX", NULL);
+  g_autofree char *zero = g_build_filename (dir, "zero.rugosa", NULL);
+  g_autofree char *folder = g_build_filename (dir, "folder.rugosa", NULL);
+  g_autoptr (RugosaProject) p = load_demo ();
+  g_autofree char *before = rugosa_project_to_data (p, NULL);
+  g_autofree char *after = NULL;
+  g_autoptr (GError) error = NULL;
+
+  g_assert_cmpint (symlink ("/dev/zero", zero), ==, 0);
+  g_assert_cmpint (g_mkdir (folder, 0700), ==, 0);
+
+  g_assert_false (rugosa_project_load (p, zero, &error));
+  g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_IO);
+  g_assert_cmpstr (error->message, ==,
+                   "Cannot read “zero.rugosa”: it is not a regular file (a pipe, a device or a socket).");
+  g_clear_error (&error);
+  g_assert_false (rugosa_project_load (p, folder, &error));
+  g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_IO);
+  g_assert_cmpstr (error->message, ==, "Cannot read “folder.rugosa”: it is a folder, not a file.");
+  g_clear_error (&error);
+  /* a name that would break the line is shown on one line */
+  g_assert_false (rugosa_project_load (p, "/nonexistent/two\nlines.rugosa", &error));
+  g_assert_cmpstr (error->message, ==, "Cannot read “two?lines.rugosa”: No such file or directory.");
+  assert_one_line (error);
+
+  after = rugosa_project_to_data (p, NULL);
+  g_assert_cmpstr (after, ==, before);
+  g_unlink (zero);
+  g_rmdir (folder);
+  g_rmdir (dir);
+}
+
+/* A stream the user names (standard input) is read to its end but capped
+ * while reading: /dev/zero as the stream stops at the limit. */
+static void
+test_read_stream_capped (void)
+{
+  if (g_test_subprocess ())
+    {
+      g_autoptr (RugosaProject) p = rugosa_project_new ();
+      g_autoptr (GError) error = NULL;
+      int fd = open ("/dev/zero", O_RDONLY);
+
+      g_assert_cmpint (fd, >=, 0);
+      g_assert_false (rugosa_project_load_stream (p, fd, "standard input", &error));
+      close (fd);
+      g_test_message ("peak resident size %ld KiB", peak_rss_kib ());
+      g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_ENCODING);
+      g_assert_cmpstr (error->message, ==, "“standard input” is larger than 16 MiB: it is not a Rugosa project.");
+      g_assert_cmpint (peak_rss_kib (), <, REFUSAL_RSS_MAX_KIB);
+      return;
+    }
+  g_test_trap_subprocess (NULL, 30 * G_USEC_PER_SEC, G_TEST_SUBPROCESS_INHERIT_STDERR);
+  g_test_trap_assert_passed ();
+}
+
+/* A stream that holds a project loads it; one behind which a sparse
+ * regular file hides is refused from its size. */
+static void
+test_read_stream (void)
+{
+  g_autofree char *demo = source_path ("data/demo.rugosa");
+  g_autofree char *dir = g_dir_make_tmp ("rugosa-XXXXXX", NULL);
+  g_autofree char *sparse = g_build_filename (dir, "sparse", NULL);
+  g_autoptr (RugosaProject) from_file = load_demo ();
+  g_autoptr (RugosaProject) p = rugosa_project_new ();
+  g_autoptr (GError) error = NULL;
+  g_autofree char *text = NULL;
+  gsize length;
+  int fds[2], fd;
+
+  /* a pipe, as a shell's "<" or "|" gives */
+  g_assert_true (g_file_get_contents (demo, &text, &length, NULL));
+  g_assert_cmpint (pipe (fds), ==, 0);
+  g_assert_cmpint (write (fds[1], text, length), ==, (gssize) length);
+  close (fds[1]);
+  g_assert_true (rugosa_project_load_stream (p, fds[0], "standard input", &error));
+  g_assert_no_error (error);
+  close (fds[0]);
+  g_assert_true (rugosa_project_equal (p, from_file));
+
+  fd = open (sparse, O_RDWR | O_CREAT | O_TRUNC, 0600);
+  g_assert_cmpint (fd, >=, 0);
+  g_assert_cmpint (ftruncate (fd, (off_t) 1 << 30), ==, 0);
+  g_assert_false (rugosa_project_load_stream (p, fd, "standard input", &error));
+  g_assert_error (error, RUGOSA_PROJECT_ERROR, RUGOSA_PROJECT_ERROR_ENCODING);
+  close (fd);
+  g_assert_true (rugosa_project_equal (p, from_file));
+  g_unlink (sparse);
+  g_rmdir (dir);
+}
+
 int
 main (int argc, char **argv)
 {
@@ -344,6 +604,12 @@ main (int argc, char **argv)
   g_test_add_func ("/project/io/demo-round-trip", test_demo_round_trip);
   g_test_add_func ("/project/io/unknown-fields-kept", test_unknown_fields_kept);
   g_test_add_func ("/project/io/missing-file", test_missing_file);
+  g_test_add_func ("/project/io/note-multiline", test_note_multiline);
+  g_test_add_func ("/project/io/read/fifo", test_read_fifo);
+  g_test_add_func ("/project/io/read/sparse-1gib", test_read_sparse);
+  g_test_add_func ("/project/io/read/not-regular", test_read_not_regular);
+  g_test_add_func ("/project/io/read/stream", test_read_stream);
+  g_test_add_func ("/project/io/read/stream-capped", test_read_stream_capped);
   for (guint i = 0; i < G_N_ELEMENTS (bad_files); i++)
     {
       g_autofree char *name = g_strdup_printf ("/project/io/bad/%s", bad_files[i].name);

@@ -20,7 +20,21 @@
 Run under xvfb-run and dbus-run-session (suite 'ui').  Without a display or
 xdotool the test reports a skip (exit status 77).
 
-Usage: test-recovery.py RUGOSA_BINARY
+With --instances, the copy's owner instead (test recovery-instances):
+instances that share the state folder but not a D-Bus session (two logins,
+a remote session and a local one), each started under a dbus-run-session of
+its own so that each is a primary instance:
+
+1. A edits plant.rugosa; its autosave copy appears.
+2. B starts without a file, and D with plant.rugosa: neither offers A's
+   live copy (no "Recover unsaved work?" window within OFFER_WAIT_S), and
+   the copy keeps its bytes.  B edits too and writes a copy of its own.
+3. A is killed with SIGKILL.  C starts and offers A's copy; while C's offer
+   is open, E starts and offers nothing (C holds the copy).
+4. C recovers with Enter: A's copy goes, C writes its own, and B's live
+   copy is there with the same bytes throughout.
+
+Usage: test-recovery.py [--instances] RUGOSA_BINARY
 """
 
 import json
@@ -66,7 +80,8 @@ def xdotool(*args):
 
 
 def windows_of(proc):
-    return xdotool("search", "--onlyvisible", "--pid", str(proc.pid), "--name", ".")
+    # --all: every condition must hold (xdotool's default is any of them)
+    return xdotool("search", "--all", "--onlyvisible", "--pid", str(proc.pid), "--name", ".")
 
 
 def window_named(proc, prefix):
@@ -189,16 +204,179 @@ def scenario(binary, source, top, restart_with_file, procs):
         fail("a recovery copy is left after a clean quit")
 
 
+# How long an instance is given to show an offer it should not show: the
+# offer comes with the first window (rugosa_application_activate), so a
+# few seconds after that window is ample.
+OFFER_WAIT_S = 4.0
+
+
+def start_own_session(binary, env, *args):
+    """rugosa under a D-Bus session of its own; returns (wrapper, pid of
+    rugosa)."""
+    dbus = shutil.which("dbus-run-session")
+    wrapper = subprocess.Popen([dbus, "--", binary, *args], env=env,
+                               stdout=subprocess.DEVNULL, stderr=None)
+    exe = os.path.realpath(binary)
+
+    def child():
+        try:
+            with open(f"/proc/{wrapper.pid}/task/{wrapper.pid}/children") as f:
+                kids = f.read().split()
+        except OSError:
+            return None
+        for k in kids:
+            try:
+                if os.path.realpath(f"/proc/{k}/exe") == exe:
+                    return int(k)
+            except OSError:
+                pass
+        return None
+
+    pid = wait_for("rugosa to start in its own session", child)
+    return wrapper, pid
+
+
+class Pid:
+    """What the xdotool helpers need of a process: its pid."""
+    def __init__(self, pid):
+        self.pid = pid
+
+
+def no_offer_from(pid, what):
+    """Fail if the instance shows the recovery offer within OFFER_WAIT_S."""
+    end = time.monotonic() + OFFER_WAIT_S
+    while time.monotonic() < end:
+        if window_named(Pid(pid), "Recover unsaved work?"):
+            fail(what + " offered a copy that another running instance owns")
+        time.sleep(0.2)
+
+
+def read_bytes(path):
+    with open(path, "rb") as f:
+        return f.read()
+
+
+def scenario_instances(binary, source, top, procs):
+    env = dict(os.environ)
+    for var, sub in (("XDG_STATE_HOME", "state"), ("XDG_CONFIG_HOME", "config"),
+                     ("XDG_DATA_HOME", "data"), ("XDG_CACHE_HOME", "cache")):
+        env[var] = os.path.join(top, sub)
+        os.makedirs(env[var])
+    env.setdefault("GSK_RENDERER", "cairo")
+    env.setdefault("GSETTINGS_BACKEND", "memory")
+    env.pop("DBUS_SESSION_BUS_ADDRESS", None)
+    state = env["XDG_STATE_HOME"]
+    project = os.path.join(top, "plant.rugosa")
+    shutil.copyfile(os.path.join(source, "data", "demo.rugosa"), project)
+    before = n_lines(project)
+
+    alive = {}  # pid of rugosa -> its dbus-run-session, expected to stay up
+
+    def start(*args):
+        wrapper, pid = start_own_session(binary, env, *args)
+        procs.append(wrapper)
+        alive[pid] = wrapper
+        RUNNING[:] = list(alive.values())
+        return pid
+
+    def kill(pid):
+        wrapper = alive.pop(pid)
+        RUNNING[:] = list(alive.values())
+        os.kill(pid, signal.SIGKILL)
+        wrapper.wait(timeout=TIMEOUT_S)
+
+    # 1. A edits; its copy appears.
+    a = start(project)
+    wid = wait_for("A's window", lambda: window_named(Pid(a), "plant.rugosa"))
+    press(wid, "ctrl+equal")
+    copies = wait_for("A's autosave copy", lambda: recovery_copies(state))
+    if len(copies) != 1:
+        fail("expected A's copy alone, found %r" % copies)
+    a_copy = copies[0]
+    wait_for("A's copy to hold the added line",
+             lambda: os.path.exists(a_copy) and n_lines(a_copy) == before + 1)
+    a_bytes = read_bytes(a_copy)
+
+    # 2. B (no file) and D (the project file) start in sessions of their own:
+    # A's copy is live, so neither offers it.
+    b = start()
+    b_wid = wait_for("B's window", lambda: window_named(Pid(b), "Unsaved project"))
+    no_offer_from(b, "B, started without a file,")
+    d = start(project)
+    wait_for("D's window", lambda: window_named(Pid(d), "plant.rugosa"))
+    no_offer_from(d, "D, started with the project file,")
+    if recovery_copies(state) != [a_copy] or read_bytes(a_copy) != a_bytes:
+        fail("A's live copy changed or went while B and D started")
+    kill(d)
+
+    # B's own unsaved work: a second live copy.
+    press(b_wid, "ctrl+equal")
+    both = wait_for("B's autosave copy", lambda: len(recovery_copies(state)) == 2
+                    and recovery_copies(state))
+    b_copy = [c for c in both if c != a_copy][0]
+    wait_for("B's copy to be whole", lambda: n_lines(b_copy) >= 1)
+    b_bytes = read_bytes(b_copy)
+
+    # 3. A ends without warning; C offers its copy, E (while C's offer is
+    # open) does not.
+    kill(a)
+    c = start()
+    dialog = wait_for("C's offer of A's copy",
+                      lambda: window_named(Pid(c), "Recover unsaved work?"))
+    e = start()
+    wait_for("E's window", lambda: window_named(Pid(e), "Unsaved project"))
+    no_offer_from(e, "E, while C's offer was open,")
+    kill(e)
+
+    # 4. C recovers A's work; B's copy is untouched.
+    press(dialog, "Return")
+    wait_for("A's copy to be taken over by C", lambda: not os.path.exists(a_copy))
+    wait_for("C's own copy of the recovered work",
+             lambda: [x for x in recovery_copies(state) if x not in (a_copy, b_copy)
+                      and n_lines(x) == before + 1])
+    if not os.path.exists(b_copy) or read_bytes(b_copy) != b_bytes:
+        fail("B's live copy changed or went")
+    wait_for("C's window to show the recovered, unsaved plant.rugosa",
+             lambda: window_named(Pid(c), "• plant.rugosa"))
+    RUNNING[:] = []
+
+
 def main():
-    if len(sys.argv) != 2:
+    instances = "--instances" in sys.argv[1:]
+    args = [a for a in sys.argv[1:] if a != "--instances"]
+    if len(args) != 1:
         print(__doc__, file=sys.stderr)
         return 2
-    binary = os.path.abspath(sys.argv[1])
+    binary = os.path.abspath(args[0])
     if not os.environ.get("DISPLAY") or shutil.which("xdotool") is None:
         print("SKIP: no X display or no xdotool")
         return SKIP
     source = os.environ.get("RUGOSA_SOURCE_DIR",
                             os.path.join(os.path.dirname(__file__), ".."))
+
+    if instances:
+        if shutil.which("dbus-run-session") is None:
+            print("SKIP: no dbus-run-session")
+            return SKIP
+        top = tempfile.mkdtemp(prefix="rugosa-recovery-")
+        procs = []
+        try:
+            scenario_instances(binary, source, top, procs)
+        finally:
+            for p in procs:
+                if p.poll() is None:
+                    # the wrapper's rugosa first, then the wrapper and its bus
+                    try:
+                        with open(f"/proc/{p.pid}/task/{p.pid}/children") as f:
+                            for k in f.read().split():
+                                os.kill(int(k), signal.SIGKILL)
+                    except OSError:
+                        pass
+                    p.wait(timeout=TIMEOUT_S)
+            shutil.rmtree(top, ignore_errors=True)
+        print("PASS: no instance offered or deleted another's live copy; "
+              "the copy of a killed instance was offered once and recovered")
+        return 0
 
     for restart_with_file in (False, True):
         top = tempfile.mkdtemp(prefix="rugosa-recovery-")

@@ -36,9 +36,13 @@
 #include "config.h"
 
 #include <adwaita.h>
+#include <errno.h>
+#include <fcntl.h>
 #include <glib/gstdio.h>
 #include <math.h>
 #include <string.h>
+#include <sys/stat.h>
+#include <unistd.h>
 
 #include "core/fittings.h"
 #include "core/fluid.h"
@@ -308,7 +312,17 @@ static const char k_expect[] = "arrrrarrrrr";
   "temperature field shown in °C is 30 °C); the custom fluid's viscosity also takes a " \
   "kinematic value, converted with its density. Seawater is refused where pure water would " \
   "boil at the line's pressure (its vapour pressure is about 2 % lower: a cautious " \
-  "limit).\n\n"
+  "limit).\n\n" \
+  "The line's **name** takes what the project file takes, so that every saved file " \
+  "opens again: no control character (a line break, a tab, an escape sequence, DEL, a " \
+  "C1 control) and at most 200 characters; a refusal keeps the last name, marks the " \
+  "field and says why in its tooltip. The **open/** rows give the window a file " \
+  "(as Open, a drop or the command line do): it says why in a dialog of one sentence " \
+  "and keeps its document, its file name and its changed state; nothing hangs and " \
+  "nothing is read whole before it is refused. The **export/** rows export over an " \
+  "existing file with the disk full (injected at the first write, as the tests of " \
+  "saving do): the sentence names the file and the reason, the previous file keeps " \
+  "its bytes and no temporary file is left (docs/data-safety.md).\n\n"
 
 /* --- helpers ---------------------------------------------------------- */
 
@@ -1049,6 +1063,270 @@ test_pictures (void)
   ui_harness_drain ();
 }
 
+/* --- the line's name -------------------------------------------------- */
+
+typedef struct {
+  const char *id;
+  const char *text;   /* NULL: long_text */
+  char expect;
+  const char *shown;  /* the "typed" column, control characters spelt out */
+} NameRow;
+
+/* What the project file refuses to read is refused in the field too, so
+ * that every saved file opens again: control characters (C0, DEL, C1)
+ * and more than the 200 characters of the name's row. */
+static const NameRow name_rows[] = {
+  { "line-break", "Main\nline", 'r', "Main\\nline" },
+  { "tab", "Main\tline", 'r', "Main\\tline" },
+  { "escape-sequence", "Main \x1b[31mred\x1b[0m", 'r', "Main \\e[31mred\\e[0m" },
+  { "del", "Main\x7f", 'r', "Main\\x7f" },
+  { "c1-control", "Main \xc2\x9b" "2J", 'r', "Main \\u009b2J" },
+  { "201-characters", "ÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄ"
+                      "ÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄÄ", 'r',
+    "201 × Ä" },
+  { "long", NULL, 'r', NULL },
+  { "non-ascii", "Ölleitung ５ 水", 'a', "Ölleitung ５ 水" },
+  { "plain", "Main line B", 'a', "Main line B" },
+};
+
+/* The name field: the one plain entry with the name's placeholder. */
+static GtkEntry *
+find_name_entry (void)
+{
+  g_autoptr (GPtrArray) entries = g_ptr_array_new ();
+
+  collect (GTK_WIDGET (the_panel ()), GTK_TYPE_ENTRY, entries);
+  for (guint i = 0; i < entries->len; i++)
+    if (gtk_widget_get_ancestor (entries->pdata[i], RUGOSA_TYPE_QUANTITY_ENTRY) == NULL
+        && gtk_widget_get_ancestor (entries->pdata[i], ADW_TYPE_EXPANDER_ROW) == NULL)
+      return entries->pdata[i];
+  return NULL;
+}
+
+static void
+test_name_row (gconstpointer data)
+{
+  const NameRow *row = data;
+  RugosaHistory *history = rugosa_window_get_history (win);
+  const char *text = row->text ? row->text : long_text;
+  g_autofree char *path = g_strdup_printf ("name/%s", row->id);
+  g_autofree char *before = NULL;
+  const char *message = NULL;
+  GtkEntry *entry;
+  char outcome;
+
+  set_base (RG_FLUID_WATER);
+  rugosa_line_set_name (the_line (), "Main line A");
+  rugosa_line_panel_refresh (the_panel ());
+  rugosa_history_clear (history);
+  ui_harness_drain ();
+  before = g_strdup (rugosa_line_get_name (the_line ()));
+  entry = find_name_entry ();
+  g_assert_nonnull (entry);
+
+  gtk_editable_set_text (GTK_EDITABLE (entry), text);
+  g_signal_emit_by_name (entry, "activate");
+  ui_harness_drain ();
+
+  outcome = rugosa_history_can_undo (history) ? 'a' : 'r';
+  if (outcome == 'r')
+    message = gtk_widget_get_tooltip_text (GTK_WIDGET (entry));
+  record (path, row->shown, outcome, NULL, message);
+  if (outcome != row->expect)
+    {
+      g_test_fail_printf ("%s: expected %s, got %s", path, outcome_name (row->expect), outcome_name (outcome));
+      return;
+    }
+  if (outcome == 'r')
+    {
+      g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (entry), "error"));
+      assert_one_sentence (message);
+      g_assert_cmpstr (rugosa_line_get_name (the_line ()), ==, before);
+      /* The old name typed back is no edit, and clears the mark. */
+      gtk_editable_set_text (GTK_EDITABLE (entry), before);
+      g_signal_emit_by_name (entry, "activate");
+      ui_harness_drain ();
+      g_assert_false (gtk_widget_has_css_class (GTK_WIDGET (entry), "error"));
+      g_assert_false (rugosa_history_can_undo (history));
+    }
+  else
+    g_assert_cmpstr (rugosa_line_get_name (the_line ()), ==, text);
+}
+
+/* --- files the window is given ----------------------------------------- */
+
+/* Opening a file the window must refuse: the error dialog says why in one
+ * sentence, and the window keeps its document, its file and its state. */
+typedef struct {
+  const char *id;
+  const char *what;   /* the "typed" column: what the file is */
+} OpenRow;
+
+static const OpenRow open_rows[] = {
+  { "fifo", "a FIFO (named pipe) with no writer" },
+  { "folder", "a folder" },
+  { "dev-zero", "a link to /dev/zero" },
+  { "sparse-1gib", "a sparse file of 1 GiB" },
+  { "nul-in-string", "a project whose line name holds \\u0000" },
+  { "escape-in-name", "a project whose line name holds an escape sequence" },
+  { "too-many-lines", "a project of 10 001 line options" },
+};
+
+static char *files_dir;   /* a temporary folder for the rows below */
+
+/* The file of an open row, made in files_dir. */
+static char *
+make_open_file (const char *id)
+{
+  g_autofree char *path = g_build_filename (files_dir, id, NULL);
+  static const char head[] = "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": [";
+
+  if (g_str_equal (id, "fifo"))
+    g_assert_cmpint (mkfifo (path, 0600), ==, 0);
+  else if (g_str_equal (id, "folder"))
+    g_assert_cmpint (g_mkdir (path, 0700), ==, 0);
+  else if (g_str_equal (id, "dev-zero"))
+    g_assert_cmpint (symlink ("/dev/zero", path), ==, 0);
+  else if (g_str_equal (id, "sparse-1gib"))
+    {
+      int fd = open (path, O_WRONLY | O_CREAT | O_TRUNC, 0600);
+      g_assert_cmpint (fd, >=, 0);
+      g_assert_cmpint (ftruncate (fd, (off_t) 1 << 30), ==, 0);
+      close (fd);
+    }
+  else
+    {
+      g_autoptr (GString) s = g_string_new (head);
+
+      if (g_str_equal (id, "nul-in-string"))
+        g_string_append (s, "{\"name\": \"cut\\u0000here\"}");
+      else if (g_str_equal (id, "escape-in-name"))
+        g_string_append (s, "{\"name\": \"red\\u001b[31m\"}");
+      else
+        for (int i = 0; i < 10001; i++)
+          g_string_append (s, i ? ", {}" : "{}");
+      g_string_append (s, "]}");
+      g_assert_true (g_file_set_contents (path, s->str, (gssize) s->len, NULL));
+    }
+  return g_steal_pointer (&path);
+}
+
+static void
+test_open_row (gconstpointer data)
+{
+  const OpenRow *row = data;
+  g_autofree char *path = make_open_file (row->id);
+  g_autofree char *rowpath = g_strdup_printf ("open/%s", row->id);
+  g_autoptr (GFile) file = g_file_new_for_path (path);
+  RugosaProject *project = rugosa_window_get_project (win);
+  g_autofree char *before = rugosa_project_to_data (project, NULL);
+  g_autofree char *after = NULL;
+  g_autofree char *body = NULL;
+  GFile *file_before = rugosa_window_get_file (win);
+  gboolean modified = rugosa_window_get_modified (win);
+  AdwMessageDialog *dialog;
+
+  rugosa_window_load_file (win, file);
+  ui_harness_drain ();
+  dialog = ui_harness_find_message_dialog (GTK_WINDOW (win));
+  g_assert_nonnull (dialog);
+  body = g_strdup (adw_message_dialog_get_body (dialog));
+  record (rowpath, row->what, 'r', NULL, body);
+  /* The file's name, then a sentence, or the JSON path of the value and
+   * what is wrong with it (docs/file-format.md): on one line. */
+  g_assert_nonnull (body);
+  g_assert_cmpuint (strlen (body), >=, 10);
+  g_assert_null (strchr (body, '\n'));
+  g_assert_null (strstr (body, "(null)"));
+  /* It names the file given, not one of an earlier row. */
+  g_assert_nonnull (strstr (body, row->id));
+  ui_harness_click_response (dialog, "close");
+  ui_harness_drain ();
+  g_assert_null (ui_harness_find_message_dialog (GTK_WINDOW (win)));
+
+  after = rugosa_project_to_data (project, NULL);
+  g_assert_cmpstr (after, ==, before);
+  g_assert_true (rugosa_window_get_file (win) == file_before);
+  g_assert_true (rugosa_window_get_modified (win) == modified);
+  if (g_file_test (path, G_FILE_TEST_IS_DIR))
+    g_rmdir (path);
+  else
+    g_unlink (path);
+}
+
+/* Exporting onto a full disk (injected at the first write): the previous
+ * file keeps its bytes and no temporary file is left. */
+typedef struct {
+  const char *id;
+  RugosaChartFormat format;
+  gboolean csv;
+} ExportRow;
+
+static const ExportRow export_rows[] = {
+  { "png", RUGOSA_CHART_FORMAT_PNG, FALSE },
+  { "svg", RUGOSA_CHART_FORMAT_SVG, FALSE },
+  { "pdf", RUGOSA_CHART_FORMAT_PDF, FALSE },
+  { "csv", RUGOSA_CHART_FORMAT_PNG, TRUE },
+};
+
+static int
+disk_full (RugosaSaveStep step,
+           gpointer       user_data)
+{
+  return step == RUGOSA_SAVE_STEP_WRITE ? ENOSPC : 0;
+}
+
+static gboolean
+export_to (const ExportRow *row,
+           const char      *path,
+           GError         **error)
+{
+  if (row->csv)
+    return rugosa_window_export_csv_to (win, path, error);
+  return rugosa_window_export_chart_to (win, path, row->format, 960, 600, error);
+}
+
+static void
+test_export_row (gconstpointer data)
+{
+  const ExportRow *row = data;
+  g_autofree char *name = g_strdup_printf ("previous.%s", row->id);
+  g_autofree char *path = g_build_filename (files_dir, name, NULL);
+  g_autofree char *rowpath = g_strdup_printf ("export/%s-disk-full", row->id);
+  g_autofree char *what = g_strdup_printf ("%s over an existing file, the disk full", row->id);
+  g_autofree char *old = NULL, *now = NULL;
+  g_autoptr (GError) error = NULL;
+  gsize n_old = 0, n_now = 0;
+  GDir *d;
+  const char *entry;
+
+  g_assert_true (export_to (row, path, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_get_contents (path, &old, &n_old, NULL));
+
+  rugosa_file_set_fault_hook (disk_full, NULL);
+  g_assert_false (export_to (row, path, &error));
+  rugosa_file_set_fault_hook (NULL, NULL);
+  {
+    /* the temporary folder is no part of the table */
+    g_auto (GStrv) parts = g_strsplit (error->message, files_dir, -1);
+    g_autofree char *shown = g_strjoinv ("…", parts);
+    record (rowpath, what, 'r', NULL, shown);
+  }
+  assert_one_sentence (error->message);
+  g_assert_nonnull (strstr (error->message, "because the disk is full; the previous file is unchanged."));
+
+  g_assert_true (g_file_get_contents (path, &now, &n_now, NULL));
+  g_assert_cmpmem (now, n_now, old, n_old);
+  d = g_dir_open (files_dir, 0, NULL);
+  g_assert_nonnull (d);
+  while ((entry = g_dir_read_name (d)) != NULL)
+    if (!g_str_equal (entry, name))
+      g_test_fail_printf ("%s is left in the folder", entry);
+  g_dir_close (d);
+  g_unlink (path);
+}
+
 /* --- main ------------------------------------------------------------- */
 
 static void
@@ -1110,6 +1388,21 @@ add_rows (void)
         g_test_add_data_func (row->path, row, test_pref_row);
       }
   g_test_add_func ("/ui/bad-input/re-laminar-max/above-turbulent", test_limits_out_of_order);
+  for (guint i = 0; i < G_N_ELEMENTS (name_rows); i++)
+    {
+      g_autofree char *path = g_strdup_printf ("/ui/bad-input/name/%s", name_rows[i].id);
+      g_test_add_data_func (path, &name_rows[i], test_name_row);
+    }
+  for (guint i = 0; i < G_N_ELEMENTS (open_rows); i++)
+    {
+      g_autofree char *path = g_strdup_printf ("/ui/bad-input/open/%s", open_rows[i].id);
+      g_test_add_data_func (path, &open_rows[i], test_open_row);
+    }
+  for (guint i = 0; i < G_N_ELEMENTS (export_rows); i++)
+    {
+      g_autofree char *path = g_strdup_printf ("/ui/bad-input/export/%s-disk-full", export_rows[i].id);
+      g_test_add_data_func (path, &export_rows[i], test_export_row);
+    }
   g_test_add_func ("/ui/bad-input/pictures", test_pictures);
 }
 
@@ -1152,8 +1445,11 @@ main (int argc, char *argv[])
   gtk_single_selection_set_selected (rugosa_window_get_selection (win), 0);
   ui_harness_drain ();
 
+  files_dir = g_build_filename (tmpdir, "files", NULL);
+  g_assert_cmpint (g_mkdir (files_dir, 0700), ==, 0);
   add_rows ();
   status = g_test_run ();
+  g_free (files_dir);
 
   if (markdown != NULL)
     {

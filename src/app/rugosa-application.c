@@ -131,6 +131,14 @@ rugosa_application_startup (GApplication *app)
 
   G_APPLICATION_CLASS (rugosa_application_parent_class)->startup (app);
 
+  /* This instance's recovery copies are live until it ends: the lock that
+   * says so is held from now on (rugosa-window-files.c). */
+  {
+    g_autoptr (GError) error = NULL;
+    if (!rugosa_window_recovery_hold (&error))
+      g_message ("Recovery copies are not locked: %s", error->message);
+  }
+
   self->settings = g_settings_new ("org.rugosa.Rugosa");
   g_signal_connect (self->settings, "changed::color-scheme",
                     G_CALLBACK (_rugosa_application_on_color_scheme), self);
@@ -168,6 +176,13 @@ rugosa_application_startup (GApplication *app)
   gtk_application_set_accels_for_action (GTK_APPLICATION (app), "win.line-add", add_accels);
   gtk_application_set_accels_for_action (GTK_APPLICATION (app), "win.line-duplicate", dup_accels);
   gtk_application_set_accels_for_action (GTK_APPLICATION (app), "window.close", close_accels);
+}
+
+static void
+rugosa_application_shutdown (GApplication *app)
+{
+  rugosa_window_recovery_release ();
+  G_APPLICATION_CLASS (rugosa_application_parent_class)->shutdown (app);
 }
 
 static void
@@ -290,6 +305,7 @@ rugosa_application_class_init (RugosaApplicationClass *klass)
   app_class->activate = rugosa_application_activate;
   app_class->open = rugosa_application_open;
   app_class->startup = rugosa_application_startup;
+  app_class->shutdown = rugosa_application_shutdown;
   app_class->handle_local_options = rugosa_application_handle_local_options;
 }
 

@@ -173,20 +173,67 @@ _rugosa_line_panel_fluid_kind_changed (AdwComboRow     *row,
   _rugosa_line_panel_emit (self, "fluid-kind", g_variant_new_int32 (kind));
 }
 
+/* The name field marked as refused, with the sentence why (NULL: not). */
+static void
+_rugosa_line_panel_name_error (RugosaLinePanel *self,
+                               const char      *why)
+{
+  GtkWidget *entry = GTK_WIDGET (self->name_entry);
+
+  if (why != NULL)
+    {
+      gtk_widget_add_css_class (entry, "error");
+      gtk_widget_set_tooltip_text (entry, why);
+      gtk_accessible_update_state (GTK_ACCESSIBLE (entry),
+                                   GTK_ACCESSIBLE_STATE_INVALID, GTK_ACCESSIBLE_INVALID_TRUE, -1);
+    }
+  else if (gtk_widget_has_css_class (entry, "error"))
+    {
+      gtk_widget_remove_css_class (entry, "error");
+      gtk_widget_set_tooltip_text (entry, NULL);
+      gtk_accessible_reset_state (GTK_ACCESSIBLE (entry), GTK_ACCESSIBLE_STATE_INVALID);
+    }
+}
+
 static void
 _rugosa_line_panel_name_commit (RugosaLinePanel *self)
 {
   const char *text = gtk_editable_get_text (GTK_EDITABLE (self->name_entry));
+  const RugosaField *row = rugosa_field_find ("name");
+  g_autofree char *why = NULL;
 
   if (self->line == NULL || g_strcmp0 (text, rugosa_line_get_name (self->line)) == 0)
-    return;
+    {
+      _rugosa_line_panel_name_error (self, NULL);
+      return;
+    }
   if (*text == '\0')
     {
       /* A line keeps a name: an emptied field returns to the old one. */
       gtk_editable_set_text (GTK_EDITABLE (self->name_entry), rugosa_line_get_name (self->line));
+      _rugosa_line_panel_name_error (self, NULL);
       return;
     }
-  _rugosa_line_panel_emit (self, "name", g_variant_new_string (text));
+  /* What the project file refuses to read is refused here too, so that
+   * a saved file always opens again (rugosa_field_text_problem). */
+  switch (rugosa_field_text_problem (row, text))
+    {
+    case RUGOSA_TEXT_CONTROL:
+      why = g_strdup_printf (_("%s cannot hold a control character (a line break, a tab or another): the last name is kept."),
+                             rugosa_field_label (row));
+      break;
+    case RUGOSA_TEXT_TOO_LONG:
+    case RUGOSA_TEXT_NOT_UTF8:
+      why = g_strdup_printf (_("%s may be at most %d characters long: the last name is kept."),
+                             rugosa_field_label (row), row->max_chars);
+      break;
+    case RUGOSA_TEXT_OK:
+    default:
+      break;
+    }
+  _rugosa_line_panel_name_error (self, why);
+  if (why == NULL)
+    _rugosa_line_panel_emit (self, "name", g_variant_new_string (text));
 }
 
 static void
@@ -681,7 +728,10 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
 
   if (!gtk_widget_has_focus (GTK_WIDGET (self->name_entry))
       || g_strcmp0 (gtk_editable_get_text (GTK_EDITABLE (self->name_entry)), rugosa_line_get_name (self->line)) != 0)
-    gtk_editable_set_text (GTK_EDITABLE (self->name_entry), rugosa_line_get_name (self->line));
+    {
+      gtk_editable_set_text (GTK_EDITABLE (self->name_entry), rugosa_line_get_name (self->line));
+      _rugosa_line_panel_name_error (self, NULL);
+    }
   {
     GdkRGBA rgba;
     if (gdk_rgba_parse (&rgba, rugosa_line_get_colour (self->line)))

@@ -5,6 +5,10 @@
 
 #include <glib/gi18n.h>
 #include <glib/gstdio.h>
+#include <errno.h>
+#include <fcntl.h>
+#include <sys/file.h>
+#include <sys/stat.h>
 #include <unistd.h>
 
 #include "rugosa-window-private.h"
@@ -20,6 +24,202 @@ static char *
 _rugosa_window_recovery_dir (void)
 {
   return g_build_filename (g_get_user_state_dir (), "rugosa", "recovery", NULL);
+}
+
+/* --- who owns a recovery copy ----------------------------------------- *
+ *
+ * A recovery copy belongs to the running instance that wrote it until that
+ * instance ends, whatever D-Bus session it runs in (two logins, a remote
+ * session and a local one share the state folder but not the bus).  Each
+ * instance has an owner id, holds an exclusive flock(2) on
+ * "owner-ID.lock" in the recovery folder from before its first copy is
+ * written until it ends, and names its copies "unsaved-ID-N.rugosa".  The
+ * kernel drops the lock when the process ends in any way (SIGKILL, a
+ * crash), so a copy is another instance's live work exactly while its
+ * owner's lock is held; it is offered only when the lock can be taken,
+ * and the instance that offers it holds that lock (claims the copy) until
+ * the offer is answered, so two instances never offer the same copy
+ * (docs/data-safety.md). */
+
+#define OWNER_PREFIX "owner-"
+#define OWNER_SUFFIX ".lock"
+#define COPY_PREFIX "unsaved-"
+
+static char *owner_id;      /* this instance's */
+static int owner_fd = -1;   /* the lock held on it */
+
+static const char *
+_rugosa_recovery_owner_id (void)
+{
+  /* No '-' in it: a copy's name ends in "-N". */
+  if (owner_id == NULL)
+    owner_id = g_strdup_printf ("P%dR%08x", (int) getpid (), g_random_int ());
+  return owner_id;
+}
+
+static char *
+_rugosa_recovery_lock_path (const char *owner)
+{
+  g_autofree char *dir = _rugosa_window_recovery_dir ();
+  g_autofree char *name = g_strconcat (OWNER_PREFIX, owner, OWNER_SUFFIX, NULL);
+
+  return g_build_filename (dir, name, NULL);
+}
+
+/* The owner in a copy's file name ("unsaved-OWNER-N.rugosa"), or NULL. */
+static char *
+_rugosa_recovery_copy_owner (const char *name)
+{
+  const char *dash;
+
+  if (!g_str_has_prefix (name, COPY_PREFIX) || !g_str_has_suffix (name, PROJECT_SUFFIX))
+    return NULL;
+  dash = strrchr (name, '-');
+  if (dash == NULL || dash < name + strlen (COPY_PREFIX) + 1)
+    return NULL;
+  return g_strndup (name + strlen (COPY_PREFIX), (gsize) (dash - name) - strlen (COPY_PREFIX));
+}
+
+/* An exclusive lock on `path` (made if missing): the descriptor holding
+ * it, or -1 with errno (EWOULDBLOCK: another process holds it).  The path
+ * must still name the file locked: one removed by its last holder in the
+ * meantime is made again. */
+static int
+_rugosa_recovery_lock (const char *path,
+                       gboolean    wait)
+{
+  for (int attempt = 0; attempt < 5; attempt++)
+    {
+      struct stat held, named;
+      int fd = open (path, O_RDWR | O_CREAT | O_CLOEXEC | O_NOFOLLOW, 0600);
+      int errsv;
+
+      if (fd < 0)
+        return -1;
+      while (flock (fd, wait ? LOCK_EX : LOCK_EX | LOCK_NB) != 0)
+        if (errno != EINTR)
+          {
+            errsv = errno;
+            close (fd);
+            errno = errsv;
+            return -1;
+          }
+      if (fstat (fd, &held) == 0 && stat (path, &named) == 0
+          && held.st_dev == named.st_dev && held.st_ino == named.st_ino)
+        return fd;
+      close (fd);
+    }
+  errno = EAGAIN;
+  return -1;
+}
+
+/* Whether `owner` still has a copy in the recovery folder. */
+static gboolean
+_rugosa_recovery_owner_has_copies (const char *owner)
+{
+  g_autofree char *dir = _rugosa_window_recovery_dir ();
+  g_autoptr (GDir) d = g_dir_open (dir, 0, NULL);
+  const char *name;
+
+  while (d != NULL && (name = g_dir_read_name (d)) != NULL)
+    {
+      g_autofree char *of = _rugosa_recovery_copy_owner (name);
+
+      if (g_strcmp0 (of, owner) == 0)
+        return TRUE;
+    }
+  return FALSE;
+}
+
+/* Let go of a lock taken on `owner`; its lock file goes with it once no
+ * copy of that owner is left (removed while still locked, so that nobody
+ * can hold a lock on a file that is no longer there). */
+static void
+_rugosa_recovery_unlock (const char *owner,
+                         int         fd)
+{
+  if (fd < 0)
+    return;
+  if (!_rugosa_recovery_owner_has_copies (owner))
+    {
+      g_autofree char *path = _rugosa_recovery_lock_path (owner);
+      g_unlink (path);
+    }
+  close (fd);
+}
+
+gboolean
+rugosa_window_recovery_hold (GError **error)
+{
+  g_autofree char *dir = _rugosa_window_recovery_dir ();
+  g_autofree char *path = NULL;
+  g_autoptr (GDir) d = NULL;
+  const char *name;
+
+  if (owner_fd >= 0)
+    return TRUE;
+  if (g_mkdir_with_parents (dir, 0700) != 0)
+    {
+      int errsv = errno;
+      g_set_error (error, G_FILE_ERROR, g_file_error_from_errno (errsv),
+                   _("Cannot create the recovery folder %s."), dir);
+      return FALSE;
+    }
+  path = _rugosa_recovery_lock_path (_rugosa_recovery_owner_id ());
+  /* Waits at most for another instance sweeping stale lock files: no
+   * one else has a reason to hold an id nobody has written copies of. */
+  owner_fd = _rugosa_recovery_lock (path, TRUE);
+  if (owner_fd < 0)
+    {
+      int errsv = errno;
+      g_set_error (error, G_FILE_ERROR, g_file_error_from_errno (errsv),
+                   _("Cannot lock %s: %s."), path, g_strerror (errsv));
+      return FALSE;
+    }
+  /* Lock files of instances that ended and left no copy go. */
+  d = g_dir_open (dir, 0, NULL);
+  while (d != NULL && (name = g_dir_read_name (d)) != NULL)
+    if (g_str_has_prefix (name, OWNER_PREFIX) && g_str_has_suffix (name, OWNER_SUFFIX))
+      {
+        g_autofree char *owner = g_strndup (name + strlen (OWNER_PREFIX),
+                                            strlen (name) - strlen (OWNER_PREFIX) - strlen (OWNER_SUFFIX));
+        g_autofree char *other = NULL;
+        int fd;
+
+        if (g_str_equal (owner, owner_id) || _rugosa_recovery_owner_has_copies (owner))
+          continue;
+        other = g_build_filename (dir, name, NULL);
+        if ((fd = _rugosa_recovery_lock (other, FALSE)) >= 0)
+          _rugosa_recovery_unlock (owner, fd);
+      }
+  return TRUE;
+}
+
+void
+rugosa_window_recovery_release (void)
+{
+  if (owner_fd < 0)
+    return;
+  _rugosa_recovery_unlock (owner_id, owner_fd);
+  owner_fd = -1;
+}
+
+/* A copy offered: the lock held on its owner while the offer is open. */
+typedef struct
+{
+  char *path;
+  char *owner;   /* NULL: this instance's own copy, no lock taken */
+  int   fd;
+} RugosaRecoveryClaim;
+
+static void
+_rugosa_recovery_claim_free (RugosaRecoveryClaim *claim)
+{
+  if (claim->owner != NULL)
+    _rugosa_recovery_unlock (claim->owner, claim->fd);
+  g_free (claim->path);
+  g_free (claim->owner);
+  g_free (claim);
 }
 
 char *
@@ -66,12 +266,21 @@ rugosa_window_autosave_now (RugosaWindow  *self,
                    _("Cannot create the recovery folder %s."), dir);
       return FALSE;
     }
+  /* The copy is this instance's from its first byte: the lock comes
+   * first.  Without it (a file system without locks) the copy is still
+   * written — the work matters more — and others treat it as live. */
+  {
+    g_autoptr (GError) lock_error = NULL;
+    if (!rugosa_window_recovery_hold (&lock_error))
+      g_message ("Recovery copies are not locked: %s", lock_error->message);
+  }
   data = rugosa_project_to_data (self->project, &length);
-  /* g_file_set_contents writes a temporary file and renames it: a crash
-   * during the write leaves the previous copy whole. */
-  if (!g_file_set_contents (path, data, length, error))
+  /* Written atomically: a crash during the write leaves the previous copy
+   * whole.  The origin first, so that whoever finds a copy finds where it
+   * came from beside it. */
+  if (!rugosa_file_write_atomic (meta, origin, strlen (origin), RUGOSA_FILE_WRITE_PRIVATE, error))
     return FALSE;
-  return g_file_set_contents (meta, origin, -1, error);
+  return rugosa_file_write_atomic (path, data, length, RUGOSA_FILE_WRITE_PRIVATE, error);
 }
 
 static gboolean
@@ -515,7 +724,44 @@ _rugosa_window_close_request (GtkWindow *window,
 
 /* --- recovery -------------------------------------------------------- */
 
+/* The project file a copy came from (its ".origin"), read within bounds:
+ * the folder is shared with other instances and other programs.  NULL
+ * for an unnamed project or a file that is no name. */
 static char *
+_rugosa_window_read_origin (const char *copy)
+{
+  g_autofree char *meta = _rugosa_window_meta_path (copy);
+  g_autofree char *origin = NULL;
+  gsize length;
+
+  if (!rugosa_file_read_bounded (meta, 64 * 1024, &origin, &length, NULL)
+      || length == 0 || strlen (origin) != length || !g_utf8_validate (origin, -1, NULL))
+    return NULL;
+  return g_steal_pointer (&origin);
+}
+
+/* Whether an open window of this instance writes its copy to `path`. */
+static gboolean
+_rugosa_window_copy_is_open (const char *path)
+{
+  GApplication *app = g_application_get_default ();
+
+  if (!GTK_IS_APPLICATION (app))
+    return FALSE;
+  for (GList *l = gtk_application_get_windows (GTK_APPLICATION (app)); l; l = l->next)
+    if (RUGOSA_IS_WINDOW (l->data))
+      {
+        g_autofree char *own = rugosa_window_autosave_path (RUGOSA_WINDOW (l->data));
+        if (g_str_equal (own, path))
+          return TRUE;
+      }
+  return FALSE;
+}
+
+/* A copy that no running instance owns, claimed (see above), or NULL.
+ * A copy of this instance's that no open window writes is offered too (a
+ * window closed without its guard). */
+static RugosaRecoveryClaim *
 _rugosa_window_find_leftover (void)
 {
   g_autofree char *dir = _rugosa_window_recovery_dir ();
@@ -527,10 +773,32 @@ _rugosa_window_find_leftover (void)
   while ((name = g_dir_read_name (d)) != NULL)
     if (g_str_has_suffix (name, PROJECT_SUFFIX))
       {
-        char *path = g_build_filename (dir, name, NULL);
-        if (g_file_test (path, G_FILE_TEST_IS_REGULAR))
-          return path;
-        g_free (path);
+        g_autofree char *path = g_build_filename (dir, name, NULL);
+        g_autofree char *owner = _rugosa_recovery_copy_owner (name);
+        g_autofree char *lock = NULL;
+        RugosaRecoveryClaim *claim;
+        int fd = -1;
+
+        if (!g_file_test (path, G_FILE_TEST_IS_REGULAR) || owner == NULL)
+          continue;
+        if (g_str_equal (owner, _rugosa_recovery_owner_id ()))
+          {
+            if (_rugosa_window_copy_is_open (path))
+              continue;
+            g_clear_pointer (&owner, g_free);
+          }
+        else
+          {
+            lock = _rugosa_recovery_lock_path (owner);
+            /* Held: its owner runs (or another instance offers it). */
+            if ((fd = _rugosa_recovery_lock (lock, FALSE)) < 0)
+              continue;
+          }
+        claim = g_new0 (RugosaRecoveryClaim, 1);
+        claim->path = g_steal_pointer (&path);
+        claim->owner = g_steal_pointer (&owner);
+        claim->fd = fd;
+        return claim;
       }
   return NULL;
 }
@@ -540,7 +808,8 @@ _rugosa_window_recovery_response (AdwMessageDialog *dialog,
                                   const char       *response,
                                   RugosaWindow     *self)
 {
-  char *path = g_object_get_data (G_OBJECT (dialog), "path");
+  RugosaRecoveryClaim *claim = g_object_get_data (G_OBJECT (dialog), "claim");
+  const char *path = claim->path;
   g_autofree char *meta = _rugosa_window_meta_path (path);
   g_autofree char *origin = NULL;
   g_autoptr (GError) error = NULL;
@@ -553,7 +822,7 @@ _rugosa_window_recovery_response (AdwMessageDialog *dialog,
           return;
         }
       _rugosa_window_project_replaced (self);
-      if (g_file_get_contents (meta, &origin, NULL, NULL) && *origin)
+      if ((origin = _rugosa_window_read_origin (path)) != NULL)
         {
           g_autoptr (GFile) file = g_file_new_for_path (origin);
           _rugosa_window_set_file (self, file);
@@ -578,23 +847,24 @@ _rugosa_window_recovery_response (AdwMessageDialog *dialog,
 gboolean
 rugosa_window_recovery_pending (void)
 {
-  g_autofree char *path = _rugosa_window_find_leftover ();
+  RugosaRecoveryClaim *claim = _rugosa_window_find_leftover ();
 
-  return path != NULL;
+  if (claim == NULL)
+    return FALSE;
+  _rugosa_recovery_claim_free (claim);
+  return TRUE;
 }
 
 void
 rugosa_window_offer_recovery (RugosaWindow *self)
 {
-  g_autofree char *path = _rugosa_window_find_leftover ();
-  g_autofree char *meta = NULL;
+  RugosaRecoveryClaim *claim = _rugosa_window_find_leftover ();
   g_autofree char *origin = NULL;
   GtkWidget *dialog;
 
-  if (path == NULL)
+  if (claim == NULL)
     return;
-  meta = _rugosa_window_meta_path (path);
-  g_file_get_contents (meta, &origin, NULL, NULL);
+  origin = _rugosa_window_read_origin (claim->path);
 
   dialog = adw_message_dialog_new (GTK_WINDOW (self), _("Recover unsaved work?"), NULL);
   if (origin && *origin)
@@ -613,7 +883,9 @@ rugosa_window_offer_recovery (RugosaWindow *self)
   adw_message_dialog_set_response_appearance (ADW_MESSAGE_DIALOG (dialog), "recover", ADW_RESPONSE_SUGGESTED);
   adw_message_dialog_set_default_response (ADW_MESSAGE_DIALOG (dialog), "recover");
   adw_message_dialog_set_close_response (ADW_MESSAGE_DIALOG (dialog), "later");
-  g_object_set_data_full (G_OBJECT (dialog), "path", g_steal_pointer (&path), g_free);
+  /* The claim is held until the dialog goes, answered or not. */
+  g_object_set_data_full (G_OBJECT (dialog), "claim", claim,
+                          (GDestroyNotify) _rugosa_recovery_claim_free);
   g_signal_connect (dialog, "response", G_CALLBACK (_rugosa_window_recovery_response), self);
   gtk_window_present (GTK_WINDOW (dialog));
 }
@@ -636,9 +908,9 @@ _rugosa_window_files_init (RugosaWindow *self)
   GtkDropTarget *drop;
   static guint counter;
 
-  /* Unique among windows and processes: one recovery copy per window. */
-  self->autosave_id = g_strdup_printf ("unsaved-%d-%u-%" G_GINT64_FORMAT,
-                                       (int) getpid (), ++counter, g_get_real_time ());
+  /* Unique among windows and instances: one recovery copy per window,
+   * named after the instance that owns it (see above). */
+  self->autosave_id = g_strdup_printf (COPY_PREFIX "%s-%u", _rugosa_recovery_owner_id (), ++counter);
 
   drop = gtk_drop_target_new (GDK_TYPE_FILE_LIST, GDK_ACTION_COPY);
   g_signal_connect (drop, "drop", G_CALLBACK (_rugosa_window_drop), self);

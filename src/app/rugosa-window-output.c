@@ -59,11 +59,8 @@ rugosa_window_export_csv_to (RugosaWindow  *self,
                              const char    *path,
                              GError       **error)
 {
-  g_autoptr (GString) out = g_string_new (NULL);
-
-  if (!rugosa_project_format_eval (self->project, -1.0, RUGOSA_EVAL_FORMAT_CSV, out, error))
-    return FALSE;
-  return g_file_set_contents (path, out->str, out->len, error);
+  /* Written atomically: a failure leaves the previous file as it was. */
+  return rugosa_project_export_eval (self->project, -1.0, RUGOSA_EVAL_FORMAT_CSV, path, error);
 }
 
 /* The formats offered, the name shown in the dialog and the extension the

@@ -37,6 +37,13 @@ gboolean       rugosa_window_save_file_sync (RugosaWindow *self,
 void           rugosa_window_offer_recovery (RugosaWindow *self);
 /* Whether such a copy is there. */
 gboolean       rugosa_window_recovery_pending (void);
+/* The lock that marks this instance's recovery copies as live for every
+ * other instance (docs/data-safety.md): taken at start-up (and before the
+ * first copy is written, whatever comes first), let go when the instance
+ * ends.  Other instances never offer, open or delete a copy whose owner
+ * holds it. */
+gboolean       rugosa_window_recovery_hold    (GError **error);
+void           rugosa_window_recovery_release (void);
 /* Write the autosave copy now (tests; normally on a coalesced timeout). */
 gboolean       rugosa_window_autosave_now   (RugosaWindow *self,
                                              GError      **error);

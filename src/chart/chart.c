@@ -15,6 +15,7 @@
 #include <string.h>
 
 
+
 /* Marked for translation; shown through _() where drawn. */
 const char *const RUGOSA_CHART_CAUTION =
   N_("Estimates from published correlations, valid only inside their stated "

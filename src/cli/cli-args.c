@@ -6,6 +6,7 @@
 #include <errno.h>
 #include <math.h>
 #include <stdio.h>
+#include <stdlib.h>
 #include <string.h>
 
 #include "cli.h"
@@ -19,10 +20,33 @@ find_option (const CliOption *options, const char *name)
   return NULL;
 }
 
+/* Options spelled two ways: the values of both are kept under the first
+ * name, so that giving both is refused as giving one twice. */
+static const struct {
+  const char *spelling;
+  const char *name;
+} same_option[] = {
+  { "--output", "-o" },
+};
+
+static const char *
+canonical_name (const CliOption *options, const char *name)
+{
+  for (gsize i = 0; i < G_N_ELEMENTS (same_option); i++)
+    if (g_str_equal (name, same_option[i].spelling)
+        && find_option (options, same_option[i].name) != NULL)
+      return same_option[i].name;
+  return name;
+}
+
 gboolean
 cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
                 int argc, char **argv, int first, GString *message)
 {
+  /* the spelling each option was first given in, for messages */
+  g_autoptr (GHashTable) spelled = g_hash_table_new_full (g_str_hash, g_str_equal,
+                                                          g_free, g_free);
+
   args->command = command;
   args->values = g_hash_table_new_full (g_str_hash, g_str_equal, g_free,
                                         (GDestroyNotify) g_ptr_array_unref);
@@ -33,6 +57,7 @@ cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
       const char *arg = argv[i];
       g_autofree char *name = NULL;
       const char *value = NULL;
+      const char *key;
       const CliOption *opt;
 
       if (arg[0] != '-' || arg[1] == '\0' || g_ascii_isdigit (arg[1])
@@ -51,6 +76,17 @@ cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
         name = g_strdup (arg);
 
       opt = find_option (options, name);
+      /* Help where an option stands (not as the value of one: "-o
+       * --help" names a file): the usage, and nothing else is done. */
+      if (opt == NULL && (g_str_equal (name, "--help") || g_str_equal (name, "-h")))
+        {
+          if (value != NULL)
+            {
+              g_string_printf (message, _("Option %s takes no value."), name);
+              return FALSE;
+            }
+          exit (cli_usage ());
+        }
       if (opt == NULL)
         {
           g_autofree char *shown = cli_echo (name);
@@ -79,16 +115,24 @@ cli_args_parse (CliArgs *args, const char *command, const CliOption *options,
           return FALSE;
         }
 
-      GPtrArray *list = g_hash_table_lookup (args->values, name);
+      key = canonical_name (options, name);
+      GPtrArray *list = g_hash_table_lookup (args->values, key);
       if (list != NULL && !opt->repeatable)
         {
-          g_string_printf (message, _("Option %s is given more than once."), name);
+          const char *before = g_hash_table_lookup (spelled, key);
+
+          if (before != NULL && !g_str_equal (before, name))
+            g_string_printf (message, _("Options %s and %s are the same option, given twice; give it once."),
+                             before, name);
+          else
+            g_string_printf (message, _("Option %s is given more than once."), name);
           return FALSE;
         }
       if (list == NULL)
         {
           list = g_ptr_array_new_with_free_func (g_free);
-          g_hash_table_insert (args->values, g_strdup (name), list);
+          g_hash_table_insert (args->values, g_strdup (key), list);
+          g_hash_table_insert (spelled, g_strdup (key), g_strdup (name));
         }
       g_ptr_array_add (list, g_strdup (value != NULL ? value : ""));
     }
@@ -155,10 +199,48 @@ cli_echo (const char *text)
   return g_string_free (out, FALSE);
 }
 
+/* Is `c` a character a terminal may act on rather than show: a C0 or C1
+ * control or DEL (Unicode category Cc)?  Tabs and line ends are layout. */
+static gboolean
+acts_on_terminal (gunichar c)
+{
+  return g_unichar_iscntrl (c) && c != '\t' && c != '\n' && c != '\r';
+}
+
+char *
+cli_terminal_text (const char *text)
+{
+  g_autofree char *valid = g_utf8_make_valid (text, -1);
+  const char *p = valid;
+  gboolean json;
+  GString *out;
+
+  while (g_ascii_isspace (*p))
+    p++;
+  /* JSON keeps such characters only inside its strings (its syntax is
+   * ASCII), where an escape is the same character to a reader. */
+  json = *p == '{' || *p == '[';
+  out = g_string_sized_new (strlen (valid));
+  for (p = valid; *p != '\0'; p = g_utf8_next_char (p))
+    {
+      gunichar c = g_utf8_get_char (p);
+
+      if (!acts_on_terminal (c))
+        g_string_append_unichar (out, c);
+      else if (json)
+        g_string_append_printf (out, "\\u%04x", (unsigned) c);
+      else
+        g_string_append_c (out, '?');
+    }
+  return g_string_free (out, FALSE);
+}
+
 int
 cli_write_stdout (const char *out)
 {
-  if (fputs (out, stdout) != EOF && fflush (stdout) == 0)
+  g_autofree char *safe = cli_terminal_text (out);
+
+  if (fputs (safe, stdout) != EOF && fflush (stdout) == 0)
     return CLI_EXIT_OK;
   /* nowhere left to report a failure to write to stderr */
   (void) fprintf (stderr, "rugosa-cli: The result could not be written to "
@@ -175,10 +257,24 @@ cli_fail (const char *fmt, ...)
   va_start (ap, fmt);
   text = g_strdup_vprintf (fmt, ap);
   va_end (ap);
-  /* one line on stderr, whatever a message quoted */
-  for (char *p = text; *p != '\0'; p++)
-    if ((unsigned char) *p < 0x20 || *p == 0x7F)
-      *p = '?';
+  /* one line on stderr, whatever a message quoted: no line end and no
+   * other control character (C0, DEL, C1) reaches the terminal */
+  {
+    g_autofree char *valid = g_utf8_make_valid (text, -1);
+    GString *line = g_string_sized_new (strlen (valid));
+
+    for (const char *p = valid; *p != '\0'; p = g_utf8_next_char (p))
+      {
+        gunichar c = g_utf8_get_char (p);
+
+        if (g_unichar_iscntrl (c))
+          g_string_append_c (line, '?');
+        else
+          g_string_append_unichar (line, c);
+      }
+    g_free (text);
+    text = g_string_free (line, FALSE);
+  }
   /* nowhere left to report a failure to write to stderr */
   (void) fprintf (stderr, "rugosa-cli: %s\n", text);
   return CLI_EXIT_USAGE;
@@ -238,6 +334,7 @@ cli_parse_number (const char *what, const char *text, double *out,
       g_string_printf (message, _("%s must be a finite number, not \"%s\"."), what, shown);
       return FALSE;
     }
-  *out = v;
+  /* "-0" is zero: nothing downstream should print a sign for it */
+  *out = v == 0.0 ? 0.0 : v;
   return TRUE;
 }

@@ -123,7 +123,11 @@ cli_load_project (const CliArgs *args, const char *command)
       return NULL;
     }
   project = rugosa_project_new ();
-  if (!rugosa_project_load (project, g_ptr_array_index (args->positional, 0), &error))
+  /* "-": standard input, named explicitly, read to its end within the
+   * size limit (a file path is refused unless it is a regular file) */
+  if (g_str_equal (g_ptr_array_index (args->positional, 0), "-")
+      ? !rugosa_project_load_stream (project, 0, _("standard input"), &error)
+      : !rugosa_project_load (project, g_ptr_array_index (args->positional, 0), &error))
     {
       cli_fail ("%s", error->message);
       return NULL;
@@ -178,7 +182,10 @@ cli_cmd_eval (int argc, char **argv)
   else if (g_str_equal (format_text, "json"))
     format = RUGOSA_EVAL_FORMAT_JSON;
   else
-    return cli_fail (_("--format must be table, csv or json, not \"%s\"."), format_text);
+    {
+      g_autofree char *shown = cli_echo (format_text);
+      return cli_fail (_("--format must be table, csv or json, not \"%s\"."), shown);
+    }
   if ((project = cli_load_project (&args, "eval")) == NULL)
     return CLI_EXIT_USAGE;
   if ((status = apply_energy_options (&args, project)) != CLI_EXIT_OK)
@@ -190,7 +197,7 @@ cli_cmd_eval (int argc, char **argv)
 
 static const CliOption render_options[] = {
   { "-o", TRUE, FALSE },
-  { "--output", TRUE, FALSE },
+  { "--output", TRUE, FALSE },   /* the same as -o (cli-args.c) */
   { "--width", TRUE, FALSE },
   { "--height", TRUE, FALSE },
   { "--age", TRUE, FALSE },
@@ -254,9 +261,7 @@ cli_cmd_render (int argc, char **argv)
 
   if (!cli_args_parse (&args, "render", render_options, argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
-  path = cli_args_get (&args, "-o");
-  if (path == NULL)
-    path = cli_args_get (&args, "--output");
+  path = cli_args_get (&args, "-o");   /* or --output */
   if (path == NULL || *path == '\0')
     return cli_fail (_("-o is required: the file to write, ending in .png, .svg or .pdf."));
   if (g_str_has_suffix (path, ".png") || g_str_has_suffix (path, ".PNG"))
@@ -266,7 +271,10 @@ cli_cmd_render (int argc, char **argv)
   else if (g_str_has_suffix (path, ".pdf") || g_str_has_suffix (path, ".PDF"))
     format = RUGOSA_CHART_FORMAT_PDF;
   else
-    return cli_fail (_("-o must name a file ending in .png, .svg or .pdf, not \"%s\"."), path);
+    {
+      g_autofree char *shown = cli_echo (path);
+      return cli_fail (_("-o must name a file ending in .png, .svg or .pdf, not \"%s\"."), shown);
+    }
   if (!parse_size (&args, "--width", 1600.0, &width)
       || !parse_size (&args, "--height", 1000.0, &height)
       || !cli_parse_age_option (&args, &age))
@@ -277,7 +285,10 @@ cli_cmd_render (int argc, char **argv)
   else if (g_str_equal (theme_text, "dark"))
     theme = RUGOSA_CHART_THEME_DARK;
   else
-    return cli_fail (_("--theme must be light or dark, not \"%s\"."), theme_text);
+    {
+      g_autofree char *shown = cli_echo (theme_text);
+      return cli_fail (_("--theme must be light or dark, not \"%s\"."), shown);
+    }
   view_text = cli_args_get (&args, "--view");
   if (view_text != NULL && !rugosa_chart_view_from_id (view_text, &view))
     {
@@ -307,7 +318,8 @@ cli_cmd_render (int argc, char **argv)
     }
   if (!ok)
     {
-      (void) fprintf (stderr, "rugosa-cli: %s\n", error->message);
+      /* one line, whatever the file name holds */
+      cli_fail ("%s", error->message);
       return error->code == RUGOSA_CHART_ERROR_WRITE ? CLI_EXIT_FAILURE : CLI_EXIT_USAGE;
     }
   return CLI_EXIT_OK;

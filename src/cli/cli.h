@@ -24,7 +24,11 @@ typedef struct {
 } CliArgs;
 
 /* Parses argv[first..argc) against `options`.  On failure fills `message`
- * with one sentence and returns FALSE. */
+ * with one sentence and returns FALSE.  An option that takes a value
+ * takes the next argument, whatever it looks like ("-o --help" names a
+ * file).  --help or -h where an option stands prints the usage and ends
+ * the program (cli_usage).  An option given twice, in one spelling or in
+ * two ("-o" and "--output"), is refused unless it is repeatable. */
 gboolean cli_args_parse (CliArgs *args, const char *command,
                          const CliOption *options, int argc, char **argv,
                          int first, GString *message);
@@ -42,10 +46,19 @@ GPtrArray *cli_args_get_all (const CliArgs *args, const char *name);
  * Free with g_free. */
 char *cli_echo (const char *text);
 
-/* Writes `out` to stdout and flushes it: CLI_EXIT_OK, or CLI_EXIT_FAILURE
- * with a sentence on stderr when the output cannot be written (a full disk,
- * a closed pipe). */
+/* `text` safe for a terminal: valid UTF-8, and every control character
+ * (C0, DEL, C1) but tab and line ends shown as '?', or, in JSON (text that
+ * begins with '{' or '['), written as a \u escape.  Free with g_free. */
+char *cli_terminal_text (const char *text);
+
+/* Writes `out`, made safe for a terminal (cli_terminal_text), to stdout
+ * and flushes it: CLI_EXIT_OK, or CLI_EXIT_FAILURE with a sentence on
+ * stderr when the output cannot be written (a full disk, a closed pipe). */
 int cli_write_stdout (const char *out);
+
+/* Prints the usage to stdout: CLI_EXIT_OK, or CLI_EXIT_FAILURE when it
+ * cannot be written (rugosa-cli.c). */
+int cli_usage (void);
 
 /* Reports a usage error: "rugosa-cli: <sentence>" on stderr. */
 int cli_fail (const char *fmt, ...) G_GNUC_PRINTF (1, 2);

@@ -47,6 +47,12 @@ static const char usage_text[] = N_(
   "stated ranges. Check designs against the applicable local codes and have\n"
   "them reviewed by a qualified, licensed engineer.\n");
 
+int
+cli_usage (void)
+{
+  return cli_write_stdout (_(usage_text));
+}
+
 /* True when the command writes machine-readable output (JSON or CSV). */
 static gboolean
 machine_output (int argc, char **argv)
@@ -94,30 +100,26 @@ main (int argc, char **argv)
     textdomain (GETTEXT_PACKAGE);
   }
 
+  /* A short hint, not thirty lines of usage on stderr. */
   if (argc < 2)
-    {
-      (void) fputs (_(usage_text), stderr);
-      return CLI_EXIT_USAGE;
-    }
+    return cli_fail (_("No command given; see 'rugosa-cli --help'."));
   if (g_str_equal (argv[1], "--help") || g_str_equal (argv[1], "-h")
-      || g_str_equal (argv[1], "help"))
+      || g_str_equal (argv[1], "help") || g_str_equal (argv[1], "--version"))
     {
-      return cli_write_stdout (_(usage_text));
+      if (argc > 2)
+        {
+          g_autofree char *shown = cli_echo (argv[2]);
+          return cli_fail (_("%s takes no other argument, not \"%s\"."), argv[1], shown);
+        }
+      if (g_str_equal (argv[1], "--version"))
+        return cli_write_stdout ("rugosa-cli " PACKAGE_VERSION "\n");
+      return cli_usage ();
     }
-  if (g_str_equal (argv[1], "--version"))
-    {
-      return cli_write_stdout ("rugosa-cli " PACKAGE_VERSION "\n");
-    }
+  /* Each command's parser prints the usage for --help where an option
+   * stands, and not for the value of an option (cli_args_parse). */
   for (gsize i = 0; i < G_N_ELEMENTS (commands); i++)
     if (g_str_equal (argv[1], commands[i].name))
-      {
-        for (int j = 2; j < argc; j++)
-          if (g_str_equal (argv[j], "--help") || g_str_equal (argv[j], "-h"))
-            {
-              return cli_write_stdout (_(usage_text));
-            }
-        return commands[i].run (argc, argv);
-      }
+      return commands[i].run (argc, argv);
   g_autofree char *shown = cli_echo (argv[1]);
   return cli_fail (_("Unknown command \"%s\"; see 'rugosa-cli --help'."), shown);
 }

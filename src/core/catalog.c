@@ -14,7 +14,15 @@
  * The remaining tokens in written order are the key (the size comes before
  * the series; only the word "pvc" may stand anywhere): "NPS 2 Sch 40",
  * "2\" sch40" and "nps2 schedule 40" all give "2 40".  An unknown designation is reported
- * with the three closest designations by edit distance. */
+ * with the three closest designations by edit distance.
+ *
+ * The whole text must be understood: besides letters and digits it may
+ * hold only spaces, inch marks and quotes (" ' ″ “ ”), dashes (- ‐ ‑ –), an
+ * abbreviation point after a word ("Sch.40") and the decimal point or
+ * fraction bar of a number.  Any other character is refused, quoted; so
+ * are words left over after a designation ("NPS 4 Sch 40 Sch 160": the
+ * longest start of the tokens that is a designation is named, and the
+ * rest quoted) — nothing is dropped silently. */
 #include "catalog.h"
 
 #include "catalog-data.h"
@@ -23,7 +31,9 @@
 #include <stdlib.h>
 #include <string.h>
 
-enum { TOK_MAX = 8, TOK_LEN = 16, KEY_LEN = TOK_MAX * TOK_LEN };
+/* TOK_MAX: far more words than any designation has, so that a long text
+ * is read whole and what is left over can be named. */
+enum { TOK_MAX = 32, TOK_LEN = 16, KEY_LEN = TOK_MAX * TOK_LEN };
 
 static int
 to_lower (int c)
@@ -229,17 +239,36 @@ rg_material_lookup (const char *name, const RgMaterial **out, RgError *err)
 typedef struct {
   int n;
   char t[TOK_MAX][TOK_LEN];
+  /* where each token stands in the text: bytes [start, end) */
+  size_t start[TOK_MAX], end[TOK_MAX];
+  /* more tokens than TOK_MAX: where the first one not kept starts */
+  int overflow;
+  size_t overflow_at;
+  /* the first run of characters that belong to no designation */
+  int stray;
+  size_t stray_at, stray_len;
 } Tokens;
 
 static void
-push (Tokens *tk, const char *s, size_t len)
+push (Tokens *tk, const char *s, size_t len, size_t start, size_t end)
 {
-  if (tk->n >= TOK_MAX || len == 0)
+  if (len == 0)
     return;
+  if (tk->n >= TOK_MAX)
+    {
+      if (!tk->overflow)
+        {
+          tk->overflow = 1;
+          tk->overflow_at = start;
+        }
+      return;
+    }
   if (len > TOK_LEN - 1)
     len = TOK_LEN - 1;
   memcpy (tk->t[tk->n], s, len);
   tk->t[tk->n][len] = '\0';
+  tk->start[tk->n] = start;
+  tk->end[tk->n] = end;
   tk->n++;
 }
 
@@ -247,8 +276,22 @@ static void
 drop (Tokens *tk, int i)
 {
   for (int k = i; k + 1 < tk->n; k++)
-    memcpy (tk->t[k], tk->t[k + 1], TOK_LEN);
+    {
+      memcpy (tk->t[k], tk->t[k + 1], TOK_LEN);
+      tk->start[k] = tk->start[k + 1];
+      tk->end[k] = tk->end[k + 1];
+    }
   tk->n--;
+}
+
+/* Token i becomes the text `w` and reaches to the end of token i + 1,
+ * which goes. */
+static void
+merge_next (Tokens *tk, int i, const char *w)
+{
+  memcpy (tk->t[i], w, TOK_LEN);
+  tk->end[i] = tk->end[i + 1];
+  drop (tk, i + 1);
 }
 
 static int
@@ -333,22 +376,92 @@ decimal_to_fraction (char *w)
   (void) snprintf (w, TOK_LEN, "%.15s", tmp);
 }
 
+/* The bytes of a character that may stand between the words of a
+ * designation (spaces, inch marks, quotes, dashes), or 0. */
+static size_t
+separator_len (const char *s)
+{
+  static const char *const wide[] = {
+    "\xc2\xa0",     /* U+00A0 no-break space */
+    "\xe2\x80\x90", /* U+2010 hyphen */
+    "\xe2\x80\x91", /* U+2011 non-breaking hyphen */
+    "\xe2\x80\x93", /* U+2013 en dash */
+    "\xe2\x80\x9c", /* U+201C left double quotation mark */
+    "\xe2\x80\x9d", /* U+201D right double quotation mark */
+    "\xe2\x80\xb3", /* U+2033 double prime, the inch mark */
+  };
+  const unsigned char c = (unsigned char) *s;
+
+  if (c == ' ' || c == '\t' || c == '"' || c == '\'' || c == '-')
+    return 1;
+  for (size_t i = 0; i < sizeof wide / sizeof wide[0]; i++)
+    if (strncmp (s, wide[i], strlen (wide[i])) == 0)
+      return strlen (wide[i]);
+  return 0;
+}
+
+/* The bytes of one character at s (a broken byte counts alone). */
+static size_t
+char_len (const char *s)
+{
+  const unsigned char c = (unsigned char) *s;
+  size_t n = c >= 0xF0 ? 4 : c >= 0xE0 ? 3 : c >= 0xC0 ? 2 : 1;
+
+  for (size_t i = 1; i < n; i++)
+    if (((unsigned char) s[i] & 0xC0) != 0x80)
+      return 1;
+  return n;
+}
+
+/* Note the run of characters at s that belong to no designation (up to
+ * the next letter, digit or separator, at most 12 bytes of whole
+ * characters); returns its length. */
+static size_t
+note_stray (Tokens *tk, const char *begin, const char *s)
+{
+  size_t len = 0;
+
+  while (s[len] != '\0' && !is_alpha ((unsigned char) s[len])
+         && !is_digit ((unsigned char) s[len]) && separator_len (s + len) == 0)
+    {
+      size_t n = char_len (s + len);
+      if (!tk->stray && len + n > 12)
+        break;
+      len += n;
+    }
+  if (len == 0)
+    len = char_len (s);
+  if (!tk->stray)
+    {
+      tk->stray = 1;
+      tk->stray_at = (size_t) (s - begin);
+      tk->stray_len = len;
+    }
+  return len;
+}
+
 static void
 tokenize (const char *s, Tokens *tk)
 {
   const char *begin = s;
 
-  tk->n = 0;
+  memset (tk, 0, sizeof *tk);
   while (*s)
     {
       const unsigned char c = (unsigned char) *s;
-      /* A number starts with a digit, or with a decimal point followed by a
-       * digit and not glued to a word ("Sch.40" is an abbreviation point). */
-      if ((c == '/' || c == '.')
-          && (c == '/' || !is_digit ((unsigned char) s[1])
-              || (s > begin && is_alpha ((unsigned char) s[-1]))))
+      size_t sep;
+
+      /* A point glued to a word is an abbreviation point ("Sch.40"). */
+      if (c == '.' && s > begin && is_alpha ((unsigned char) s[-1]))
         {
           s++;
+          continue;
+        }
+      /* A number starts with a digit, or with a decimal point followed by
+       * a digit; a bar or a point elsewhere is no part of a designation. */
+      if (c == '/' || (c == '.' && !is_digit ((unsigned char) s[1])))
+        {
+          s += note_stray (tk, begin, s);
           continue;
         }
       if (is_num_char (c))
@@ -364,14 +477,15 @@ tokenize (const char *s, Tokens *tk)
               size_t l = len < TOK_LEN - 2 ? len : TOK_LEN - 2;
               memcpy (w, start, l);
               w[l] = 's';
-              push (tk, w, l + 1);
               s++;
+              push (tk, w, l + 1, (size_t) (start - begin), (size_t) (s - begin));
             }
           else
-            push (tk, start, len);
+            push (tk, start, len, (size_t) (start - begin), (size_t) (s - begin));
         }
       else if (is_alpha (c))
         {
+          const char *start = s;
           char w[TOK_LEN];
           size_t l = 0;
           while (is_alpha ((unsigned char) *s))
@@ -380,10 +494,16 @@ tokenize (const char *s, Tokens *tk)
                 w[l++] = (char) to_lower ((unsigned char) *s);
               s++;
             }
-          push (tk, w, l);
+          /* Filler words carry nothing: they are understood, and they
+           * take no room among the tokens. */
+          w[l] = '\0';
+          if (!is_filler (w))
+            push (tk, w, l, (size_t) (start - begin), (size_t) (s - begin));
         }
+      else if ((sep = separator_len (s)) > 0)
+        s += sep;
       else
-        s++; /* spaces, quotes, inch marks, dashes, any non-ASCII byte */
+        s += note_stray (tk, begin, s);
     }
 
   /* "pe 100", "pe 80": the material grade, not a size. */
@@ -397,46 +517,40 @@ tokenize (const char *s, Tokens *tk)
         i--;
       }
   for (int i = 0; i < tk->n; i++)
-    if (is_filler (tk->t[i]))
-      drop (tk, i--);
-  for (int i = 0; i < tk->n; i++)
     decimal_to_fraction (tk->t[i]);
   for (int i = 0; i + 1 < tk->n; i++)
     {
+      char w[TOK_LEN];
+
       if (strcmp (tk->t[i], "sdr") == 0 && is_integer (tk->t[i + 1]))
         {
-          char w[TOK_LEN];
           (void) snprintf (w, sizeof w, "sdr%.10s", tk->t[i + 1]);
-          memcpy (tk->t[i], w, TOK_LEN);
-          drop (tk, i + 1);
+          merge_next (tk, i, w);
         }
       else if (is_integer (tk->t[i]) && strcmp (tk->t[i + 1], "s") == 0)
         {
           /* "10 S" written apart: the stainless schedule 10S. */
-          char w[TOK_LEN];
           (void) snprintf (w, sizeof w, "%.10ss", tk->t[i]);
-          memcpy (tk->t[i], w, TOK_LEN);
-          drop (tk, i + 1);
+          merge_next (tk, i, w);
         }
       else if (is_integer (tk->t[i]) && is_fraction (tk->t[i + 1]))
         {
-          char w[TOK_LEN];
           (void) snprintf (w, sizeof w, "%.5s-%.9s", tk->t[i], tk->t[i + 1]);
-          memcpy (tk->t[i], w, TOK_LEN);
-          drop (tk, i + 1);
+          merge_next (tk, i, w);
         }
     }
 }
 
-/* The key: tokens in written order (size before series), except the
- * material word "pvc", which may stand anywhere and goes last. */
+/* The key of the first `n` tokens: in written order (size before series),
+ * except the material word "pvc", which may stand anywhere and goes
+ * last. */
 static void
-join (const Tokens *tk, char *out)
+join (const Tokens *tk, int n, char *out)
 {
   int pvc = 0;
 
   out[0] = '\0';
-  for (int i = 0; i < tk->n; i++)
+  for (int i = 0; i < n; i++)
     {
       if (strcmp (tk->t[i], "pvc") == 0)
         {
@@ -456,7 +570,7 @@ designation_key (const char *s, char *out)
 {
   Tokens tk;
   tokenize (s, &tk);
-  join (&tk, out);
+  join (&tk, tk.n, out);
 }
 
 int
@@ -523,21 +637,65 @@ match_or_closest (const char *key, int best[3])
   return -1;
 }
 
+/* The first pipe whose normalised designation is exactly `key`, or -1. */
+static int
+exact_match (const char *key)
+{
+  char other[KEY_LEN + TOK_MAX];
+
+  for (int i = 0; i < rg_catalog_pipes_count; i++)
+    {
+      designation_key (rg_catalog_pipes[i].designation, other);
+      if (strcmp (key, other) == 0)
+        return i;
+    }
+  return -1;
+}
+
 RgStatus
 rg_pipe_lookup (const char *designation, const RgPipe **out, RgError *err)
 {
   char key[KEY_LEN + TOK_MAX];
   char near[200];
   int best[3], found;
+  Tokens tk;
 
   if (designation == NULL)
     designation = "";
-  designation_key (designation, key);
-  found = match_or_closest (key, best);
+  tokenize (designation, &tk);
+  if (tk.stray)
+    return rg_error_set_on (err, RG_ERR_PARSE, RG_SUBJECT_BIT (RG_SUBJECT_PIPE),
+                            "The pipe designation \"%.40s\" holds \"%.*s\", which is no part of a designation.",
+                            designation, (int) tk.stray_len, designation + tk.stray_at);
+  join (&tk, tk.n, key);
+  found = tk.overflow ? -1 : match_or_closest (key, best);
   if (found >= 0)
     {
       *out = &rg_catalog_pipes[found];
       return RG_OK;
+    }
+  /* Words left over after a designation: the longest start of the tokens
+   * that is one is named, and the rest of the text quoted from the end of
+   * its last token. */
+  for (int n = tk.overflow ? tk.n : tk.n - 1; n >= 1; n--)
+    {
+      int i;
+      const char *rest;
+
+      join (&tk, n, key);
+      if ((i = exact_match (key)) < 0)
+        continue;
+      rest = designation + tk.end[n - 1];
+      while (*rest != '\0' && separator_len (rest) > 0)
+        rest += separator_len (rest);
+      return rg_error_set_on (err, RG_ERR_PARSE, RG_SUBJECT_BIT (RG_SUBJECT_PIPE),
+                              "Only the start of the pipe designation \"%.40s\" is understood, as %s; the rest, \"%.30s\", is not.",
+                              designation, rg_catalog_pipes[i].designation, rest);
+    }
+  if (tk.overflow)
+    {
+      join (&tk, tk.n, key);
+      match_or_closest (key, best);
     }
   format_closest (best, pipe_designation_at, near, sizeof near);
   return rg_error_set_on (err, RG_ERR_NOT_FOUND,

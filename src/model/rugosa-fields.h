@@ -168,4 +168,18 @@ const char *rugosa_field_label (const RugosaField *field);
 gboolean rugosa_field_in_range (const RugosaField *field, double stored,
                                 const char *unit, RgError *err);
 
+/* Whether a text takes `text` as it is, on load and on entry: valid
+ * UTF-8, no control character (Unicode Cc: C0, DEL and C1; a MULTILINE
+ * row takes line breaks and tabs) and at most the row's `max_chars`
+ * characters.  `field` may be NULL: one line, no length limit.  Each face
+ * words the refusal its own way (rugosa-project-load.c). */
+typedef enum {
+  RUGOSA_TEXT_OK,
+  RUGOSA_TEXT_NOT_UTF8,
+  RUGOSA_TEXT_CONTROL,
+  RUGOSA_TEXT_TOO_LONG,
+} RugosaTextProblem;
+RugosaTextProblem rugosa_field_text_problem (const RugosaField *field,
+                                             const char *text);
+
 G_END_DECLS

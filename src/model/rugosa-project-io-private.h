@@ -15,7 +15,7 @@ G_BEGIN_DECLS
  * for any real project. */
 #define RUGOSA_FILE_MAX_BYTES (16 * 1024 * 1024)
 #define RUGOSA_FILE_MAX_DEPTH 32
-#define RUGOSA_FILE_MAX_LINES 1000
+#define RUGOSA_FILE_MAX_LINES 10000
 #define RUGOSA_FILE_MAX_FITTINGS 200
 
 /* Where in the document an error is: the JSON path being read. */
@@ -36,6 +36,10 @@ const char *_rugosa_json_type_name (const cJSON *v);
  * and duplicate keys, in that order (docs/file-format.md); NULL and an
  * error otherwise. */
 cJSON *_rugosa_project_parse (const char *data, gsize length, GError **error);
+
+/* "lines: more than N line options": the reader refuses a list that long
+ * while reading, the loader one that the reader could not count. */
+gboolean _rugosa_project_fail_lines (RugosaJsonCtx *ctx);
 
 /* Fill `project` (new and empty) from the tree. */
 gboolean _rugosa_project_load_tree (RugosaJsonCtx *ctx, const cJSON *root,

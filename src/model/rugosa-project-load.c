@@ -139,20 +139,29 @@ read_number (Ctx *ctx, const cJSON *v, const RugosaField *row, double *out)
   return TRUE;
 }
 
-/* True when `s` holds a control character the field does not take. */
-static gboolean
-has_control (const char *s, gboolean multiline)
+RugosaTextProblem
+rugosa_field_text_problem (const RugosaField *field, const char *text)
 {
-  for (const char *p = s; *p != '\0'; p = g_utf8_next_char (p))
+  gboolean multiline = field != NULL && (field->flags & RUGOSA_FIELD_MULTILINE);
+  glong n = 0;
+
+  /* cJSON decodes a lone surrogate escape as bytes that are not UTF-8. */
+  if (!g_utf8_validate (text, -1, NULL))
+    return RUGOSA_TEXT_NOT_UTF8;
+  for (const char *p = text; *p != '\0'; p = g_utf8_next_char (p), n++)
     {
       gunichar c = g_utf8_get_char (p);
 
       if (multiline && (c == '\n' || c == '\t'))
         continue;
+      /* Cc: C0, DEL and C1, among them ESC and CSI, which a terminal or a
+       * CSV reader would act on */
       if (g_unichar_iscntrl (c))
-        return TRUE;
+        return RUGOSA_TEXT_CONTROL;
     }
-  return FALSE;
+  if (field != NULL && field->max_chars > 0 && n > field->max_chars)
+    return RUGOSA_TEXT_TOO_LONG;
+  return RUGOSA_TEXT_OK;
 }
 
 static gboolean
@@ -161,18 +170,23 @@ read_string (Ctx *ctx, const cJSON *v, const RugosaField *row, const char **out)
   if (!cJSON_IsString (v))
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
                  _("expected a string, found %s"), type_name (v));
-  /* cJSON decodes a lone surrogate escape as bytes that are not UTF-8. */
-  if (!g_utf8_validate (v->valuestring, -1, NULL))
-    return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 _("the string is not valid UTF-8"));
-  if (row->max_chars > 0 && g_utf8_strlen (v->valuestring, -1) > row->max_chars)
-    return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 _("the string is longer than %d characters"), row->max_chars);
-  if (has_control (v->valuestring, (row->flags & RUGOSA_FIELD_MULTILINE) != 0))
-    return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 (row->flags & RUGOSA_FIELD_MULTILINE)
-                   ? _("the text holds a control character other than a line break or a tab")
-                   : _("the text holds a control character (a line break, a tab or another)"));
+  switch (rugosa_field_text_problem (row, v->valuestring))
+    {
+    case RUGOSA_TEXT_NOT_UTF8:
+      return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                   _("the string is not valid UTF-8"));
+    case RUGOSA_TEXT_TOO_LONG:
+      return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                   _("the string is longer than %d characters"), row->max_chars);
+    case RUGOSA_TEXT_CONTROL:
+      return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                   (row->flags & RUGOSA_FIELD_MULTILINE)
+                     ? _("the text holds a control character other than a line break or a tab")
+                     : _("the text holds a control character (a line break, a tab or another)"));
+    case RUGOSA_TEXT_OK:
+    default:
+      break;
+    }
   *out = v->valuestring;
   return TRUE;
 }
@@ -249,8 +263,9 @@ load_fittings (Ctx *ctx, const cJSON *arr, GVariant **out, cJSON **extras_out)
               fail (ctx, RUGOSA_PROJECT_ERROR_VALUE, _("expected a string, found %s"), type_name (id));
               goto error;
             }
-          if (g_utf8_strlen (id->valuestring, -1) > 120 || has_control (id->valuestring, FALSE)
-              || !g_utf8_validate (id->valuestring, -1, NULL))
+          /* an id: one line, as short as the catalog's (no row of its own) */
+          if (rugosa_field_text_problem (NULL, id->valuestring) != RUGOSA_TEXT_OK
+              || g_utf8_strlen (id->valuestring, -1) > 120)
             {
               fail (ctx, RUGOSA_PROJECT_ERROR_VALUE, _("expected a fitting id of the catalog"));
               goto error;
@@ -815,9 +830,10 @@ _rugosa_project_load_tree (Ctx *ctx, const cJSON *root, RugosaProject *project)
   if (!cJSON_IsArray (lines))
     return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
                  _("expected an array, found %s"), type_name (lines));
+  /* The reader counts them before parsing; a key it could not see
+   * (spelled with escapes) is counted here. */
   if (cJSON_GetArraySize (lines) > RUGOSA_FILE_MAX_LINES)
-    return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
-                 _("more than %d line options"), RUGOSA_FILE_MAX_LINES);
+    return _rugosa_project_fail_lines (ctx);
   for (const cJSON *e = lines->child; e != NULL; e = e->next, i++)
     {
       g_autoptr (RugosaLine) line = rugosa_line_new (NULL);

@@ -7,6 +7,7 @@
 #include <gio/gio.h>
 
 #include "rugosa-evaluation.h"
+#include "rugosa-file.h"
 #include "rugosa-line.h"
 #include "rugosa-settings.h"
 
@@ -28,7 +29,7 @@ typedef enum {
 #define RUGOSA_PROJECT_FORMAT_NAME "rugosa-line-options"
 #define RUGOSA_PROJECT_FORMAT_VERSION 1
 /* Backup of the previous file kept by a save: the file name plus this. */
-#define RUGOSA_PROJECT_BACKUP_SUFFIX "~"
+#define RUGOSA_PROJECT_BACKUP_SUFFIX RUGOSA_FILE_BACKUP_SUFFIX
 
 #define RUGOSA_TYPE_PROJECT (rugosa_project_get_type ())
 G_DECLARE_FINAL_TYPE (RugosaProject, rugosa_project, RUGOSA, PROJECT, GObject)
@@ -60,6 +61,11 @@ RugosaProject *rugosa_project_new_from_data (const char *data, gsize length,
  * `self` is left exactly as it was. */
 gboolean rugosa_project_load (RugosaProject *self, const char *path,
                               GError **error);
+/* The same from a stream the user named explicitly (standard input: `fd`
+ * 0), read to its end and refused as soon as it passes the size limit;
+ * `name` names it in messages. */
+gboolean rugosa_project_load_stream (RugosaProject *self, int fd,
+                                     const char *name, GError **error);
 /* The file text (UTF-8, ends with a newline); free with g_free. */
 char *rugosa_project_to_data (RugosaProject *self, gsize *length);
 /* Write atomically (temporary file in the same folder, fsync, rename) and
@@ -69,20 +75,9 @@ gboolean rugosa_project_save (RugosaProject *self, const char *path,
 /* True when projects a and b hold the same settings and lines. */
 gboolean rugosa_project_equal (RugosaProject *a, RugosaProject *b);
 
-/* Test hook: called before each step of a save; returning an errno value
- * makes that step fail with it.  For RUGOSA_SAVE_STEP_SHORT_WRITE (asked
- * before every write ()) a positive return is no error but the most bytes
- * that write may take, as a signal or a nearly full disk can cause.
- * NULL restores normal saving. */
-typedef enum {
-  RUGOSA_SAVE_STEP_WRITE,
-  RUGOSA_SAVE_STEP_FSYNC,
-  RUGOSA_SAVE_STEP_RENAME,
-  RUGOSA_SAVE_STEP_CLOSE,
-  RUGOSA_SAVE_STEP_BACKUP,
-  RUGOSA_SAVE_STEP_SHORT_WRITE,
-} RugosaSaveStep;
-typedef int (*RugosaSaveFaultHook) (RugosaSaveStep step, gpointer user_data);
+/* Test hook: rugosa_file_set_fault_hook (rugosa-file.h), which every
+ * file Rugosa writes goes through; kept under this name for the tests of
+ * saving. */
 void rugosa_project_set_save_fault_hook (RugosaSaveFaultHook hook,
                                          gpointer user_data);
 
@@ -106,6 +101,11 @@ guint64 rugosa_project_get_evaluation_count (RugosaProject *self);
  * independent of the locale. */
 gboolean rugosa_project_format_eval (RugosaProject *self, double age_years,
                                      RugosaEvalFormat format, GString *out,
+                                     GError **error);
+/* The same written to `path` atomically (rugosa-file.h); a failure to
+ * write is RUGOSA_PROJECT_ERROR_IO, one sentence naming the file. */
+gboolean rugosa_project_export_eval (RugosaProject *self, double age_years,
+                                     RugosaEvalFormat format, const char *path,
                                      GError **error);
 
 G_END_DECLS
