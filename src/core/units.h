@@ -83,6 +83,12 @@ const char *rg_units_accepted (RgQuantity q);
 const char *rg_units_choice (RgQuantity q, int i);
 
 /* Pressures are absolute everywhere in Rugosa: "psi" and "psia" both mean
- * pound-force per square inch absolute, "bar" is absolute; gauge spellings
- * ("psig", "barg", "kPag", …) are refused with a sentence that says to add
- * the atmospheric pressure. */
+ * pound-force per square inch absolute, "bar" is absolute, and absolute may
+ * be said outright ("bara", "psi(a)", "kPa(a)", "MPa a"); gauge spellings
+ * ("psig", "barg", "kPag", "bar(g)", …) are refused with a sentence that
+ * says to add the atmospheric pressure.  They are refused rather than
+ * converted with an assumed atmosphere because the atmosphere of the site
+ * is not known here: it is 101.325 kPa at sea level but about 84 kPa at
+ * 1500 m, and an air line's density would shift with the guess unseen.
+ * A difference of pressures (a pressure drop) has no gauge or absolute
+ * reading: "psi" and "kPa" serve it as they are. */
