@@ -545,6 +545,42 @@ test_per_day_flow (void)
                 "bbl/d");
 }
 
+/* How a unit is written for a reader: the offered choice of the same
+ * spelling, else of the same size. */
+static void
+test_display_spelling (void)
+{
+  static const struct {
+    RgQuantity q;
+    const char *unit, *shown;
+  } cases[] = {
+    { RG_QTY_FLOW, "m3/d", "m³/d" },
+    { RG_QTY_FLOW, "m3/day", "m³/d" },
+    { RG_QTY_FLOW, "MLD", "ML/d" },
+    { RG_QTY_FLOW, "USgpm", "gpm" },
+    { RG_QTY_FLOW, "Mgal/d", "MGD" },
+    { RG_QTY_FLOW, "BPD", "bbl/d" },
+    { RG_QTY_FLOW, "ft3/s", "cfs" },
+    { RG_QTY_ROUGHNESS, "um", "µm" },
+    { RG_QTY_TEMPERATURE, "F", "°F" },
+    { RG_QTY_PRESSURE, "bara", "bar" },
+    { RG_QTY_PRESSURE, "kPa(a)", "kPa" },
+    { RG_QTY_DYN_VISCOSITY, "mPa.s", "mPa·s" },
+    { RG_QTY_GRADIENT, "m/100m", "m/100 m" },
+    /* not a unit of the quantity, a gauge pressure, nothing */
+    { RG_QTY_LENGTH, "gpm", NULL },
+    { RG_QTY_FLOW, "furlongs", NULL },
+    { RG_QTY_PRESSURE, "psig", NULL },
+    { RG_QTY_FLOW, "", NULL },
+    { RG_QTY_FLOW, NULL, NULL },
+    { RG_QTY_N, "m", NULL },
+  };
+
+  for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
+    g_assert_cmpstr (rg_units_display_spelling (cases[i].q, cases[i].unit), ==,
+                     cases[i].shown);
+}
+
 /* Pressures are absolute (units.h): absolute may be said outright, a gauge
  * pressure is refused with a sentence that names the atmosphere to add. */
 static void
@@ -861,6 +897,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/units/parse/spellings", test_spellings);
   g_test_add_func ("/units/parse/per-day-flow", test_per_day_flow);
   g_test_add_func ("/units/parse/pressure-absolute", test_pressure_absolute);
+  g_test_add_func ("/units/display-spelling", test_display_spelling);
   g_test_add_func ("/units/parse/bad-input", test_bad_input);
   g_test_add_func ("/units/parse/viscosity", test_viscosity);
   g_test_add_func ("/units/convert/errors", test_conversion_errors);

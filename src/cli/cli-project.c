@@ -74,7 +74,7 @@ cli_cmd_eval (int argc, char **argv)
   const char *format_text;
   double age;
 
-  if (!cli_args_parse (&args, "eval", eval_options, argc, argv, 2, msg))
+  if (!cli_args_parse (&args, "eval", cli_options_with_units (eval_options), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (!cli_parse_age_option (&args, &age))
     return CLI_EXIT_USAGE;
@@ -88,6 +88,9 @@ cli_cmd_eval (int argc, char **argv)
   else
     return cli_fail (_("--format must be table, csv or json, not \"%s\"."), format_text);
   if ((project = cli_load_project (&args, "eval")) == NULL)
+    return CLI_EXIT_USAGE;
+  /* the project's display units, unless the options say otherwise */
+  if (!cli_apply_units (&args, rugosa_project_get_settings (project)))
     return CLI_EXIT_USAGE;
   if (!rugosa_project_format_eval (project, age, format, out, &error))
     return cli_fail ("%s", error->message);
@@ -155,7 +158,7 @@ cli_cmd_render (int argc, char **argv)
   const char *path, *theme_text;
   double age, width, height;
 
-  if (!cli_args_parse (&args, "render", render_options, argc, argv, 2, msg))
+  if (!cli_args_parse (&args, "render", cli_options_with_units (render_options), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   path = cli_args_get (&args, "-o");
   if (path == NULL)
@@ -182,6 +185,9 @@ cli_cmd_render (int argc, char **argv)
   else
     return cli_fail (_("--theme must be light or dark, not \"%s\"."), theme_text);
   if ((project = cli_load_project (&args, "render")) == NULL)
+    return CLI_EXIT_USAGE;
+  /* the readouts of the chart in the project's units, or the options' */
+  if (!cli_apply_units (&args, rugosa_project_get_settings (project)))
     return CLI_EXIT_USAGE;
   if (age >= 0.0)
     g_object_set (rugosa_project_get_settings (project), "service-age", age, NULL);

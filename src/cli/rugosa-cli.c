@@ -55,6 +55,17 @@ machine_output (int argc, char **argv)
   return FALSE;
 }
 
+/* The usage, then the output units (their options are derived from the
+ * display-unit table, so their paragraph is written at run time). */
+static int
+write_help (void)
+{
+  g_autofree char *units = cli_units_help ();
+  g_autofree char *text = g_strconcat (_(usage_text), "\n", units, NULL);
+
+  return cli_write_stdout (text);
+}
+
 int
 main (int argc, char **argv)
 {
@@ -98,7 +109,7 @@ main (int argc, char **argv)
   if (g_str_equal (argv[1], "--help") || g_str_equal (argv[1], "-h")
       || g_str_equal (argv[1], "help"))
     {
-      return cli_write_stdout (_(usage_text));
+      return write_help ();
     }
   if (g_str_equal (argv[1], "--version"))
     {
@@ -110,7 +121,7 @@ main (int argc, char **argv)
         for (int j = 2; j < argc; j++)
           if (g_str_equal (argv[j], "--help") || g_str_equal (argv[j], "-h"))
             {
-              return cli_write_stdout (_(usage_text));
+              return write_help ();
             }
         return commands[i].run (argc, argv);
       }

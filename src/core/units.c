@@ -1179,6 +1179,19 @@ display_symbol (RgQuantity q, const UnitDef *def, const char *norm)
   return NULL;
 }
 
+const char *
+rg_units_display_spelling (RgQuantity q, const char *unit)
+{
+  char norm[UNIT_MAX];
+  const UnitDef *def = NULL;
+  RgQuantity other = q;
+
+  if (!valid_quantity (q) || unit == NULL
+      || find_unit (q, unit, &def, &other, norm) != LOOKUP_FOUND || def == NULL)
+    return NULL;
+  return display_symbol (q, def, norm);
+}
+
 /* Strips the zeros that end the decimals of a number written with
  * "%.*f" (and the decimal separator itself when nothing is left after it);
  * the separator is whatever is not a digit or a sign. */

@@ -82,6 +82,13 @@ const char *rg_units_accepted (RgQuantity q);
  * unknown q.  Every choice is accepted by rg_units_to_si/_from_si. */
 const char *rg_units_choice (RgQuantity q, int i);
 
+/* How `unit`, a spelling rg_units_to_si accepts for q, is written for a
+ * reader: the offered choice spelled the same once normalised ("m3/d" is
+ * "m³/d", "um" is "µm"), else the first offered choice of the same size
+ * ("USgpm" is "gpm", "bara" is "bar"); NULL when `unit` is no unit of q or
+ * no offered choice has its size. */
+const char *rg_units_display_spelling (RgQuantity q, const char *unit);
+
 /* Pressures are absolute everywhere in Rugosa: "psi" and "psia" both mean
  * pound-force per square inch absolute, "bar" is absolute, and absolute may
  * be said outright ("bara", "psi(a)", "kPa(a)", "MPa a"); gauge spellings
