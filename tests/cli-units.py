@@ -1,6 +1,7 @@
 #!/usr/bin/python3
 # SPDX-License-Identifier: GPL-3.0-or-later
-"""rugosa-cli's output units.
+"""rugosa-cli's output units and its warnings about results far beyond any
+practical line.
 
 Run: cli-units.py PATH/TO/rugosa-cli
 (RUGOSA_SOURCE_DIR: the source tree, for the display-unit table of
@@ -11,7 +12,10 @@ src/model/rugosa-units.c, the demo project and the manual page.)
 - The same line and project read in US units give back, converted by hand
   with the exact factors of NIST SP 811, the values of the SI run; JSON
   stays SI whatever the units.
-- The defaults: the project's units for eval, SI for the other commands."""
+- The defaults: the project's units for eval, SI for the other commands.
+- A velocity or gradient far beyond any practical line: exit status 0, the
+  warning on stderr and among the warnings, the likely unit mistake named
+  for a bare number."""
 import csv
 import io
 import json
@@ -266,6 +270,69 @@ with tempfile.TemporaryDirectory() as tmp:
 # line defaults to SI, whatever unit the input was typed in
 check("line default is SI", si_rows["Mean velocity"][1] == "m/s" and si_rows["Inner diameter"][1] == "mm")
 
+
+# ---- results far beyond any practical line ---------------------------------
+BASE = ["--diameter", "100 mm", "--length", "100 m", "--roughness", "0.045 mm",
+        "--fluid", "water", "--temperature", "20 C", "--json"]
+FAR = "far beyond any practical line"
+
+
+def line_json(*args):
+    code, out, err = run("line", *args)
+    doc = json.loads(out) if code == 0 else {}
+    return code, doc, err
+
+
+code, doc, err = line_json("--flow", "18", *BASE)
+w = [x for x in doc.get("warnings", []) if FAR in x]
+check("bare flow: exit 0", code == 0, err)
+check("bare flow: one warning", len(w) == 1, doc.get("warnings"))
+check("bare flow: names the mistake", w and "a bare number for --flow is in m³/s; did you mean 18 L/s?" in w[0], w)
+check("bare flow: the same sentence on stderr", w and err == f"rugosa-cli: warning: {w[0]}\n", err)
+code, doc, err = line_json("--flow", "18", *BASE, "--units", "us")
+check("bare flow, US units: gpm suggested", "did you mean 18 gpm?" in err, err)
+code, doc, err = line_json("--flow", " 18 ", *BASE, "--flow-unit", "m3/h")
+check("bare flow: the flow unit shown is suggested", "did you mean 18 m³/h?" in err, err)
+code, doc, err = line_json("--flow", "18", *BASE, "--flow-unit", "m3/s")
+check("bare flow in the unit shown: no mistake to name",
+      code == 0 and FAR in err and "bare number" not in err, err)
+code, doc, err = line_json("--flow", "18 m3/s", *BASE)
+check("flow with its unit: checked, no bare number", code == 0 and FAR in err
+      and "bare number" not in err and "check the flow and the inner diameter" in err, err)
+code, doc, err = line_json("--flow", "0.012", *BASE)
+check("bare flow, plausible: nothing said", code == 0 and err == ""
+      and not any(FAR in x for x in doc.get("warnings", [])), err)
+# the table carries the warning too
+code, out, err = run("line", "--flow", "18", *BASE[:-1])
+check("bare flow: table warns", code == 0 and FAR in out and FAR in err, out[-400:] + err)
+
+# Thresholds: common practice (no single source), stated in src/cli/cli-plausible.c:
+# 30 m/s in a liquid, 100 m/s in a gas (below 100 kg/m³), 1000 m per 100 m in a liquid.
+import math
+area = math.pi * 0.1**2 / 4
+for v, far in ((29.9, False), (30.1, True)):
+    _, doc, err = line_json("--flow", f"{v * area!r} m3/s", *BASE)
+    check(f"liquid at {v} m/s", (FAR in err) == far and abs(doc["velocity_m_s"] - v) < 1e-9, err)
+AIR = ["--diameter", "100 mm", "--length", "10 m", "--roughness", "0.045 mm",
+       "--fluid", "air", "--temperature", "20 C", "--pressure", "2 bar", "--json"]
+for v, far in ((60.0, False), (99.9, False), (100.1, True)):
+    _, doc, err = line_json("--flow", f"{v * area!r} m3/s", *AIR)
+    check(f"air at {v} m/s", (FAR in err) == far and doc["density_kg_m3"] < 100, err)
+CUSTOM = ["--flow", "12 L/s", "--diameter", "100 mm", "--length", "100 m",
+          "--roughness", "0.045 mm", "--fluid", "custom", "--density", "998 kg/m3", "--json"]
+code, doc, err = line_json(*CUSTOM, "--viscosity", "100")
+check("bare viscosity: gradient far beyond", code == 0 and doc["gradient_m_per_100m"] > 1000
+      and "a bare number for --viscosity is in Pa·s; did you mean 100 mPa·s?" in err, err)
+code, doc, err = line_json(*CUSTOM, "--viscosity", "100 cP")
+check("viscosity with its unit, plausible", code == 0 and err == "", err)
+# around the gradient threshold: the viscosity that gives 1000 m per 100 m
+# in laminar flow (f = 64/Re, so the gradient is proportional to it)
+_, doc, _ = line_json(*CUSTOM, "--viscosity", "10 Pa.s")
+mu_edge = 10 * 1000 / doc["gradient_m_per_100m"]
+for factor, far in ((0.999, False), (1.001, True)):
+    _, doc, err = line_json(*CUSTOM, "--viscosity", f"{mu_edge * factor!r} Pa.s")
+    check(f"gradient {doc.get('gradient_m_per_100m')}", (FAR in err) == far
+          and doc.get("regime") == "laminar", err)
 
 print(f"{passed} passed, {failed} failed")
 sys.exit(1 if failed else 0)

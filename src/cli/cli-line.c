@@ -573,6 +573,7 @@ cli_cmd_line (int argc, char **argv)
                           r->points[RUGOSA_FLOW_DESIGN].error);
   /* a copy, to add the warnings of the command line's own */
   point = r->points[RUGOSA_FLOW_DESIGN];
+  cli_check_plausible (&args, r, &point, settings);
 
   if (cli_args_has (&args, "--json"))
     {

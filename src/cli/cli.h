@@ -113,6 +113,13 @@ gboolean cli_apply_units (const CliArgs *args, RugosaSettings *settings);
 /* The paragraph of --help about the output units, translated. */
 char *cli_units_help (void);
 
+/* Results far beyond any practical line (cli-plausible.c, which states
+ * the thresholds): a warning on stderr and among the point's warnings,
+ * naming the likely unit mistake when the option behind it was a bare
+ * number; `units` are those the warning is written in. */
+void cli_check_plausible (const CliArgs *args, const RugosaLineResults *r,
+                          RugosaOperatingPoint *p, RugosaSettings *units);
+
 int cli_cmd_friction (int argc, char **argv);
 int cli_cmd_fluid (int argc, char **argv);
 int cli_cmd_line (int argc, char **argv);
