@@ -69,30 +69,37 @@ bare_number (const CliArgs *args, const char *property)
   return *end == '\0' ? text : NULL;
 }
 
-/* "A bare number for --flow is in m³/s; did you mean 18 L/s?" as the
- * second half of a warning, or NULL when the row's option was no bare
- * number (or the bare number is already in the unit shown). */
-static char *
-bare_hint (const CliArgs *args, const char *property, RugosaSettings *units)
+/* An option given as a bare number, and what it likely meant. */
+typedef struct {
+  const char *option;    /* "--flow" */
+  const char *si_unit;   /* what the bare number was read in: "m³/s" */
+  char *number;          /* the number as typed: "18" */
+  const char *meant;     /* the unit the output shows: "L/s" */
+} BareNumber;
+
+/* Whether the option of the row `property` was a bare number in another
+ * unit than the one the output shows for it (a bare number in the unit
+ * shown was no mistake).  Free `bare->number` with g_free. */
+static gboolean
+find_bare (const CliArgs *args, const char *property, RugosaSettings *units,
+           BareNumber *bare)
 {
   const RugosaField *row = rugosa_field_find (property);
   const RugosaDisplayInfo *info = rugosa_display_info (row->display);
   const char *text = bare_number (args, property);
   const char *unit;
-  g_autofree char *number = NULL;
 
   if (text == NULL || info == NULL)
-    return NULL;
+    return FALSE;
   unit = rugosa_settings_get_unit (units, row->display);
   if (g_strcmp0 (rg_units_display_spelling (info->quantity, unit),
                  rg_units_si_symbol (info->quantity)) == 0)
-    return NULL;
-  number = g_strstrip (g_strdup (text));
-  /* TRANSLATORS: an option, the SI unit, then the number typed with the
-   * unit shown for it: "--flow", "m³/s", "18", "L/s" */
-  return g_strdup_printf (_("a bare number for %s is in %s; did you mean %s %s?"),
-                          row->cli, rg_units_si_symbol (info->quantity), number,
-                          rugosa_display_unit_symbol (unit));
+    return FALSE;
+  bare->option = row->cli;
+  bare->si_unit = rg_units_si_symbol (info->quantity);
+  bare->number = g_strstrip (g_strdup (text));
+  bare->meant = rugosa_display_unit_symbol (unit);
+  return TRUE;
 }
 
 static void
@@ -123,18 +130,20 @@ cli_check_plausible (const CliArgs *args, const RugosaLineResults *r,
       const char *vu = rugosa_settings_get_unit (units, RUGOSA_DISPLAY_VELOCITY);
       g_autofree char *shown = rugosa_display_format_screen (RG_QTY_VELOCITY, v, vu);
       g_autofree char *limit = rugosa_display_format_screen (RG_QTY_VELOCITY, v_max, vu);
-      g_autofree char *hint = bare_hint (args, "flow-design", units);
       g_autofree char *text = NULL;
+      BareNumber bare = { 0 };
 
-      if (hint != NULL)
-        /* TRANSLATORS: a velocity, the threshold, then "a bare number for
-         * --flow is in m³/s; did you mean 18 L/s?" */
-        text = g_strdup_printf (_("The velocity %s is far beyond any practical line (above %s): %s"),
-                                shown, limit, hint);
+      if (find_bare (args, "flow-design", units, &bare))
+        /* TRANSLATORS: a velocity, the threshold, an option, the SI unit,
+         * the number typed and the unit shown: "2190 m/s", "30 m/s",
+         * "--flow", "m³/s", "18", "L/s" */
+        text = g_strdup_printf (_("The velocity %s is far beyond any practical line (above %s): a bare number for %s is in %s; did you mean %s %s?"),
+                                shown, limit, bare.option, bare.si_unit, bare.number, bare.meant);
       else
         text = g_strdup_printf (_("The velocity %s is far beyond any practical line (above %s): check the flow and the inner diameter, and their units."),
                                 shown, limit);
       warn (p, text);
+      g_free (bare.number);
     }
   else if (!gas && gradient > LIQUID_GRADIENT_MAX_M_PER_100M)
     {
@@ -142,19 +151,20 @@ cli_check_plausible (const CliArgs *args, const RugosaLineResults *r,
       g_autofree char *shown = rugosa_display_format_screen (RG_QTY_GRADIENT, gradient, gu);
       g_autofree char *limit = rugosa_display_format_screen (RG_QTY_GRADIENT,
                                                              LIQUID_GRADIENT_MAX_M_PER_100M, gu);
-      g_autofree char *hint = bare_hint (args, "flow-design", units);
       g_autofree char *text = NULL;
+      BareNumber bare = { 0 };
 
-      if (hint == NULL)
-        hint = bare_hint (args, "viscosity", units);
-      if (hint != NULL)
-        /* TRANSLATORS: a gradient, the threshold, then "a bare number for
-         * --viscosity is in Pa·s; did you mean 100 mPa·s?" */
-        text = g_strdup_printf (_("The pipe-friction gradient %s is far beyond any practical line (above %s): %s"),
-                                shown, limit, hint);
+      if (find_bare (args, "flow-design", units, &bare)
+          || find_bare (args, "viscosity", units, &bare))
+        /* TRANSLATORS: a gradient, the threshold, an option, the SI unit,
+         * the number typed and the unit shown: "4996 m/100 m",
+         * "1000 m/100 m", "--viscosity", "Pa·s", "100", "mPa·s" */
+        text = g_strdup_printf (_("The pipe-friction gradient %s is far beyond any practical line (above %s): a bare number for %s is in %s; did you mean %s %s?"),
+                                shown, limit, bare.option, bare.si_unit, bare.number, bare.meant);
       else
         text = g_strdup_printf (_("The pipe-friction gradient %s is far beyond any practical line (above %s): check the flow, the inner diameter and the viscosity, and their units."),
                                 shown, limit);
       warn (p, text);
+      g_free (bare.number);
     }
 }
