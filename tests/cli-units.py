@@ -27,7 +27,8 @@ import tempfile
 
 CLI = sys.argv[1]
 SRC = os.environ.get("RUGOSA_SOURCE_DIR", os.path.join(os.path.dirname(__file__), ".."))
-ENV = {"LANG": "C.UTF-8", "PATH": "/usr/bin:/bin"}
+# The caller's environment (sanitizer options among it), in a fixed locale.
+ENV = {**os.environ, "LANG": "C.UTF-8", "LC_ALL": "C.UTF-8", "LANGUAGE": ""}
 passed = failed = 0
 
 
