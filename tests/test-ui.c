@@ -973,6 +973,30 @@ test_screenshot (void)
   ui_harness_close_window (win);
 }
 
+/* The About window shows the version of meson.build (RUGOSA_PROJECT_VERSION,
+ * set by tests/meson.build from meson.project_version()), which reaches the
+ * program through config.h. */
+static void
+test_about_version (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  const char *expected = g_getenv ("RUGOSA_PROJECT_VERSION");
+  GtkWindow *about;
+  g_autofree char *version = NULL;
+
+  g_assert_nonnull (expected);
+  gtk_window_present (GTK_WINDOW (win));
+  ui_harness_drain ();
+  g_action_group_activate_action (G_ACTION_GROUP (app), "about", NULL);
+  ui_harness_drain ();
+  about = ui_harness_find_dialog (GTK_WINDOW (win), ADW_TYPE_ABOUT_WINDOW);
+  g_assert_nonnull (about);
+  g_object_get (about, "version", &version, NULL);
+  g_assert_cmpstr (version, ==, expected);
+  gtk_window_destroy (about);
+  ui_harness_close_window (win);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -1007,6 +1031,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/files/open-command-line", test_open_from_command_line);
   g_test_add_func ("/ui/files/drop", test_drop_file);
   g_test_add_func ("/ui/screenshot", test_screenshot);
+  g_test_add_func ("/ui/about/version", test_about_version);
 
   status = g_test_run ();
   g_object_unref (app);

@@ -18,6 +18,7 @@
 #define GAL (231.0 * IN * IN * IN)
 #define LB 0.45359237
 #define LBF (LB * 9.80665)
+#define DAY 86400.0
 /* Julian year, 365.25 d: the year units.c documents (not in SP 811, which
  * lists 365-day and tropical years). */
 #define YEAR (365.25 * 86400.0)
@@ -52,6 +53,14 @@ static const Factor FACTORS[] = {
   { RG_QTY_FLOW, "gpm", GAL / 60.0 },
   /* Source: NIST SP 811 (2008) B.8, foot = 0.3048 m */
   { RG_QTY_FLOW, "cfs", FT * FT * FT },
+  /* Source: NIST SP 811 (2008) B.8, day = 86 400 s; litre = 1e-3 m³ */
+  { RG_QTY_FLOW, "m³/d", 1.0 / DAY },
+  { RG_QTY_FLOW, "ML/d", 1.0e6 * 1.0e-3 / DAY },
+  /* Source: NIST SP 811 (2008) B.8, gallon (US) = 231 in³, day = 86 400 s */
+  { RG_QTY_FLOW, "MGD", 1.0e6 * GAL / DAY },
+  /* Source: NIST SP 811 (2008) B.8, barrel [for petroleum] = 42 gallons
+   * (US), day = 86 400 s */
+  { RG_QTY_FLOW, "bbl/d", 42.0 * GAL / DAY },
   /* Source: SI definition */
   { RG_QTY_LENGTH, "m", 1.0 },
   /* Source: SI prefixes (SI Brochure, 9th ed., Table 7) */
@@ -478,6 +487,187 @@ test_bad_input (void)
                 NULL);
 }
 
+/* The flow units of water supply and oil fields, every spelling, against
+ * the exact definitions they are made of, and against the rounded value
+ * NIST prints for the unit per day where it prints one. */
+static void
+test_per_day_flow (void)
+{
+  static const struct {
+    const char *text;
+    double si;
+  } exact[] = {
+    /* Source: NIST SP 811 (2008) B.8, day = 86 400 s */
+    { "864 m³/d", 864.0 / DAY },
+    { "864 m3/d", 864.0 / DAY },
+    { "864 m3/day", 864.0 / DAY },
+    /* Source: NIST SP 811 (2008) B.8, litre = 1e-3 m³; SI prefix mega = 1e6 */
+    { "2.5 ML/d", 2.5e3 / DAY },
+    { "2.5 Ml/d", 2.5e3 / DAY },
+    { "2.5 MLD", 2.5e3 / DAY },
+    { "2.5 mL/d", 2.5e-6 / DAY },
+    /* Source: NIST SP 811 (2008) B.8, gallon (US) = 231 in³, inch = 0.0254 m */
+    { "3 MGD", 3.0e6 * GAL / DAY },
+    { "3 mgd", 3.0e6 * GAL / DAY },
+    { "3 Mgal/d", 3.0e6 * GAL / DAY },
+    { "3 US MGD", 3.0e6 * GAL / DAY },
+    /* Source: NIST SP 811 (2008) B.8, barrel [for petroleum] = 42 gal (US) */
+    { "5000 bbl/d", 5000.0 * 42.0 * GAL / DAY },
+    { "5000 bbl/day", 5000.0 * 42.0 * GAL / DAY },
+    { "5000 BPD", 5000.0 * 42.0 * GAL / DAY },
+    { "5000 US bbl/d", 5000.0 * 42.0 * GAL / DAY },
+    /* Source: NIST SP 811 (2008) B.8, litre = 1e-3 m³, minute = 60 s */
+    { "600 L/min", 600.0e-3 / 60.0 },
+    { "600 l/min", 600.0e-3 / 60.0 },
+    { "600 lpm", 600.0e-3 / 60.0 },
+    /* Source: NIST SP 811 (2008) B.8, foot = 0.3048 m */
+    { "2 ft³/s", 2.0 * FT * FT * FT },
+    { "2 ft3/s", 2.0 * FT * FT * FT },
+    { "2 cfs", 2.0 * FT * FT * FT },
+  };
+  static const struct {
+    const char *unit;
+    double printed;
+  } nist[] = {
+    /* From memory of NIST SP 811 (2008) B.8, "gallon (U.S.) per day" =
+     * 4.381 264 E-08 m³/s; not checked against the document.  MGD is 1e6 of it. */
+    { "MGD", 4.381264e-2 },
+    /* From memory of NIST SP 811 (2008) B.8, "barrel [for petroleum, 42
+     * gallons (U.S.)]" = 1.589 873 E-01 m³; not checked against the
+     * document.  Per day: divided by 86 400 s. */
+    { "bbl/d", 1.589873e-1 / DAY },
+    /* From memory of NIST SP 811 (2008) B.8, "cubic foot per second" =
+     * 2.831 685 E-02 m³/s; not checked against the document */
+    { "ft3/s", 2.831685e-2 },
+  };
+
+  for (gsize i = 0; i < G_N_ELEMENTS (exact); i++)
+    {
+      double si = 0.0;
+      RgError err = { 0 };
+
+      if (rg_units_parse (RG_QTY_FLOW, "--flow", exact[i].text, &si, &err) != RG_OK)
+        g_error ("%s: %s", exact[i].text, err.text);
+      /* two or three roundings in the definition, one or two in units.c */
+      assert_close (si, exact[i].si, 6 * DBL_EPSILON, exact[i].text);
+    }
+  for (gsize i = 0; i < G_N_ELEMENTS (nist); i++)
+    {
+      double si = 0.0;
+
+      g_assert_cmpint (rg_units_to_si (RG_QTY_FLOW, 1.0, nist[i].unit, &si,
+                                       NULL), ==, RG_OK);
+      /* the printed values have 7 significant digits */
+      assert_close (si, nist[i].printed, 5e-7, nist[i].unit);
+    }
+  /* "ml/d" with case ignored could be millilitres or megalitres: refused,
+   * never read as the larger one */
+  expect_error (RG_QTY_FLOW, "2 ml/d", RG_ERR_UNIT, "unknown unit", "ML/d");
+  expect_error (RG_QTY_FLOW, "2 ML/D", RG_ERR_UNIT, "unknown unit", "ML/d");
+  /* every unit per day is listed in the refusal's list of units */
+  expect_error (RG_QTY_FLOW, "2 acre-ft/d", RG_ERR_UNIT, "unknown unit",
+                "m³/d, ML/d");
+  expect_error (RG_QTY_FLOW, "2 acre-ft/d", RG_ERR_UNIT, "unknown unit",
+                "MGD");
+  expect_error (RG_QTY_FLOW, "2 acre-ft/d", RG_ERR_UNIT, "unknown unit",
+                "bbl/d");
+}
+
+/* How a unit is written for a reader: the offered choice of the same
+ * spelling, else of the same size. */
+static void
+test_display_spelling (void)
+{
+  static const struct {
+    RgQuantity q;
+    const char *unit, *shown;
+  } cases[] = {
+    { RG_QTY_FLOW, "m3/d", "m³/d" },
+    { RG_QTY_FLOW, "m3/day", "m³/d" },
+    { RG_QTY_FLOW, "MLD", "ML/d" },
+    { RG_QTY_FLOW, "USgpm", "gpm" },
+    { RG_QTY_FLOW, "Mgal/d", "MGD" },
+    { RG_QTY_FLOW, "BPD", "bbl/d" },
+    { RG_QTY_FLOW, "ft3/s", "cfs" },
+    { RG_QTY_ROUGHNESS, "um", "µm" },
+    { RG_QTY_TEMPERATURE, "F", "°F" },
+    { RG_QTY_PRESSURE, "bara", "bar" },
+    { RG_QTY_PRESSURE, "kPa(a)", "kPa" },
+    { RG_QTY_DYN_VISCOSITY, "mPa.s", "mPa·s" },
+    { RG_QTY_GRADIENT, "m/100m", "m/100 m" },
+    /* not a unit of the quantity, a gauge pressure, nothing */
+    { RG_QTY_LENGTH, "gpm", NULL },
+    { RG_QTY_FLOW, "furlongs", NULL },
+    { RG_QTY_PRESSURE, "psig", NULL },
+    { RG_QTY_FLOW, "", NULL },
+    { RG_QTY_FLOW, NULL, NULL },
+    { RG_QTY_N, "m", NULL },
+  };
+
+  for (gsize i = 0; i < G_N_ELEMENTS (cases); i++)
+    g_assert_cmpstr (rg_units_display_spelling (cases[i].q, cases[i].unit), ==,
+                     cases[i].shown);
+}
+
+/* Pressures are absolute (units.h): absolute may be said outright, a gauge
+ * pressure is refused with a sentence that names the atmosphere to add. */
+static void
+test_pressure_absolute (void)
+{
+  static const char *const absolute[] = {
+    "2 bar", "2 bara", "2 bar(a)", "2 bar a", "2 bar·a",
+  };
+  static const char *const absolute_kpa[] = {
+    "200 kPa", "200 kPa(a)", "200 kPa a", "0.2 MPa(a)", "0.2 MPa a",
+  };
+  static const char *const gauge[] = {
+    "30 psig", "30 psi(g)", "30 psi g", "30 PSIG", "2 barg", "2 bar(g)",
+    "2 bar g", "200 kPag", "200 kPa(g)", "200 kPa g", "0.2 MPag",
+    "0.2 MPa(g)", "0.2 MPa g",
+  };
+  double si = 0.0;
+
+  for (gsize i = 0; i < G_N_ELEMENTS (absolute); i++)
+    {
+      RgError err = { 0 };
+
+      if (rg_units_parse (RG_QTY_PRESSURE, "--pressure", absolute[i], &si, &err) != RG_OK)
+        g_error ("%s: %s", absolute[i], err.text);
+      /* Source: NIST SP 811 (2008) B.8, bar = 1e5 Pa */
+      assert_close (si, 2.0e5, 2 * DBL_EPSILON, absolute[i]);
+    }
+  for (gsize i = 0; i < G_N_ELEMENTS (absolute_kpa); i++)
+    {
+      RgError err = { 0 };
+
+      if (rg_units_parse (RG_QTY_PRESSURE, "--pressure", absolute_kpa[i], &si, &err) != RG_OK)
+        g_error ("%s: %s", absolute_kpa[i], err.text);
+      /* Source: SI prefixes (SI Brochure, 9th ed., Table 7) */
+      assert_close (si, 2.0e5, 2 * DBL_EPSILON, absolute_kpa[i]);
+    }
+  /* Source: NIST SP 811 (2008) B.8, lbf = 0.45359237 kg × 9.80665 m/s² */
+  g_assert_cmpint (rg_units_parse (RG_QTY_PRESSURE, NULL, "30 psi(a)", &si, NULL), ==, RG_OK);
+  assert_close (si, 30.0 * LBF / (IN * IN), 4 * DBL_EPSILON, "30 psi(a)");
+  g_assert_cmpint (rg_units_parse (RG_QTY_PRESSURE, NULL, "30 psi a", &si, NULL), ==, RG_OK);
+  assert_close (si, 30.0 * LBF / (IN * IN), 4 * DBL_EPSILON, "30 psi a");
+  for (gsize i = 0; i < G_N_ELEMENTS (gauge); i++)
+    {
+      /* Source: NIST SP 811 (2008) B.8, standard atmosphere = 101 325 Pa,
+       * the atmosphere the sentence names */
+      expect_error (RG_QTY_PRESSURE, gauge[i], RG_ERR_UNIT, "gauge",
+                    "101.325 kPa");
+    }
+  /* the same refusal where a unit is named for a conversion */
+  {
+    RgError err = { 0 };
+
+    g_assert_cmpint (rg_units_from_si (RG_QTY_PRESSURE, 1.0e5, "barg", &si, &err),
+                     ==, RG_ERR_UNIT);
+    g_assert_nonnull (strstr (err.text, "gauge"));
+    g_assert_nonnull (strstr (err.text, "absolute"));
+  }
+}
+
 static void
 test_viscosity (void)
 {
@@ -733,6 +923,9 @@ main (int argc, char *argv[])
   g_test_add_func ("/units/temperature/points", test_temperature_points);
   g_test_add_func ("/units/choices/round-trip", test_choices_round_trip);
   g_test_add_func ("/units/parse/spellings", test_spellings);
+  g_test_add_func ("/units/parse/per-day-flow", test_per_day_flow);
+  g_test_add_func ("/units/parse/pressure-absolute", test_pressure_absolute);
+  g_test_add_func ("/units/display-spelling", test_display_spelling);
   g_test_add_func ("/units/parse/bad-input", test_bad_input);
   g_test_add_func ("/units/parse/viscosity", test_viscosity);
   g_test_add_func ("/units/convert/errors", test_conversion_errors);

@@ -19,6 +19,10 @@ struct _RugosaApplication
 
 G_DEFINE_FINAL_TYPE (RugosaApplication, rugosa_application, ADW_TYPE_APPLICATION)
 
+/* The preferences' schema (data/org.rugosa.Rugosa.gschema.xml), the same
+ * for the development profile. */
+#define RUGOSA_SCHEMA_ID "org.rugosa.Rugosa"
+
 RugosaApplication *
 rugosa_application_new (void)
 {
@@ -139,7 +143,7 @@ rugosa_application_startup (GApplication *app)
       g_message ("Recovery copies are not locked: %s", error->message);
   }
 
-  self->settings = g_settings_new ("org.rugosa.Rugosa");
+  self->settings = g_settings_new (RUGOSA_SCHEMA_ID);
   g_signal_connect (self->settings, "changed::color-scheme",
                     G_CALLBACK (_rugosa_application_on_color_scheme), self);
   _rugosa_application_apply_color_scheme (self);
@@ -283,6 +287,20 @@ rugosa_application_dispose (GObject *object)
   G_OBJECT_CLASS (rugosa_application_parent_class)->dispose (object);
 }
 
+/* Whether GSettings can find the preferences' schema.  Without it
+ * g_settings_new aborts the program with a GLib error, as happens when the
+ * program is started straight from a build folder. */
+static gboolean
+_rugosa_application_schema_found (void)
+{
+  GSettingsSchemaSource *source = g_settings_schema_source_get_default ();
+  g_autoptr (GSettingsSchema) schema = NULL;
+
+  if (source != NULL)
+    schema = g_settings_schema_source_lookup (source, RUGOSA_SCHEMA_ID, TRUE);
+  return schema != NULL;
+}
+
 static int
 rugosa_application_handle_local_options (GApplication *app,
                                          GVariantDict *options)
@@ -291,6 +309,18 @@ rugosa_application_handle_local_options (GApplication *app,
     {
       g_print ("%s %s\n", PACKAGE_NAME, PACKAGE_VERSION);
       return 0;
+    }
+  /* Say what is missing and how to run the program, rather than abort in
+   * g_settings_new.  The preferences are not replaced by defaults in
+   * memory: settings changed in such a session would be lost unseen. */
+  if (!_rugosa_application_schema_found ())
+    {
+      /* TRANSLATORS: %s is the schema's id, "org.rugosa.Rugosa" */
+      g_printerr (_("rugosa: The settings schema %s is not installed: install Rugosa, "
+                    "or start it from a build folder with GSETTINGS_SCHEMA_DIR set to "
+                    "that folder's data directory, as “build-aux/dev run” does.\n"),
+                  RUGOSA_SCHEMA_ID);
+      return 1;
     }
   return G_APPLICATION_CLASS (rugosa_application_parent_class)->handle_local_options (app, options);
 }

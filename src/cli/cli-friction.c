@@ -44,8 +44,17 @@ cli_cmd_friction (int argc, char **argv)
   const char *re_text, *rr_text;
   double re, rr;
 
-  if (!cli_args_parse (&args, "friction", friction_options, argc, argv, 2, msg))
+  /* The unit options are taken for the same command line to work on every
+   * command; the friction factor's inputs and results have no unit. */
+  if (!cli_args_parse (&args, "friction", cli_options_with_units (friction_options),
+                       argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
+  {
+    g_autoptr (RugosaSettings) units = rugosa_settings_new ();
+
+    if (!cli_apply_units (&args, units))
+      return CLI_EXIT_USAGE;
+  }
   if (args.positional->len > 0)
     {
       g_autofree char *shown = cli_echo (g_ptr_array_index (args.positional, 0));

@@ -21,8 +21,10 @@
 #include "core/fittings.h"
 #include "core/fluid.h"
 #include "core/units.h"
+#include "model/rugosa-display.h"
 #include "model/rugosa-fields.h"
 #include "model/rugosa-output.h"
+#include "model/rugosa-units.h"
 
 /* Options of the CLI's own that are no field: what they stand for. */
 static const struct {
@@ -70,6 +72,7 @@ options_for (gboolean fluid_only)
     CliOption json = { "--json", FALSE, FALSE };
     g_array_append_val (a, json);
   }
+  cli_unit_options_append (a);
   cache[fluid_only] = (CliOption *) g_array_free (a, FALSE);
   return cache[fluid_only];
 }
@@ -423,6 +426,18 @@ set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
   return CLI_EXIT_OK;
 }
 
+/* A row of the fluid table in the unit `units` show `dq` in. */
+static void
+fluid_table_number (GString *out, const char *label, double si,
+                    RugosaSettings *units, RugosaDisplayQuantity dq)
+{
+  const char *unit = rugosa_output_unit (units, dq);
+  double v = si;
+
+  (void) rg_units_from_si (rugosa_display_info (dq)->quantity, si, unit, &v, NULL);
+  cli_table_number (out, label, v, rugosa_display_unit_symbol (unit));
+}
+
 int
 cli_cmd_fluid (int argc, char **argv)
 {
@@ -446,9 +461,12 @@ cli_cmd_fluid (int argc, char **argv)
     return status;
   if (!apply_options (&args, TRUE, line, settings, &option, &err))
     return cli_fail_option (option, err.text);
+  if (!cli_apply_units (&args, settings))
+    return CLI_EXIT_USAGE;
   rugosa_line_get_fluid_spec (line, &spec);
   rg_warnings_clear (&warnings);
-  /* the core's sentences in the units of the SI system (°C, kPa …) */
+  /* the core's sentences in the output units (by default the SI system's:
+   * °C, kPa …) */
   err.units = warnings.units = rugosa_settings_get_unit_choice (settings);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
     return fail_subjects (&args, rg_fluid_subjects_behind (spec.kind, err.subjects), err.text);
@@ -469,9 +487,12 @@ cli_cmd_fluid (int argc, char **argv)
     }
   else
     {
-      cli_table_number (out, _("density"), props.density_kg_m3, "kg/m³");
-      cli_table_number (out, _("dynamic viscosity"), props.dynamic_viscosity_pa_s, "Pa·s");
-      cli_table_number (out, _("kinematic viscosity"), props.kinematic_viscosity_m2_s, "m²/s");
+      fluid_table_number (out, _("density"), props.density_kg_m3,
+                          settings, RUGOSA_DISPLAY_DENSITY);
+      fluid_table_number (out, _("dynamic viscosity"), props.dynamic_viscosity_pa_s,
+                          settings, RUGOSA_DISPLAY_DYNAMIC_VISCOSITY);
+      fluid_table_number (out, _("kinematic viscosity"), props.kinematic_viscosity_m2_s,
+                          settings, RUGOSA_DISPLAY_KINEMATIC_VISCOSITY);
       for (int i = 0; i < warnings.count; i++)
         {
           g_autofree char *line_text = g_strdup_printf (_("warning: %s"), warnings.text[i]);
@@ -489,9 +510,11 @@ cli_cmd_line (int argc, char **argv)
   g_autoptr (GString) out = g_string_new (NULL);
   g_autoptr (RugosaProject) project = rugosa_project_new ();
   g_autoptr (RugosaLine) line = rugosa_line_new ("line");
-  g_autoptr (RugosaSettings) units = rugosa_settings_new ();
+  /* the project's settings are also the output units: its warnings are
+   * written in them too */
   RugosaSettings *settings = rugosa_project_get_settings (project);
   const RugosaLineResults *r;
+  g_autofree RugosaLineResults *copy = NULL;
   const RugosaOperatingPoint *p;
   RgError err = { 0 };
   const char *option = NULL, *fluid, *failed = NULL;
@@ -525,6 +548,8 @@ cli_cmd_line (int argc, char **argv)
     return status;
   if (!apply_options (&args, FALSE, line, settings, &option, &err))
     return cli_fail_option (option, err.text);
+  if (!cli_apply_units (&args, settings))
+    return CLI_EXIT_USAGE;
   /* Without a roughness or material, the pipe's usual material. */
   if (!cli_args_has (&args, "--roughness") && !cli_args_has (&args, "--material"))
     {
@@ -541,11 +566,17 @@ cli_cmd_line (int argc, char **argv)
 
   rugosa_project_insert_line (project, 0, line);
   r = rugosa_project_get_results (project, line);
-  p = &r->points[RUGOSA_FLOW_DESIGN];
   if (!r->ok)
     return fail_subjects (&args, r->error_subjects, r->error);
-  if (!p->ok)
-    return fail_subjects (&args, p->error_subjects, p->error);
+  if (!r->points[RUGOSA_FLOW_DESIGN].ok)
+    return fail_subjects (&args, r->points[RUGOSA_FLOW_DESIGN].error_subjects,
+                          r->points[RUGOSA_FLOW_DESIGN].error);
+  /* a copy of the results, to add the warnings of the command line's own
+   * (whole, so that its design point is still the design point) */
+  copy = g_memdup2 (r, sizeof *r);
+  r = copy;
+  p = &copy->points[RUGOSA_FLOW_DESIGN];
+  cli_check_plausible (&args, copy, &copy->points[RUGOSA_FLOW_DESIGN], settings);
 
   if (cli_args_has (&args, "--json"))
     {
@@ -570,7 +601,7 @@ cli_cmd_line (int argc, char **argv)
           cli_pad (out, rugosa_field_label (rugosa_field_find ("material-id")), 38);
           g_string_append_printf (out, "%s\n", _(material->name));
         }
-      rugosa_output_point_table (out, r, p, units);
+      rugosa_output_point_table (out, r, p, settings);
     }
   return cli_write_stdout (out->str);
 }

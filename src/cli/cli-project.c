@@ -170,7 +170,7 @@ cli_cmd_eval (int argc, char **argv)
   double age;
   int status;
 
-  if (!cli_args_parse (&args, "eval", eval_options (), argc, argv, 2, msg))
+  if (!cli_args_parse (&args, "eval", cli_options_with_units (eval_options ()), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (!cli_parse_age_option (&args, &age))
     return CLI_EXIT_USAGE;
@@ -190,6 +190,9 @@ cli_cmd_eval (int argc, char **argv)
     return CLI_EXIT_USAGE;
   if ((status = apply_energy_options (&args, project)) != CLI_EXIT_OK)
     return status;
+  /* the project's display units, unless the options say otherwise */
+  if (!cli_apply_units (&args, rugosa_project_get_settings (project)))
+    return CLI_EXIT_USAGE;
   if (!rugosa_project_format_eval (project, age, format, out, &error))
     return cli_fail ("%s", error->message);
   return cli_write_stdout (out->str);
@@ -259,7 +262,7 @@ cli_cmd_render (int argc, char **argv)
   double age, width, height;
   gboolean ok;
 
-  if (!cli_args_parse (&args, "render", render_options, argc, argv, 2, msg))
+  if (!cli_args_parse (&args, "render", cli_options_with_units (render_options), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   path = cli_args_get (&args, "-o");   /* or --output */
   if (path == NULL || *path == '\0')
@@ -296,6 +299,9 @@ cli_cmd_render (int argc, char **argv)
       return cli_fail (_("--view must be friction, system or cost, not \"%s\"."), shown);
     }
   if ((project = cli_load_project (&args, "render")) == NULL)
+    return CLI_EXIT_USAGE;
+  /* the readouts of the chart in the project's units, or the options' */
+  if (!cli_apply_units (&args, rugosa_project_get_settings (project)))
     return CLI_EXIT_USAGE;
   if (age >= 0.0)
     g_object_set (rugosa_project_get_settings (project), "service-age", age, NULL);

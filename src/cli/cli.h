@@ -6,7 +6,9 @@
 #include <glib/gi18n.h>
 
 #include "core/status.h"
+#include "model/rugosa-enums.h"
 #include "model/rugosa-project.h"
+#include "model/rugosa-settings.h"
 
 /* Exit statuses: 0 success, 1 an internal failure (I/O), 2 bad input. */
 enum { CLI_EXIT_OK = 0, CLI_EXIT_FAILURE = 1, CLI_EXIT_USAGE = 2 };
@@ -106,6 +108,30 @@ void cli_table_row (GString *out, const char *label, const char *value,
                     const char *unit);
 void cli_table_number (GString *out, const char *label, double value,
                        const char *unit);
+
+/* Output units (cli-units.c): --units si|us and one --QUANTITY-unit option
+ * per display quantity, named after the quantity's id. */
+/* "--flow-unit" for RUGOSA_DISPLAY_FLOW; NULL for a plain number. */
+const char *cli_unit_option (RugosaDisplayQuantity dq);
+/* Appends the output-unit options to a GArray of CliOption. */
+void cli_unit_options_append (GArray *options);
+/* `options` (ending with a NULL name) followed by the output-unit options;
+ * made once per table. */
+const CliOption *cli_options_with_units (const CliOption *options);
+/* Sets the unit system and overrides of `settings` from the options given
+ * (none given: `settings` is left alone).  --units replaces the system and
+ * drops the overrides it had; each --QUANTITY-unit overrides its quantity.
+ * FALSE after writing the refusal to stderr (exit status 2). */
+gboolean cli_apply_units (const CliArgs *args, RugosaSettings *settings);
+/* The paragraph of --help about the output units, translated. */
+char *cli_units_help (void);
+
+/* Results far beyond any practical line (cli-plausible.c, which states
+ * the thresholds): a warning on stderr and among the point's warnings,
+ * naming the likely unit mistake when the option behind it was a bare
+ * number; `units` are those the warning is written in. */
+void cli_check_plausible (const CliArgs *args, const RugosaLineResults *r,
+                          RugosaOperatingPoint *p, RugosaSettings *units);
 
 int cli_cmd_friction (int argc, char **argv);
 int cli_cmd_fluid (int argc, char **argv);

@@ -47,10 +47,15 @@ static const char usage_text[] = N_(
   "stated ranges. Check designs against the applicable local codes and have\n"
   "them reviewed by a qualified, licensed engineer.\n");
 
+/* The usage, then the output units (their options are derived from the
+ * display-unit table, so their paragraph is written at run time). */
 int
 cli_usage (void)
 {
-  return cli_write_stdout (_(usage_text));
+  g_autofree char *units = cli_units_help ();
+  g_autofree char *text = g_strconcat (_(usage_text), "\n", units, NULL);
+
+  return cli_write_stdout (text);
 }
 
 /* True when the command writes machine-readable output (JSON or CSV). */
@@ -64,6 +69,7 @@ machine_output (int argc, char **argv)
       return TRUE;
   return FALSE;
 }
+
 
 int
 main (int argc, char **argv)

@@ -33,7 +33,8 @@
  * pound (avoirdupois) = 0.45359237 kg exactly, standard acceleration of
  * gravity 9.80665 m/s² exactly, atmosphere = 101325 Pa exactly,
  * bar = 1e5 Pa, poise = 0.1 Pa·s, stokes = 1e-4 m²/s, °F and °C as
- * T/K = (t/°F + 459.67)/1.8 and T/K = t/°C + 273.15).  The year is the
+ * T/K = (t/°F + 459.67)/1.8 and T/K = t/°C + 273.15, day = 86 400 s,
+ * barrel for petroleum = 42 US gallons = 0.158987294928 m³).  The year is the
  * Julian year of 365.25 d = 31 557 600 s (the "a" of the IAU; NIST SP 811
  * lists 365-day and tropical years too, so the choice is ours and stated
  * here).  Salinity: 1 g/kg = 1 ppt (parts per thousand by mass) = 1e-3.
@@ -67,6 +68,9 @@
 /* 550 ft·lbf/s = 550 × 0.3048 × 4.4482216152605 W, an exact decimal. */
 #define W_PER_HP 745.69987158227022
 #define J_PER_WH 3600.0
+/* The barrel for petroleum, 42 US gallons: the exact decimal
+ * 0.158987294928 m³ (NIST SP 811, B.8). */
+#define M3_PER_BBL 0.158987294928
 
 typedef struct {
   RgQuantity q;
@@ -89,6 +93,24 @@ static const UnitDef UNITS[] = {
   { RG_QTY_FLOW, "gal/min", M3S_PER_GPM, 0.0 },
   { RG_QTY_FLOW, "cfs", M3_PER_FT3, 0.0 },
   { RG_QTY_FLOW, "ft3/s", M3_PER_FT3, 0.0 },
+  /* flow per day, as water supply and oil fields count it: the day is
+   * 86 400 s, a megalitre 1e3 m³, MGD a million US gallons (NIST SP 811,
+   * B.8); "MGD" is always the US gallon here */
+  { RG_QTY_FLOW, "m3/d", 1.0 / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "m3/day", 1.0 / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "ML/d", 1.0e3 / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "Ml/d", 1.0e3 / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "MLD", 1.0e3 / S_PER_DAY, 0.0 },
+  /* millilitres per day: here so that "ml/d" (case ignored) matches two
+   * units and is refused, rather than read as megalitres */
+  { RG_QTY_FLOW, "mL/d", 1.0e-6 / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "MGD", 1.0e6 * M3_PER_USGAL / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "Mgal/d", 1.0e6 * M3_PER_USGAL / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "US.MGD", 1.0e6 * M3_PER_USGAL / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "bbl/d", M3_PER_BBL / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "bbl/day", M3_PER_BBL / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "BPD", M3_PER_BBL / S_PER_DAY, 0.0 },
+  { RG_QTY_FLOW, "US.bbl/d", M3_PER_BBL / S_PER_DAY, 0.0 },
   /* length, m */
   { RG_QTY_LENGTH, "m", 1.0, 0.0 },
   { RG_QTY_LENGTH, "cm", 1.0e-2, 0.0 },
@@ -140,6 +162,14 @@ static const UnitDef UNITS[] = {
   { RG_QTY_PRESSURE, "psi", N_PER_LBF / M2_PER_IN2, 0.0 },
   { RG_QTY_PRESSURE, "psia", N_PER_LBF / M2_PER_IN2, 0.0 },
   { RG_QTY_PRESSURE, "psi(a)", N_PER_LBF / M2_PER_IN2, 0.0 },
+  /* absolute said outright ("kPa(a)", "bar a"): the counterparts of the
+   * gauge spellings refused below */
+  { RG_QTY_PRESSURE, "psi.a", N_PER_LBF / M2_PER_IN2, 0.0 },
+  { RG_QTY_PRESSURE, "bar.a", 1.0e5, 0.0 },
+  { RG_QTY_PRESSURE, "kPa(a)", 1.0e3, 0.0 },
+  { RG_QTY_PRESSURE, "kPa.a", 1.0e3, 0.0 },
+  { RG_QTY_PRESSURE, "MPa(a)", 1.0e6, 0.0 },
+  { RG_QTY_PRESSURE, "MPa.a", 1.0e6, 0.0 },
   /* dynamic viscosity, Pa·s */
   { RG_QTY_DYN_VISCOSITY, "Pa.s", 1.0, 0.0 },
   { RG_QTY_DYN_VISCOSITY, "mPa.s", 1.0e-3, 0.0 },
@@ -222,8 +252,9 @@ static const char *const GAUGE[] = {
 };
 
 /* Display spellings offered per quantity (rg_units_choice). */
-static const char *const CHOICES[RG_QTY_N][8] = {
-  [RG_QTY_FLOW] = { "m³/s", "L/s", "L/min", "m³/h", "gpm", "cfs" },
+static const char *const CHOICES[RG_QTY_N][12] = {
+  [RG_QTY_FLOW] = { "m³/s", "L/s", "L/min", "m³/h", "gpm", "cfs",
+                    "m³/d", "ML/d", "MGD", "bbl/d" },
   [RG_QTY_LENGTH] = { "m", "cm", "mm", "km", "in", "ft" },
   [RG_QTY_ROUGHNESS] = { "m", "mm", "µm", "cm", "in", "ft" },
   [RG_QTY_TEMPERATURE] = { "K", "°C", "°F" },
@@ -243,7 +274,9 @@ static const char *const CHOICES[RG_QTY_N][8] = {
 /* The accepted units as a list for messages; the words in parentheses are
  * translated (rg_gettext), the unit symbols stay as they are. */
 static const char *const ACCEPTED[RG_QTY_N] = {
-  [RG_QTY_FLOW] = RG_N_ ("m³/s, L/s, L/min, m³/h, gpm (US gal/min), cfs (ft³/s)"),
+  [RG_QTY_FLOW] = RG_N_ ("m³/s, L/s, L/min, m³/h, m³/d, ML/d, gpm (US gal/min), "
+                         "MGD (million US gal/d), cfs (ft³/s), bbl/d (US oil barrels "
+                         "per day)"),
   [RG_QTY_LENGTH] = RG_N_ ("m, cm, mm, km, in (or \"), ft"),
   [RG_QTY_ROUGHNESS] = RG_N_ ("m, mm, µm (or um), cm, in, ft"),
   [RG_QTY_TEMPERATURE] = RG_N_ ("K, °C (or C), °F (or F)"),
@@ -1177,6 +1210,19 @@ display_symbol (RgQuantity q, const UnitDef *def, const char *norm)
         return CHOICES[q][i];
     }
   return NULL;
+}
+
+const char *
+rg_units_display_spelling (RgQuantity q, const char *unit)
+{
+  char norm[UNIT_MAX];
+  const UnitDef *def = NULL;
+  RgQuantity other = q;
+
+  if (!valid_quantity (q) || unit == NULL
+      || find_unit (q, unit, &def, &other, norm) != LOOKUP_FOUND || def == NULL)
+    return NULL;
+  return display_symbol (q, def, norm);
 }
 
 /* Strips the zeros that end the decimals of a number written with

@@ -84,7 +84,20 @@ const char *rg_units_accepted (RgQuantity q);
  * unknown q.  Every choice is accepted by rg_units_to_si/_from_si. */
 const char *rg_units_choice (RgQuantity q, int i);
 
+/* How `unit`, a spelling rg_units_to_si accepts for q, is written for a
+ * reader: the offered choice spelled the same once normalised ("m3/d" is
+ * "m³/d", "um" is "µm"), else the first offered choice of the same size
+ * ("USgpm" is "gpm", "bara" is "bar"); NULL when `unit` is no unit of q or
+ * no offered choice has its size. */
+const char *rg_units_display_spelling (RgQuantity q, const char *unit);
+
 /* Pressures are absolute everywhere in Rugosa: "psi" and "psia" both mean
- * pound-force per square inch absolute, "bar" is absolute; gauge spellings
- * ("psig", "barg", "kPag", …) are refused with a sentence that says to add
- * the atmospheric pressure. */
+ * pound-force per square inch absolute, "bar" is absolute, and absolute may
+ * be said outright ("bara", "psi(a)", "kPa(a)", "MPa a"); gauge spellings
+ * ("psig", "barg", "kPag", "bar(g)", …) are refused with a sentence that
+ * says to add the atmospheric pressure.  They are refused rather than
+ * converted with an assumed atmosphere because the atmosphere of the site
+ * is not known here: it is 101.325 kPa at sea level but about 84 kPa at
+ * 1500 m, and an air line's density would shift with the guess unseen.
+ * A difference of pressures (a pressure drop) has no gauge or absolute
+ * reading: "psi" and "kPa" serve it as they are. */

@@ -590,6 +590,8 @@ format_table (RugosaProject *self, double age, GString *out)
   int name_width = 4;
   char buf[G_ASCII_DTOSTR_BUF_SIZE];
   const char *flow_unit = rugosa_output_unit (units, RUGOSA_DISPLAY_FLOW);
+  int widths[G_N_ELEMENTS (cols)];
+  int flow_width = 10;
 
   G_STATIC_ASSERT (G_N_ELEMENTS (cols) == G_N_ELEMENTS (titles));
   for (guint i = 0; i < self->lines->len; i++)
@@ -605,17 +607,21 @@ format_table (RugosaProject *self, double age, GString *out)
   }
   append_cell (out, _("line"), name_width);
   append_cell (out, _("case"), 9);
+  /* "V (ft/s)": a column names its unit as a CSV column does; a column is
+   * at least as wide as its title and a space */
   {
-    g_autofree char *t = g_strdup_printf ("Q %s", rugosa_display_unit_symbol (flow_unit));
-    append_cell (out, t, 10);
+    g_autofree char *t = g_strdup_printf ("Q (%s)", rugosa_display_unit_symbol (flow_unit));
+    flow_width = MAX (flow_width, (int) g_utf8_strlen (t, -1) + 1);
+    append_cell (out, t, flow_width);
   }
   for (guint c = 0; c < G_N_ELEMENTS (cols); c++)
     {
       const RugosaOutputKey *k = rugosa_output_key_find (cols[c].key);
       const char *unit = rugosa_output_unit (units, k->display);
-      g_autofree char *t = unit ? g_strdup_printf ("%s %s", _(titles[c]), rugosa_display_unit_symbol (unit))
+      g_autofree char *t = unit ? g_strdup_printf ("%s (%s)", _(titles[c]), rugosa_display_unit_symbol (unit))
                                 : g_strdup (_(titles[c]));
-      append_cell (out, t, cols[c].width);
+      widths[c] = MAX (cols[c].width, (int) g_utf8_strlen (t, -1) + 1);
+      append_cell (out, t, widths[c]);
     }
   g_string_append (out, _("warnings"));
   g_string_append_c (out, '\n');
@@ -635,7 +641,8 @@ format_table (RugosaProject *self, double age, GString *out)
           append_cell (out, name, name_width);
           append_cell (out, rugosa_flow_case_id (c), 9);
           append_cell (out, g_ascii_formatd (buf, sizeof buf, "%.4g",
-                                             in_unit (RUGOSA_DISPLAY_FLOW, point_flow (line, r, c), flow_unit)), 10);
+                                             in_unit (RUGOSA_DISPLAY_FLOW, point_flow (line, r, c), flow_unit)),
+                       flow_width);
           if (!r->ok || !p->ok)
             {
               g_autofree char *e = g_strdup_printf (_("error: %s"), point_error (r, p));
@@ -648,12 +655,12 @@ format_table (RugosaProject *self, double age, GString *out)
               const RugosaOutputKey *key = rugosa_output_key_find (cols[k].key);
 
               if (key->kind == RUGOSA_OUTPUT_ID)
-                append_cell (out, key->id (p), cols[k].width);
+                append_cell (out, key->id (p), widths[k]);
               else
                 append_cell (out, g_ascii_formatd (buf, sizeof buf, "%.4g",
                                                    in_unit (key->display, key->number (r, p),
                                                             rugosa_output_unit (units, key->display))),
-                             cols[k].width);
+                             widths[k]);
             }
           g_string_append_printf (out, "%d\n", p->warnings.count);
           for (int w = 0; w < p->warnings.count; w++)
