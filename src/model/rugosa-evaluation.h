@@ -33,6 +33,11 @@ typedef struct {
   RgLineResult result_new;    /* when new */
   double head_loss_ratio_to_new;
   RgWarnings warnings;        /* at the service age */
+  /* The Hazen–Williams C that gives the pipe-friction loss at the service
+   * age: the design point of a line of water (or seawater) only. */
+  gboolean has_hazen_williams;
+  double hazen_williams_c;
+  guint hazen_williams_notes; /* RgHazenWilliamsNote bits: outside the usual range */
 } RugosaOperatingPoint;
 
 typedef struct {

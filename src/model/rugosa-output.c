@@ -11,6 +11,7 @@
 #include <string.h>
 
 #include "core/aging.h"
+#include "core/hazen-williams.h"
 #include "rugosa-display.h"
 #include "rugosa-fields.h"
 #include "rugosa-model-private.h"
@@ -41,6 +42,20 @@ static double get_roughness (const RugosaLineResults *r, const RugosaOperatingPo
 static double get_roughness_new (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return r->roughness_new_m; }
 static double get_ratio (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->head_loss_ratio_to_new; }
 static double get_k_total (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->minor_loss_k_total; }
+
+static double get_hw_c (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->hazen_williams_c; }
+static gboolean has_hw (const RugosaOperatingPoint *p) { return p->has_hazen_williams; }
+
+/* "usual", or the first note of rg_hazen_williams_notes (in the order of
+ * its bits: fluid, regime, velocity, bore). */
+static const char *
+id_hw_range (const RugosaOperatingPoint *p)
+{
+  for (unsigned b = 0; b < RG_HW_N_NOTES; b++)
+    if (p->hazen_williams_notes & (1u << b))
+      return rg_hazen_williams_note_id (1u << b);
+  return rg_hazen_williams_note_id (0);
+}
 
 static const char *id_regime (const RugosaOperatingPoint *p) { return rg_regime_id (p->result.friction.regime); }
 static const char *id_zone (const RugosaOperatingPoint *p) { return rg_roughness_zone_id (p->result.friction.zone); }
@@ -74,6 +89,8 @@ static const RugosaOutputKey KEYS[] = {
   NUMBER ("roughness_new", N_("Roughness when new"), ROUGHNESS, get_roughness_new, NULL),
   NUMBER ("head_loss_ratio_to_new", N_("Head loss, ratio to new"), NUMBER, get_ratio, NULL),
   NUMBER ("minor_loss_k_total", N_("ΣK of fittings"), NUMBER, get_k_total, NULL),
+  NUMBER ("hazen_williams_c_equivalent", N_("Hazen–Williams C equivalent"), NUMBER, get_hw_c, has_hw),
+  { "hazen_williams_range", N_("Hazen–Williams range"), RUGOSA_DISPLAY_NUMBER, RUGOSA_OUTPUT_ID, NULL, id_hw_range, has_hw },
   { "warnings", N_("Warnings"), RUGOSA_DISPLAY_NUMBER, RUGOSA_OUTPUT_WARNINGS, NULL, NULL, NULL },
 };
 

@@ -23,6 +23,7 @@
 #include "core/catalog.h"
 #include "core/fittings.h"
 #include "core/fluid.h"
+#include "core/hazen-williams.h"
 #include "core/line.h"
 #include "rugosa-display.h"
 #include "rugosa-fields.h"
@@ -85,6 +86,14 @@ lookup_pipe (RugosaProject *self, const char *designation, const RgPipe **pipe,
   if ((st = rg_pipe_lookup (designation, pipe, err)) == RG_OK)
     g_hash_table_insert (self->pipe_memo, g_strdup (designation), (gpointer) *pipe);
   return st;
+}
+
+void
+_rugosa_project_remember_pipe (RugosaProject *self, const RgPipe *pipe)
+{
+  /* a catalog designation finds its own row (tests/test-catalog.c) */
+  if (!g_hash_table_contains (self->pipe_memo, pipe->designation))
+    g_hash_table_insert (self->pipe_memo, g_strdup (pipe->designation), (gpointer) pipe);
 }
 
 void
@@ -154,6 +163,44 @@ add_point_warnings (RugosaOperatingPoint *p, const RgFluidSpec *spec,
   if (spec->kind == RG_FLUID_AIR)
     (void) rg_air_compressibility_warning (r->pressure_drop_pa, spec->pressure_pa,
                                            &p->warnings);
+}
+
+/* The lowest velocity is a criterion of the design flow (the lowest flow
+ * of a main is expected to fall below it: rugosa-fields.c). */
+static void
+add_minimum_velocity_warning (RugosaOperatingPoint *p, RugosaSettings *settings)
+{
+  const double v_min = settings->velocity_minimum;
+
+  if (v_min > 0.0 && p->result.velocity_m_s < v_min)
+    {
+      const char *unit = rugosa_settings_get_unit (settings, RUGOSA_DISPLAY_VELOCITY);
+      g_autofree char *v = rugosa_display_format_screen (RG_QTY_VELOCITY, p->result.velocity_m_s, unit);
+      g_autofree char *lim = rugosa_display_format_screen (RG_QTY_VELOCITY, v_min, unit);
+      g_autofree char *text = g_strdup_printf (_("The velocity %s is below the lowest velocity of %s."), v, lim);
+
+      rg_warnings_add (&p->warnings, "%s", text);
+    }
+}
+
+/* The Hazen–Williams C of a water line's design point, at the age shown. */
+static void
+add_hazen_williams (RugosaOperatingPoint *p, const RgFluidSpec *spec,
+                    double diameter, double length)
+{
+  const RgLineResult *r = &p->result;
+  double c;
+
+  if (spec->kind != RG_FLUID_WATER && spec->kind != RG_FLUID_SEAWATER)
+    return;
+  if (rg_hazen_williams_c (r->velocity_m_s, diameter, r->head_loss_major_m, length,
+                           &c, NULL) != RG_OK)
+    return;
+  p->has_hazen_williams = TRUE;
+  p->hazen_williams_c = c;
+  p->hazen_williams_notes = rg_hazen_williams_notes (spec->kind == RG_FLUID_WATER,
+                                                     r->friction.regime,
+                                                     r->velocity_m_s, diameter);
 }
 
 static void
@@ -331,8 +378,26 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
       for (int w = 0; w < fluid_warnings.count; w++)
         rg_warnings_add (&p->warnings, "%s", fluid_warnings.text[w]);
       add_point_warnings (p, &spec, model, settings);
+      if (c == RUGOSA_FLOW_DESIGN)
+        {
+          add_minimum_velocity_warning (p, settings);
+          add_hazen_williams (p, &spec, diameter, line->length);
+        }
     }
   g_free (uses);
+}
+
+void
+rugosa_project_evaluate_line (RugosaProject *self, RugosaLine *line,
+                              double age_years, RugosaLineResults *out)
+{
+  g_return_if_fail (RUGOSA_IS_PROJECT (self));
+  g_return_if_fail (RUGOSA_IS_LINE (line));
+  g_return_if_fail (out != NULL);
+
+  if (age_years < 0.0 || !isfinite (age_years))
+    age_years = self->settings->service_age;
+  evaluate_line (self, line, age_years, out);
 }
 
 const RugosaLineResults *

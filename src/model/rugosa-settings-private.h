@@ -22,6 +22,7 @@ struct _RugosaSettings
   double chart_re_min, chart_re_max, chart_f_min, chart_f_max;
   double service_age;
   double velocity_limit, gradient_limit;
+  double velocity_minimum;        /* 0: none */
 
   /* owned, not fields */
   cJSON *extra;
