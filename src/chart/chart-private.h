@@ -67,6 +67,12 @@ struct RugosaChart {
   cairo_surface_t *legend_img;     /* the legend as pixels, and its key */
   GString *legend_key;
 
+  /* the ladder of a sizing (chart-ladder.c) */
+  RugosaChartRung *ladder;
+  char **ladder_labels;
+  size_t n_ladder;
+  RugosaChartRgba ladder_colour;
+
   /* text */
   PangoContext *pango;
   GHashTable *layouts;             /* key text → PangoLayout */
@@ -149,6 +155,10 @@ void _rugosa_chart_draw_curve_labels (RugosaChart *chart, cairo_t *cr,
 
 /* chart-background.c */
 void _rugosa_chart_draw_background (RugosaChart *chart, cairo_t *cr);
+
+/* chart-ladder.c */
+void _rugosa_chart_draw_ladder (RugosaChart *chart, cairo_t *cr);
+void _rugosa_chart_free_ladder (RugosaChart *chart);
 
 /* chart-overlay.c */
 void _rugosa_chart_place_labels (RugosaChart *chart);
