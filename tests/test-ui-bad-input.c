@@ -239,8 +239,8 @@ static const Spin spins[] = {
   /*                                                  z  n  N  i  h  t  e  u  k  a  l */
   { "fitting-count", SPIN_FITTING_COUNT,            "arrrrrrrrrr" },
   { "oil-expansion", SPIN_OIL_EXPANSION,            "arrrrarrrrr" },
-  { "laminar-limit", SPIN_PREFERENCE,               "rrrrrrrrrrr" },
-  { "turbulent-limit", SPIN_PREFERENCE,             "rrrrrrrrrrr" },
+  { "re-laminar-max", SPIN_PREFERENCE,               "rrrrrrrrrrr" },
+  { "re-turbulent-min", SPIN_PREFERENCE,             "rrrrrrrrrrr" },
   { "velocity-limit", SPIN_PREFERENCE,              "rrrrrrrrrrr" },
   { "gradient-limit", SPIN_PREFERENCE,              "rrrrrrrrrrr" },
   { "service-age-max", SPIN_PREFERENCE,             "rrrrrrrrrrr" },
@@ -856,11 +856,11 @@ test_limits_out_of_order (void)
   double lam, turb, re_lam;
 
   set_base (RG_FLUID_WATER);
-  g_settings_reset (settings, "laminar-limit");
-  g_settings_set_double (settings, "turbulent-limit", 2500.0);
+  g_settings_reset (settings, "re-laminar-max");
+  g_settings_set_double (settings, "re-turbulent-min", 2500.0);
   ui_harness_drain ();
   prefs = rugosa_preferences_window_new (settings);
-  spin = find_pref_spin (GTK_WIDGET (prefs), settings, "laminar-limit");
+  spin = find_pref_spin (GTK_WIDGET (prefs), settings, "re-laminar-max");
   g_assert_nonnull (spin);
   ps = rugosa_project_get_settings (rugosa_window_get_project (win));
   g_object_get (ps, "re-laminar-max", &re_lam, NULL);
@@ -869,8 +869,8 @@ test_limits_out_of_order (void)
   gtk_spin_button_update (spin);
   ui_harness_drain ();
 
-  lam = g_settings_get_double (settings, "laminar-limit");
-  turb = g_settings_get_double (settings, "turbulent-limit");
+  lam = g_settings_get_double (settings, "re-laminar-max");
+  turb = g_settings_get_double (settings, "re-turbulent-min");
   record ("laminar-limit/above-turbulent", "2900", lam < turb ? 'r' : 'a',
           "inside its own range, but above the turbulent limit of 2500",
           gtk_widget_get_tooltip_text (GTK_WIDGET (spin)));
@@ -886,8 +886,8 @@ test_limits_out_of_order (void)
   assert_nothing_non_finite ();
 
   gtk_window_destroy (GTK_WINDOW (prefs));
-  g_settings_reset (settings, "laminar-limit");
-  g_settings_reset (settings, "turbulent-limit");
+  g_settings_reset (settings, "re-laminar-max");
+  g_settings_reset (settings, "re-turbulent-min");
   ui_harness_drain ();
 }
 

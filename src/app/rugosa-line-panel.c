@@ -88,7 +88,7 @@ static const struct {
   { "pressure", "unit-pressure", NULL },
   { "salinity", NULL, "g/kg" },
   { "density", "unit-density", NULL },
-  { "viscosity", "unit-viscosity", NULL },
+  { "viscosity", "unit-dynamic-viscosity", NULL },
   { "oil-t1", "unit-temperature", NULL },
   { "oil-nu1", NULL, "cSt" },
   { "oil-t2", "unit-temperature", NULL },
@@ -740,7 +740,7 @@ rugosa_line_panel_refresh (RugosaLinePanel *self)
   if (res != NULL && res->ok)
     {
       g_autofree char *ud = self->settings ? g_settings_get_string (self->settings, "unit-density") : NULL;
-      g_autofree char *uv = self->settings ? g_settings_get_string (self->settings, "unit-viscosity") : NULL;
+      g_autofree char *uv = self->settings ? g_settings_get_string (self->settings, "unit-dynamic-viscosity") : NULL;
       g_autofree char *rho = rugosa_display_format_screen (RG_QTY_DENSITY, res->density_kg_m3, ud);
       g_autofree char *mu = rugosa_display_format_screen (RG_QTY_DYN_VISCOSITY, res->dynamic_viscosity_pa_s, uv);
       g_autofree char *text = g_strdup_printf (_("ρ = %s · μ = %s"), rho, mu);

@@ -51,7 +51,7 @@ static const UnitKey unit_keys[] = {
   { "unit-head",        N_("Head loss"),          "m",      "ft" },
   { "unit-velocity",    N_("Mean velocity"),      "m/s",    "ft/s" },
   { "unit-density",     N_("Density"),            "kg/m3",  "lb/ft3" },
-  { "unit-viscosity",   N_("Dynamic viscosity"),  "mPa.s",  "cP" },
+  { "unit-dynamic-viscosity",   N_("Dynamic viscosity"),  "mPa.s",  "cP" },
   { "unit-gradient",    N_("Hydraulic gradient"), "m/100m", "ft/100ft" },
 };
 
@@ -230,13 +230,13 @@ _rugosa_prefs_limits_changed (GSettings               *settings,
                               const char              *key,
                               RugosaPreferencesWindow *self)
 {
-  gboolean laminar = g_strcmp0 (key, "laminar-limit") == 0;
+  gboolean laminar = g_strcmp0 (key, "re-laminar-max") == 0;
   double lam, turb;
 
-  if (!laminar && g_strcmp0 (key, "turbulent-limit") != 0)
+  if (!laminar && g_strcmp0 (key, "re-turbulent-min") != 0)
     return;
-  lam = g_settings_get_double (settings, "laminar-limit");
-  turb = g_settings_get_double (settings, "turbulent-limit");
+  lam = g_settings_get_double (settings, "re-laminar-max");
+  turb = g_settings_get_double (settings, "re-turbulent-min");
   if (lam < turb)
     {
       self->good_laminar = lam;
@@ -312,20 +312,20 @@ rugosa_preferences_window_new (GSettings *settings)
                                 G_SETTINGS_BIND_DEFAULT, _rugosa_prefs_get_index,
                                 _rugosa_prefs_set_index, (gpointer) scheme_nicks, NULL);
 
-  _rugosa_prefs_bind_spin (settings, "laminar-limit", self->laminar_spin);
-  _rugosa_prefs_bind_spin (settings, "turbulent-limit", self->turbulent_spin);
+  _rugosa_prefs_bind_spin (settings, "re-laminar-max", self->laminar_spin);
+  _rugosa_prefs_bind_spin (settings, "re-turbulent-min", self->turbulent_spin);
   _rugosa_prefs_bind_spin (settings, "velocity-limit", self->velocity_limit_spin);
   _rugosa_prefs_bind_spin (settings, "gradient-limit", self->gradient_limit_spin);
   _rugosa_prefs_bind_spin (settings, "service-age-max", self->age_max_spin);
 
   _rugosa_prefs_build_unit_rows (self);
 
-  self->good_laminar = g_settings_get_double (settings, "laminar-limit");
-  self->good_turbulent = g_settings_get_double (settings, "turbulent-limit");
+  self->good_laminar = g_settings_get_double (settings, "re-laminar-max");
+  self->good_turbulent = g_settings_get_double (settings, "re-turbulent-min");
   if (self->good_laminar >= self->good_turbulent)
     {
-      g_autoptr (GVariant) lam = g_settings_get_default_value (settings, "laminar-limit");
-      g_autoptr (GVariant) turb = g_settings_get_default_value (settings, "turbulent-limit");
+      g_autoptr (GVariant) lam = g_settings_get_default_value (settings, "re-laminar-max");
+      g_autoptr (GVariant) turb = g_settings_get_default_value (settings, "re-turbulent-min");
       self->good_laminar = g_variant_get_double (lam);
       self->good_turbulent = g_variant_get_double (turb);
     }

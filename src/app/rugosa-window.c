@@ -733,8 +733,8 @@ static void
 _rugosa_window_apply_preferences (RugosaWindow *self)
 {
   RugosaSettings *ps = rugosa_project_get_settings (self->project);
-  double lam = g_settings_get_double (self->settings, "laminar-limit");
-  double turb = g_settings_get_double (self->settings, "turbulent-limit");
+  double lam = g_settings_get_double (self->settings, "re-laminar-max");
+  double turb = g_settings_get_double (self->settings, "re-turbulent-min");
 
   g_object_set (ps,
                 "friction-model", g_settings_get_enum (self->settings, "friction-model"),
@@ -752,8 +752,8 @@ _rugosa_window_settings_changed (GSettings    *settings,
                                  const char   *key,
                                  RugosaWindow *self)
 {
-  if (g_str_equal (key, "friction-model") || g_str_equal (key, "laminar-limit")
-      || g_str_equal (key, "turbulent-limit") || g_str_equal (key, "velocity-limit")
+  if (g_str_equal (key, "friction-model") || g_str_equal (key, "re-laminar-max")
+      || g_str_equal (key, "re-turbulent-min") || g_str_equal (key, "velocity-limit")
       || g_str_equal (key, "gradient-limit"))
     _rugosa_window_apply_preferences (self);
   else if (g_str_has_prefix (key, "unit-"))
