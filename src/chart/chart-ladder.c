@@ -11,14 +11,18 @@
  * left, and ε/D falls, so each rung sits on a smoother curve than the one
  * before; whether f rises or falls from rung to rung shows which of the
  * two wins, and where the ladder crosses into the transitional or laminar
- * band the regime change is seen.  The recommended size gets a ring and
- * its designation; sizes chosen in the sizing's list get their designation
- * too.  Nothing else is labelled: a ladder of 60 sizes with labels would
- * bury the chart.
+ * band the regime change is seen.  The points are in the chart's ink, so
+ * they read on every band.  The recommended size gets a ring in the
+ * sizing's colour and its designation; sizes chosen in the sizing's list
+ * get their designation too, and the two ends theirs in small muted text.
+ * Nothing else is labelled: a ladder of 60 sizes with labels would bury
+ * the chart.
  *
  * The ladder is data of its own (rugosa_chart_set_ladder): it never
  * touches the cached background, and it is drawn on the screen only (the
- * exports and the print build their own chart without one).
+ * exports and the print build their own chart without one).  The line
+ * options' labels treat its points as places to keep clear of where they
+ * can (chart-overlay.c), as they do the background's labels.
  *
  * Cost per frame: for n rungs, n short curves of RUNG_SAMPLES Colebrook
  * solutions each (a fixed-step solver, well under a microsecond each), so
@@ -50,6 +54,8 @@ rugosa_chart_set_ladder (RugosaChart *chart, const RugosaChartRung *rungs,
                          size_t n_rungs, RugosaChartRgba colour)
 {
   _rugosa_chart_free_ladder (chart);
+  /* the lines' labels keep clear of the ladder where they can */
+  chart->placement_valid = 0;
   if (n_rungs == 0)
     return;
   chart->ladder = g_new (RugosaChartRung, n_rungs);
@@ -62,6 +68,27 @@ rugosa_chart_set_ladder (RugosaChart *chart, const RugosaChartRung *rungs,
       chart->ladder_labels[i] = g_strdup (rungs[i].label != NULL ? rungs[i].label : "");
       chart->ladder[i].label = chart->ladder_labels[i];
     }
+}
+
+size_t
+_rugosa_chart_ladder_boxes (RugosaChart *chart, RugosaChartRect *out)
+{
+  const double r = 5.0 * chart->lay.k;
+  size_t n = 0;
+
+  for (size_t i = 0; i < chart->n_ladder; i++)
+    {
+      double x, y;
+
+      if (!rugosa_chart_ladder_position (chart, i, &x, &y))
+        continue;
+      out[n].x = x - r;
+      out[n].y = y - r;
+      out[n].width = 2 * r;
+      out[n].height = 2 * r;
+      n++;
+    }
+  return n;
 }
 
 size_t
@@ -166,9 +193,12 @@ _rugosa_chart_draw_ladder (RugosaChart *chart, cairo_t *cr)
   if (chart->n_ladder == 0)
     return;
   rugosa_chart_palette (chart->spec.theme, &p);
-  faint.a = 0.38;
-  join = chart->ladder_colour;
-  join.a = 0.30;
+  /* Faint, in the chart's own ink so that it reads on every band; the
+   * sizing's colour (its line's) marks the recommended and chosen ones. */
+  faint = p.ink;
+  faint.a = 0.30;
+  join = p.ink;
+  join.a = 0.35;
 
   cairo_save (cr);
   cairo_rectangle (cr, lay->plot.x, lay->plot.y, lay->plot.width, lay->plot.height);
@@ -209,27 +239,35 @@ _rugosa_chart_draw_ladder (RugosaChart *chart, cairo_t *cr)
     cairo_set_dash (cr, NULL, 0, 0);
   }
 
-  /* the points: filled when the size passes, hollow when not */
+  /* the points: filled when the size passes, hollow when not, each on a
+   * halo of the plot's colour */
   for (size_t i = 0; i < chart->n_ladder; i++)
     {
       const RugosaChartRung *r = &chart->ladder[i];
+      RugosaChartRgba dot = p.ink, halo = p.plot;
       double x, y;
 
       if (!rung_usable (r))
         continue;
+      dot.a = 0.62;
+      halo.a = 0.7;
       _rugosa_chart_xy (lay, r->re, r->f, &x, &y);
+      cairo_new_path (cr);
+      cairo_arc (cr, x, y, 4.6 * k, 0, 2 * G_PI);
+      _rugosa_chart_set_rgba (cr, &halo);
+      cairo_fill (cr);
       cairo_new_path (cr);
       if (r->passes)
         {
-          cairo_arc (cr, x, y, 3.2 * k, 0, 2 * G_PI);
-          _rugosa_chart_set_rgba (cr, &faint);
+          cairo_arc (cr, x, y, 3.3 * k, 0, 2 * G_PI);
+          _rugosa_chart_set_rgba (cr, &dot);
           cairo_fill (cr);
         }
       else
         {
           cairo_arc (cr, x, y, 2.8 * k, 0, 2 * G_PI);
-          cairo_set_line_width (cr, 1.2 * k);
-          _rugosa_chart_set_rgba (cr, &faint);
+          cairo_set_line_width (cr, 1.3 * k);
+          _rugosa_chart_set_rgba (cr, &dot);
           cairo_stroke (cr);
         }
       if (r->recommended || r->selected)
@@ -243,24 +281,39 @@ _rugosa_chart_draw_ladder (RugosaChart *chart, cairo_t *cr)
         }
     }
 
-  /* the designations of the recommended and the chosen sizes */
-  for (size_t i = 0; i < chart->n_ladder; i++)
-    {
-      const RugosaChartRung *r = &chart->ladder[i];
-      PangoLayout *l;
-      double x, y, w, h;
+  /* the designations of the recommended and the chosen sizes, and of
+   * the two ends, so that it is seen which end is the small one */
+  {
+    size_t first = chart->n_ladder, last = chart->n_ladder;
 
-      if (!rung_usable (r) || !(r->recommended || r->selected) || r->label[0] == '\0')
-        continue;
-      _rugosa_chart_xy (lay, r->re, r->f, &x, &y);
-      l = _rugosa_chart_text (chart, r->label, lay->font_label * 0.92,
-                              r->recommended ? TEXT_BOLD : TEXT_PLAIN, 0);
-      _rugosa_chart_text_size (l, &w, &h);
-      /* below and to the right of the point: the next larger size lies
-       * to the left, so this side is mostly free */
-      (void) w;
-      _rugosa_chart_show (cr, l, round (x + 8 * k), round (y + 4 * k),
-                          &chart->ladder_colour, &p.plot, 3.0 * k);
-    }
+    for (size_t i = 0; i < chart->n_ladder; i++)
+      if (rung_usable (&chart->ladder[i]))
+        {
+          if (first == chart->n_ladder)
+            first = i;
+          last = i;
+        }
+    for (size_t i = 0; i < chart->n_ladder; i++)
+      {
+        const RugosaChartRung *r = &chart->ladder[i];
+        const int marked = r->recommended || r->selected;
+        PangoLayout *l;
+        double x, y, w, h;
+
+        if (!rung_usable (r) || r->label[0] == '\0' || !(marked || i == first || i == last))
+          continue;
+        _rugosa_chart_xy (lay, r->re, r->f, &x, &y);
+        l = _rugosa_chart_text (chart, r->label, lay->font_label * (marked ? 0.92 : 0.8),
+                                r->recommended ? TEXT_BOLD : TEXT_PLAIN, 0);
+        _rugosa_chart_text_size (l, &w, &h);
+        /* below and to the right of the point: the next larger size lies
+         * to the left, so this side is mostly free; the smallest size's
+         * name goes above it, clear of the next one's */
+        (void) w;
+        _rugosa_chart_show (cr, l, round (x + 8 * k),
+                            round (i == first && !marked ? y - h - 6 * k : y + 4 * k),
+                            marked ? &chart->ladder_colour : &p.muted, &p.plot, 3.0 * k);
+      }
+  }
   cairo_restore (cr);
 }

@@ -159,6 +159,9 @@ void _rugosa_chart_draw_background (RugosaChart *chart, cairo_t *cr);
 /* chart-ladder.c */
 void _rugosa_chart_draw_ladder (RugosaChart *chart, cairo_t *cr);
 void _rugosa_chart_free_ladder (RugosaChart *chart);
+/* The boxes of the ladder's points, for the overlay's labels to keep
+ * clear of (at most n_ladder written); returns how many. */
+size_t _rugosa_chart_ladder_boxes (RugosaChart *chart, RugosaChartRect *out);
 
 /* chart-overlay.c */
 void _rugosa_chart_place_labels (RugosaChart *chart);
