@@ -21,11 +21,14 @@
 
 #include "core/aging.h"
 #include "core/catalog.h"
+#include "core/hazen-williams.h"
 #include "model/rugosa-history.h"
 #include "rugosa-application.h"
 #include "rugosa-canvas.h"
 #include "rugosa-line-panel.h"
 #include "rugosa-quantity-entry.h"
+#include "rugosa-readout.h"
+#include "rugosa-results-table.h"
 #include "rugosa-size-picker.h"
 #include "rugosa-sizing-window.h"
 #include "rugosa-window.h"
@@ -403,6 +406,42 @@ test_picker (void)
   ui_harness_close_window (win);
 }
 
+/* ---- the Hazen–Williams C in the results ---- */
+
+static void
+test_hazen_williams_in_the_results (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaResultsTable *table = RUGOSA_RESULTS_TABLE (rugosa_window_get_results (win));
+  RugosaLine *line = rugosa_project_get_line (project, 0);
+  const RugosaOperatingPoint *p = &rugosa_project_get_results (project, line)->points[RUGOSA_FLOW_DESIGN];
+  g_autofree char *cell = rugosa_results_table_cell_text (table, 0, "hw-c");
+  g_autofree char *want = NULL;
+  g_autofree char *full = NULL;
+  double h = 0.0;
+
+  /* the demo's lines carry water: each shows its C, the one that gives
+   * back its pipe-friction loss (the model's round trip) */
+  g_assert_true (p->has_hazen_williams);
+  g_assert_cmpint (rg_hazen_williams_head_loss (p->hazen_williams_c, p->result.velocity_m_s,
+                                                rugosa_project_get_results (project, line)->inner_diameter_m,
+                                                rugosa_line_get_double (line, "length"), &h, NULL), ==, RG_OK);
+  g_assert_cmpfloat_with_epsilon (h / p->result.head_loss_major_m, 1.0, 1e-12);
+  want = g_strdup_printf ("%.0f", round (p->hazen_williams_c));
+  g_assert_cmpstr (cell, ==, want);
+  full = rugosa_readout_line_full (project, line, NULL);
+  g_assert_nonnull (strstr (full, want));
+
+  /* another fluid: no C */
+  rugosa_history_set (rugosa_window_get_history (win), line, "fluid-kind", RG_FLUID_CUSTOM, NULL);
+  ui_harness_drain ();
+  g_free (cell);
+  cell = rugosa_results_table_cell_text (table, 0, "hw-c");
+  g_assert_cmpstr (cell, ==, "—");
+  ui_harness_close_window (win);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -421,6 +460,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/sizing/assistant", test_assistant);
   g_test_add_func ("/ui/sizing/ladder-follows-age", test_ladder_follows_age);
   g_test_add_func ("/ui/sizing/picker", test_picker);
+  g_test_add_func ("/ui/results/hazen-williams", test_hazen_williams_in_the_results);
 
   status = g_test_run ();
   g_object_unref (app);

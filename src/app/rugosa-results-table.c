@@ -45,6 +45,7 @@ static const Column columns[] = {
   { "pressure-drop", N_("Pressure drop"), "unit-pressure", TRUE },
   { "reynolds", N_("Re"), NULL, TRUE },
   { "f", N_("f (Darcy)"), NULL, TRUE },
+  { "hw-c", N_("Hazen–Williams C"), NULL, TRUE },
   { "regime", N_("Regime"), NULL, FALSE },
   { "zone", N_("Roughness zone"), NULL, FALSE },
   { "elasticity", N_("∂ln f/∂ln ε"), NULL, TRUE },
@@ -128,6 +129,12 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
     }
   if (g_strcmp0 (column, "f") == 0)
     return rugosa_display_significant_screen (r->friction.f, 4);
+  if (g_strcmp0 (column, "hw-c") == 0)
+    {
+      /* water lines only; the tooltip says where the formula stands */
+      char *c = rugosa_readout_hazen_williams (p);
+      return c != NULL ? c : g_strdup ("—");
+    }
   if (g_strcmp0 (column, "regime") == 0)
     return g_strdup (rugosa_readout_regime (r->friction.regime));
   if (g_strcmp0 (column, "zone") == 0)
@@ -172,6 +179,20 @@ _rugosa_results_table_update_label (RugosaResultsTable *self,
     {
       g_autofree char *all = self->project ? rugosa_readout_warnings (self->project, line) : NULL;
       gtk_widget_set_tooltip_text (GTK_WIDGET (label), all);
+    }
+  else if (g_strcmp0 (column, "hw-c") == 0)
+    {
+      const RugosaLineResults *res = self->project ? rugosa_readout_results (self->project, line) : NULL;
+      g_autofree char *notes = res != NULL && res->ok
+                                 ? rugosa_readout_hazen_williams_notes (&res->points[RUGOSA_FLOW_DESIGN])
+                                 : NULL;
+
+      gtk_widget_set_tooltip_text (GTK_WIDGET (label), notes);
+      /* a C outside the formula's range is shown as such */
+      if (notes != NULL && res->points[RUGOSA_FLOW_DESIGN].hazen_williams_notes != 0)
+        gtk_widget_add_css_class (GTK_WIDGET (label), "dim-label");
+      else
+        gtk_widget_remove_css_class (GTK_WIDGET (label), "dim-label");
     }
 }
 
