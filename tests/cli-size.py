@@ -202,5 +202,17 @@ for args, option in [
     check(f"refuse solve {args[-4:]}", code == 2 and out == "" and len(lines) == 1 and option in lines[0],
           (code, out, err))
 
+# --- catalog pipes: the lining and the catalog of each size -------------------
+code, out, err = run("catalog", "pipes", "--json")
+pipes = {p["designation"]: p for p in json.loads(out)} if code == 0 else {}
+p = pipes.get("DN 200 C40", {})
+# From memory of ISO 2531:2009 (DE 222 mm, C40 wall 4.7 mm) and ISO 4179:2005,
+# Table 1 (3 mm lining to DN 300); not checked against the document:
+# ID = 222 - 2 x 4.7 - 2 x 3 = 206.6 mm by hand.
+check("catalog lining", close(p.get("lining_m", 0), 0.003, 1e-12)
+      and close(p.get("inner_diameter_m", 0), 0.2066, 1e-12), p)
+check("catalog name", p.get("catalog") == "ISO 2531 C40", p.get("catalog"))
+check("catalog unlined", all(q["lining_m"] == 0 for d, q in pipes.items() if q["standard"] != "ISO 2531"))
+
 print(f"{passed} passed, {failed} failed")
 sys.exit(1 if failed else 0)
