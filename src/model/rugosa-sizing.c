@@ -206,10 +206,10 @@ rugosa_sizing_run (RugosaProject *project, RugosaLine *duty,
 
   if (rg_material_lookup (material_id, &material, err) != RG_OK)
     return NULL;
-  chosen = g_new0 (unsigned char, MAX (rg_pipe_catalog_count (), 1));
+  chosen = g_new0 (unsigned char, (gsize) MAX (rg_pipe_catalog_count (), 1));
   if (rg_pipe_catalog_choose (catalog, material->id, chosen, &n_chosen, err) != RG_OK)
     return NULL;
-  found = g_new (int, MAX (rg_pipe_count (), 1));
+  found = g_new (int, (gsize) MAX (rg_pipe_count (), 1));
   n = rg_pipe_search (chosen, NULL, found, rg_pipe_count ());
 
   if (age_years < 0.0 || !isfinite (age_years))
@@ -219,7 +219,7 @@ rugosa_sizing_run (RugosaProject *project, RugosaLine *duty,
   s->age_years = age_years;
   s->limits = *limits;
   s->n_candidates = (guint) n;
-  s->candidates = g_new0 (RugosaSizingCandidate, MAX (n, 1));
+  s->candidates = g_new0 (RugosaSizingCandidate, (gsize) MAX (n, 1));
   s->recommended = s->recommended_new = -1;
 
   trial = rugosa_line_duplicate (duty);
