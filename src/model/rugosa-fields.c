@@ -480,7 +480,7 @@ rugosa_field_parse_text (const RugosaField *field, const char *text,
     {
       if (!is_bare_number (text, &x))
         {
-          g_autofree char *shown = g_utf8_make_valid (text, 40);
+          g_autofree char *shown = g_utf8_make_valid (text, (gssize) strnlen (text, 40));
           g_autofree char *msg = NULL;
 
           g_strdelimit (shown, "\n\r\t", ' ');
