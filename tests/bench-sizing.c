@@ -20,11 +20,13 @@
  * smallest bore within the limits (rugosa_solve_diameter, a bisection of
  * about 45 evaluations) is timed too, for comparison.
  *
- * Measured on the development machine (2 shared cores): 9, 8, 7 and 41 µs
- * per size for n = 24, 66, 24 and 244, overhead 1.1 to 1.6; the part above
- * 1 is the memory of the candidates (each keeps its whole results, about
- * 10 kB, so 2.4 MB for 244 sizes, touched for the first time) and the
- * first lookup of each designation, both linear in n.
+ * Measured on the development machine (2 cores shared with other work):
+ * 12, 12, 8 and 11 µs per size for n = 24, 66, 24 and 244 (2.6 ms for all
+ * 244 steel sizes), overhead 1.06 to 1.23; under load from other work the
+ * figures rose to 9–41 µs per size with overhead up to 1.6.  The part
+ * above 1 is the memory of the candidates (each keeps its whole results,
+ * about 10 kB, so 2.4 MB for 244 sizes, touched for the first time) and
+ * the first lookup of each designation, both linear in n.
  *
  * Output: one JSON line per choice on stdout.  Exit status 0 whatever the
  * figures: a measurement, not a test. */
