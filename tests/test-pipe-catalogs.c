@@ -110,8 +110,9 @@ test_ductile_k9 (void)
 static void
 test_ductile_coverage (void)
 {
-  /* The issue: DN 80 to DN 600 in a common pressure class, every DN of
-   * the series between. */
+  /* What a water catalog of ductile iron must hold: DN 80 to DN 600 in a
+   * common pressure class, every DN of the series between (common
+   * practice, no single source). */
   static const int dn[] = { 80, 100, 125, 150, 200, 250, 300, 350, 400, 450, 500, 600 };
   unsigned char chosen[256];
   int n = 0, found[512];
