@@ -199,7 +199,8 @@ test_assistant (void)
         g_assert_cmpfloat (c->results.points[RUGOSA_FLOW_DESIGN].result.head_loss_total_m, <=, 15.0);
     }
   g_assert_true (strlen (rugosa_sizing_window_get_inverse (sizing)) > 0);
-  /* the line itself is untouched: the duty is a copy */
+  /* the line itself is untouched: the duty is a copy (25 L/s, the
+   * demo's own value in data/demo.rugosa) */
   g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (project, 0), "flow-design"), ==, 0.025);
 
   /* Another material: ductile iron, its preferred classes. */
@@ -250,7 +251,8 @@ test_assistant (void)
     g_assert_true (rugosa_history_undo (history));
     ui_harness_drain ();
     g_assert_cmpuint (rugosa_project_get_n_lines (project), ==, lines);
-    /* and one more, the velocity limit typed in the assistant */
+    /* and one more, the velocity limit typed in the assistant: back to
+     * the demo's 2.5 m/s (data/demo.rugosa) */
     g_assert_true (rugosa_history_undo (history));
     ui_harness_drain ();
     g_assert_cmpfloat (rugosa_settings_get_double (settings, "velocity-limit"), ==, 2.5);
