@@ -3,9 +3,11 @@
 """Turn the engineering catalogs under data/ into one C file.
 
 The JSON files are the only home of the numbers; this script converts units
-(inch -> m exactly, 1 in = 25.4 mm; mm -> m), computes ID = OD - 2*wall,
-checks the tables for consistency and writes catalog-data.c / catalog-data.h
-with the tables as const arrays.  Python 3 standard library only.
+(inch -> m exactly, 1 in = 25.4 mm; mm -> m), computes ID = OD - 2*wall
+(less twice a lining where the file gives one), checks the tables for
+consistency (and each wall against the rule of its series where the file
+names one) and writes catalog-data.c / catalog-data.h with the tables as
+const arrays; each series of a pipe file becomes a pipe catalog.  Python 3 standard library only.
 
 With --names it writes instead the names the catalogs show to people
 (materials, fittings, aging classes) as N_("...") marks, one C file that is
@@ -94,11 +96,64 @@ def iso4065_wall(dn, renard_exponent, minimum):
     return max(e, minimum)
 
 
+def round_half_up(x, step):
+    """x rounded to a multiple of step, halves up (decimal, not binary)."""
+    n = round(x / step, 6)
+    return math.floor(n + 0.5) * step
+
+
+def ceil_to(x, step):
+    return math.ceil(round(x / step, 6)) * step
+
+
+def rule_wall(rule, nominal, od):
+    """The wall a series' rule gives for nominal size `nominal` (a DN or an
+    NPS text) and outside diameter `od` (the file's unit), or None."""
+    kind = rule['kind']
+    if kind == 'thickness-class':
+        # ISO 2531:1998 K class: e = K(0.5 + 0.001 DN), at least the minimum,
+        # to 0.1 mm (halves up, as 6.75 -> 6.8 for K9 DN 250)
+        dn = float(nominal)
+        return max(rule['minimum_mm'], round_half_up(rule['k'] * (0.5 + 0.001 * dn), 0.1))
+    if kind == 'pressure-class':
+        # ISO 2531:2009 pressure class C: e_min from the hoop stress at PFA with
+        # the safety factor, at least the minimum, plus the casting tolerance
+        # 1.3 + 0.001 DN, rounded up to 0.1 mm
+        dn = float(nominal)
+        pfa, sf, rm = rule['pfa_bar'], rule['safety_factor'], rule['rm_mpa']
+        e_min = max(rule['minimum_mm'], pfa * sf * od / (20.0 * rm + pfa * sf))
+        return ceil_to(e_min + 1.3 + 0.001 * dn, 0.1)
+    if kind == 'dimension-ratio':
+        # AWWA C900: minimum wall = OD / DR to 0.001 in
+        return round_half_up(od / rule['dr'], 0.001)
+    raise CatalogError('unknown wall rule %s' % kind)
+
+
+def lining_for(doc, nominal):
+    """Nominal lining thickness (file units) for a DN from the lining table."""
+    lining = doc.get('lining')
+    if lining is None:
+        return 0.0
+    if doc['units'] != 'mm':
+        raise CatalogError('%s: a lining table needs mm units' % doc['standard'])
+    dn = float(nominal)
+    for dn_max, t in lining['thickness_mm_up_to_dn']:
+        if dn <= dn_max:
+            return t
+    raise CatalogError('%s DN %s: no lining thickness' % (doc['standard'], nominal))
+
+
 def pipes(doc, files_by_name, material_ids):
     std = doc['standard']
     unit = {'in': INCH_M, 'mm': MM_M}[doc['units']]
     if doc['material_id'] not in material_ids:
         raise CatalogError('%s: unknown material %s' % (std, doc['material_id']))
+    mats = doc.get('materials', [doc['material_id']])
+    if mats[0] != doc['material_id'] or len(set(mats)) != len(mats):
+        raise CatalogError('%s: materials must start with material_id, each once' % std)
+    for m in mats:
+        if m not in material_ids:
+            raise CatalogError('%s: unknown material %s' % (std, m))
     if 'outside_diameters' in doc:
         ods = doc['outside_diameters']
     else:
@@ -120,8 +175,18 @@ def pipes(doc, files_by_name, material_ids):
                 if abs(want - wall) > 1e-9:
                     raise CatalogError('%s dn %s %s: wall %g, ISO 4065 rule gives %g'
                                        % (std, nominal, s['label'], wall, want))
+            if 'wall_rule' in s:
+                want = rule_wall(s['wall_rule'], nominal, float(od))
+                if abs(want - wall) > 1e-9:
+                    raise CatalogError('%s %s %s: wall %g, the rule of the series gives %g'
+                                       % (std, nominal, s['label'], wall, want))
+            lining = lining_for(doc, nominal)
+            if not (0 < 2 * (wall + lining) < od):
+                raise CatalogError('%s %s %s: wall and lining do not fit OD %g'
+                                   % (std, nominal, s['label'], od))
             od_m = od * unit
             wall_m = wall * unit
+            lining_m = lining * unit
             rows.append({
                 'designation': doc['designation'].format(nominal=nominal, label=s['label']),
                 'standard': std,
@@ -130,10 +195,37 @@ def pipes(doc, files_by_name, material_ids):
                 'material_id': doc['material_id'],
                 'od': od_m,
                 'wall': wall_m,
-                'id': od_m - 2.0 * wall_m,
+                'lining': lining_m,
+                'id': od_m - 2.0 * wall_m - 2.0 * lining_m,
                 'source': doc['source'],
+                'series_label': s['label'],
+                'usual': bool(s.get('usual', False)),
+                'materials': mats,
+                'lining_source': doc['lining']['source'] if 'lining' in doc else '',
+                'title': doc['title'],
             })
     return rows
+
+
+def pipe_catalogs(rows):
+    """One catalog per series of a standard, in file order: rows of one
+    series are consecutive in `rows`."""
+    cats = []
+    for i, p in enumerate(rows):
+        key = (p['standard'], p['series'])
+        if not cats or cats[-1]['key'] != key:
+            if any(c['key'] == key for c in cats):
+                raise CatalogError('%s %s: rows of a series must be consecutive' % key)
+            cats.append({'key': key, 'name': p['standard'] + ' ' + p['series_label'],
+                         'first': i, 'count': 0, 'p': p})
+        cats[-1]['count'] += 1
+        p['catalog'] = len(cats) - 1
+    names = set()
+    for c in cats:
+        if c['name'].lower() in names:
+            raise CatalogError('catalog %s listed twice' % c['name'])
+        names.add(c['name'].lower())
+    return cats
 
 
 FITTING_METHODS = {'3k': 'RG_FITTING_METHOD_3K', 'crane-ft': 'RG_FITTING_METHOD_CRANE_FT'}
@@ -241,6 +333,7 @@ def main(argv):
     for name in sorted(docs):
         if name.startswith('pipes-'):
             pipe_rows += pipes(docs[name], docs, mat_ids)
+    pipe_cats = pipe_catalogs(pipe_rows)
     seen = set()
     for p in pipe_rows:
         key = p['designation'].lower()
@@ -270,6 +363,7 @@ def main(argv):
     h.append('#include "core/fittings.h"')
     h.append('')
     for typ, name in (('RgMaterial', 'materials'), ('RgPipe', 'pipes'),
+                      ('RgPipeCatalog', 'pipe_catalogs'),
                       ('RgFitting', 'fittings'), ('RgAgingClass', 'aging_classes')):
         h.append('extern const %s rg_catalog_%s[];' % (typ, name))
         h.append('extern const int rg_catalog_%s_count;' % name)
@@ -297,12 +391,29 @@ def main(argv):
     for p in pipe_rows:
         c.append('  { .designation = %s, .standard = %s, .nominal = %s, .series = %s,'
                  ' .material_id = %s, .outside_diameter_m = %s, .wall_m = %s,'
-                 ' .inner_diameter_m = %s, .source = %s },'
+                 ' .inner_diameter_m = %s, .source = %s, .lining_m = %s, .catalog = %d },'
                  % (c_str(p['designation']), c_str(p['standard']), c_str(p['nominal']),
                     c_str(p['series']), c_str(p['material_id']), c_num(p['od']),
-                    c_num(p['wall']), c_num(p['id']), c_str(p['source'])))
+                    c_num(p['wall']), c_num(p['id']), c_str(p['source']),
+                    c_num(p['lining']), p['catalog']))
     c.append('};')
     c.append('const int rg_catalog_pipes_count = %d;' % len(pipe_rows))
+    c.append('')
+
+    for k, cat in enumerate(pipe_cats):
+        c.append('static const char *const pipe_catalog_materials_%d[] = { %s, NULL };'
+                 % (k, ', '.join(c_str(m) for m in cat['p']['materials'])))
+    c.append('const RgPipeCatalog rg_catalog_pipe_catalogs[] = {')
+    for k, cat in enumerate(pipe_cats):
+        p = cat['p']
+        c.append('  { .name = %s, .standard = %s, .series = %s, .title = %s,'
+                 ' .material_ids = pipe_catalog_materials_%d, .usual = %d,'
+                 ' .first_pipe = %d, .n_pipes = %d, .source = %s, .lining_source = %s },'
+                 % (c_str(cat['name']), c_str(p['standard']), c_str(p['series']),
+                    c_str(p['title']), k, 1 if p['usual'] else 0, cat['first'],
+                    cat['count'], c_str(p['source']), c_str(p['lining_source'])))
+    c.append('};')
+    c.append('const int rg_catalog_pipe_catalogs_count = %d;' % len(pipe_cats))
     c.append('')
 
     c.append('const RgFitting rg_catalog_fittings[] = {')

@@ -27,9 +27,9 @@ main (void)
   for (int i = 0; i < rg_pipe_count (); i++)
     {
       const RgPipe *p = rg_pipe_at (i);
-      printf ("P\t%s\t%s\t%s\t%s\t%.17g\t%.17g\t%.17g\n", p->designation,
+      printf ("P\t%s\t%s\t%s\t%s\t%.17g\t%.17g\t%.17g\t%.17g\n", p->designation,
               p->standard, p->nominal, p->series, p->outside_diameter_m,
-              p->wall_m, p->inner_diameter_m);
+              p->wall_m, p->inner_diameter_m, p->lining_m);
     }
   for (int i = 0; i < rg_fitting_count (); i++)
     {

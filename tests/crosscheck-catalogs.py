@@ -11,6 +11,7 @@ uses).  Every table that python3-fluids also holds is compared with it:
   - ASME B36.19M            fluids.piping SS5*, SS10*, SS40*, SS80*
   - ASTM D1785 PVC 40/80    fluids.piping S40*_D1785, S80*_D1785
   - ASTM B88 outside diam.  fluids.piping o_CTS_D2241 (copper tube sizes)
+  - AWWA C900 DR 14/18/25   fluids.piping SDR14*_C900, SDR18*_C900, SDR25*_C900
   - roughness               fluids.friction._roughness, _Farshad_roughness
   - 3-K constants           fluids.fittings.Darby
   - 3-K formula             fluids.fittings.Darby3K
@@ -23,7 +24,9 @@ uses).  Every table that python3-fluids also holds is compared with it:
 Disagreements that were looked at and resolved in favour of a named source
 are listed in RESOLVED and printed; anything else is a failure.  ISO 4427
 has no counterpart in python3-fluids (the generator checks it against the
-ISO 4065 rule instead).
+ISO 4065 rule instead), nor has ISO 2531 ductile iron (the generator checks
+each wall against the rule of its class; tests/test-pipe-catalogs.c checks
+the inner diameters after lining by hand).
 """
 
 import subprocess
@@ -99,8 +102,8 @@ def compare_schedule(pipes, standard, series, nps_list, od_mm, wall_mm,
               '%s OD %.3f mm vs fluids %s %.3f mm' % (p['designation'], p['od'] * 1e3, label, o))
         check(abs(p['wall'] * 1e3 - t) <= wall_tol_mm,
               '%s wall %.3f mm vs fluids %s %.3f mm' % (p['designation'], p['wall'] * 1e3, label, t))
-        check(abs(p['id'] - (p['od'] - 2 * p['wall'])) <= 1e-12,
-              '%s: ID is not OD - 2 wall' % p['designation'])
+        check(abs(p['id'] - (p['od'] - 2 * p['wall'] - 2 * p['lining'])) <= 1e-12,
+              '%s: ID is not OD - 2 wall - 2 lining' % p['designation'])
     for n in theirs:
         if n not in ours:
             key = (standard, series, n)
@@ -174,7 +177,8 @@ def crane_checks(rows):
 def main():
     rows = read_eval(sys.argv[1])
     pipes = [dict(designation=r[0], standard=r[1], nominal=r[2], series=r[3],
-                  od=float(r[4]), wall=float(r[5]), id=float(r[6])) for r in rows['P']]
+                  od=float(r[4]), wall=float(r[5]), id=float(r[6]), lining=float(r[7]))
+             for r in rows['P']]
 
     # B36.10M metric ODs are rounded to 0.1 mm and walls to 0.01 mm in the
     # fluids tables, so the tolerances are half a unit of those plus a hair.
@@ -201,6 +205,13 @@ def main():
                          [getattr(fp, 'S%so_D1785' % s)[i] for i in sel],
                          [getattr(fp, 'S%st_D1785' % s)[i] for i in sel],
                          1e-3, 1e-3, '%sD1785' % s)
+
+    # AWWA C900: fluids keeps the SI column (OD to 0.1 mm, walls to 0.01 mm);
+    # we convert the inch table exactly.
+    for s in ('14', '18', '25'):
+        compare_schedule(pipes, 'AWWA C900', 'DR ' + s, fp.NPS_C900,
+                         getattr(fp, 'SDR%so_C900' % s), getattr(fp, 'SDR%st_C900' % s),
+                         0.06, 0.011, 'SDR%s_C900' % s)
 
     # Copper tube size outside diameters (fluids: D2241 PVC in CTS).
     for n, o in zip(fp.NPS_CTS_D2241, fp.o_CTS_D2241):
@@ -294,7 +305,8 @@ def main():
     crane_checks(rows)
 
     print('no counterpart in python3-fluids: ISO 4427-2 PE100 (checked by gen-catalogs.py against '
-          'the ISO 4065 wall rule), ASTM B88 walls, aging classes (Lamont 1981)')
+          'the ISO 4065 wall rule), ISO 2531 ductile iron (checked by gen-catalogs.py against the '
+          'rule of each class, and by test-pipe-catalogs), ASTM B88 walls, aging classes (Lamont 1981)')
 
     print('%d passed, %d failed' % (passed, failed))
     return 1 if failed else 0

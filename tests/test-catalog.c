@@ -161,13 +161,13 @@ static void
 test_pipes_every_designation (void)
 {
   /* Every designation as the catalog writes it finds itself (no two rows
-   * share a normalised key), and ID = OD − 2·wall. */
+   * share a normalised key), and ID = OD − 2·wall − 2·lining. */
   for (int i = 0; i < rg_pipe_count (); i++)
     {
       const RgPipe *p = rg_pipe_at (i);
       if (pipe (p->designation) != p)
         g_error ("%s finds %s", p->designation, pipe (p->designation)->designation);
-      assert_rel (p->inner_diameter_m, p->outside_diameter_m - 2.0 * p->wall_m, 1e-14);
+      assert_rel (p->inner_diameter_m, p->outside_diameter_m - 2.0 * p->wall_m - 2.0 * p->lining_m, 1e-14);
       g_assert_cmpfloat (p->inner_diameter_m, >, 0.0);
       g_assert_true (strlen (p->source) > 20);
       const RgMaterial *m;

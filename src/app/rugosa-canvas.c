@@ -27,6 +27,7 @@ struct _RugosaCanvas
   RugosaChartInput *input;
   RugosaTrailCache *trails;
   char             *probe_text;
+  GStrv             ladder_tips;   /* a tooltip per rung of the ladder, or NULL */
 
   int      hover;          /* overlay index under the pointer, or -1 */
   double   pointer_x, pointer_y;
@@ -83,6 +84,44 @@ rugosa_canvas_refresh (RugosaCanvas *self)
   if (self->dirty_since_us == 0)
     self->dirty_since_us = g_get_monotonic_time ();
   gtk_widget_queue_draw (GTK_WIDGET (self));
+}
+
+static void _rugosa_canvas_update_spec (RugosaCanvas *self);
+
+void
+rugosa_canvas_set_ladder (RugosaCanvas           *self,
+                          const RugosaChartRung  *rungs,
+                          gsize                   n_rungs,
+                          const RugosaChartRgba  *colour,
+                          const char *const      *tips)
+{
+  const RugosaChartRgba muted = { 0.35, 0.4, 0.45, 1.0 };
+
+  g_return_if_fail (RUGOSA_IS_CANVAS (self));
+
+  rugosa_chart_set_ladder (self->chart, rungs, n_rungs, colour != NULL ? *colour : muted);
+  g_clear_pointer (&self->ladder_tips, g_strfreev);
+  if (tips != NULL && n_rungs > 0)
+    self->ladder_tips = g_strdupv ((char **) tips);
+  gtk_widget_queue_draw (GTK_WIDGET (self));
+}
+
+gsize
+rugosa_canvas_get_ladder_count (RugosaCanvas *self)
+{
+  g_return_val_if_fail (RUGOSA_IS_CANVAS (self), 0);
+  return rugosa_chart_ladder_count (self->chart);
+}
+
+gboolean
+rugosa_canvas_ladder_position (RugosaCanvas *self,
+                               guint         index,
+                               double       *x,
+                               double       *y)
+{
+  g_return_val_if_fail (RUGOSA_IS_CANVAS (self), FALSE);
+  _rugosa_canvas_update_spec (self);
+  return rugosa_chart_ladder_position (self->chart, index, x, y);
 }
 
 static void
@@ -371,7 +410,16 @@ rugosa_canvas_query_tooltip (GtkWidget  *widget,
           hit = (int) i;
     }
   if (hit < 0 || hit >= (int) self->input->n_lines)
-    return FALSE;
+    {
+      /* a rung of a sizing's ladder speaks for its size */
+      int rung = keyboard ? -1 : rugosa_chart_ladder_hit_test (self->chart, x, y, HIT_RADIUS / 2);
+
+      if (rung < 0 || self->ladder_tips == NULL
+          || rung >= (int) g_strv_length (self->ladder_tips))
+        return FALSE;
+      gtk_tooltip_set_text (tooltip, self->ladder_tips[rung]);
+      return TRUE;
+    }
   line = rugosa_project_get_line (self->project, self->input->line_index[hit]);
   text = rugosa_readout_line_full (self->project, line);
   gtk_tooltip_set_text (tooltip, text);
@@ -439,6 +487,7 @@ rugosa_canvas_finalize (GObject *object)
   g_clear_pointer (&self->chart, rugosa_chart_free);
   g_clear_pointer (&self->trails, rugosa_trail_cache_free);
   g_free (self->probe_text);
+  g_strfreev (self->ladder_tips);
   G_OBJECT_CLASS (rugosa_canvas_parent_class)->finalize (object);
 }
 

@@ -45,6 +45,20 @@ gboolean    rugosa_canvas_marker_position (RugosaCanvas *self,
 gboolean    rugosa_canvas_select_at       (RugosaCanvas *self,
                                            double        x,
                                            double        y);
+/* The ladder of a sizing under the lines (rugosa-chart.h; copied, 0 rungs
+ * clear it), in `colour` (NULL: a muted ink), with a tooltip per rung
+ * (`tips`, NULL-terminated, n_rungs of them, or NULL). */
+void        rugosa_canvas_set_ladder      (RugosaCanvas          *self,
+                                           const RugosaChartRung *rungs,
+                                           gsize                  n_rungs,
+                                           const RugosaChartRgba *colour,
+                                           const char *const     *tips);
+gsize       rugosa_canvas_get_ladder_count (RugosaCanvas         *self);
+/* Device point of rung `index`; FALSE when it is off the plot. */
+gboolean    rugosa_canvas_ladder_position (RugosaCanvas *self,
+                                           guint         index,
+                                           double       *x,
+                                           double       *y);
 /* What a pointer at (x, y) would show (hover/probe), as if it moved there. */
 void        rugosa_canvas_pointer_at      (RugosaCanvas *self,
                                            double        x,

@@ -16,6 +16,7 @@
 #include "rugosa-field-choices.h"
 #include "rugosa-line-panel.h"
 #include "rugosa-readout.h"
+#include "rugosa-size-picker.h"
 #include "rugosa-spin-guard.h"
 
 struct _RugosaLinePanel
@@ -31,7 +32,7 @@ struct _RugosaLinePanel
   AdwActionRow     *fluid_props_row;
   GtkDropDown      *material_dropdown;
   GtkDropDown      *aging_dropdown;
-  GtkDropDown      *pipe_dropdown;
+  RugosaSizePicker *pipe_picker;
   AdwExpanderRow   *fittings_row;
   GtkDropDown      *fitting_add_dropdown;
 
@@ -282,17 +283,11 @@ _rugosa_line_panel_dropdown_changed (GtkDropDown     *dropdown,
       if (i > 0)
         id = rg_material_at (i - 1)->id;
     }
-  else if (dropdown == self->aging_dropdown)
+  else
     {
       property = "aging-class-id";
       if (i > 0)
         id = rg_aging_class_at (i - 1)->id;
-    }
-  else
-    {
-      property = "pipe-designation";
-      if (i > 0)
-        id = rg_pipe_at (i - 1)->designation;
     }
   _rugosa_line_panel_emit (self, property, g_variant_new_maybe (G_VARIANT_TYPE_STRING,
                                                                 id ? g_variant_new_string (id) : NULL));
@@ -582,7 +577,6 @@ _rugosa_line_panel_select (GtkDropDown *dropdown,
 
 static const void *_material_at (int i) { return rg_material_at (i); }
 static const void *_aging_at (int i) { return rg_aging_class_at (i); }
-static const void *_pipe_at (int i) { return rg_pipe_at (i); }
 
 static void
 _rugosa_line_panel_select_catalogs (RugosaLinePanel *self)
@@ -600,7 +594,35 @@ _rugosa_line_panel_select_catalogs (RugosaLinePanel *self)
     rg_pipe_lookup (id, &pipe, NULL);
   _rugosa_line_panel_select (self->material_dropdown, material, rg_material_count (), _material_at);
   _rugosa_line_panel_select (self->aging_dropdown, aging, rg_aging_class_count (), _aging_at);
-  _rugosa_line_panel_select (self->pipe_dropdown, pipe, rg_pipe_count (), _pipe_at);
+  /* the sizes of the material's catalogs, the bores in the field's unit */
+  rugosa_size_picker_set_material_id (self->pipe_picker, material != NULL ? material->id : NULL);
+  if (self->project != NULL)
+    rugosa_size_picker_set_diameter_unit (self->pipe_picker,
+                                          rugosa_settings_get_unit (rugosa_project_get_settings (self->project),
+                                                                    RUGOSA_DISPLAY_DIAMETER));
+  rugosa_size_picker_set_designation (self->pipe_picker, pipe != NULL ? pipe->designation : id);
+}
+
+/* A size chosen in the picker.  "Custom bore" keeps the bore the line
+ * has now (the catalog pipe's): the bore is set first, then the pipe is
+ * let go, so the line never jumps to another bore on the way. */
+static void
+_rugosa_line_panel_pipe_chosen (RugosaSizePicker *picker,
+                                const char       *designation,
+                                RugosaLinePanel  *self)
+{
+  if (self->updating || self->line == NULL)
+    return;
+  if (designation == NULL && rugosa_line_get_pipe_designation (self->line) != NULL)
+    {
+      const RugosaLineResults *res = rugosa_readout_results (self->project, self->line);
+
+      if (res != NULL && res->inner_diameter_m > 0.0)
+        _rugosa_line_panel_emit (self, "inner-diameter", g_variant_new_double (res->inner_diameter_m));
+    }
+  _rugosa_line_panel_emit (self, "pipe-designation",
+                           g_variant_new_maybe (G_VARIANT_TYPE_STRING,
+                                                designation ? g_variant_new_string (designation) : NULL));
 }
 
 /* The row choosing a catalog entry for `row` (a custom value such as the
@@ -869,7 +891,7 @@ _rugosa_line_panel_collect_fields (RugosaLinePanel *self,
             adw_preferences_row_set_title (ADW_PREFERENCES_ROW (child), label);
           if (ADW_IS_ACTION_ROW (child))
             g_hash_table_insert (self->choosers, (gpointer) row->property, child);
-          else if (GTK_IS_DROP_DOWN (child))
+          else if (GTK_IS_DROP_DOWN (child) || RUGOSA_IS_SIZE_PICKER (child))
             {
               GtkWidget *arow = gtk_widget_get_ancestor (child, ADW_TYPE_ACTION_ROW);
 
@@ -976,7 +998,6 @@ _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
   g_autoptr (GtkStringList) kinds = NULL;
   g_autoptr (GtkStringList) materials = gtk_string_list_new (NULL);
   g_autoptr (GtkStringList) agings = gtk_string_list_new (NULL);
-  g_autoptr (GtkStringList) pipes = gtk_string_list_new (NULL);
   g_autoptr (GtkStringList) fittings = gtk_string_list_new (NULL);
   GtkExpression *expr;
 
@@ -989,36 +1010,26 @@ _rugosa_line_panel_fill_catalogs (RugosaLinePanel *self)
   gtk_string_list_append (agings, _("Custom rate"));
   for (int i = 0; i < rg_aging_class_count (); i++)
     gtk_string_list_append (agings, _(rg_aging_class_at (i)->name));
-  gtk_string_list_append (pipes, _("Custom bore"));
-  for (int i = 0; i < rg_pipe_count (); i++)
-    {
-      const RgPipe *p = rg_pipe_at (i);
-      g_autofree char *title = g_strdup_printf ("%s (%s)", p->designation, p->standard);
-      gtk_string_list_append (pipes, title);
-    }
   gtk_string_list_append (fittings, _("Other loss, K given"));
   for (int i = 0; i < rg_fitting_count (); i++)
     gtk_string_list_append (fittings, _(rg_fitting_at (i)->name));
 
   gtk_drop_down_set_model (self->material_dropdown, G_LIST_MODEL (materials));
   gtk_drop_down_set_model (self->aging_dropdown, G_LIST_MODEL (agings));
-  gtk_drop_down_set_model (self->pipe_dropdown, G_LIST_MODEL (pipes));
   gtk_drop_down_set_model (self->fitting_add_dropdown, G_LIST_MODEL (fittings));
 
   /* Searchable lists match on the shown text. */
   expr = gtk_property_expression_new (GTK_TYPE_STRING_OBJECT, NULL, "string");
   gtk_drop_down_set_expression (self->material_dropdown, expr);
-  gtk_drop_down_set_expression (self->pipe_dropdown, expr);
   gtk_drop_down_set_expression (self->fitting_add_dropdown, expr);
   gtk_expression_unref (expr);
 
   _rugosa_line_panel_compact_dropdown (self->material_dropdown);
   _rugosa_line_panel_compact_dropdown (self->aging_dropdown);
-  _rugosa_line_panel_compact_dropdown (self->pipe_dropdown);
   _rugosa_line_panel_compact_dropdown (self->fitting_add_dropdown);
 
   {
-    GtkDropDown *searchable[] = { self->material_dropdown, self->pipe_dropdown, self->fitting_add_dropdown };
+    GtkDropDown *searchable[] = { self->material_dropdown, self->fitting_add_dropdown };
 
     for (guint i = 0; i < G_N_ELEMENTS (searchable); i++)
       {
@@ -1060,6 +1071,7 @@ rugosa_line_panel_class_init (RugosaLinePanelClass *klass)
                   RUGOSA_TYPE_LINE, G_TYPE_STRING, G_TYPE_VARIANT);
 
   g_type_ensure (RUGOSA_TYPE_QUANTITY_ENTRY);
+  g_type_ensure (RUGOSA_TYPE_SIZE_PICKER);
   gtk_widget_class_set_template_from_resource (widget_class, "/org/rugosa/Rugosa/rugosa-line-panel.ui");
 #define BIND(name) gtk_widget_class_bind_template_child (widget_class, RugosaLinePanel, name)
   BIND (colour_button);
@@ -1070,7 +1082,7 @@ rugosa_line_panel_class_init (RugosaLinePanelClass *klass)
   BIND (fluid_props_row);
   BIND (material_dropdown);
   BIND (aging_dropdown);
-  BIND (pipe_dropdown);
+  BIND (pipe_picker);
   BIND (fittings_row);
   BIND (fitting_add_dropdown);
 #undef BIND
@@ -1081,6 +1093,7 @@ rugosa_line_panel_class_init (RugosaLinePanelClass *klass)
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_colour_set);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_dropdown_changed);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_fitting_add);
+  gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_pipe_chosen);
 
   gtk_widget_class_set_layout_manager_type (widget_class, GTK_TYPE_BOX_LAYOUT);
   gtk_widget_class_set_css_name (widget_class, "linepanel");

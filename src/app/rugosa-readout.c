@@ -6,6 +6,7 @@
 #include <glib/gi18n.h>
 #include <math.h>
 
+#include "core/hazen-williams.h"
 #include "model/rugosa-display.h"
 #include "model/rugosa-life-cycle.h"
 #include "model/rugosa-units.h"
@@ -189,6 +190,16 @@ rugosa_readout_line_full (RugosaProject *project,
   g_string_append_printf (s, _("Gradient %s\n"), grad);
   g_string_append_printf (s, _("Pressure drop %s"), dp);
   _rugosa_readout_energy (s, project, res, p);
+  if (p->has_hazen_williams)
+    {
+      g_autofree char *c = rugosa_readout_hazen_williams (p);
+      g_autofree char *notes = rugosa_readout_hazen_williams_notes (p);
+
+      g_string_append_printf (s, "\n");
+      g_string_append_printf (s, _("Hazen–Williams C equivalent %s"), c);
+      if (notes != NULL)
+        g_string_append_printf (s, "\n%s", notes);
+    }
   if (p->warnings.count > 0)
     for (int i = 0; i < p->warnings.count; i++)
       g_string_append_printf (s, "\n⚠ %s", p->warnings.text[i]);
@@ -246,5 +257,30 @@ rugosa_readout_warnings (RugosaProject *project,
       g_string_free (s, TRUE);
       return NULL;
     }
+  return g_string_free (s, FALSE);
+}
+
+char *
+rugosa_readout_hazen_williams (const RugosaOperatingPoint *p)
+{
+  if (!p->has_hazen_williams)
+    return NULL;
+  /* C is quoted to whole numbers in the trade's tables */
+  return rugosa_display_significant_screen (round (p->hazen_williams_c), 3);
+}
+
+char *
+rugosa_readout_hazen_williams_notes (const RugosaOperatingPoint *p)
+{
+  GString *s;
+
+  if (!p->has_hazen_williams)
+    return NULL;
+  if (p->hazen_williams_notes == 0)
+    return g_strdup (_("Inside the usual range of the Hazen–Williams formula."));
+  s = g_string_new (NULL);
+  for (unsigned b = 0; b < RG_HW_N_NOTES; b++)
+    if (p->hazen_williams_notes & (1u << b))
+      g_string_append_printf (s, "%s%s", s->len ? "\n" : "", rg_hazen_williams_note_text (1u << b));
   return g_string_free (s, FALSE);
 }

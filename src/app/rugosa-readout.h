@@ -31,6 +31,11 @@ const char *rugosa_readout_zone   (RgRoughnessZone zone);
  * with one warning a line; NULL when there is none. */
 char *rugosa_readout_warnings    (RugosaProject *project,
                                   RugosaLine    *line);
+/* The Hazen–Williams C equivalent of a water line's design point ("138"),
+ * and the sentences on where it stands against the formula's usual range
+ * (one a line); NULL for a point without one. */
+char *rugosa_readout_hazen_williams       (const RugosaOperatingPoint *p);
+char *rugosa_readout_hazen_williams_notes (const RugosaOperatingPoint *p);
 /* "+12.3 %" change of the total head loss since new. */
 char *rugosa_readout_change      (double ratio_to_new);
 

@@ -55,6 +55,7 @@ static const Column columns[] = {
   { "pressure-drop", N_("Pressure drop"), "pressure_drop", TRUE },
   { "reynolds", N_("Re"), "reynolds", TRUE },
   { "f", N_("f (Darcy)"), "friction_factor", TRUE },
+  { "hw-c", N_("Hazen–Williams C"), NULL, TRUE },
   { "regime", N_("Regime"), NULL, FALSE },
   { "zone", N_("Roughness zone"), NULL, FALSE },
   { "elasticity", N_("∂ln f/∂ln ε"), "roughness_elasticity", TRUE },
@@ -151,6 +152,12 @@ rugosa_results_table_format_cell (RugosaResultsTable *self,
       /* Whole, as the trade writes it. */
       return g_strdup (g_ascii_formatd (buf, sizeof buf, "%.0f", p->result.reynolds));
     }
+  if (g_strcmp0 (column, "hw-c") == 0)
+    {
+      /* water lines only; the tooltip says where the formula stands */
+      char *c = rugosa_readout_hazen_williams (p);
+      return c != NULL ? c : g_strdup ("—");
+    }
   if (g_strcmp0 (column, "regime") == 0)
     return g_strdup (rugosa_readout_regime (p->result.friction.regime));
   if (g_strcmp0 (column, "zone") == 0)
@@ -205,6 +212,20 @@ _rugosa_results_table_update_label (RugosaResultsTable *self,
     {
       g_autofree char *all = self->project ? rugosa_readout_warnings (self->project, line) : NULL;
       gtk_widget_set_tooltip_text (GTK_WIDGET (label), all);
+    }
+  else if (g_strcmp0 (column, "hw-c") == 0)
+    {
+      const RugosaLineResults *res = self->project ? rugosa_readout_results (self->project, line) : NULL;
+      g_autofree char *notes = res != NULL && res->ok
+                                 ? rugosa_readout_hazen_williams_notes (&res->points[RUGOSA_FLOW_DESIGN])
+                                 : NULL;
+
+      gtk_widget_set_tooltip_text (GTK_WIDGET (label), notes);
+      /* a C outside the formula's range is shown as such */
+      if (notes != NULL && res->points[RUGOSA_FLOW_DESIGN].hazen_williams_notes != 0)
+        gtk_widget_add_css_class (GTK_WIDGET (label), "dim-label");
+      else
+        gtk_widget_remove_css_class (GTK_WIDGET (label), "dim-label");
     }
 }
 

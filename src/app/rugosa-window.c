@@ -11,6 +11,7 @@
 #include "rugosa-project-settings-window.h"
 #include "rugosa-readout.h"
 #include "rugosa-seed.h"
+#include "rugosa-sizing-window.h"
 #include "rugosa-window-private.h"
 
 G_DEFINE_FINAL_TYPE (RugosaWindow, rugosa_window, ADW_TYPE_APPLICATION_WINDOW)
@@ -23,6 +24,12 @@ static const char *line_palette[] = {
 };
 
 static void _rugosa_window_setup (RugosaWindow *self);
+
+const char *
+rugosa_window_palette_colour (guint position)
+{
+  return line_palette[position % G_N_ELEMENTS (line_palette)];
+}
 
 RugosaWindow *
 rugosa_window_new (RugosaApplication *application)
@@ -972,6 +979,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
 
   _rugosa_window_files_class_init (widget_class);
   _rugosa_window_output_class_init (widget_class);
+  _rugosa_window_sizing_class_init (widget_class);
 }
 
 static void

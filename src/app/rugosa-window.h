@@ -64,6 +64,10 @@ gboolean       rugosa_window_print_to_pdf    (RugosaWindow      *self,
                                               const char        *path,
                                               GError           **error);
 
+/* The colour of the line option at `position` in a project: the
+ * window's palette, in turn (for lines added by other windows). */
+const char    *rugosa_window_palette_colour (guint position);
+
 /* Pieces, for tests and the benchmark. */
 GtkWidget     *rugosa_window_get_canvas     (RugosaWindow *self);
 GtkWidget     *rugosa_window_get_line_panel (RugosaWindow *self);

@@ -244,8 +244,11 @@ _rugosa_chart_place_labels (RugosaChart *chart)
   bounds.width = floor (bounds.width);
   bounds.height = floor (bounds.height);
   RugosaChartRect *obst = g_new (RugosaChartRect, 2 * n + 1);
-  Space s = { &bounds, obst, 0, chart->bg_boxes,
-              chart->bg_boxes_valid ? chart->n_bg_boxes : 0, 0 };
+  /* soft: the background's labels and a sizing's ladder (chart-ladder.c) */
+  const size_t n_bg = chart->bg_boxes_valid ? chart->n_bg_boxes : 0;
+  RugosaChartRect *soft = g_new (RugosaChartRect, n_bg + chart->n_ladder + 1);
+  memcpy (soft, chart->bg_boxes, n_bg * sizeof soft[0]);
+  Space s = { &bounds, obst, 0, soft, n_bg + _rugosa_chart_ladder_boxes (chart, soft + n_bg), 0 };
 
   g_free (chart->labels);
   chart->labels = g_new0 (ChartLabel, n ? n : 1);
@@ -300,6 +303,7 @@ _rugosa_chart_place_labels (RugosaChart *chart)
           }
       }
   g_free (obst);
+  g_free (soft);
   chart->placement_valid = 1;
   chart->placement_saw_bg_boxes = chart->bg_boxes_valid;
 }

@@ -67,6 +67,12 @@ struct RugosaChart {
   cairo_surface_t *legend_img;     /* the legend as pixels, and its key */
   GString *legend_key;
 
+  /* the ladder of a sizing (chart-ladder.c) */
+  RugosaChartRung *ladder;
+  char **ladder_labels;
+  size_t n_ladder;
+  RugosaChartRgba ladder_colour;
+
   /* text */
   PangoContext *pango;
   GHashTable *layouts;             /* key text → PangoLayout */
@@ -158,6 +164,12 @@ gboolean _rugosa_chart_export_surface (RugosaChartFormat format, double width,
                                        const char *title, const char *path,
                                        ChartExportDraw draw, gpointer data,
                                        GError **error);
+/* chart-ladder.c */
+void _rugosa_chart_draw_ladder (RugosaChart *chart, cairo_t *cr);
+void _rugosa_chart_free_ladder (RugosaChart *chart);
+/* The boxes of the ladder's points, for the overlay's labels to keep
+ * clear of (at most n_ladder written); returns how many. */
+size_t _rugosa_chart_ladder_boxes (RugosaChart *chart, RugosaChartRect *out);
 
 /* chart-overlay.c */
 /* The marker shape `shape` (a line's index: circle, square, diamond,

@@ -65,6 +65,7 @@ rugosa_chart_free (RugosaChart *chart)
   if (chart == NULL)
     return;
   free_lines (chart);
+  _rugosa_chart_free_ladder (chart);
   _rugosa_chart_free_curves (chart);
   g_clear_pointer (&chart->bg, cairo_surface_destroy);
   g_clear_pointer (&chart->legend_img, cairo_surface_destroy);
@@ -256,6 +257,7 @@ rugosa_chart_draw (RugosaChart *chart, cairo_t *cr)
   cairo_set_operator (cr, CAIRO_OPERATOR_SOURCE);
   cairo_paint (cr);
   cairo_restore (cr);
+  _rugosa_chart_draw_ladder (chart, cr);
   _rugosa_chart_draw_overlay (chart, cr, 1);
 }
 
@@ -268,6 +270,7 @@ rugosa_chart_draw_direct (RugosaChart *chart, cairo_t *cr)
   _rugosa_chart_draw_background (chart, cr);
   _rugosa_chart_draw_footer (chart, cr);
   cairo_restore (cr);
+  _rugosa_chart_draw_ladder (chart, cr);
   _rugosa_chart_draw_overlay (chart, cr, 0);
 }
 

@@ -84,6 +84,19 @@ typedef struct {
   int selected;
 } RugosaChartLine;
 
+/* One rung of the ladder (chart-ladder.c): a size a sizing tried, as its
+ * design point on its own roughness curve.  The label is copied by
+ * rugosa_chart_set_ladder. */
+typedef struct {
+  const char *label;       /* the designation, shown for marked rungs */
+  double re, f;            /* the design point (in the transitional range,
+                            * the turbulent value) */
+  double rr;               /* ε/D of its curve */
+  int passes;              /* keeps within every limit */
+  int recommended;
+  int selected;            /* chosen in the sizing's list */
+} RugosaChartRung;
+
 /* Colours of a theme (for tests and for an app that matches its panels). */
 typedef struct {
   RugosaChartRgba page, plot, ink, muted, grid;
@@ -115,6 +128,17 @@ void rugosa_chart_set_lines (RugosaChart *chart, const RugosaChartLine *lines,
                              size_t n_lines);
 /* Index of the hovered line, or -1. */
 void rugosa_chart_set_hover (RugosaChart *chart, int index);
+/* The ladder of a sizing, drawn faintly in `colour` under the lines, in
+ * size order (copied; n_rungs 0 removes it).  The background stays. */
+void rugosa_chart_set_ladder (RugosaChart *chart, const RugosaChartRung *rungs,
+                              size_t n_rungs, RugosaChartRgba colour);
+size_t rugosa_chart_ladder_count (const RugosaChart *chart);
+/* Device point of rung `index`; 0 when it is off the plot. */
+int rugosa_chart_ladder_position (RugosaChart *chart, size_t index,
+                                  double *x, double *y);
+/* The rung nearest (x, y) within `radius` device pixels, or -1. */
+int rugosa_chart_ladder_hit_test (RugosaChart *chart, double x, double y,
+                                  double radius);
 
 /* Paint the cached background (rebuilt only when stale) then the overlay.
  * `cr` is in device coordinates. */

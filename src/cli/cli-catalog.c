@@ -108,7 +108,9 @@ pipes (GString *out, gboolean json)
           cli_json_string (&j, "material", p->material_id);
           cli_json_number (&j, "outside_diameter_m", p->outside_diameter_m);
           cli_json_number (&j, "wall_m", p->wall_m);
+          cli_json_number (&j, "lining_m", p->lining_m);
           cli_json_number (&j, "inner_diameter_m", p->inner_diameter_m);
+          cli_json_string (&j, "catalog", rg_pipe_catalog_at (p->catalog)->name);
           cli_json_string (&j, "source", p->source);
           item_end (&j, out);
         }

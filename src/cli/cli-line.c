@@ -25,6 +25,7 @@
 #include "model/rugosa-fields.h"
 #include "model/rugosa-output.h"
 #include "model/rugosa-units.h"
+#include "model/rugosa-sizing.h"
 
 /* Options of the CLI's own that are no field: what they stand for. */
 static const struct {
@@ -32,19 +33,16 @@ static const struct {
   RgSubjects subjects;
 } own_options[] = {
   { "--k-sum", RG_SUBJECT_BIT (RG_SUBJECT_K_SUM) },
+  /* the inverse problems: what to solve for, and the head loss allowed */
+  { "--solve", 0 },
+  { "--head-loss", RG_SUBJECT_BIT (RG_SUBJECT_HEAD_LOSS) },
 };
 
-/* The options of `line` (or of `fluid`): every row with a CLI option, then
- * the CLI's own; built once. */
-static const CliOption *
-options_for (gboolean fluid_only)
+GArray *
+cli_field_options (gboolean fluid_only)
 {
-  static CliOption *cache[2];
-  GArray *a;
+  GArray *a = g_array_new (TRUE, TRUE, sizeof (CliOption));
 
-  if (cache[fluid_only] != NULL)
-    return cache[fluid_only];
-  a = g_array_new (TRUE, TRUE, sizeof (CliOption));
   for (int table = 0; table < 2; table++)
     {
       guint n;
@@ -62,6 +60,20 @@ options_for (gboolean fluid_only)
           g_array_append_val (a, o);
         }
     }
+  return a;
+}
+
+/* The options of `line` (or of `fluid`): every row with a CLI option, then
+ * the CLI's own; built once. */
+static const CliOption *
+options_for (gboolean fluid_only)
+{
+  static CliOption *cache[2];
+  GArray *a;
+
+  if (cache[fluid_only] != NULL)
+    return cache[fluid_only];
+  a = cli_field_options (fluid_only);
   if (!fluid_only)
     for (gsize i = 0; i < G_N_ELEMENTS (own_options); i++)
       {
@@ -132,8 +144,8 @@ options_of_subjects (const CliArgs *args, RgSubjects subjects)
   return g_strdup (s->str);
 }
 
-static int
-fail_subjects (const CliArgs *args, RgSubjects subjects, const char *sentence)
+int
+cli_fail_subjects (const CliArgs *args, RgSubjects subjects, const char *sentence)
 {
   g_autofree char *options = options_of_subjects (args, subjects);
 
@@ -294,11 +306,9 @@ apply_enum (const CliArgs *args, const RugosaField *row, GObject *target,
   return TRUE;
 }
 
-/* Apply every option given to the line and the settings.  On a refusal
- * returns FALSE with the option in *option and the sentence in `err`. */
-static gboolean
-apply_options (const CliArgs *args, gboolean fluid_only, RugosaLine *line,
-               RugosaSettings *settings, const char **option, RgError *err)
+gboolean
+cli_apply_field_options (const CliArgs *args, gboolean fluid_only, RugosaLine *line,
+                         RugosaSettings *settings, const char **option, RgError *err)
 {
   for (int table = 0; table < 2; table++)
     {
@@ -401,9 +411,8 @@ apply_options (const CliArgs *args, gboolean fluid_only, RugosaLine *line,
   return TRUE;
 }
 
-/* The fluid kind from `text`, and the states that kind needs. */
-static int
-set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
+int
+cli_set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
 {
   RgFluidKind kind;
   RgError err = { 0 };
@@ -457,9 +466,9 @@ cli_cmd_fluid (int argc, char **argv)
     return cli_fail ("%s", msg->str);
   if (args.positional->len != 1)
     return cli_fail (_("'fluid' needs exactly one fluid name: water, seawater, oil, air or custom."));
-  if ((status = set_fluid (&args, g_ptr_array_index (args.positional, 0), line)) != CLI_EXIT_OK)
+  if ((status = cli_set_fluid (&args, g_ptr_array_index (args.positional, 0), line)) != CLI_EXIT_OK)
     return status;
-  if (!apply_options (&args, TRUE, line, settings, &option, &err))
+  if (!cli_apply_field_options (&args, TRUE, line, settings, &option, &err))
     return cli_fail_option (option, err.text);
   if (!cli_apply_units (&args, settings))
     return CLI_EXIT_USAGE;
@@ -469,7 +478,7 @@ cli_cmd_fluid (int argc, char **argv)
    * °C, kPa …) */
   err.units = warnings.units = rugosa_settings_get_unit_choice (settings);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
-    return fail_subjects (&args, rg_fluid_subjects_behind (spec.kind, err.subjects), err.text);
+    return cli_fail_subjects (&args, rg_fluid_subjects_behind (spec.kind, err.subjects), err.text);
 
   if (cli_args_has (&args, "--json"))
     {
@@ -517,7 +526,8 @@ cli_cmd_line (int argc, char **argv)
   g_autofree RugosaLineResults *copy = NULL;
   const RugosaOperatingPoint *p;
   RgError err = { 0 };
-  const char *option = NULL, *fluid, *failed = NULL;
+  const char *option = NULL, *fluid, *failed = NULL, *solve;
+  double head_loss = 0.0, solved = 0.0;
   int status;
 
   if (!cli_args_parse (&args, "line", options_for (FALSE), argc, argv, 2, msg))
@@ -528,14 +538,46 @@ cli_cmd_line (int argc, char **argv)
       return cli_fail (_("Unexpected argument \"%s\" for 'line'."), shown);
     }
 
+  /* The inverse problems: the flow for a head loss, or the smallest bore
+   * within the limits given. */
+  solve = cli_args_get (&args, "--solve");
+  if (solve != NULL && !g_str_equal (solve, "flow") && !g_str_equal (solve, "diameter"))
+    return cli_fail_option ("--solve", _("Solve for “flow” (with --head-loss) or for “diameter” (with --head-loss, --max-velocity or --max-gradient)."));
+  if (cli_args_has (&args, "--head-loss"))
+    {
+      guint n;
+      const RugosaField *row = rugosa_sizing_fields (&n);
+
+      if (solve == NULL)
+        return cli_fail_option ("--head-loss", _("The head loss is what --solve flow or --solve diameter works to: give one of them."));
+      if (!rugosa_field_parse_text (row, cli_args_get (&args, "--head-loss"), NULL, 0.0, &head_loss, &err)
+          || head_loss == 0.0 || !rugosa_field_in_range (row, head_loss, NULL, &err))
+        {
+          if (head_loss == 0.0 && err.text[0] == '\0')
+            (void) rugosa_field_in_range (row, -1.0, NULL, &err);
+          return cli_fail_option ("--head-loss", err.text);
+        }
+    }
+  if (solve != NULL && g_str_equal (solve, "flow") && !cli_args_has (&args, "--head-loss"))
+    return cli_fail_option ("--solve", _("--solve flow needs the total head loss to find the flow for: add --head-loss, e.g. --head-loss \"12 m\"."));
+  if (solve != NULL && g_str_equal (solve, "diameter"))
+    {
+      if (cli_args_has (&args, "--pipe") || cli_args_has (&args, "--diameter"))
+        return cli_fail_option ("--solve", _("--solve diameter finds the bore: give neither --diameter nor --pipe."));
+      if (!cli_args_has (&args, "--head-loss") && !cli_args_has (&args, "--max-velocity")
+          && !cli_args_has (&args, "--max-gradient"))
+        return cli_fail_option ("--solve", _("--solve diameter needs a limit to keep within: --head-loss, --max-velocity or --max-gradient."));
+    }
+
   /* What must be given, and what excludes what. */
   if (cli_args_has (&args, "--pipe") && cli_args_has (&args, "--diameter"))
     return cli_fail (_("Give either --pipe (a catalog designation) or --diameter (an inner diameter), not both."));
-  if (!cli_args_has (&args, "--pipe") && !cli_args_has (&args, "--diameter"))
+  if (!cli_args_has (&args, "--pipe") && !cli_args_has (&args, "--diameter")
+      && !(solve != NULL && g_str_equal (solve, "diameter")))
     return cli_fail (_("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\"."));
   if (cli_args_has (&args, "--roughness") && cli_args_has (&args, "--material"))
     return cli_fail (_("Give either --roughness (a value) or --material (a catalog name), not both."));
-  if (!cli_args_has (&args, "--flow"))
+  if (!cli_args_has (&args, "--flow") && !(solve != NULL && g_str_equal (solve, "flow")))
     return cli_fail (_("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\"."));
   if (!cli_args_has (&args, "--length"))
     return cli_fail (_("--length is required: give the line length, e.g. --length \"250 m\"."));
@@ -544,9 +586,9 @@ cli_cmd_line (int argc, char **argv)
   if ((fluid = cli_args_get (&args, "--fluid")) == NULL)
     return cli_fail (_("--fluid is required: water, seawater, oil, air or custom."));
 
-  if ((status = set_fluid (&args, fluid, line)) != CLI_EXIT_OK)
+  if ((status = cli_set_fluid (&args, fluid, line)) != CLI_EXIT_OK)
     return status;
-  if (!apply_options (&args, FALSE, line, settings, &option, &err))
+  if (!cli_apply_field_options (&args, FALSE, line, settings, &option, &err))
     return cli_fail_option (option, err.text);
   if (!cli_apply_units (&args, settings))
     return CLI_EXIT_USAGE;
@@ -562,15 +604,41 @@ cli_cmd_line (int argc, char **argv)
       g_object_set (line, "material-id", pipe->material_id, NULL);
     }
   if (rugosa_settings_check (settings, &failed, &err) != RG_OK)
-    return fail_subjects (&args, err.subjects | rugosa_field_find (failed)->subjects, err.text);
+    return cli_fail_subjects (&args, err.subjects | rugosa_field_find (failed)->subjects, err.text);
 
   rugosa_project_insert_line (project, 0, line);
+  if (solve != NULL)
+    {
+      gboolean ok;
+
+      if (g_str_equal (solve, "flow"))
+        {
+          ok = rugosa_solve_flow (project, line, -1.0, head_loss, &solved, &err);
+          if (ok)
+            g_object_set (line, "flow-design", solved, NULL);
+        }
+      else
+        {
+          RugosaLimits limits = { 0.0, 0.0, 0.0, head_loss };
+
+          /* the limits given, and no other */
+          if (cli_args_has (&args, "--max-velocity"))
+            limits.velocity_max = rugosa_settings_get_double (settings, "velocity-limit");
+          if (cli_args_has (&args, "--max-gradient"))
+            limits.gradient_max = rugosa_settings_get_double (settings, "gradient-limit");
+          ok = rugosa_solve_diameter (project, line, -1.0, &limits, &solved, &err);
+          if (ok)
+            g_object_set (line, "inner-diameter", solved, NULL);
+        }
+      if (!ok)
+        return cli_fail_subjects (&args, err.subjects, err.text);
+    }
   r = rugosa_project_get_results (project, line);
   if (!r->ok)
-    return fail_subjects (&args, r->error_subjects, r->error);
+    return cli_fail_subjects (&args, r->error_subjects, r->error);
   if (!r->points[RUGOSA_FLOW_DESIGN].ok)
-    return fail_subjects (&args, r->points[RUGOSA_FLOW_DESIGN].error_subjects,
-                          r->points[RUGOSA_FLOW_DESIGN].error);
+    return cli_fail_subjects (&args, r->points[RUGOSA_FLOW_DESIGN].error_subjects,
+                              r->points[RUGOSA_FLOW_DESIGN].error);
   /* a copy of the results, to add the warnings of the command line's own
    * (whole, so that its design point is still the design point) */
   copy = g_memdup2 (r, sizeof *r);
@@ -581,6 +649,15 @@ cli_cmd_line (int argc, char **argv)
   if (cli_args_has (&args, "--json"))
     {
       g_string_append_c (out, '{');
+      if (solve != NULL)
+        {
+          char buf[G_ASCII_DTOSTR_BUF_SIZE];
+
+          /* what was solved for; the flow is no key of a point */
+          g_string_append_printf (out, "\n  \"solved\": \"%s\",", solve);
+          if (g_str_equal (solve, "flow"))
+            g_string_append_printf (out, "\n  \"flow_m3_s\": %s,", cli_format_exact (solved, buf, sizeof buf));
+        }
       rugosa_output_point_json (out, r, p, "\n  ");
       g_string_append (out, "\n}\n");
     }
@@ -589,6 +666,20 @@ cli_cmd_line (int argc, char **argv)
       const char *designation = rugosa_line_get_pipe_designation (line);
       const char *material_id = rugosa_line_get_material_id (line);
       const RgMaterial *material = NULL;
+
+      if (solve != NULL)
+        {
+          gboolean flow = g_str_equal (solve, "flow");
+          RugosaDisplayQuantity dq = flow ? RUGOSA_DISPLAY_FLOW : RUGOSA_DISPLAY_DIAMETER;
+          const char *unit = rugosa_output_unit (settings, dq);
+          double shown = solved;
+          char buf[G_ASCII_DTOSTR_BUF_SIZE];
+
+          (void) rg_units_from_si (flow ? RG_QTY_FLOW : RG_QTY_LENGTH, solved, unit, &shown, NULL);
+          cli_pad (out, flow ? _("Flow for the head loss") : _("Smallest bore within the limits"), 38);
+          g_string_append_printf (out, "%s %s\n", cli_format_short (shown, buf, sizeof buf),
+                                  rugosa_display_unit_symbol (unit));
+        }
 
       /* what the catalogs chose, named by the rows' labels */
       if (designation != NULL)

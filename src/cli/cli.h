@@ -132,10 +132,29 @@ char *cli_units_help (void);
  * number; `units` are those the warning is written in. */
 void cli_check_plausible (const CliArgs *args, const RugosaLineResults *r,
                           RugosaOperatingPoint *p, RugosaSettings *units);
+/* The options built from the field rows (cli-line.c), shared by the
+ * commands that describe a line: every row of the line and settings
+ * tables with a CLI option (`fluid_only`: the fluid's state alone), in
+ * table order, in a new array (zero-terminated). */
+GArray *cli_field_options (gboolean fluid_only);
+/* The fluid kind from `text` (--fluid) set on `line`, and a refusal for a
+ * state that kind needs and `args` lacks: CLI_EXIT_OK or the exit status
+ * of the refusal written. */
+int cli_set_fluid (const CliArgs *args, const char *text, RugosaLine *line);
+/* Every row option given, parsed with its row's quantity and checked
+ * against its range, set on the line and the settings.  On a refusal
+ * FALSE, the option in *option and the sentence in `err`. */
+gboolean cli_apply_field_options (const CliArgs *args, gboolean fluid_only,
+                                  RugosaLine *line, RugosaSettings *settings,
+                                  const char **option, RgError *err);
+/* A refusal naming the options behind `subjects` (those given first). */
+int cli_fail_subjects (const CliArgs *args, RgSubjects subjects,
+                       const char *sentence);
 
 int cli_cmd_friction (int argc, char **argv);
 int cli_cmd_fluid (int argc, char **argv);
 int cli_cmd_line (int argc, char **argv);
+int cli_cmd_size (int argc, char **argv);
 int cli_cmd_catalog (int argc, char **argv);
 int cli_cmd_eval (int argc, char **argv);
 int cli_cmd_render (int argc, char **argv);

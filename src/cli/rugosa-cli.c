@@ -29,6 +29,14 @@ static const char usage_text[] = N_(
   "             (--roughness E | --material NAME) --fluid KIND [fluid options]\n"
   "             [--k-sum K] [--fitting NAME[xCOUNT]]... [--elevation DZ]\n"
   "             [--age YEARS --aging CLASS|RATE] [--model M] [--json]\n"
+  "             --solve flow --head-loss H: the flow for a total head loss H\n"
+  "             --solve diameter [--head-loss H] [--max-velocity V] [--max-gradient G]:\n"
+  "                 the smallest bore within the limits given (no --diameter, --pipe)\n"
+  "  size       every catalog size of a material for a duty, and the recommended one\n"
+  "             --flow Q --length L --material ID --fluid KIND [fluid options]\n"
+  "             [--catalog NAME] [--fitting NAME[xN]]... [--elevation DZ]\n"
+  "             [--max-velocity V] [--min-velocity V] [--max-gradient G]\n"
+  "             [--max-head-loss H] [--age YEARS --aging CLASS|RATE] [--json]\n"
   "  eval       evaluate every line option of a project file\n"
   "             PROJECT [--age YEARS] [--format table|csv|json]\n"
   "             energy settings for this run: [--efficiency PERCENT] [--hours H]\n"
@@ -82,6 +90,7 @@ main (int argc, char **argv)
     { "friction", cli_cmd_friction },
     { "fluid", cli_cmd_fluid },
     { "line", cli_cmd_line },
+    { "size", cli_cmd_size },
     { "catalog", cli_cmd_catalog },
     { "eval", cli_cmd_eval },
     { "render", cli_cmd_render },

@@ -40,6 +40,11 @@ typedef struct {
   double hydraulic_power_w;   /* ρ·g·Q·H at the service age */
   double electric_power_w;    /* hydraulic power / pump and motor efficiency */
   double electric_power_new_w; /* the same when new */
+  /* The Hazen–Williams C that gives the pipe-friction loss at the service
+   * age: the design point of a line of water (or seawater) only. */
+  gboolean has_hazen_williams;
+  double hazen_williams_c;
+  guint hazen_williams_notes; /* RgHazenWilliamsNote bits: outside the usual range */
 } RugosaOperatingPoint;
 
 /* How the search for a duty point ended. */

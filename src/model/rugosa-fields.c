@@ -269,11 +269,20 @@ static RugosaField settings_fields[] = {
   NUM ("velocity-limit", "limits.velocity_m_s", VELOCITY, 0.01, 100.0, 3.0,
        RUGOSA_FIELD_SEEDED, N_("Velocity limit"),
        N_("A mean velocity above this gives a warning."),
-       NULL, 0, S (velocity_limit), -1),
+       "--max-velocity", 0, S (velocity_limit), -1),
   NUM ("gradient-limit", "limits.gradient_m_per_100m", GRADIENT, 0.001, 1000.0, 5.0,
        RUGOSA_FIELD_SEEDED, N_("Gradient limit"),
        N_("A pipe-friction loss per 100 length units of line above this gives a warning."),
-       NULL, 0, S (gradient_limit), -1),
+       "--max-gradient", 0, S (gradient_limit), -1),
+  /* A project's design criterion like the velocity limit (a self-cleansing
+   * or water-age velocity the client or the code asks for), so it is a
+   * project setting, not a value of one sizing; none by default.  Checked
+   * at the design flow: the lowest flow of a main (a night flow) is
+   * expected to fall below it. */
+  NUM ("velocity-minimum", "limits.velocity_minimum_m_s", VELOCITY, 0.01, 100.0, 0.0,
+       RUGOSA_FIELD_ZERO_ABSENT, N_("Lowest velocity"),
+       N_("A mean velocity at the design flow below this gives a warning; none when not given."),
+       "--min-velocity", 0, S (velocity_minimum), -1),
   { "pump-efficiency", "energy.efficiency_percent", RUGOSA_FIELD_NUMBER,
     RUGOSA_DISPLAY_NUMBER, 1.0, 0.0, 100.0, 70.0, NULL, RUGOSA_FIELD_MIN_OPEN,
     N_("Pump and motor efficiency"),

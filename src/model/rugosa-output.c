@@ -11,6 +11,7 @@
 #include <string.h>
 
 #include "core/aging.h"
+#include "core/hazen-williams.h"
 #include "rugosa-display.h"
 #include "rugosa-fields.h"
 #include "rugosa-model-private.h"
@@ -75,6 +76,20 @@ static gboolean has_life_cycle (const RugosaLineResults *r, const RugosaOperatin
 static gboolean has_duty (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return is_design (r, p) && r->energy.duty_ok; }
 static gboolean has_duty_new (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return is_design (r, p) && r->energy.duty_new_ok; }
 
+static double get_hw_c (const RugosaLineResults *r, const RugosaOperatingPoint *p) { return p->hazen_williams_c; }
+static gboolean has_hw (const RugosaOperatingPoint *p) { return p->has_hazen_williams; }
+
+/* "usual", or the first note of rg_hazen_williams_notes (in the order of
+ * its bits: fluid, regime, velocity, bore). */
+static const char *
+id_hw_range (const RugosaOperatingPoint *p)
+{
+  for (unsigned b = 0; b < RG_HW_N_NOTES; b++)
+    if (p->hazen_williams_notes & (1u << b))
+      return rg_hazen_williams_note_id (1u << b);
+  return rg_hazen_williams_note_id (0);
+}
+
 static const char *id_regime (const RugosaOperatingPoint *p) { return rg_regime_id (p->result.friction.regime); }
 static const char *id_zone (const RugosaOperatingPoint *p) { return rg_roughness_zone_id (p->result.friction.zone); }
 
@@ -110,6 +125,8 @@ static const RugosaOutputKey KEYS[] = {
   NUMBER ("roughness_new", N_("Roughness when new"), ROUGHNESS, get_roughness_new, NULL),
   NUMBER ("head_loss_ratio_to_new", N_("Head loss, ratio to new"), NUMBER, get_ratio, NULL),
   NUMBER ("minor_loss_k_total", N_("ΣK of fittings"), NUMBER, get_k_total, NULL),
+  NUMBER ("hazen_williams_c_equivalent", N_("Hazen–Williams C equivalent"), NUMBER, get_hw_c, has_hw),
+  { "hazen_williams_range", N_("Hazen–Williams range"), RUGOSA_DISPLAY_NUMBER, RUGOSA_OUTPUT_ID, NULL, id_hw_range, has_hw, NULL },
   NUMBER ("pump_head", N_("Pump head (losses and elevation change)"), HEAD, get_pump_head, NULL),
   NUMBER ("hydraulic_power", N_("Hydraulic power ρgQH"), POWER, get_hydraulic_power, NULL),
   NUMBER ("pump_power", N_("Electric input power"), POWER, get_pump_power, NULL),

@@ -23,6 +23,7 @@
 #include "core/catalog.h"
 #include "core/fittings.h"
 #include "core/fluid.h"
+#include "core/hazen-williams.h"
 #include "core/line.h"
 #include "rugosa-display.h"
 #include "rugosa-eval-private.h"
@@ -88,6 +89,14 @@ lookup_pipe (RugosaProject *self, const char *designation, const RgPipe **pipe,
   if ((st = rg_pipe_lookup (designation, pipe, err)) == RG_OK)
     g_hash_table_insert (self->pipe_memo, g_strdup (designation), (gpointer) *pipe);
   return st;
+}
+
+void
+_rugosa_project_remember_pipe (RugosaProject *self, const RgPipe *pipe)
+{
+  /* a catalog designation finds its own row (tests/test-catalog.c) */
+  if (!g_hash_table_contains (self->pipe_memo, pipe->designation))
+    g_hash_table_insert (self->pipe_memo, g_strdup (pipe->designation), (gpointer) pipe);
 }
 
 void
@@ -157,6 +166,44 @@ add_point_warnings (RugosaOperatingPoint *p, const RgFluidSpec *spec,
   if (spec->kind == RG_FLUID_AIR)
     (void) rg_air_compressibility_warning (r->pressure_drop_pa, spec->pressure_pa,
                                            &p->warnings);
+}
+
+/* The lowest velocity is a criterion of the design flow (the lowest flow
+ * of a main is expected to fall below it: rugosa-fields.c). */
+static void
+add_minimum_velocity_warning (RugosaOperatingPoint *p, RugosaSettings *settings)
+{
+  const double v_min = settings->velocity_minimum;
+
+  if (v_min > 0.0 && p->result.velocity_m_s < v_min)
+    {
+      const char *unit = rugosa_settings_get_unit (settings, RUGOSA_DISPLAY_VELOCITY);
+      g_autofree char *v = rugosa_display_format_screen (RG_QTY_VELOCITY, p->result.velocity_m_s, unit);
+      g_autofree char *lim = rugosa_display_format_screen (RG_QTY_VELOCITY, v_min, unit);
+      g_autofree char *text = g_strdup_printf (_("The velocity %s is below the lowest velocity of %s."), v, lim);
+
+      rg_warnings_add (&p->warnings, "%s", text);
+    }
+}
+
+/* The Hazen–Williams C of a water line's design point, at the age shown. */
+static void
+add_hazen_williams (RugosaOperatingPoint *p, const RgFluidSpec *spec,
+                    double diameter, double length)
+{
+  const RgLineResult *r = &p->result;
+  double c;
+
+  if (spec->kind != RG_FLUID_WATER && spec->kind != RG_FLUID_SEAWATER)
+    return;
+  if (rg_hazen_williams_c (r->velocity_m_s, diameter, r->head_loss_major_m, length,
+                           &c, NULL) != RG_OK)
+    return;
+  p->has_hazen_williams = TRUE;
+  p->hazen_williams_c = c;
+  p->hazen_williams_notes = rg_hazen_williams_notes (spec->kind == RG_FLUID_WATER,
+                                                     r->friction.regime,
+                                                     r->velocity_m_s, diameter);
 }
 
 static void
@@ -309,7 +356,7 @@ _rugosa_line_setup_at (const RugosaLineSetup *setup, double q, double age_years,
 
 static void
 evaluate_line (RugosaProject *self, RugosaLine *line, double age,
-               RugosaLineResults *r)
+               gboolean in_project, RugosaLineResults *r)
 {
   RugosaSettings *settings = self->settings;
   RgError err = { 0 };
@@ -383,8 +430,16 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
       for (int w = 0; w < setup.fluid_warnings.count; w++)
         rg_warnings_add (&p->warnings, "%s", setup.fluid_warnings.text[w]);
       add_point_warnings (p, &setup.spec, setup.model, settings);
+      if (c == RUGOSA_FLOW_DESIGN)
+        {
+          add_minimum_velocity_warning (p, settings);
+          add_hazen_williams (p, &setup.spec, setup.diameter_m, line->length);
+        }
     }
-  _rugosa_life_cycle_fill (self, line, &setup, r);
+  /* The energy over the years is the line's own: a line evaluated outside
+   * the project (a sizing's candidate) has none. */
+  if (in_project)
+    _rugosa_life_cycle_fill (self, line, &setup, r);
   _rugosa_line_setup_clear (&setup);
 }
 
@@ -431,6 +486,19 @@ rugosa_project_get_life_cycle (RugosaProject *self, RugosaLine *line)
   return c->life;
 }
 
+void
+rugosa_project_evaluate_line (RugosaProject *self, RugosaLine *line,
+                              double age_years, RugosaLineResults *out)
+{
+  g_return_if_fail (RUGOSA_IS_PROJECT (self));
+  g_return_if_fail (RUGOSA_IS_LINE (line));
+  g_return_if_fail (out != NULL);
+
+  if (age_years < 0.0 || !isfinite (age_years))
+    age_years = self->settings->service_age;
+  evaluate_line (self, line, age_years, FALSE, out);
+}
+
 const RugosaLineResults *
 rugosa_project_get_results_at (RugosaProject *self, RugosaLine *line,
                                double age_years)
@@ -465,7 +533,7 @@ rugosa_project_get_results_at (RugosaProject *self, RugosaLine *line,
     }
   e->age_years = age_years;
   e->used = self->eval_clock;
-  evaluate_line (self, line, age_years, &e->results);
+  evaluate_line (self, line, age_years, TRUE, &e->results);
   return &e->results;
 }
 

@@ -2,6 +2,7 @@
 /* The RugosaProject struct, shared by rugosa-project*.c. */
 #pragma once
 
+#include "core/catalog.h"
 #include "rugosa-model-private.h"
 
 struct _RugosaProject
@@ -18,3 +19,7 @@ struct _RugosaProject
   guint64 evaluation_count;
   guint64 eval_clock;         /* counts cache lookups, for LRU */
 };
+
+/* Remember a catalog pipe under its own designation, so that evaluating
+ * lines named by catalog designations skips the parser (sizing). */
+void _rugosa_project_remember_pipe (RugosaProject *self, const RgPipe *pipe);

@@ -92,6 +92,12 @@ const RugosaLineResults *rugosa_project_get_results (RugosaProject *self,
 const RugosaLineResults *rugosa_project_get_results_at (RugosaProject *self,
                                                         RugosaLine *line,
                                                         double age_years);
+/* The same evaluation, uncached, of a line that need not be part of the
+ * project (a sizing candidate, a step of an inverse problem), with the
+ * project's settings, into `out`; without the energy over the service
+ * life, which belongs to the project's own lines. */
+void rugosa_project_evaluate_line (RugosaProject *self, RugosaLine *line,
+                                   double age_years, RugosaLineResults *out);
 /* How many line evaluations were computed so far (for tests and
  * diagnostics of the cache). */
 guint64 rugosa_project_get_evaluation_count (RugosaProject *self);

@@ -28,6 +28,7 @@ struct _RugosaSettings
   double energy_price;      /* currency per kWh */
   double service_life;      /* years */
   double discount_rate;     /* per cent per year */
+  double velocity_minimum;        /* 0: none */
 
   /* owned, not fields */
   cJSON *extra;
