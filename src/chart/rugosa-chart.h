@@ -82,6 +82,11 @@ typedef struct {
   const char *readout_head_per_100m;
   const char *readout_head_total;
   int selected;
+  int pinned;                    /* labelled whatever the crowd, like the
+                                  * selected line */
+  int number;                    /* shown beside the marker when it gets
+                                  * no label: its place in the caller's
+                                  * list (0: index + 1) */
 } RugosaChartLine;
 
 /* Colours of a theme (for tests and for an app that matches its panels). */
@@ -113,8 +118,13 @@ const RugosaChartSpec *rugosa_chart_get_spec (const RugosaChart *chart);
  * background (their curves are drawn there). */
 void rugosa_chart_set_lines (RugosaChart *chart, const RugosaChartLine *lines,
                              size_t n_lines);
-/* Index of the hovered line, or -1. */
+/* Index of the hovered line, or -1.  Only redraws: a hover never moves a
+ * label. */
 void rugosa_chart_set_hover (RugosaChart *chart, int index);
+/* How many times the labels were placed (tests, benchmark): new lines
+ * whose markers stay on the same pixels with labels of the same size keep
+ * the placement. */
+unsigned rugosa_chart_placements (const RugosaChart *chart);
 
 /* Paint the cached background (rebuilt only when stale) then the overlay.
  * `cr` is in device coordinates. */
@@ -158,11 +168,13 @@ int rugosa_chart_hit_test (RugosaChart *chart, double x, double y,
 
 /* Where the overlay put things (after a draw or a call to this function). */
 typedef struct {
-  int visible;             /* 0 when no free place was found */
+  int visible;             /* 0 when the line got no label */
   int compact;             /* name only */
   int has_leader;
   RugosaChartRect box;
   RugosaChartRect marker;  /* the marker's (or transitional bar's) box */
+  int numbered;            /* no label: the line's number beside its marker */
+  RugosaChartRect tag;     /* the number's box */
 } RugosaChartLabelInfo;
 int rugosa_chart_get_label (RugosaChart *chart, size_t index,
                             RugosaChartLabelInfo *out);
