@@ -21,6 +21,7 @@
 #include "core/fittings.h"
 #include "core/fluid.h"
 #include "core/units.h"
+#include "model/rugosa-field-store.h"
 #include "model/rugosa-fields.h"
 #include "model/rugosa-output.h"
 
@@ -61,11 +62,16 @@ options_for (gboolean fluid_only)
         }
     }
   if (!fluid_only)
-    for (gsize i = 0; i < G_N_ELEMENTS (own_options); i++)
-      {
-        CliOption o = { own_options[i].option, TRUE, FALSE };
-        g_array_append_val (a, o);
-      }
+    {
+      CliOption batch = { "--batch", TRUE, FALSE };
+
+      for (gsize i = 0; i < G_N_ELEMENTS (own_options); i++)
+        {
+          CliOption o = { own_options[i].option, TRUE, FALSE };
+          g_array_append_val (a, o);
+        }
+      g_array_append_val (a, batch);
+    }
   {
     CliOption json = { "--json", FALSE, FALSE };
     g_array_append_val (a, json);
@@ -129,13 +135,76 @@ options_of_subjects (const CliArgs *args, RgSubjects subjects)
   return g_strdup (s->str);
 }
 
-static int
-fail_subjects (const CliArgs *args, RgSubjects subjects, const char *sentence)
+const CliOption *
+cli_line_options (void)
 {
-  g_autofree char *options = options_of_subjects (args, subjects);
-
-  return cli_fail_option (options, sentence);
+  return options_for (FALSE);
 }
+
+void
+cli_refusal_clear (CliRefusal *why)
+{
+  g_clear_pointer (&why->option, g_free);
+  g_clear_pointer (&why->sentence, g_free);
+}
+
+int
+cli_fail_refusal (const CliRefusal *why)
+{
+  if (why->option == NULL)
+    return cli_fail ("%s", why->sentence);
+  return cli_fail_option (why->option, why->sentence);
+}
+
+/* Fills `why` (FALSE, for a tail call). */
+static gboolean
+refuse (CliRefusal *why, const char *option, const char *sentence)
+{
+  cli_refusal_clear (why);
+  why->option = g_strdup (option);
+  why->sentence = g_strdup (sentence);
+  return FALSE;
+}
+
+static gboolean
+refuse_subjects (const CliArgs *args, RgSubjects subjects, const char *sentence,
+                 CliRefusal *why)
+{
+  cli_refusal_clear (why);
+  why->option = options_of_subjects (args, subjects);
+  why->sentence = g_strdup (sentence);
+  return FALSE;
+}
+
+/* Catalog look-ups compare a text with every entry (a pipe designation is
+ * parsed first): the rows of a batch repeat the same few names, so what
+ * each text found is remembered for the life of the process.  Refusals
+ * are not: their sentences are wanted. */
+static GHashTable *
+memo_table (GHashTable **memo)
+{
+  if (*memo == NULL)
+    *memo = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL);
+  return *memo;
+}
+
+#define MEMO_LOOKUP(fn, type)                                             \
+  static RgStatus                                                         \
+  memo_##fn (const char *text, const type **out, RgError *err)            \
+  {                                                                       \
+    static GHashTable *memo;                                              \
+    RgStatus st;                                                          \
+    if ((*out = g_hash_table_lookup (memo_table (&memo), text)) != NULL)  \
+      return RG_OK;                                                       \
+    if ((st = fn (text, out, err)) == RG_OK)                              \
+      g_hash_table_insert (memo, g_strdup (text), (gpointer) *out);       \
+    return st;                                                            \
+  }
+MEMO_LOOKUP (rg_pipe_lookup, RgPipe)
+MEMO_LOOKUP (rg_material_lookup, RgMaterial)
+MEMO_LOOKUP (rg_aging_class_lookup, RgAgingClass)
+MEMO_LOOKUP (rg_fitting_lookup, RgFitting)
+#undef MEMO_LOOKUP
 
 /* "NAME", "NAME x3", "NAMEx3", "NAME*3", "K=0.5", "K=0.5 x2". */
 static gboolean
@@ -187,7 +256,7 @@ parse_fitting (const char *text, const char **id, double *k, double *count,
         }
       return TRUE;
     }
-  if (rg_fitting_lookup (name, &fitting, err) != RG_OK)
+  if (memo_rg_fitting_lookup (name, &fitting, err) != RG_OK)
     return FALSE;
   *id = fitting->id;
   return TRUE;
@@ -205,7 +274,7 @@ apply_number (const CliArgs *args, const RugosaField *row, GObject *target,
                                 density, &stored, err)
       || !rugosa_field_in_range (row, stored, NULL, err))
     return FALSE;
-  g_object_set (target, row->property, stored, NULL);
+  rugosa_field_store_double (target, row, stored);
   return TRUE;
 }
 
@@ -219,17 +288,17 @@ apply_catalog (const CliArgs *args, const RugosaField *row, RugosaLine *line,
     {
       const RgMaterial *m;
 
-      if (rg_material_lookup (text, &m, err) != RG_OK)
+      if (memo_rg_material_lookup (text, &m, err) != RG_OK)
         return FALSE;
-      g_object_set (line, row->property, m->id, NULL);
+      rugosa_field_store_string (line, row, m->id);
     }
   else if (g_str_equal (row->property, "pipe-designation"))
     {
       const RgPipe *p;
 
-      if (rg_pipe_lookup (text, &p, err) != RG_OK)
+      if (memo_rg_pipe_lookup (text, &p, err) != RG_OK)
         return FALSE;
-      g_object_set (line, row->property, p->designation, NULL);
+      rugosa_field_store_string (line, row, p->designation);
     }
   else
     {
@@ -239,9 +308,9 @@ apply_catalog (const CliArgs *args, const RugosaField *row, RugosaLine *line,
       const RugosaField *rate = rugosa_field_find (row->partner);
       double stored = 0.0;
 
-      if (rg_aging_class_lookup (text, &klass, &lookup_err) == RG_OK)
+      if (memo_rg_aging_class_lookup (text, &klass, &lookup_err) == RG_OK)
         {
-          g_object_set (line, row->property, klass->id, NULL);
+          rugosa_field_store_string (line, row, klass->id);
           return TRUE;
         }
       if (strpbrk (text, "0123456789") == NULL)
@@ -255,7 +324,8 @@ apply_catalog (const CliArgs *args, const RugosaField *row, RugosaLine *line,
           err->subjects = row->subjects;
           return FALSE;
         }
-      g_object_set (line, row->property, NULL, rate->property, stored, NULL);
+      rugosa_field_store_string (line, row, NULL);
+      rugosa_field_store_double (line, rate, stored);
     }
   return TRUE;
 }
@@ -287,7 +357,7 @@ apply_enum (const CliArgs *args, const RugosaField *row, GObject *target,
       rg_error_set_on (err, RG_ERR_PARSE, row->subjects, "%s", _("This value is not one of the choices."));
       return FALSE;
     }
-  g_object_set (target, row->property, value, NULL);
+  rugosa_field_store_int (target, row, value);
   return TRUE;
 }
 
@@ -364,7 +434,7 @@ apply_options (const CliArgs *args, gboolean fluid_only, RugosaLine *line,
                       g_variant_builder_add (&b, "(sdd)", "", k, 1.0);
                   }
                 if (ok)
-                  g_object_set (line, row->property, g_variant_builder_end (&b), NULL);
+                  rugosa_field_store_variant (line, row, g_variant_builder_end (&b));
                 else
                   g_variant_builder_clear (&b);
               }
@@ -393,14 +463,15 @@ apply_options (const CliArgs *args, gboolean fluid_only, RugosaLine *line,
                            _("The sum of the loss coefficients must be a number from 0 to 100000."));
           return FALSE;
         }
-      g_object_set (line, "fittings", g_variant_new_parsed ("[('', %d, 1.0)]", k), NULL);
+      rugosa_field_store_variant (line, rugosa_field_find ("fittings"),
+                                  g_variant_new_parsed ("[('', %d, 1.0)]", k));
     }
   return TRUE;
 }
 
 /* The fluid kind from `text`, and the states that kind needs. */
-static int
-set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
+static gboolean
+set_fluid (const CliArgs *args, const char *text, RugosaLine *line, CliRefusal *why)
 {
   RgFluidKind kind;
   RgError err = { 0 };
@@ -408,8 +479,8 @@ set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
   const RugosaField *rows = rugosa_line_fields (&n);
 
   if (rg_fluid_kind_from_id (text, &kind, &err) != RG_OK)
-    return cli_fail_option ("--fluid", err.text);
-  g_object_set (line, "fluid-kind", (int) kind, NULL);
+    return refuse (why, "--fluid", err.text);
+  rugosa_field_store_int (line, rugosa_field_find ("fluid-kind"), (int) kind);
   for (guint i = 0; i < n; i++)
     if ((rows[i].flags & RUGOSA_FIELD_STATE_REQUIRED)
         && rugosa_field_applies_to_fluid (&rows[i], kind)
@@ -418,9 +489,9 @@ set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
         /* TRANSLATORS: an option, a fluid id, then what the option gives */
         g_autofree char *msg = g_strdup_printf (_("This option is required for the fluid “%s”: %s"),
                                                 rg_fluid_kind_id (kind), _(rows[i].help));
-        return cli_fail_option (rows[i].cli, msg);
+        return refuse (why, rows[i].cli, msg);
       }
-  return CLI_EXIT_OK;
+  return TRUE;
 }
 
 int
@@ -436,20 +507,23 @@ cli_cmd_fluid (int argc, char **argv)
   RgFluidSpec spec;
   RgFluidProps props;
   const char *option = NULL;
-  int status;
+  g_auto (CliRefusal) why = { 0 };
 
   if (!cli_args_parse (&args, "fluid", options_for (TRUE), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len != 1)
     return cli_fail (_("'fluid' needs exactly one fluid name: water, seawater, oil, air or custom."));
-  if ((status = set_fluid (&args, g_ptr_array_index (args.positional, 0), line)) != CLI_EXIT_OK)
-    return status;
+  if (!set_fluid (&args, g_ptr_array_index (args.positional, 0), line, &why))
+    return cli_fail_refusal (&why);
   if (!apply_options (&args, TRUE, line, settings, &option, &err))
     return cli_fail_option (option, err.text);
   rugosa_line_get_fluid_spec (line, &spec);
   rg_warnings_clear (&warnings);
   if (rg_fluid_properties (&spec, &props, &warnings, &err) != RG_OK)
-    return fail_subjects (&args, err.subjects, err.text);
+    {
+      refuse_subjects (&args, err.subjects, err.text, &why);
+      return cli_fail_refusal (&why);
+    }
 
   if (cli_args_has (&args, "--json"))
     {
@@ -479,6 +553,63 @@ cli_cmd_fluid (int argc, char **argv)
   return cli_write_stdout (out->str);
 }
 
+const RugosaLineResults *
+cli_line_evaluate (const CliArgs *args, RugosaProject *project, RugosaLine *line,
+                   CliRefusal *why)
+{
+  RugosaSettings *settings = rugosa_project_get_settings (project);
+  const RugosaLineResults *r;
+  const RugosaOperatingPoint *p;
+  RgError err = { 0 };
+  const char *option = NULL, *fluid, *failed = NULL;
+
+  /* What must be given, and what excludes what. */
+  if (cli_args_has (args, "--pipe") && cli_args_has (args, "--diameter"))
+    return refuse (why, NULL, _("Give either --pipe (a catalog designation) or --diameter (an inner diameter), not both.")), NULL;
+  if (!cli_args_has (args, "--pipe") && !cli_args_has (args, "--diameter"))
+    return refuse (why, NULL, _("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\".")), NULL;
+  if (cli_args_has (args, "--roughness") && cli_args_has (args, "--material"))
+    return refuse (why, NULL, _("Give either --roughness (a value) or --material (a catalog name), not both.")), NULL;
+  if (!cli_args_has (args, "--flow"))
+    return refuse (why, NULL, _("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\".")), NULL;
+  if (!cli_args_has (args, "--length"))
+    return refuse (why, NULL, _("--length is required: give the line length, e.g. --length \"250 m\".")), NULL;
+  if (cli_args_has (args, "--age") && !cli_args_has (args, "--aging"))
+    return refuse (why, NULL, _("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog aging') or a rate such as \"0.05 mm/yr\".")), NULL;
+  if ((fluid = cli_args_get (args, "--fluid")) == NULL)
+    return refuse (why, NULL, _("--fluid is required: water, seawater, oil, air or custom.")), NULL;
+
+  /* A line and settings as new: one row of a batch leaves nothing behind
+   * for the next. */
+  rugosa_line_store_defaults (line);
+  rugosa_settings_store_defaults (settings);
+  if (!set_fluid (args, fluid, line, why))
+    return NULL;
+  if (!apply_options (args, FALSE, line, settings, &option, &err))
+    return refuse (why, option, err.text), NULL;
+  /* Without a roughness or material, the pipe's usual material. */
+  if (!cli_args_has (args, "--roughness") && !cli_args_has (args, "--material"))
+    {
+      const RgPipe *pipe = NULL;
+
+      if (cli_args_has (args, "--pipe"))
+        (void) memo_rg_pipe_lookup (rugosa_line_get_pipe_designation (line), &pipe, NULL);
+      if (pipe == NULL)
+        return refuse (why, NULL, _("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material.")), NULL;
+      rugosa_field_store_string (line, rugosa_field_find ("material-id"), pipe->material_id);
+    }
+  if (rugosa_settings_check (settings, &failed, &err) != RG_OK)
+    return refuse_subjects (args, err.subjects | rugosa_field_find (failed)->subjects, err.text, why), NULL;
+
+  r = rugosa_project_get_results (project, line);
+  p = &r->points[RUGOSA_FLOW_DESIGN];
+  if (!r->ok)
+    return refuse_subjects (args, r->error_subjects, r->error, why), NULL;
+  if (!p->ok)
+    return refuse_subjects (args, p->error_subjects, p->error, why), NULL;
+  return r;
+}
+
 int
 cli_cmd_line (int argc, char **argv)
 {
@@ -488,12 +619,9 @@ cli_cmd_line (int argc, char **argv)
   g_autoptr (RugosaProject) project = rugosa_project_new ();
   g_autoptr (RugosaLine) line = rugosa_line_new ("line");
   g_autoptr (RugosaSettings) units = rugosa_settings_new ();
-  RugosaSettings *settings = rugosa_project_get_settings (project);
+  g_auto (CliRefusal) why = { 0 };
   const RugosaLineResults *r;
   const RugosaOperatingPoint *p;
-  RgError err = { 0 };
-  const char *option = NULL, *fluid, *failed = NULL;
-  int status;
 
   if (!cli_args_parse (&args, "line", options_for (FALSE), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
@@ -502,48 +630,14 @@ cli_cmd_line (int argc, char **argv)
       g_autofree char *shown = cli_echo (g_ptr_array_index (args.positional, 0));
       return cli_fail (_("Unexpected argument \"%s\" for 'line'."), shown);
     }
-
-  /* What must be given, and what excludes what. */
-  if (cli_args_has (&args, "--pipe") && cli_args_has (&args, "--diameter"))
-    return cli_fail (_("Give either --pipe (a catalog designation) or --diameter (an inner diameter), not both."));
-  if (!cli_args_has (&args, "--pipe") && !cli_args_has (&args, "--diameter"))
-    return cli_fail (_("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\"."));
-  if (cli_args_has (&args, "--roughness") && cli_args_has (&args, "--material"))
-    return cli_fail (_("Give either --roughness (a value) or --material (a catalog name), not both."));
-  if (!cli_args_has (&args, "--flow"))
-    return cli_fail (_("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\"."));
-  if (!cli_args_has (&args, "--length"))
-    return cli_fail (_("--length is required: give the line length, e.g. --length \"250 m\"."));
-  if (cli_args_has (&args, "--age") && !cli_args_has (&args, "--aging"))
-    return cli_fail (_("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog aging') or a rate such as \"0.05 mm/yr\"."));
-  if ((fluid = cli_args_get (&args, "--fluid")) == NULL)
-    return cli_fail (_("--fluid is required: water, seawater, oil, air or custom."));
-
-  if ((status = set_fluid (&args, fluid, line)) != CLI_EXIT_OK)
-    return status;
-  if (!apply_options (&args, FALSE, line, settings, &option, &err))
-    return cli_fail_option (option, err.text);
-  /* Without a roughness or material, the pipe's usual material. */
-  if (!cli_args_has (&args, "--roughness") && !cli_args_has (&args, "--material"))
-    {
-      const RgPipe *pipe = NULL;
-
-      if (cli_args_has (&args, "--pipe"))
-        (void) rg_pipe_lookup (rugosa_line_get_pipe_designation (line), &pipe, NULL);
-      if (pipe == NULL)
-        return cli_fail (_("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material."));
-      g_object_set (line, "material-id", pipe->material_id, NULL);
-    }
-  if (rugosa_settings_check (settings, &failed, &err) != RG_OK)
-    return fail_subjects (&args, err.subjects | rugosa_field_find (failed)->subjects, err.text);
+  if (cli_args_has (&args, "--batch"))
+    return cli_line_batch (&args);
 
   rugosa_project_insert_line (project, 0, line);
-  r = rugosa_project_get_results (project, line);
+  r = cli_line_evaluate (&args, project, line, &why);
+  if (r == NULL)
+    return cli_fail_refusal (&why);
   p = &r->points[RUGOSA_FLOW_DESIGN];
-  if (!r->ok)
-    return fail_subjects (&args, r->error_subjects, r->error);
-  if (!p->ok)
-    return fail_subjects (&args, p->error_subjects, p->error);
 
   if (cli_args_has (&args, "--json"))
     {

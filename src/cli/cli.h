@@ -94,6 +94,31 @@ void cli_table_row (GString *out, const char *label, const char *value,
 void cli_table_number (GString *out, const char *label, double value,
                        const char *unit);
 
+/* Why `line` refused its input: the option(s) at fault ("--flow",
+ * "--a, --b"; NULL when the refusal names none) and one sentence. */
+typedef struct {
+  char *option;
+  char *sentence;
+} CliRefusal;
+void cli_refusal_clear (CliRefusal *why);
+G_DEFINE_AUTO_CLEANUP_CLEAR_FUNC (CliRefusal, cli_refusal_clear)
+/* Reports a refusal on stderr as cli_fail_option or cli_fail does. */
+int cli_fail_refusal (const CliRefusal *why);
+
+/* The options of `line` (every field row with an option, --k-sum, --json,
+ * --batch). */
+const CliOption *cli_line_options (void);
+/* The `line` computation for one set of options: `line` (in `project`)
+ * and the project's settings are set back to their defaults, every option
+ * of `args` is applied, and the line is evaluated by the model.  The
+ * results (borrowed from the project), or NULL with `why` filled. */
+const RugosaLineResults *cli_line_evaluate (const CliArgs *args,
+                                            RugosaProject *project,
+                                            RugosaLine *line,
+                                            CliRefusal *why);
+/* rugosa-cli line --batch FILE|- (cli-batch.c); `args` holds --batch. */
+int cli_line_batch (const CliArgs *args);
+
 int cli_cmd_friction (int argc, char **argv);
 int cli_cmd_fluid (int argc, char **argv);
 int cli_cmd_line (int argc, char **argv);

@@ -29,6 +29,8 @@ static const char usage_text[] = N_(
   "             (--roughness E | --material NAME) --fluid KIND [fluid options]\n"
   "             [--k-sum K] [--fitting NAME[xCOUNT]]... [--elevation DZ]\n"
   "             [--age YEARS --aging CLASS|RATE] [--model M] [--json]\n"
+  "             --batch FILE|- [--json]: one line a CSV row, its header naming\n"
+  "             the options without dashes (flow,pipe,length,fluid,…)\n"
   "  eval       evaluate every line option of a project file\n"
   "             PROJECT [--age YEARS] [--format table|csv|json]\n"
   "  render     draw the friction chart of a project file\n"
@@ -48,7 +50,7 @@ static gboolean
 machine_output (int argc, char **argv)
 {
   for (int i = 2; i < argc; i++)
-    if (g_str_equal (argv[i], "--json")
+    if (g_str_equal (argv[i], "--json") || g_str_equal (argv[i], "--batch")
         || (g_str_equal (argv[i], "--format") && i + 1 < argc
             && !g_str_equal (argv[i + 1], "table")))
       return TRUE;

@@ -57,6 +57,71 @@ line_cache_free (gpointer data)
   g_free (c);
 }
 
+/* The properties of the fluid states met last.  Lines of one project (and
+ * the rows of a batch) share a few states — water at a handful of
+ * temperatures — and the water model is a tenth of a line's evaluation;
+ * a state found here is not computed again.  Sixteen states, the least
+ * recently used one replaced. */
+enum { FLUID_MEMO_SLOTS = 16 };
+
+typedef struct {
+  guint64 used;              /* 0: empty */
+  RgFluidSpec spec;
+  RgStatus status;
+  RgFluidProps props;
+  RgWarnings warnings;
+  RgError err;
+} FluidMemoEntry;
+
+struct FluidMemo {
+  guint64 clock;
+  FluidMemoEntry slot[FLUID_MEMO_SLOTS];
+};
+
+/* Every member from the temperature on is a double, with no padding
+ * between them: compared as bytes. */
+static gboolean
+spec_equal (const RgFluidSpec *a, const RgFluidSpec *b)
+{
+  const gsize size = sizeof *a - G_STRUCT_OFFSET (RgFluidSpec, temperature_k);
+
+  return a->kind == b->kind && a->temperature_k == b->temperature_k
+         && memcmp (&a->temperature_k, &b->temperature_k, size) == 0;
+}
+
+static RgStatus
+fluid_properties (RugosaProject *self, const RgFluidSpec *spec, RgFluidProps *props,
+                  RgWarnings *warnings, RgError *err)
+{
+  struct FluidMemo *memo;
+  FluidMemoEntry *e = NULL;
+
+  if (self->fluid_memo == NULL)
+    self->fluid_memo = g_new0 (struct FluidMemo, 1);
+  memo = self->fluid_memo;
+  for (guint i = 0; i < FLUID_MEMO_SLOTS && e == NULL; i++)
+    if (memo->slot[i].used != 0 && spec_equal (&memo->slot[i].spec, spec))
+      e = &memo->slot[i];
+  if (e == NULL)
+    {
+      e = &memo->slot[0];
+      for (guint i = 1; i < FLUID_MEMO_SLOTS; i++)
+        if (memo->slot[i].used < e->used)
+          e = &memo->slot[i];
+      e->spec = *spec;
+      rg_warnings_clear (&e->warnings);
+      rg_error_clear (&e->err);
+      e->status = rg_fluid_properties (spec, &e->props, &e->warnings, &e->err);
+    }
+  e->used = ++memo->clock;
+  *props = e->props;
+  for (int w = 0; w < e->warnings.count; w++)
+    rg_warnings_add (warnings, "%s", e->warnings.text[w]);
+  if (e->status != RG_OK && err != NULL)
+    *err = e->err;
+  return e->status;
+}
+
 void
 _rugosa_project_eval_init (RugosaProject *self)
 {
@@ -69,6 +134,7 @@ _rugosa_project_eval_finalize (RugosaProject *self)
 {
   g_clear_pointer (&self->eval_cache, g_hash_table_unref);
   g_clear_pointer (&self->pipe_memo, g_hash_table_unref);
+  g_clear_pointer (&self->fluid_memo, g_free);
 }
 
 /* Parsing a designation compares it with every catalog entry; remember
@@ -91,20 +157,6 @@ void
 _rugosa_project_eval_forget (RugosaProject *self, RugosaLine *line)
 {
   g_hash_table_remove (self->eval_cache, line);
-}
-
-void
-_rugosa_format_double (char *buf, gsize size, double x)
-{
-  for (int digits = 15; digits <= 17; digits++)
-    {
-      char fmt[8];
-
-      g_snprintf (fmt, sizeof fmt, "%%.%dg", digits);
-      g_ascii_formatd (buf, (int) size, fmt, x);
-      if (g_ascii_strtod (buf, NULL) == x)
-        return;
-    }
 }
 
 const char *
@@ -187,7 +239,7 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
 
   rugosa_line_get_fluid_spec (line, &spec);
   rg_warnings_clear (&fluid_warnings);
-  if (rg_fluid_properties (&spec, &props, &fluid_warnings, &err) != RG_OK)
+  if (fluid_properties (self, &spec, &props, &fluid_warnings, &err) != RG_OK)
     return line_error (r, &err);
   r->density_kg_m3 = props.density_kg_m3;
   r->dynamic_viscosity_pa_s = props.dynamic_viscosity_pa_s;
