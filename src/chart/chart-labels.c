@@ -240,6 +240,29 @@ _rugosa_chart_label_layout (RugosaChart *chart, size_t i, int compact,
   return l;
 }
 
+/* The box a label takes, measured with every digit written as 0: the
+ * chart's font has digits of one width, so the box is the label's own,
+ * and a new service age (new digits, same shape) needs no new text
+ * shaped to place the labels, and keeps their boxes. */
+void
+_rugosa_chart_label_size (RugosaChart *chart, size_t i, int compact, double *w,
+                          double *h)
+{
+  char text[512];
+  const double k = chart->lay.k;
+  label_text (&chart->lines[i], compact, text, sizeof text);
+  for (char *c = text; *c != '\0'; c++)
+    if (*c >= '1' && *c <= '9')
+      *c = '0';
+  PangoLayout *l = _rugosa_chart_text (chart, text, chart->lay.font_label,
+                                       compact ? TEXT_BOLD : TEXT_FIRST_BOLD, 0);
+  _rugosa_chart_text_size (l, w, h);
+  /* padding and the shape swatch, whole pixels, and a pixel to spare for
+   * the kerning of the real digits */
+  *w = ceil (*w + 2 * 5 * k + 13 * k + 1);
+  *h = ceil (*h + 2 * 3.5 * k);
+}
+
 /* The number beside an unlabelled marker: its text and its layout. */
 PangoLayout *
 _rugosa_chart_tag_layout (RugosaChart *chart, size_t i, double *w, double *h)
@@ -449,7 +472,7 @@ place_label (RugosaChart *chart, Space *s, size_t i, int must)
       double w, h;
       int ring = 0, dir = 0;
       RugosaChartRect r;
-      (void) _rugosa_chart_label_layout (chart, i, ATTEMPTS[a].compact, &w, &h);
+      _rugosa_chart_label_size (chart, i, ATTEMPTS[a].compact, &w, &h);
       if (try_rings (s, lb, w, h, k, ATTEMPTS[a].far ? RINGS_FAR : RINGS, ATTEMPTS[a].mask,
                      &ring, &dir, &r) != 0)
         continue;
@@ -657,7 +680,7 @@ _rugosa_chart_placement_holds (RugosaChart *chart)
       double w, h;
       if (!lb->info.visible)
         continue;
-      (void) _rugosa_chart_label_layout (chart, i, lb->info.compact, &w, &h);
+      _rugosa_chart_label_size (chart, i, lb->info.compact, &w, &h);
       if (w != lb->info.box.width || h != lb->info.box.height)
         return 0;
     }

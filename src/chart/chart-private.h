@@ -177,6 +177,8 @@ double _rugosa_chart_marker_radius (const RugosaChart *chart, size_t i,
                                     int hovered);
 PangoLayout *_rugosa_chart_label_layout (RugosaChart *chart, size_t i,
                                          int compact, double *w, double *h);
+void _rugosa_chart_label_size (RugosaChart *chart, size_t i, int compact,
+                               double *w, double *h);
 PangoLayout *_rugosa_chart_tag_layout (RugosaChart *chart, size_t i,
                                        double *w, double *h);
 size_t _rugosa_chart_legend_rows (const RugosaChart *chart);
