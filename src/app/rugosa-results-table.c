@@ -168,11 +168,29 @@ _rugosa_results_table_update_label (RugosaResultsTable *self,
   text = rugosa_results_table_format_cell (self, line, column);
   if (g_strcmp0 (gtk_inscription_get_text (label), text) != 0)
     gtk_inscription_set_text (label, text);
-  if (g_strcmp0 (column, "warnings") == 0)
-    {
-      g_autofree char *all = self->project ? rugosa_readout_warnings (self->project, line) : NULL;
-      gtk_widget_set_tooltip_text (GTK_WIDGET (label), all);
-    }
+}
+
+/* Every warning of the row's line, asked for when the pointer rests on
+ * the cell: setting the tooltip at every slider step made GTK query it
+ * again each time. */
+static gboolean
+_rugosa_results_table_warnings_tooltip (GtkWidget          *label,
+                                        int                 x,
+                                        int                 y,
+                                        gboolean            keyboard,
+                                        GtkTooltip         *tooltip,
+                                        RugosaResultsTable *self)
+{
+  RugosaLine *line = g_object_get_data (G_OBJECT (label), "line");
+  g_autofree char *all = NULL;
+
+  if (line == NULL || self->project == NULL)
+    return FALSE;
+  all = rugosa_readout_warnings (self->project, line);
+  if (all == NULL)
+    return FALSE;
+  gtk_tooltip_set_text (tooltip, all);
+  return TRUE;
 }
 
 void
@@ -222,6 +240,8 @@ _rugosa_results_table_setup (GtkSignalListItemFactory *factory,
     {
       gtk_inscription_set_nat_chars (ins, 40);
       gtk_widget_add_css_class (label, "warning");
+      gtk_widget_set_has_tooltip (label, TRUE);
+      g_signal_connect (label, "query-tooltip", G_CALLBACK (_rugosa_results_table_warnings_tooltip), self);
     }
   if (g_strcmp0 (col->id, "zone") == 0)
     gtk_inscription_set_nat_chars (ins, 20);

@@ -45,7 +45,23 @@ typedef struct {
   guint64 settings_revision;
   guint n;
   AgeEntry *ages[AGES_PER_LINE];
+  /* the line's fittings resolved against the catalog, for its revision:
+   * the same at every age (a slider drag evaluates the line again and
+   * again) */
+  gboolean fittings_known;
+  RgStatus fittings_status;
+  RgError fittings_err;
+  RgFittingUse *uses;
+  gsize n_uses;
 } LineCache;
+
+static void
+line_cache_forget_fittings (LineCache *c)
+{
+  g_clear_pointer (&c->uses, g_free);
+  c->n_uses = 0;
+  c->fittings_known = FALSE;
+}
 
 static void
 line_cache_free (gpointer data)
@@ -54,7 +70,42 @@ line_cache_free (gpointer data)
 
   for (guint i = 0; i < c->n; i++)
     g_free (c->ages[i]);
+  line_cache_forget_fittings (c);
   g_free (c);
+}
+
+/* The line's fittings as the core takes them, resolved once a revision. */
+static RgStatus
+line_fittings (LineCache *c, RugosaLine *line, const RgFittingUse **uses,
+               gsize *n_uses, RgError *err)
+{
+  if (!c->fittings_known)
+    {
+      GVariant *fittings = line->fittings;
+      gsize n = g_variant_n_children (fittings);
+
+      c->uses = g_new0 (RgFittingUse, MAX (n, 1));
+      c->n_uses = n;
+      c->fittings_status = RG_OK;
+      rg_error_clear (&c->fittings_err);
+      for (gsize i = 0; i < n && c->fittings_status == RG_OK; i++)
+        {
+          const char *fid;
+          double k, count;
+
+          g_variant_get_child (fittings, i, "(&sdd)", &fid, &k, &count);
+          c->uses[i].k_plain = k;
+          c->uses[i].count = count;
+          if (*fid != '\0')
+            c->fittings_status = rg_fitting_lookup (fid, &c->uses[i].fitting, &c->fittings_err);
+        }
+      c->fittings_known = TRUE;
+    }
+  *uses = c->uses;
+  *n_uses = c->n_uses;
+  if (c->fittings_status != RG_OK && err != NULL)
+    *err = c->fittings_err;
+  return c->fittings_status;
 }
 
 /* The properties of the fluid states met last.  Lines of one project (and
@@ -217,8 +268,8 @@ line_error (RugosaLineResults *r, const RgError *err)
 }
 
 static void
-evaluate_line (RugosaProject *self, RugosaLine *line, double age,
-               RugosaLineResults *r)
+evaluate_line (RugosaProject *self, RugosaLine *line, LineCache *cache,
+               double age, RugosaLineResults *r)
 {
   RugosaSettings *settings = self->settings;
   RgError err;
@@ -228,8 +279,7 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
   RgTransition transition;
   RgFrictionModel model;
   double diameter, roughness_new, rate;
-  GVariant *fittings;
-  RgFittingUse *uses;
+  const RgFittingUse *uses;
   gsize n_uses;
 
   memset (r, 0, sizeof *r);
@@ -288,23 +338,8 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
   if (rg_transition_check (&transition, &err) != RG_OK)
     return line_error (r, &err);
 
-  fittings = line->fittings;
-  n_uses = g_variant_n_children (fittings);
-  uses = g_new0 (RgFittingUse, MAX (n_uses, 1));
-  for (gsize i = 0; i < n_uses; i++)
-    {
-      const char *fid;
-      double k, count;
-
-      g_variant_get_child (fittings, i, "(&sdd)", &fid, &k, &count);
-      uses[i].k_plain = k;
-      uses[i].count = count;
-      if (*fid != '\0' && rg_fitting_lookup (fid, &uses[i].fitting, &err) != RG_OK)
-        {
-          g_free (uses);
-          return line_error (r, &err);
-        }
-    }
+  if (line_fittings (cache, line, &uses, &n_uses, &err) != RG_OK)
+    return line_error (r, &err);
   r->ok = TRUE;
 
   for (RugosaFlowCase c = 0; c < RUGOSA_N_FLOWS; c++)
@@ -369,7 +404,6 @@ evaluate_line (RugosaProject *self, RugosaLine *line, double age,
         rg_warnings_add (&p->warnings, "%s", fluid_warnings.text[w]);
       add_point_warnings (p, &spec, model, settings);
     }
-  g_free (uses);
 }
 
 const RugosaLineResults *
@@ -398,6 +432,7 @@ rugosa_project_get_results_at (RugosaProject *self, RugosaLine *line,
       for (guint i = 0; i < c->n; i++)
         g_clear_pointer (&c->ages[i], g_free);
       c->n = 0;
+      line_cache_forget_fittings (c);
       c->line_revision = line->revision;
       c->settings_revision = self->settings->revision;
     }
@@ -420,7 +455,7 @@ rugosa_project_get_results_at (RugosaProject *self, RugosaLine *line,
     }
   e->age_years = age_years;
   e->used = self->eval_clock;
-  evaluate_line (self, line, age_years, &e->results);
+  evaluate_line (self, line, c, age_years, &e->results);
   return &e->results;
 }
 
