@@ -38,7 +38,8 @@ rugosa_window_export_chart_to (RugosaWindow       *self,
   g_autoptr (RugosaChartInput) input = NULL;
   g_autofree char *date = _rugosa_window_today ();
 
-  input = rugosa_chart_input_new (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
+  input = rugosa_chart_input_new_view (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos,
+                                       NULL, rugosa_visibility_chart_view (self->visibility));
   return rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
                               width, height, date, path, error);
 }
@@ -300,7 +301,8 @@ _rugosa_window_draw_page (GtkPrintOperation *op,
   RugosaChart *chart = rugosa_chart_new ();
   RgError err = { 0 };
 
-  input = rugosa_chart_input_new (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
+  input = rugosa_chart_input_new_view (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos,
+                                       NULL, rugosa_visibility_chart_view (self->visibility));
   /* The page in points; the chart keeps its own proportions below 200 × 150. */
   input->spec.width = MAX (w, 200);
   input->spec.height = MAX (h, 150);

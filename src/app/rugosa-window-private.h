@@ -5,6 +5,7 @@
 #pragma once
 
 #include "rugosa-canvas.h"
+#include "rugosa-line-list.h"
 #include "rugosa-line-panel.h"
 #include "rugosa-results-table.h"
 #include "rugosa-window.h"
@@ -18,7 +19,7 @@ struct _RugosaWindow
   /* template widgets */
   AdwWindowTitle     *window_title;
   AdwToastOverlay    *toast_overlay;
-  GtkListView        *lines_view;
+  RugosaLineList     *line_list;
   RugosaCanvas       *canvas;
   GtkLabel           *probe_label;
   GtkScale           *age_scale;
@@ -37,8 +38,8 @@ struct _RugosaWindow
   RugosaProject      *project;
   RugosaHistory      *history;
   GtkSingleSelection *selection;
+  RugosaVisibility   *visibility;   /* which lines the chart and table show */
   GFile              *file;
-  GPtrArray          *bound_rows;   /* line list rows on screen */
   char               *autosave_id;  /* unique per window */
 
   guint    autosave_source;

@@ -145,17 +145,25 @@ _trail_cache_get (RugosaTrailCache *cache,
   return e;
 }
 
-/* Forget lines that left the project (deleted, or a file was loaded). */
+/* Forget lines that left the project (deleted, or a file was loaded);
+ * linear in the lines, as a refresh must be. */
 static void
 _trail_cache_prune (RugosaTrailCache *cache,
                     RugosaProject    *project)
 {
   GHashTableIter iter;
   gpointer key;
+  g_autoptr (GHashTable) present = NULL;
+  guint n = rugosa_project_get_n_lines (project);
 
+  if (g_hash_table_size (cache->entries) == 0)
+    return;
+  present = g_hash_table_new (NULL, NULL);
+  for (guint i = 0; i < n; i++)
+    g_hash_table_add (present, rugosa_project_get_line (project, i));
   g_hash_table_iter_init (&iter, cache->entries);
   while (g_hash_table_iter_next (&iter, &key, NULL))
-    if (rugosa_project_find_line (project, key) < 0)
+    if (!g_hash_table_contains (present, key))
       g_hash_table_iter_remove (&iter);
 }
 
@@ -171,6 +179,15 @@ RugosaChartInput *
 rugosa_chart_input_new (RugosaProject    *project,
                         int               selected,
                         RugosaTrailCache *cache)
+{
+  return rugosa_chart_input_new_view (project, selected, cache, NULL);
+}
+
+RugosaChartInput *
+rugosa_chart_input_new_view (RugosaProject              *project,
+                             int                         selected,
+                             RugosaTrailCache           *cache,
+                             const RugosaChartInputView *view)
 {
   RugosaChartInput *input = g_new0 (RugosaChartInput, 1);
   RugosaSettings *ps = rugosa_project_get_settings (project);
@@ -192,12 +209,15 @@ rugosa_chart_input_new (RugosaProject    *project,
   for (guint i = 0; i < n; i++)
     {
       RugosaLine *line = rugosa_project_get_line (project, i);
-      const RugosaLineResults *res = rugosa_project_get_results (project, line);
+      const RugosaLineResults *res;
       const RugosaOperatingPoint *design, *pmin, *pmax;
       RugosaChartLine *cl;
       RugosaChartPoint *trail;
       double d, rr_new, rr_aged;
 
+      if (view != NULL && view->drawn != NULL && !view->drawn (line, view->user_data))
+        continue;
+      res = rugosa_project_get_results (project, line);
       if (res == NULL || !res->ok)
         continue;
       design = &res->points[RUGOSA_FLOW_DESIGN];
@@ -292,6 +312,9 @@ rugosa_chart_input_new (RugosaProject    *project,
         cl->readout_head_total = _rugosa_chart_input_keep (input, g_strdup_printf (_("total %s"), h));
       }
       cl->selected = ((int) i == selected);
+      cl->pinned = view != NULL && view->pinned != NULL && view->pinned (line, view->user_data);
+      /* the number beside an unlabelled marker: its place in the list */
+      cl->number = (int) i + 1;
     }
   return input;
 }
