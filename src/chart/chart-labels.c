@@ -522,7 +522,7 @@ label_budget (const ChartLayout *lay)
 {
   const double area = lay->plot.width * lay->plot.height;
   const double label = 120 * 55 * lay->k * lay->k;
-  return (size_t) fmax (6, floor (area / 3 / label));
+  return (size_t) fmin (RUGOSA_CHART_LABELS_MAX, fmax (6, floor (area / 3 / label)));
 }
 
 static int
@@ -611,7 +611,8 @@ _rugosa_chart_place_labels (RugosaChart *chart)
     {
       const size_t i = order[o];
       const int must = priority (&chart->lines[i].line) < 2;
-      if (!must && (placed >= budget || attempts >= 3 * budget))
+      if (!must && (placed >= budget || attempts >= 3 * budget
+                    || attempts >= RUGOSA_CHART_LABEL_TRIES))
         continue;
       if (!must)
         attempts++;

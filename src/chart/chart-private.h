@@ -85,7 +85,9 @@ struct RugosaChart {
 
   /* text */
   PangoContext *pango;
-  GHashTable *layouts;             /* key text → PangoLayout */
+  GHashTable *layouts;             /* key text → PangoLayout, in use */
+  GHashTable *layouts_old;         /* the generation before: moved back
+                                    * when asked for, dropped as a whole */
 };
 
 /* Boxes the background's text already occupies (tick labels, curve and

@@ -197,6 +197,7 @@ rugosa_chart_input_new_view (RugosaProject              *project,
   const char *u_vel = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_VELOCITY);
   const char *u_grad = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_GRADIENT);
   const char *u_head = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_HEAD);
+  guint readouts_left = RUGOSA_CHART_LABEL_TRIES;
 
   input->owned = g_ptr_array_new_with_free_func (g_free);
   if (cache != NULL)
@@ -293,6 +294,18 @@ rugosa_chart_input_new_view (RugosaProject              *project,
       g_ptr_array_add (input->owned, trail);
       cl->trail = trail;
 
+      cl->selected = ((int) i == selected);
+      cl->pinned = view != NULL && view->pinned != NULL && view->pinned (line, view->user_data);
+      /* the number beside an unlabelled marker: its place in the list */
+      cl->number = (int) i + 1;
+      /* Readouts only where a label may go: the chart labels the selected
+       * and pinned lines and tries the others in list order, never more
+       * than RUGOSA_CHART_LABEL_TRIES of them; formatting three numbers
+       * for each of a thousand lines was a third of a slider step. */
+      if (!cl->selected && !cl->pinned && readouts_left == 0)
+        continue;
+      if (!cl->selected && !cl->pinned)
+        readouts_left--;
       {
         g_autofree char *v = rugosa_display_format_screen (RG_QTY_VELOCITY, design->result.velocity_m_s, u_vel);
         /* TRANSLATORS: mean velocity readout on the chart, e.g. "V 1.42 m/s"; the
@@ -311,10 +324,6 @@ rugosa_chart_input_new_view (RugosaProject              *project,
         /* TRANSLATORS: total head loss of the line (pipe and fittings) */
         cl->readout_head_total = _rugosa_chart_input_keep (input, g_strdup_printf (_("total %s"), h));
       }
-      cl->selected = ((int) i == selected);
-      cl->pinned = view != NULL && view->pinned != NULL && view->pinned (line, view->user_data);
-      /* the number beside an unlabelled marker: its place in the list */
-      cl->number = (int) i + 1;
     }
   return input;
 }

@@ -43,7 +43,13 @@ typedef enum {
 
 enum {
   RUGOSA_CHART_FAMILY_MAX = 64,
-  RUGOSA_CHART_DATE_MAX = 40
+  RUGOSA_CHART_DATE_MAX = 40,
+  /* Lines other than the selected and pinned ones that the overlay tries
+   * to label, in list order: past 80 labels a chart reads as text, and a
+   * label is tried at most three times for each placed.  A line past
+   * these needs no readouts. */
+  RUGOSA_CHART_LABELS_MAX = 80,
+  RUGOSA_CHART_LABEL_TRIES = 3 * RUGOSA_CHART_LABELS_MAX
 };
 
 /* The background description.  Everything here is part of the background
