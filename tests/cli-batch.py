@@ -163,6 +163,10 @@ check("details: rows 2 and 4, the blank line skipped", [o["row"] for o in objs] 
 check("details: a quoted fitting applied", code == 0 and objs[0]["minor_loss_k_total"] > 0
       and objs[1]["minor_loss_k_total"] == 0, out)
 
+code, out, err = run("line", "--batch", "-", "--json", stdin='flow,pipe\n"unterminated')
+check("an open quote at the end is a refused row", code == 2
+      and "closing double quote" in json.loads(out)["error"] and "1 of 1 rows" in err, out + err)
+
 wide = write("wide.csv", "flow,pipe,length,fluid,temperature\n12 L/s,NPS 4 Sch 40,250 m,water,20 C,x\n")
 code, out, err = run("line", "--batch", wide, "--json")
 check("a row wider than the header is refused", code == 2 and "error" in json.loads(out), out)

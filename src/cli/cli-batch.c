@@ -495,6 +495,7 @@ cli_line_batch (const CliArgs *args)
         }
       if (st != RECORD_OK)
         {
+          b.rows++;
           write_refusal (&b, record, NULL, record_problem (st));
           continue;
         }
