@@ -129,7 +129,8 @@ read_record (CsvReader *rd)
           int next = getc_unlocked (rd->in);
           if (next == '\n' || next == EOF)
             break;
-          ungetc (next, rd->in);
+          /* a lone CR: the byte read ahead goes back (one is guaranteed) */
+          (void) ungetc (next, rd->in);
         }
       else if (c == '"' && cell->len == 0)
         quoted = TRUE;
@@ -539,7 +540,7 @@ cli_line_batch (const CliArgs *args)
 
 done:
   if (rd.in != stdin)
-    fclose (rd.in);
+    (void) fclose (rd.in); /* read only: nothing left to lose */
   g_ptr_array_unref (rd.cells);
   if (b.row.values != NULL)
     cli_args_clear (&b.row);
