@@ -180,8 +180,6 @@ _rugosa_window_update_actions (RugosaWindow *self)
     self->actions_source = g_idle_add_full (G_PRIORITY_HIGH, _rugosa_window_actions_due, self, NULL);
 }
 
-/* --- the line list (rugosa-line-list.c) ------------------------------ */
-
 /* The pointer readout follows the pointer, below and to the right of it,
  * turning back at the canvas edges. */
 static gboolean
