@@ -13,7 +13,9 @@
 #include "core/regime.h"
 #include "rugosa-chart.h"
 
-enum { SAMPLE_TRAIL = 6, SAMPLE_MAX = 64 };
+/* Up to a thousand lines: the crowded scenes of the placement test and
+ * the benchmark. */
+enum { SAMPLE_TRAIL = 6, SAMPLE_MAX = 1000 };
 
 typedef struct {
   RugosaChartLine lines[SAMPLE_MAX];

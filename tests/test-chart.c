@@ -527,33 +527,48 @@ overlap (const RugosaChartRect *a, const RugosaChartRect *b)
          && a->y < b->y + b->height && b->y < a->y + a->height;
 }
 
+/* No label or number leaves the plot or overlaps the legend, another
+ * label or number, or a marker: its own never, another line's only for
+ * the selected or a pinned line placed over the crowd as a last resort. */
 static void
-check_labels (RugosaChart *chart, size_t n, size_t *shown)
+check_labels (RugosaChart *chart, const RugosaChartLine *lines, size_t n, size_t *shown)
 {
   const RugosaChartRect pl = rugosa_chart_plot_area (chart);
   const RugosaChartRect legend = rugosa_chart_legend_box (chart);
-  RugosaChartLabelInfo info[SAMPLE_MAX];
+  RugosaChartLabelInfo *info = g_new0 (RugosaChartLabelInfo, n);
   for (size_t i = 0; i < n; i++)
     g_assert_true (rugosa_chart_get_label (chart, i, &info[i]));
   for (size_t i = 0; i < n; i++)
     {
-      if (!info[i].visible)
-        continue;
-      (*shown)++;
-      const RugosaChartRect *a = &info[i].box;
-      g_assert_cmpfloat (a->x, >=, pl.x);
-      g_assert_cmpfloat (a->y, >=, pl.y);
-      g_assert_cmpfloat (a->x + a->width, <=, pl.x + pl.width);
-      g_assert_cmpfloat (a->y + a->height, <=, pl.y + pl.height);
-      g_assert_false (legend.width > 0 && overlap (a, &legend));
-      for (size_t j = 0; j < n; j++)
+      const RugosaChartRect *boxes[2] = { info[i].visible ? &info[i].box : NULL,
+                                          info[i].numbered ? &info[i].tag : NULL };
+      g_assert_false (info[i].visible && info[i].numbered);
+      if (info[i].visible)
+        (*shown)++;
+      for (int b = 0; b < 2; b++)
         {
-          if (info[j].marker.width > 0)
-            g_assert_false (overlap (a, &info[j].marker));
-          if (j != i && info[j].visible)
-            g_assert_false (overlap (a, &info[j].box));
+          const RugosaChartRect *a = boxes[b];
+          if (a == NULL)
+            continue;
+          g_assert_cmpfloat (a->x, >=, pl.x);
+          g_assert_cmpfloat (a->y, >=, pl.y);
+          g_assert_cmpfloat (a->x + a->width, <=, pl.x + pl.width);
+          g_assert_cmpfloat (a->y + a->height, <=, pl.y + pl.height);
+          g_assert_false (legend.width > 0 && overlap (a, &legend));
+          for (size_t j = 0; j < n; j++)
+            {
+              const gboolean may_cover = b == 0 && j != i
+                                         && (lines[i].selected || lines[i].pinned);
+              if (info[j].marker.width > 0 && !may_cover)
+                g_assert_false (overlap (a, &info[j].marker));
+              if (j != i && info[j].visible)
+                g_assert_false (overlap (a, &info[j].box));
+              if (j != i && info[j].numbered)
+                g_assert_false (overlap (a, &info[j].tag));
+            }
         }
     }
+  g_free (info);
 }
 
 static void
@@ -568,12 +583,12 @@ test_labels_crowded (void)
       const size_t n = (size_t) g_rand_int_range (rand, 10, 31);
       sample_random (&set, rand, n);
       rugosa_chart_set_lines (chart, set.lines, set.n);
-      check_labels (chart, set.n, &shown);
+      check_labels (chart, set.lines, set.n, &shown);
       total += set.n;
       if (n <= 12)
         {
           size_t s = 0;
-          check_labels (chart, set.n, &s);
+          check_labels (chart, set.lines, set.n, &s);
           shown_small += s;
           total_small += n;
         }
@@ -583,6 +598,111 @@ test_labels_crowded (void)
   /* Common practice (no single source): a placement that drops more than a
    * tenth of the labels of a crowded chart is not doing its job */
   g_assert_cmpfloat ((double) shown / total, >, 0.9);
+  g_rand_free (rand);
+  rugosa_chart_free (chart);
+}
+
+/* A thousand lines: the selected and a pinned line are labelled wherever
+ * they are in the list, nothing overlaps, and lines without a label carry
+ * their number when there is room beside the marker. */
+static void
+test_labels_thousand (void)
+{
+  static SampleSet set;
+  static const double SIZES[][2] = { { 1600, 1000 }, { 800, 500 } };
+  GRand *rand = g_rand_new_with_seed (1000);
+  for (size_t z = 0; z < G_N_ELEMENTS (SIZES); z++)
+    for (int scene = 0; scene < 4; scene++)
+      {
+        RugosaChart *chart = chart_with (SIZES[z][0], SIZES[z][1], RUGOSA_CHART_SHOW_ALL,
+                                         RUGOSA_CHART_THEME_LIGHT);
+        const size_t n = 1000;
+        const size_t selected = (size_t) g_rand_int_range (rand, 0, (gint32) n);
+        const size_t pinned = (size_t) g_rand_int_range (rand, 0, (gint32) n);
+        size_t shown = 0, numbered = 0, on_plot = 0;
+        sample_random (&set, rand, n);
+        for (size_t i = 0; i < n; i++)
+          set.lines[i].selected = i == selected;
+        set.lines[pinned].pinned = pinned != selected;
+        rugosa_chart_set_lines (chart, set.lines, set.n);
+        check_labels (chart, set.lines, set.n, &shown);
+        for (size_t i = 0; i < n; i++)
+          {
+            RugosaChartLabelInfo info;
+            g_assert_true (rugosa_chart_get_label (chart, i, &info));
+            on_plot += info.marker.width > 0;
+            numbered += info.numbered;
+            if ((i == selected || i == pinned) && info.marker.width > 0)
+              g_assert_true (info.visible);
+          }
+        g_test_message ("%g × %g, selected %zu: %zu labels, %zu numbers, %zu markers on the plot",
+                        SIZES[z][0], SIZES[z][1], selected, shown, numbered, on_plot);
+        /* Common practice (no single source): a chart of a thousand
+         * options still names ten of them outright */
+        g_assert_cmpuint (shown, >=, 10);
+        g_assert_cmpuint (numbered, >, 0);
+        rugosa_chart_free (chart);
+      }
+  g_rand_free (rand);
+}
+
+/* The labels are placed once per change of layout: not on hover, not when
+ * only the readouts change at the same size; again when a marker moves or
+ * the selection changes. */
+static void
+test_placement_cache (void)
+{
+  static SampleSet set;
+  GRand *rand = g_rand_new_with_seed (100);
+  RugosaChart *chart = chart_with (1600, 1000, RUGOSA_CHART_SHOW_ALL, RUGOSA_CHART_THEME_LIGHT);
+  sample_random (&set, rand, 100);
+  rugosa_chart_set_lines (chart, set.lines, set.n);
+  cairo_surface_destroy (render (chart));
+  const unsigned p0 = rugosa_chart_placements (chart);
+  g_assert_cmpuint (p0, >=, 1);
+
+  for (int i = 0; i < 5; i++)
+    {
+      rugosa_chart_set_hover (chart, i * 7);
+      cairo_surface_destroy (render (chart));
+    }
+  g_assert_cmpuint (rugosa_chart_placements (chart), ==, p0);
+
+  /* a new service age over lines whose markers stay: new digits only */
+  for (size_t i = 0; i < set.n; i++)
+    snprintf (set.vel[i], sizeof set.vel[i], "v = %.2f m/s", 1.11 + 0.01 * (double) (i % 80));
+  rugosa_chart_set_lines (chart, set.lines, set.n);
+  cairo_surface_destroy (render (chart));
+  g_assert_cmpuint (rugosa_chart_placements (chart), ==, p0);
+
+  /* one marker moves: placed again, once */
+  set.lines[3].f *= 1.2;
+  rugosa_chart_set_lines (chart, set.lines, set.n);
+  cairo_surface_destroy (render (chart));
+  cairo_surface_destroy (render (chart));
+  g_assert_cmpuint (rugosa_chart_placements (chart), ==, p0 + 1);
+
+  /* another line selected */
+  set.lines[0].selected = 0;
+  set.lines[50].selected = 1;
+  rugosa_chart_set_lines (chart, set.lines, set.n);
+  cairo_surface_destroy (render (chart));
+  g_assert_cmpuint (rugosa_chart_placements (chart), ==, p0 + 2);
+  RugosaChartLabelInfo info;
+  g_assert_true (rugosa_chart_get_label (chart, 50, &info));
+  g_assert_true (info.visible || info.marker.width == 0);
+
+  /* a click on a number selects its line */
+  for (size_t i = 0; i < set.n; i++)
+    {
+      g_assert_true (rugosa_chart_get_label (chart, i, &info));
+      if (!info.numbered)
+        continue;
+      const double x = info.tag.x + info.tag.width / 2, y = info.tag.y + info.tag.height / 2;
+      const int hit = rugosa_chart_hit_test (chart, x, y, 0);
+      g_assert_cmpint (hit, >=, 0);
+      break;
+    }
   g_rand_free (rand);
   rugosa_chart_free (chart);
 }
@@ -911,6 +1031,8 @@ main (int argc, char **argv)
   g_test_add_func ("/chart/pixels/zone-edges", test_pixel_zone_edges);
   g_test_add_func ("/chart/pixels/scale-2", test_pixel_scale2);
   g_test_add_func ("/chart/overlay/labels-crowded", test_labels_crowded);
+  g_test_add_func ("/chart/overlay/labels-thousand", test_labels_thousand);
+  g_test_add_func ("/chart/overlay/placement-cache", test_placement_cache);
   g_test_add_func ("/chart/overlay/hit-test", test_hit_test);
   g_test_add_func ("/chart/cache/overlay-only", test_cache);
   g_test_add_func ("/chart/export/png-reproducible", test_export_png_reproducible);

@@ -21,6 +21,7 @@ struct _RugosaCanvas
   /* borrowed references */
   RugosaProject      *project;
   GtkSingleSelection *selection;
+  RugosaVisibility   *visibility;
 
   /* owned references */
   RugosaChart      *chart;
@@ -76,7 +77,11 @@ rugosa_canvas_refresh (RugosaCanvas *self)
       gtk_widget_queue_draw (GTK_WIDGET (self));
       return;
     }
-  self->input = rugosa_chart_input_new (self->project, _rugosa_canvas_selected (self), self->trails);
+  /* The chart keeps its label placement when the lines' markers stay on
+   * the same pixels: a new input every frame is no new layout. */
+  self->input = rugosa_chart_input_new_view (self->project, _rugosa_canvas_selected (self), self->trails,
+                                             self->visibility ? rugosa_visibility_chart_view (self->visibility)
+                                                              : NULL);
   rugosa_chart_set_lines (self->chart, self->input->lines, self->input->n_lines);
   if (self->hover >= (int) self->input->n_lines)
     self->hover = -1;
@@ -152,6 +157,41 @@ rugosa_canvas_set_selection (RugosaCanvas       *self,
   if (selection)
     g_signal_connect_swapped (selection, "notify::selected",
                               G_CALLBACK (_rugosa_canvas_selection_changed), self);
+}
+
+static void
+_rugosa_canvas_drop_visibility (RugosaCanvas *self)
+{
+  if (self->visibility == NULL)
+    return;
+  g_signal_handlers_disconnect_by_data (self->visibility, self);
+  g_object_remove_weak_pointer (G_OBJECT (self->visibility), (gpointer *) &self->visibility);
+  self->visibility = NULL;
+}
+
+void
+rugosa_canvas_set_visibility (RugosaCanvas     *self,
+                              RugosaVisibility *visibility)
+{
+  g_return_if_fail (RUGOSA_IS_CANVAS (self));
+
+  _rugosa_canvas_drop_visibility (self);
+  self->visibility = visibility;
+  if (visibility)
+    {
+      /* the window may drop it first */
+      g_object_add_weak_pointer (G_OBJECT (visibility), (gpointer *) &self->visibility);
+      g_signal_connect_object (visibility, "changed", G_CALLBACK (rugosa_canvas_refresh), self,
+                               G_CONNECT_SWAPPED);
+    }
+  rugosa_canvas_refresh (self);
+}
+
+unsigned
+rugosa_canvas_get_placements (RugosaCanvas *self)
+{
+  g_return_val_if_fail (RUGOSA_IS_CANVAS (self), 0);
+  return rugosa_chart_placements (self->chart);
 }
 
 void
@@ -277,6 +317,20 @@ rugosa_canvas_marker_position (RugosaCanvas *self,
                                 self->input->lines[i].f, x, y);
         return TRUE;
       }
+  return FALSE;
+}
+
+gboolean
+rugosa_canvas_get_label (RugosaCanvas         *self,
+                         guint                 position,
+                         RugosaChartLabelInfo *out)
+{
+  if (self->input == NULL)
+    return FALSE;
+  _rugosa_canvas_update_spec (self);
+  for (size_t i = 0; i < self->input->n_lines; i++)
+    if (self->input->line_index[i] == position)
+      return rugosa_chart_get_label (self->chart, i, out);
   return FALSE;
 }
 
@@ -474,6 +528,7 @@ rugosa_canvas_dispose (GObject *object)
   RugosaCanvas *self = RUGOSA_CANVAS (object);
 
   rugosa_canvas_set_selection (self, NULL);
+  _rugosa_canvas_drop_visibility (self);
   g_signal_handlers_disconnect_by_data (adw_style_manager_get_default (), self);
   G_OBJECT_CLASS (rugosa_canvas_parent_class)->dispose (object);
 }

@@ -5,6 +5,7 @@
 
 #include "model/rugosa-project.h"
 #include "chart/rugosa-chart-input.h"
+#include "rugosa-visibility.h"
 
 G_BEGIN_DECLS
 
@@ -21,6 +22,13 @@ void        rugosa_canvas_set_project     (RugosaCanvas       *self,
                                            RugosaProject      *project);
 void        rugosa_canvas_set_selection   (RugosaCanvas       *self,
                                            GtkSingleSelection *selection);
+/* Which lines are drawn and pinned; NULL: all drawn, none pinned.  A
+ * change of it refreshes the chart. */
+void        rugosa_canvas_set_visibility  (RugosaCanvas       *self,
+                                           RugosaVisibility   *visibility);
+/* How many times the chart placed its labels (tests, benchmark): not on
+ * a hover, nor on a frame whose markers and labels stay. */
+unsigned    rugosa_canvas_get_placements  (RugosaCanvas       *self);
 /* Rebuild the overlay from the project's results (cheap; the background is
  * rebuilt by the engine only when its spec changed). */
 void        rugosa_canvas_refresh         (RugosaCanvas       *self);
@@ -40,6 +48,11 @@ gboolean    rugosa_canvas_marker_position (RugosaCanvas *self,
                                            guint         position,
                                            double       *x,
                                            double       *y);
+/* Where the chart put the label (or number) of project line `position`;
+ * FALSE when the line is not drawn (tests). */
+gboolean    rugosa_canvas_get_label       (RugosaCanvas         *self,
+                                           guint                 position,
+                                           RugosaChartLabelInfo *out);
 /* What a click at (x, y) does: select the line whose marker or label is
  * there.  FALSE when nothing is hit. */
 gboolean    rugosa_canvas_select_at       (RugosaCanvas *self,

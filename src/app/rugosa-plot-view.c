@@ -21,6 +21,7 @@ struct _RugosaPlotView
   RugosaProject      *project;
   GSettings          *settings;
   GtkSingleSelection *selection;
+  RugosaVisibility   *visibility;   /* weak; NULL: every line */
 
   /* owned references */
   RugosaPlot      *plot;
@@ -74,7 +75,10 @@ rugosa_plot_view_refresh (RugosaPlotView *self)
   g_clear_pointer (&self->input, rugosa_plot_input_free);
   if (self->project != NULL)
     {
-      self->input = rugosa_plot_input_new (self->project, self->view, _rugosa_plot_view_selected (self));
+      self->input = rugosa_plot_input_new (self->project, self->view, _rugosa_plot_view_selected (self),
+                                           self->visibility != NULL
+                                             ? rugosa_visibility_chart_view (self->visibility)
+                                             : NULL);
       rugosa_plot_set_series (self->plot, self->input->series, self->input->n_series);
     }
   else
@@ -115,6 +119,27 @@ rugosa_plot_view_set_selection (RugosaPlotView     *self,
   if (selection)
     g_signal_connect_swapped (selection, "notify::selected",
                               G_CALLBACK (_rugosa_plot_view_selection_changed), self);
+}
+
+void
+rugosa_plot_view_set_visibility (RugosaPlotView   *self,
+                                 RugosaVisibility *visibility)
+{
+  g_return_if_fail (RUGOSA_IS_PLOT_VIEW (self));
+
+  if (self->visibility != NULL)
+    {
+      g_signal_handlers_disconnect_by_data (self->visibility, self);
+      g_object_remove_weak_pointer (G_OBJECT (self->visibility), (gpointer *) &self->visibility);
+    }
+  self->visibility = visibility;
+  if (visibility != NULL)
+    {
+      g_object_add_weak_pointer (G_OBJECT (visibility), (gpointer *) &self->visibility);
+      g_signal_connect_object (visibility, "changed", G_CALLBACK (rugosa_plot_view_refresh), self,
+                               G_CONNECT_SWAPPED);
+    }
+  rugosa_plot_view_refresh (self);
 }
 
 RugosaChartView
@@ -320,6 +345,7 @@ rugosa_plot_view_dispose (GObject *object)
   RugosaPlotView *self = RUGOSA_PLOT_VIEW (object);
 
   rugosa_plot_view_set_selection (self, NULL);
+  rugosa_plot_view_set_visibility (self, NULL);
   g_signal_handlers_disconnect_by_data (adw_style_manager_get_default (), self);
   G_OBJECT_CLASS (rugosa_plot_view_parent_class)->dispose (object);
 }

@@ -5,6 +5,7 @@
 
 #include "chart/rugosa-plot-input.h"
 #include "model/rugosa-project.h"
+#include "rugosa-visibility.h"
 
 G_BEGIN_DECLS
 
@@ -23,6 +24,10 @@ void        rugosa_plot_view_set_project   (RugosaPlotView     *self,
                                             GSettings          *settings);
 void        rugosa_plot_view_set_selection (RugosaPlotView     *self,
                                             GtkSingleSelection *selection);
+/* The lines the window shows (the hidden ones are left out); NULL: every
+ * line.  Redrawn when it changes. */
+void        rugosa_plot_view_set_visibility (RugosaPlotView   *self,
+                                             RugosaVisibility *visibility);
 /* Read the results again and draw; only while the view is on screen (a
  * hidden view refreshes when it is shown). */
 void        rugosa_plot_view_refresh       (RugosaPlotView     *self);

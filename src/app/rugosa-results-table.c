@@ -208,25 +208,50 @@ _rugosa_results_table_update_label (RugosaResultsTable *self,
   text = rugosa_results_table_format_cell (self, line, column);
   if (g_strcmp0 (gtk_inscription_get_text (label), text) != 0)
     gtk_inscription_set_text (label, text);
-  if (g_strcmp0 (column, "warnings") == 0)
+  if (g_strcmp0 (column, "hw-c") == 0)
     {
-      g_autofree char *all = self->project ? rugosa_readout_warnings (self->project, line) : NULL;
-      gtk_widget_set_tooltip_text (GTK_WIDGET (label), all);
-    }
-  else if (g_strcmp0 (column, "hw-c") == 0)
-    {
+      /* a C outside the formula's range is shown as such; the reason is
+       * the cell's tooltip (_rugosa_results_table_tooltip) */
       const RugosaLineResults *res = self->project ? rugosa_readout_results (self->project, line) : NULL;
-      g_autofree char *notes = res != NULL && res->ok
-                                 ? rugosa_readout_hazen_williams_notes (&res->points[RUGOSA_FLOW_DESIGN])
-                                 : NULL;
 
-      gtk_widget_set_tooltip_text (GTK_WIDGET (label), notes);
-      /* a C outside the formula's range is shown as such */
-      if (notes != NULL && res->points[RUGOSA_FLOW_DESIGN].hazen_williams_notes != 0)
+      if (res != NULL && res->ok && res->points[RUGOSA_FLOW_DESIGN].hazen_williams_notes != 0)
         gtk_widget_add_css_class (GTK_WIDGET (label), "dim-label");
       else
         gtk_widget_remove_css_class (GTK_WIDGET (label), "dim-label");
     }
+}
+
+/* The cell's tooltip — every warning of the row's line, or where the
+ * Hazen–Williams C stands — asked for when the pointer rests on the cell:
+ * setting the tooltip at every slider step made GTK query it again each
+ * time. */
+static gboolean
+_rugosa_results_table_tooltip (GtkWidget          *label,
+                               int                 x,
+                               int                 y,
+                               gboolean            keyboard,
+                               GtkTooltip         *tooltip,
+                               RugosaResultsTable *self)
+{
+  RugosaLine *line = g_object_get_data (G_OBJECT (label), "line");
+  const char *column = g_object_get_data (G_OBJECT (label), "column");
+  g_autofree char *text = NULL;
+
+  if (line == NULL || self->project == NULL)
+    return FALSE;
+  if (g_strcmp0 (column, "warnings") == 0)
+    text = rugosa_readout_warnings (self->project, line);
+  else if (g_strcmp0 (column, "hw-c") == 0)
+    {
+      const RugosaLineResults *res = rugosa_readout_results (self->project, line);
+
+      if (res != NULL && res->ok)
+        text = rugosa_readout_hazen_williams_notes (&res->points[RUGOSA_FLOW_DESIGN]);
+    }
+  if (text == NULL)
+    return FALSE;
+  gtk_tooltip_set_text (tooltip, text);
+  return TRUE;
 }
 
 static void _rugosa_results_table_update_titles (RugosaResultsTable *self);
@@ -280,6 +305,11 @@ _rugosa_results_table_setup (GtkSignalListItemFactory *factory,
     {
       gtk_inscription_set_nat_chars (ins, 40);
       gtk_widget_add_css_class (label, "warning");
+    }
+  if (g_strcmp0 (col->id, "warnings") == 0 || g_strcmp0 (col->id, "hw-c") == 0)
+    {
+      gtk_widget_set_has_tooltip (label, TRUE);
+      g_signal_connect (label, "query-tooltip", G_CALLBACK (_rugosa_results_table_tooltip), self);
     }
   if (g_strcmp0 (col->id, "zone") == 0)
     gtk_inscription_set_nat_chars (ins, 20);

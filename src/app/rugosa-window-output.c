@@ -41,15 +41,17 @@ rugosa_window_export_chart_to (RugosaWindow       *self,
   g_autoptr (RugosaChartInput) input = NULL;
   g_autofree char *date = _rugosa_window_today ();
 
-  /* the view the chart area shows */
+  /* the view the chart area shows, of the lines it shows */
   if (view != RUGOSA_CHART_VIEW_FRICTION)
     {
-      g_autoptr (RugosaPlotInput) plot = rugosa_plot_input_new (self->project, view, selected);
+      g_autoptr (RugosaPlotInput) plot = rugosa_plot_input_new (self->project, view, selected,
+                                                                rugosa_visibility_chart_view (self->visibility));
 
       return rugosa_plot_export (&plot->spec, plot->series, plot->n_series, format,
                                  width, height, date, path, error);
     }
-  input = rugosa_chart_input_new (self->project, selected, NULL);
+  input = rugosa_chart_input_new_view (self->project, selected, NULL,
+                                       rugosa_visibility_chart_view (self->visibility));
   return rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
                               width, height, date, path, error);
 }
@@ -319,7 +321,8 @@ _rugosa_window_draw_page (GtkPrintOperation *op,
   if (_rugosa_window_chart_view (self) != RUGOSA_CHART_VIEW_FRICTION)
     {
       g_autoptr (RugosaPlotInput) plot = rugosa_plot_input_new (self->project, _rugosa_window_chart_view (self),
-                                                                pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos);
+                                                                pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos,
+                                                                rugosa_visibility_chart_view (self->visibility));
       RugosaPlot *p = rugosa_plot_new ();
 
       plot->spec.width = MAX (w, 200);
@@ -337,7 +340,8 @@ _rugosa_window_draw_page (GtkPrintOperation *op,
       return;
     }
   chart = rugosa_chart_new ();
-  input = rugosa_chart_input_new (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos, NULL);
+  input = rugosa_chart_input_new_view (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos,
+                                       NULL, rugosa_visibility_chart_view (self->visibility));
   /* The page in points; the chart keeps its own proportions below 200 × 150. */
   input->spec.width = MAX (w, 200);
   input->spec.height = MAX (h, 150);

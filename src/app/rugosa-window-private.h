@@ -6,6 +6,7 @@
 
 #include "rugosa-canvas.h"
 #include "rugosa-cost-group.h"
+#include "rugosa-line-list.h"
 #include "rugosa-line-panel.h"
 #include "rugosa-plot-view.h"
 #include "rugosa-results-table.h"
@@ -20,7 +21,7 @@ struct _RugosaWindow
   /* template widgets */
   AdwWindowTitle     *window_title;
   AdwToastOverlay    *toast_overlay;
-  GtkListView        *lines_view;
+  RugosaLineList     *line_list;
   RugosaCanvas       *canvas;
   GtkLabel           *probe_label;
   GtkScale           *age_scale;
@@ -44,9 +45,9 @@ struct _RugosaWindow
   RugosaProject      *project;
   RugosaHistory      *history;
   GtkSingleSelection *selection;
+  RugosaVisibility   *visibility;   /* which lines the chart and table show */
   GFile              *file;
   GtkWindow          *project_settings; /* while open; weak */
-  GPtrArray          *bound_rows;   /* line list rows on screen */
   char               *autosave_id;  /* unique per window */
 
   guint    autosave_source;

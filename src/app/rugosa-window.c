@@ -196,132 +196,6 @@ _rugosa_window_update_actions (RugosaWindow *self)
     self->actions_source = g_idle_add_full (G_PRIORITY_HIGH, _rugosa_window_actions_due, self, NULL);
 }
 
-/* --- the line list --------------------------------------------------- */
-
-static void
-_rugosa_window_swatch_draw (GtkDrawingArea *area,
-                            cairo_t        *cr,
-                            int             width,
-                            int             height,
-                            gpointer        user_data)
-{
-  RugosaLine *line = g_object_get_data (G_OBJECT (area), "line");
-  GdkRGBA rgba = { 0.5, 0.5, 0.5, 1 };
-
-  if (line)
-    gdk_rgba_parse (&rgba, rugosa_line_get_colour (line));
-  gdk_cairo_set_source_rgba (cr, &rgba);
-  cairo_arc (cr, width / 2.0, height / 2.0, MIN (width, height) / 2.0 - 1, 0, 2 * G_PI);
-  cairo_fill (cr);
-}
-
-static void
-_rugosa_window_update_row (RugosaWindow *self,
-                           GtkWidget    *row)
-{
-  RugosaLine *line = g_object_get_data (G_OBJECT (row), "line");
-  GtkWidget *swatch = gtk_widget_get_first_child (row);
-  GtkWidget *texts = gtk_widget_get_next_sibling (swatch);
-  GtkWidget *name = gtk_widget_get_first_child (texts);
-  GtkWidget *readout = gtk_widget_get_next_sibling (name);
-  GtkWidget *warn = gtk_widget_get_next_sibling (texts);
-  const RugosaLineResults *res;
-  g_autofree char *warnings = NULL;
-  g_autofree char *sub = NULL;
-
-  if (line == NULL)
-    return;
-  g_object_set_data (G_OBJECT (swatch), "line", line);
-  gtk_widget_queue_draw (swatch);
-  if (g_strcmp0 (gtk_label_get_text (GTK_LABEL (name)), rugosa_line_get_name (line)) != 0)
-    gtk_label_set_text (GTK_LABEL (name), rugosa_line_get_name (line));
-
-  res = rugosa_readout_results (self->project, line);
-  if (res && res->ok && res->points[RUGOSA_FLOW_DESIGN].ok)
-    {
-      const RugosaOperatingPoint *p = &res->points[RUGOSA_FLOW_DESIGN];
-      g_autofree char *v = rugosa_readout_format (self->project, RUGOSA_DISPLAY_VELOCITY, p->result.velocity_m_s);
-      g_autofree char *h = rugosa_readout_format (self->project, RUGOSA_DISPLAY_HEAD, p->result.head_loss_total_m);
-
-      sub = g_strdup_printf (_("%s · loss %s"), v, h);
-    }
-  else
-    sub = g_strdup (_("cannot be evaluated"));
-  if (g_strcmp0 (gtk_inscription_get_text (GTK_INSCRIPTION (readout)), sub) != 0)
-    gtk_inscription_set_text (GTK_INSCRIPTION (readout), sub);
-
-  warnings = rugosa_readout_warnings (self->project, line);
-  if (gtk_widget_get_visible (warn) != (warnings != NULL))
-    gtk_widget_set_visible (warn, warnings != NULL);
-  gtk_widget_set_tooltip_text (warn, warnings);
-}
-
-static void
-_rugosa_window_row_setup (GtkSignalListItemFactory *factory,
-                          GtkListItem              *item,
-                          RugosaWindow             *self)
-{
-  GtkWidget *row = gtk_box_new (GTK_ORIENTATION_HORIZONTAL, 8);
-  GtkWidget *swatch = gtk_drawing_area_new ();
-  GtkWidget *texts = gtk_box_new (GTK_ORIENTATION_VERTICAL, 0);
-  GtkWidget *name = gtk_label_new (NULL);
-  /* An inscription: its text changes with every slider move, its size
-   * does not. */
-  GtkWidget *readout = gtk_inscription_new (NULL);
-  GtkWidget *warn = gtk_image_new_from_icon_name ("dialog-warning-symbolic");
-
-  gtk_drawing_area_set_content_width (GTK_DRAWING_AREA (swatch), 14);
-  gtk_drawing_area_set_content_height (GTK_DRAWING_AREA (swatch), 14);
-  gtk_drawing_area_set_draw_func (GTK_DRAWING_AREA (swatch), _rugosa_window_swatch_draw, NULL, NULL);
-  gtk_widget_set_valign (swatch, GTK_ALIGN_CENTER);
-  gtk_label_set_xalign (GTK_LABEL (name), 0);
-  gtk_label_set_ellipsize (GTK_LABEL (name), PANGO_ELLIPSIZE_END);
-  gtk_inscription_set_text_overflow (GTK_INSCRIPTION (readout), GTK_INSCRIPTION_OVERFLOW_ELLIPSIZE_END);
-  gtk_inscription_set_nat_chars (GTK_INSCRIPTION (readout), 24);
-  gtk_widget_add_css_class (readout, "dim-label");
-  gtk_widget_add_css_class (readout, "line-row-readout");
-  gtk_widget_set_hexpand (texts, TRUE);
-  gtk_widget_add_css_class (warn, "warning");
-  gtk_widget_set_valign (warn, GTK_ALIGN_CENTER);
-  gtk_box_append (GTK_BOX (texts), name);
-  gtk_box_append (GTK_BOX (texts), readout);
-  gtk_box_append (GTK_BOX (row), swatch);
-  gtk_box_append (GTK_BOX (row), texts);
-  gtk_box_append (GTK_BOX (row), warn);
-  gtk_list_item_set_child (item, row);
-}
-
-static void
-_rugosa_window_row_bind (GtkSignalListItemFactory *factory,
-                         GtkListItem              *item,
-                         RugosaWindow             *self)
-{
-  GtkWidget *row = gtk_list_item_get_child (item);
-
-  g_object_set_data (G_OBJECT (row), "line", gtk_list_item_get_item (item));
-  g_ptr_array_add (self->bound_rows, row);
-  _rugosa_window_update_row (self, row);
-}
-
-static void
-_rugosa_window_row_unbind (GtkSignalListItemFactory *factory,
-                           GtkListItem              *item,
-                           RugosaWindow             *self)
-{
-  GtkWidget *row = gtk_list_item_get_child (item);
-
-  if (self->bound_rows)
-    g_ptr_array_remove_fast (self->bound_rows, row);
-  g_object_set_data (G_OBJECT (row), "line", NULL);
-}
-
-static void
-_rugosa_window_line_activated (RugosaWindow *self,
-                               guint         position)
-{
-  gtk_widget_activate_action (GTK_WIDGET (self), "win.line-rename", NULL);
-}
-
 /* The pointer readout follows the pointer, below and to the right of it,
  * turning back at the canvas edges. */
 static gboolean
@@ -387,13 +261,6 @@ _rugosa_window_update_age_summary (RugosaWindow *self)
   gtk_inscription_set_text (self->age_change_label, "");
 }
 
-static void
-_rugosa_window_refresh_rows (RugosaWindow *self)
-{
-  for (guint i = 0; i < self->bound_rows->len; i++)
-    _rugosa_window_update_row (self, g_ptr_array_index (self->bound_rows, i));
-}
-
 void
 _rugosa_window_refresh_all (RugosaWindow *self)
 {
@@ -413,7 +280,7 @@ _rugosa_window_refresh_all (RugosaWindow *self)
       rugosa_line_panel_refresh (self->line_panel);
       rugosa_cost_group_refresh (self->cost_group);
     }
-  _rugosa_window_refresh_rows (self);
+  rugosa_line_list_refresh (self->line_list);
   _rugosa_window_update_age_summary (self);
   _rugosa_window_update_actions (self);
 }
@@ -466,6 +333,8 @@ void
 _rugosa_window_project_replaced (RugosaWindow *self)
 {
   rugosa_history_clear (self->history);
+  /* another document: every line shown (visibility is not saved) */
+  rugosa_visibility_reset (self->visibility);
   _rugosa_window_sync_age_scale (self);
   if (rugosa_project_get_n_lines (self->project) > 0)
     gtk_single_selection_set_selected (self->selection, 0);
@@ -816,6 +685,7 @@ _rugosa_window_add_views (RugosaWindow *self)
                             rugosa_chart_view_title ((RugosaChartView) v));
       rugosa_plot_view_set_project (self->plot_views[v], self->project, self->settings);
       rugosa_plot_view_set_selection (self->plot_views[v], self->selection);
+      rugosa_plot_view_set_visibility (self->plot_views[v], self->visibility);
     }
 }
 
@@ -845,7 +715,6 @@ static void
 _rugosa_window_setup (RugosaWindow *self)
 {
   GtkApplication *app = gtk_window_get_application (GTK_WINDOW (self));
-  GtkListItemFactory *factory;
 
   self->settings = rugosa_application_get_settings (RUGOSA_APPLICATION (app));
   g_settings_bind (self->settings, "service-age-max", self->age_adjustment, "upper", G_SETTINGS_BIND_GET);
@@ -861,17 +730,16 @@ _rugosa_window_setup (RugosaWindow *self)
   gtk_single_selection_set_autoselect (self->selection, TRUE);
   gtk_single_selection_set_can_unselect (self->selection, FALSE);
 
-  factory = gtk_signal_list_item_factory_new ();
-  g_signal_connect (factory, "setup", G_CALLBACK (_rugosa_window_row_setup), self);
-  g_signal_connect (factory, "bind", G_CALLBACK (_rugosa_window_row_bind), self);
-  g_signal_connect (factory, "unbind", G_CALLBACK (_rugosa_window_row_unbind), self);
-  gtk_list_view_set_factory (self->lines_view, factory);
-  g_object_unref (factory);
-  gtk_list_view_set_model (self->lines_view, GTK_SELECTION_MODEL (self->selection));
+  self->visibility = rugosa_visibility_new (self->selection);
+  rugosa_line_list_set_context (self->line_list, self->project, self->selection,
+                                self->visibility);
 
   rugosa_canvas_set_project (self->canvas, self->project);
   rugosa_canvas_set_selection (self->canvas, self->selection);
-  rugosa_results_table_set_context (self->results_table, self->project, self->selection);
+  rugosa_canvas_set_visibility (self->canvas, self->visibility);
+  /* the table lists the lines the chart draws */
+  rugosa_results_table_set_context (self->results_table, self->project,
+                                    rugosa_visibility_drawn_selection (self->visibility, self->project));
   rugosa_line_panel_set_context (self->line_panel, self->project);
   rugosa_cost_group_set_project (self->cost_group, self->project);
   _rugosa_window_add_views (self);
@@ -915,7 +783,7 @@ rugosa_window_dispose (GObject *object)
         self->plot_views[v] = NULL;
       }
   gtk_widget_dispose_template (GTK_WIDGET (self), RUGOSA_TYPE_WINDOW);
-  g_clear_pointer (&self->bound_rows, g_ptr_array_unref);
+  g_clear_object (&self->visibility);
   g_clear_object (&self->selection);
   g_clear_object (&self->history);
   g_clear_object (&self->project);
@@ -933,6 +801,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   object_class->dispose = rugosa_window_dispose;
 
   g_type_ensure (RUGOSA_TYPE_CANVAS);
+  g_type_ensure (RUGOSA_TYPE_LINE_LIST);
   g_type_ensure (RUGOSA_TYPE_LINE_PANEL);
   g_type_ensure (RUGOSA_TYPE_RESULTS_TABLE);
   g_type_ensure (RUGOSA_TYPE_COST_GROUP);
@@ -940,7 +809,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   gtk_widget_class_set_template_from_resource (widget_class, "/org/rugosa/Rugosa/rugosa-window.ui");
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, window_title);
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, toast_overlay);
-  gtk_widget_class_bind_template_child (widget_class, RugosaWindow, lines_view);
+  gtk_widget_class_bind_template_child (widget_class, RugosaWindow, line_list);
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, canvas);
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, probe_label);
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, age_scale);
@@ -954,7 +823,6 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, chart_stack);
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, friction_page);
   gtk_widget_class_bind_template_child (widget_class, RugosaWindow, cost_group);
-  gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_line_activated);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_place_probe);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_age_changed);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_window_edit_line);
@@ -985,7 +853,6 @@ rugosa_window_class_init (RugosaWindowClass *klass)
 static void
 rugosa_window_init (RugosaWindow *self)
 {
-  self->bound_rows = g_ptr_array_new ();
   gtk_widget_init_template (GTK_WIDGET (self));
   if (g_str_has_suffix (APPLICATION_ID, ".Devel"))
     gtk_widget_add_css_class (GTK_WIDGET (self), "devel");

@@ -1,15 +1,7 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
-/* The overlay: the user's line options as markers with labels, their flow
- * ranges and aging trails, the legend, and the caution footer.
- *
- * Label placement is greedy.  Labels are placed one by one (the selected
- * line first); each tries candidate boxes on rings around its marker, in a
- * fixed order of directions, and takes the first one that stays inside the
- * plot and clears every marker, the legend and the labels already placed.
- * A label put on an outer ring gets a leader line.  If no ring works the
- * name alone is tried, then a scan of the whole plot for the free place
- * nearest to the marker; failing that the label is left out (the legend
- * still names the line).  Markers themselves never move: they are data. */
+/* The overlay: the user's line options as markers with labels (placed by
+ * chart-labels.c) or numbers, their flow ranges and aging trails, the
+ * legend, and the caution footer.  Markers never move: they are data. */
 #include "chart-private.h"
 
 #include <glib/gi18n-lib.h>
@@ -21,17 +13,6 @@
 
 enum { SHAPES = 5 };
 
-static double
-marker_radius (const RugosaChart *chart, size_t i)
-{
-  const double k = chart->lay.k;
-  if (chart->lines[i].line.selected)
-    return 7.0 * k;
-  if ((int) i == chart->hover)
-    return 6.5 * k;
-  return 5.5 * k;
-}
-
 static int
 point_device (const RugosaChart *chart, double re, double f, double *x, double *y)
 {
@@ -41,271 +22,17 @@ point_device (const RugosaChart *chart, double re, double f, double *x, double *
   return 1;
 }
 
-/* The marker's anchor and box; 0 when the point is off the plot. */
+static double
+marker_radius (const RugosaChart *chart, size_t i)
+{
+  return _rugosa_chart_marker_radius (chart, i, (int) i == chart->hover);
+}
+
 static int
-marker_geometry (const RugosaChart *chart, size_t i, double *ax, double *ay,
-                 RugosaChartRect *box)
+prominent (const RugosaChart *chart, size_t i)
 {
   const RugosaChartLine *l = &chart->lines[i].line;
-  const RugosaChartRect *pl = &chart->lay.plot;
-  const double r = marker_radius (chart, i) + 2.0 * chart->lay.k;
-  double x, y;
-
-  if (l->regime == RG_REGIME_TRANSITIONAL)
-    {
-      double y1, y2;
-      if (!point_device (chart, l->re, l->f_laminar, &x, &y1)
-          || !point_device (chart, l->re, l->f_turbulent, &x, &y2))
-        return 0;
-      const double top = fmin (y1, y2), bottom = fmax (y1, y2);
-      *ax = x;
-      *ay = 0.5 * (top + bottom);
-      box->x = x - r;
-      box->y = top - r;
-      box->width = 2 * r;
-      box->height = bottom - top + 2 * r;
-    }
-  else
-    {
-      if (!point_device (chart, l->re, l->f, &x, &y))
-        return 0;
-      *ax = x;
-      *ay = y;
-      box->x = x - r;
-      box->y = y - r;
-      box->width = 2 * r;
-      box->height = 2 * r;
-    }
-  return *ax >= pl->x && *ax <= pl->x + pl->width && *ay >= pl->y
-         && *ay <= pl->y + pl->height;
-}
-
-static void
-label_text (const ChartLine *cl, int compact, char *buf, size_t size)
-{
-  snprintf (buf, size, "%s", cl->name ? cl->name : "");
-  if (compact)
-    return;
-  const char *parts[] = { cl->velocity, cl->head100, cl->headtotal };
-  for (size_t i = 0; i < G_N_ELEMENTS (parts); i++)
-    if (parts[i] != NULL && parts[i][0] != '\0')
-      {
-        g_strlcat (buf, "\n", size);
-        g_strlcat (buf, parts[i], size);
-      }
-}
-
-static PangoLayout *
-label_layout (RugosaChart *chart, size_t i, int compact, double *w, double *h)
-{
-  char text[512];
-  const double k = chart->lay.k;
-  label_text (&chart->lines[i], compact, text, sizeof text);
-  PangoLayout *l = _rugosa_chart_text (chart, text, chart->lay.font_label,
-                                       compact ? TEXT_BOLD : TEXT_FIRST_BOLD, 0);
-  _rugosa_chart_text_size (l, w, h);
-  /* padding and the shape swatch; whole pixels (see draw_label) */
-  *w = ceil (*w + 2 * 5 * k + 13 * k);
-  *h = ceil (*h + 2 * 3.5 * k);
-  return l;
-}
-
-typedef struct {
-  const RugosaChartRect *bounds;
-  RugosaChartRect *obst;
-  size_t n_obst;
-  const RugosaChartRect *soft;     /* avoided while `strict` */
-  size_t n_soft;
-  int strict;
-} Space;
-
-static int
-space_free (const Space *s, const RugosaChartRect *r)
-{
-  if (!_rugosa_chart_rect_inside (r, s->bounds))
-    return 0;
-  for (size_t i = 0; i < s->n_obst; i++)
-    if (_rugosa_chart_rects_overlap (r, &s->obst[i]))
-      return 0;
-  if (s->strict)
-    for (size_t i = 0; i < s->n_soft; i++)
-      if (_rugosa_chart_rects_overlap (r, &s->soft[i]))
-        return 0;
-  return 1;
-}
-
-/* Candidate boxes on rings around the marker: 0 on success. */
-static int
-try_rings (const Space *s, double ax, double ay, double mr, double w, double h,
-           double k, RugosaChartRect *out, int *ring_out)
-{
-  static const int DIRS[8][2] = {
-    { 1, -1 }, { 1, 1 }, { -1, -1 }, { -1, 1 }, { 1, 0 }, { -1, 0 }, { 0, -1 }, { 0, 1 },
-  };
-  for (int ring = 0; ring < 5; ring++)
-    {
-      const double d = mr + 3 * k + ring * 16 * k;
-      for (int di = 0; di < 8; di++)
-        {
-          const int dx = DIRS[di][0], dy = DIRS[di][1];
-          const double dd = (dx != 0 && dy != 0) ? d * 0.72 : d;
-          RugosaChartRect r;
-          r.width = w;
-          r.height = h;
-          r.x = round (dx > 0 ? ax + dd : dx < 0 ? ax - dd - w : ax - w / 2);
-          r.y = round (dy > 0 ? ay + dd : dy < 0 ? ay - dd - h : ay - h / 2);
-          if (space_free (s, &r))
-            {
-              *out = r;
-              *ring_out = ring;
-              return 0;
-            }
-        }
-    }
-  return -1;
-}
-
-static int
-try_scan (const Space *s, double ax, double ay, double w, double h, double k,
-          RugosaChartRect *out)
-{
-  const RugosaChartRect *b = s->bounds;
-  const double step = 9 * k;
-  double best = INFINITY;
-  for (double y = b->y; y + h <= b->y + b->height; y += step)
-    for (double x = b->x; x + w <= b->x + b->width; x += step)
-      {
-        const double cx = x + w / 2 - ax, cy = y + h / 2 - ay;
-        const double d = cx * cx + cy * cy;
-        if (d >= best)
-          continue;
-        RugosaChartRect r = { round (x), round (y), w, h };
-        if (!space_free (s, &r))
-          continue;
-        best = d;
-        *out = r;
-      }
-  return isfinite (best) ? 0 : -1;
-}
-
-static void
-legend_geometry (RugosaChart *chart)
-{
-  const ChartLayout *lay = &chart->lay;
-  const RugosaChartRect *pl = &lay->plot;
-  const double k = lay->k;
-  RugosaChartRect r = { 0, 0, 0, 0 };
-
-  chart->legend = r;
-  if (!(chart->spec.show & RUGOSA_CHART_SHOW_LEGEND) || chart->n_lines == 0)
-    return;
-  const double row = lay->font_label * 1.45;
-  size_t max_rows = (size_t) fmax (1, floor (0.4 * pl->height / row));
-  size_t rows = chart->n_lines <= max_rows ? chart->n_lines : max_rows;
-  double wmax = 0;
-  for (size_t i = 0; i < chart->n_lines && i < rows; i++)
-    {
-      double w, h;
-      /* measured bold: the selected line's name is drawn bold */
-      PangoLayout *l = _rugosa_chart_text (chart, chart->lines[i].name,
-                                           lay->font_label * 0.95, TEXT_BOLD, 0);
-      _rugosa_chart_text_size (l, &w, &h);
-      wmax = fmax (wmax, w);
-    }
-  wmax = fmin (fmax (wmax, 70 * k), 0.3 * pl->width);
-  r.width = wmax + 30 * k;
-  r.height = (double) rows * row + 10 * k;
-  /* Bottom left of the turbulent strip: on default axes that corner lies
-   * below the smooth-pipe curve, where no operating point can fall. */
-  double x, y;
-  _rugosa_chart_xy (lay, chart->spec.transition.re_turbulent_min, 0.02, &x, &y);
-  r.x = x + 10 * k;
-  if (r.x + r.width > pl->x + pl->width - 10 * k)
-    r.x = pl->x + 10 * k;
-  r.y = pl->y + pl->height - 10 * k - r.height;
-  /* whole pixels, so its cached image is copied rather than resampled */
-  r.x = round (r.x);
-  r.y = round (r.y);
-  r.width = ceil (r.width);
-  r.height = ceil (r.height);
-  chart->legend = r;
-}
-
-void
-_rugosa_chart_place_labels (RugosaChart *chart)
-{
-  const ChartLayout *lay = &chart->lay;
-  const double k = lay->k;
-  const size_t n = chart->n_lines;
-  RugosaChartRect bounds = { lay->plot.x + 3, lay->plot.y + 3,
-                             lay->plot.width - 6, lay->plot.height - 6 };
-  bounds.x = ceil (bounds.x);
-  bounds.y = ceil (bounds.y);
-  bounds.width = floor (bounds.width);
-  bounds.height = floor (bounds.height);
-  RugosaChartRect *obst = g_new (RugosaChartRect, 2 * n + 1);
-  /* soft: the background's labels and a sizing's ladder (chart-ladder.c) */
-  const size_t n_bg = chart->bg_boxes_valid ? chart->n_bg_boxes : 0;
-  RugosaChartRect *soft = g_new (RugosaChartRect, n_bg + chart->n_ladder + 1);
-  memcpy (soft, chart->bg_boxes, n_bg * sizeof soft[0]);
-  Space s = { &bounds, obst, 0, soft, n_bg + _rugosa_chart_ladder_boxes (chart, soft + n_bg), 0 };
-
-  g_free (chart->labels);
-  chart->labels = g_new0 (ChartLabel, n ? n : 1);
-  legend_geometry (chart);
-  if (chart->legend.width > 0)
-    obst[s.n_obst++] = chart->legend;
-
-  for (size_t i = 0; i < n; i++)
-    {
-      ChartLabel *lb = &chart->labels[i];
-      if (marker_geometry (chart, i, &lb->ax, &lb->ay, &lb->info.marker))
-        obst[s.n_obst++] = lb->info.marker;
-      else
-        lb->info.marker = (RugosaChartRect) { 0, 0, 0, 0 };
-    }
-
-  /* The selected line's label first, then the others in order. */
-  for (int pass = 0; pass < 2; pass++)
-    for (size_t i = 0; i < n; i++)
-      {
-        ChartLabel *lb = &chart->labels[i];
-        if ((pass == 0) != (chart->lines[i].line.selected != 0))
-          continue;
-        if (lb->info.marker.width == 0)
-          continue;
-        const double mr = lb->info.marker.width / 2;
-        const double half_bar = lb->info.marker.height / 2;
-        /* full label near the marker, clear of the background's labels;
-         * then allowed over them; then the name alone; then anywhere */
-        static const struct { int compact, scan, strict; } ATTEMPTS[] = {
-          { 0, 0, 1 }, { 0, 0, 0 }, { 1, 0, 1 }, { 1, 0, 0 }, { 0, 1, 0 }, { 1, 1, 0 },
-        };
-        for (size_t a = 0; a < G_N_ELEMENTS (ATTEMPTS); a++)
-          {
-            double w, h;
-            PangoLayout *l = label_layout (chart, i, ATTEMPTS[a].compact, &w, &h);
-            RugosaChartRect r;
-            int ring = 0;
-            s.strict = ATTEMPTS[a].strict;
-            int ok = !ATTEMPTS[a].scan
-                       ? try_rings (&s, lb->ax, lb->ay, fmax (mr, half_bar), w, h, k, &r, &ring)
-                       : try_scan (&s, lb->ax, lb->ay, w, h, k, &r);
-            if (ok != 0)
-              continue;
-            lb->info.visible = 1;
-            lb->info.compact = ATTEMPTS[a].compact;
-            lb->info.has_leader = ATTEMPTS[a].scan || ring > 0;
-            lb->info.box = r;
-            lb->layout = l;
-            obst[s.n_obst++] = r;
-            break;
-          }
-      }
-  g_free (obst);
-  g_free (soft);
-  chart->placement_valid = 1;
-  chart->placement_saw_bg_boxes = chart->bg_boxes_valid;
+  return chart->n_lines <= CHART_CROWD || l->selected || l->pinned || (int) i == chart->hover;
 }
 
 /* --- drawing --- */
@@ -416,7 +143,7 @@ draw_line_paths (RugosaChart *chart, cairo_t *cr, size_t i,
           band.a = 1;
           cairo_save (cr);
           cairo_set_line_cap (cr, CAIRO_LINE_CAP_ROUND);
-          cairo_set_line_width (cr, (l->selected ? 7.0 : 5.0) * k);
+          cairo_set_line_width (cr, (l->selected ? 7.0 : prominent (chart, i) ? 5.0 : 2.0) * k);
           for (int s = 0; s < N; s++)
             {
               const double re = re0 * pow (re1 / re0, (double) s / (N - 1));
@@ -451,8 +178,9 @@ draw_line_paths (RugosaChart *chart, cairo_t *cr, size_t i,
       cairo_fill (cr);
     }
 
-  /* Aging trail: new (hollow ring) to the selected age. */
-  if (l->n_trail >= 2)
+  /* Aging trail: new (hollow ring) to the selected age; in a crowd only
+   * for the lines that stand out. */
+  if (l->n_trail >= 2 && prominent (chart, i))
     {
       cairo_save (cr);
       cairo_set_line_width (cr, 1.6 * k);
@@ -541,8 +269,10 @@ draw_label (RugosaChart *chart, cairo_t *cr, size_t i, const RugosaChartPalette 
   const ChartLabel *lb = &chart->labels[i];
   const double k = chart->lay.k;
   const RugosaChartRect *b = &lb->info.box;
+  double tw, th;
   if (!lb->info.visible)
     return;
+  PangoLayout *layout = _rugosa_chart_label_layout (chart, i, lb->info.compact, &tw, &th);
 
   if (lb->info.has_leader)
     {
@@ -574,7 +304,26 @@ draw_label (RugosaChart *chart, cairo_t *cr, size_t i, const RugosaChartPalette 
 
   draw_marker (cr, (int) i, b->x + 5 * k + 4.5 * k, b->y + 3.5 * k + chart->lay.font_label * 0.62,
                3.6 * k, &l->colour, NULL, k, 0);
-  _rugosa_chart_show (cr, lb->layout, b->x + 5 * k + 13 * k, b->y + 3.5 * k, &p->ink, NULL, 0);
+  _rugosa_chart_show (cr, layout, b->x + 5 * k + 13 * k, b->y + 3.5 * k, &p->ink, NULL, 0);
+}
+
+/* The number of an unlabelled marker, keyed to the list: ink on a patch
+ * of the plot colour, the patch edged in the line's colour. */
+static void
+draw_tag (RugosaChart *chart, cairo_t *cr, size_t i, const RugosaChartPalette *p)
+{
+  const ChartLabel *lb = &chart->labels[i];
+  const RugosaChartRect *b = &lb->info.tag;
+  double w, h;
+  if (!lb->info.numbered)
+    return;
+  PangoLayout *layout = _rugosa_chart_tag_layout (chart, i, &w, &h);
+  _rugosa_chart_set_rgba (cr, &p->plot);
+  cairo_rectangle (cr, b->x, b->y + 0.15 * b->height, b->width, 0.75 * b->height);
+  cairo_fill (cr);
+  double tw, th;
+  _rugosa_chart_text_size (layout, &tw, &th);
+  _rugosa_chart_show (cr, layout, b->x + (b->width - tw) / 2, b->y, &p->ink, NULL, 0);
 }
 
 static void
@@ -601,19 +350,20 @@ draw_legend (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
   cairo_save (cr);
   cairo_rectangle (cr, r->x, r->y, r->width - 4 * k, r->height);
   cairo_clip (cr);
-  for (size_t i = 0; i < rows && i < chart->n_lines; i++)
+  for (size_t row_i = 0; row_i < rows && row_i < chart->n_lines; row_i++)
     {
-      const double y = r->y + 5 * k + (double) i * row;
-      char more[64];
+      const double y = r->y + 5 * k + (double) row_i * row;
+      const int i = _rugosa_chart_legend_line (chart, row_i);
+      g_autofree char *more = NULL;
       const char *name = chart->lines[i].name;
-      int is_more = i == rows - 1 && chart->n_lines > rows;
+      int is_more = row_i == rows - 1 && chart->n_lines > rows;
       if (is_more)
         {
-          snprintf (more, sizeof more, _("+ %zu more"), chart->n_lines - rows + 1);
+          more = _rugosa_chart_legend_more (chart, rows);
           name = more;
         }
       else
-        draw_marker (cr, (int) i, r->x + 11 * k, y + row / 2, 3.8 * k,
+        draw_marker (cr, i, r->x + 11 * k, y + row / 2, 3.8 * k,
                      &chart->lines[i].line.colour, NULL, k, 0);
       PangoLayout *l = _rugosa_chart_text (chart, name, lay->font_label * 0.95,
                                            !is_more && chart->lines[i].line.selected
@@ -637,8 +387,12 @@ draw_legend_cached (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p
   GString *key = g_string_new (NULL);
   g_string_append_printf (key, "%d|%.3f|%.3f|%g|%g|%g|%g", chart->spec.theme, chart->lay.k,
                           chart->spec.scale, r->x, r->y, r->width, r->height);
-  for (size_t i = 0; i < chart->n_lines; i++)
+  /* the rows shown, and how many are left out */
+  const size_t rows = _rugosa_chart_legend_rows (chart);
+  g_string_append_printf (key, "|%zu", chart->n_lines);
+  for (size_t row = 0; row < rows; row++)
     {
+      const int i = _rugosa_chart_legend_line (chart, row);
       const RugosaChartLine *l = &chart->lines[i].line;
       g_string_append_printf (key, "|%s|%a|%a|%a|%a|%d", chart->lines[i].name, l->colour.r,
                               l->colour.g, l->colour.b, l->colour.a, l->selected);
@@ -671,6 +425,14 @@ draw_legend_cached (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p
   cairo_restore (cr);
 }
 
+/* Drawing order: 0 the crowd, 1 pinned or hovered, 2 the selected line. */
+static int
+layer (const RugosaChart *chart, size_t i)
+{
+  const RugosaChartLine *l = &chart->lines[i].line;
+  return l->selected ? 2 : (l->pinned || (int) i == chart->hover) ? 1 : 0;
+}
+
 void
 _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached)
 {
@@ -678,8 +440,7 @@ _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached)
   RugosaChartPalette p;
   if (chart->n_lines == 0)
     return;
-  if (!chart->placement_valid)
-    _rugosa_chart_place_labels (chart);
+  _rugosa_chart_ensure_placement (chart);
   rugosa_chart_palette (chart->spec.theme, &p);
 
   cairo_save (cr);
@@ -688,22 +449,25 @@ _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached)
   /* Coarser edge sampling for the geometry (not the text): wide strokes
    * and small circles cost several times less, and look the same. */
   cairo_set_antialias (cr, CAIRO_ANTIALIAS_FAST);
-  /* unselected lines under the selected one */
-  for (int pass = 0; pass < 2; pass++)
+  /* the others under the lines that stand out, those under the hovered
+   * and the selected line */
+  for (int pass = 0; pass < 3; pass++)
     for (size_t i = 0; i < chart->n_lines; i++)
-      if ((pass == 1) == (chart->lines[i].line.selected != 0))
+      if (layer (chart, i) == pass)
         draw_line_paths (chart, cr, i, &p);
-  for (int pass = 0; pass < 2; pass++)
+  for (int pass = 0; pass < 3; pass++)
     for (size_t i = 0; i < chart->n_lines; i++)
-      if ((pass == 1) == (chart->lines[i].line.selected != 0))
+      if (layer (chart, i) == pass)
         draw_line_marker (chart, cr, i, &p);
   if (cached)
     draw_legend_cached (chart, cr, &p);
   else
     draw_legend (chart, cr, &p);
-  for (int pass = 0; pass < 2; pass++)
+  for (size_t i = 0; i < chart->n_lines; i++)
+    draw_tag (chart, cr, i, &p);
+  for (int pass = 0; pass < 3; pass++)
     for (size_t i = 0; i < chart->n_lines; i++)
-      if ((pass == 1) == (chart->lines[i].line.selected != 0))
+      if (layer (chart, i) == pass)
         draw_label (chart, cr, i, &p);
   cairo_restore (cr);
 }

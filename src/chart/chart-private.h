@@ -8,6 +8,13 @@
 
 enum { CHART_CURVES_MAX = RUGOSA_CHART_FAMILY_MAX * 2 };
 
+/* Past this many lines the chart is a crowd: only the selected, pinned and
+ * hovered lines show their flow range at full width, their aging trail and
+ * (selected and pinned) their own Colebrook curve; the others are markers
+ * with thin flow ranges.  Wide bands, trails and curves of a hundred lines
+ * merge into one mass. */
+enum { CHART_CROWD = 24 };
+
 /* Device-space geometry of one frame. */
 typedef struct {
   double width, height;
@@ -34,7 +41,13 @@ typedef struct {
 typedef struct {
   RugosaChartLabelInfo info;
   double ax, ay;                   /* anchor (marker centre) */
-  PangoLayout *layout;             /* borrowed from the text cache */
+  signed char ring, dir;           /* where the label went (-1: none),
+                                    * tried first when placed again */
+  /* what the placement was made for (chart-labels.c) */
+  long key_x, key_y, key_h;
+  unsigned key_flags;
+  int key_number;
+  guint key_name;
 } ChartLabel;
 
 struct RugosaChart {
@@ -62,7 +75,10 @@ struct RugosaChart {
   size_t n_lines;
   int hover;
   int placement_valid;
+  int placement_stale;             /* new lines: check whether it holds */
+  unsigned placements;
   ChartLabel *labels;
+  size_t n_labels;
   RugosaChartRect legend;
   cairo_surface_t *legend_img;     /* the legend as pixels, and its key */
   GString *legend_key;
@@ -75,7 +91,9 @@ struct RugosaChart {
 
   /* text */
   PangoContext *pango;
-  GHashTable *layouts;             /* key text → PangoLayout */
+  GHashTable *layouts;             /* key text → PangoLayout, in use */
+  GHashTable *layouts_old;         /* the generation before: moved back
+                                    * when asked for, dropped as a whole */
 };
 
 /* Boxes the background's text already occupies (tick labels, curve and
@@ -176,7 +194,29 @@ size_t _rugosa_chart_ladder_boxes (RugosaChart *chart, RugosaChartRect *out);
  * triangles) of radius r at (x, y), as a path. */
 void _rugosa_chart_shape_path (cairo_t *cr, int shape, double x, double y,
                                double r);
+/* chart-labels.c */
 void _rugosa_chart_place_labels (RugosaChart *chart);
+/* Whether the placement made for the previous lines still holds for the
+ * present ones (markers on the same pixels, labels of the same size). */
+int _rugosa_chart_placement_holds (RugosaChart *chart);
+void _rugosa_chart_label_key (RugosaChart *chart, size_t i, ChartLabel *lb);
+/* The marker's radius as drawn; `hovered` for the pointer's line. */
+double _rugosa_chart_marker_radius (const RugosaChart *chart, size_t i,
+                                    int hovered);
+PangoLayout *_rugosa_chart_label_layout (RugosaChart *chart, size_t i,
+                                         int compact, double *w, double *h);
+void _rugosa_chart_label_size (RugosaChart *chart, size_t i, int compact,
+                               double *w, double *h);
+PangoLayout *_rugosa_chart_tag_layout (RugosaChart *chart, size_t i,
+                                       double *w, double *h);
+size_t _rugosa_chart_legend_rows (const RugosaChart *chart);
+int _rugosa_chart_legend_line (const RugosaChart *chart, size_t row);
+char *_rugosa_chart_legend_more (const RugosaChart *chart, size_t rows);
+
+/* chart.c: place the labels unless the last placement still holds */
+void _rugosa_chart_ensure_placement (RugosaChart *chart);
+
+/* chart-overlay.c */
 void _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached);
 void _rugosa_chart_draw_footer (RugosaChart *chart, cairo_t *cr);
 

@@ -59,6 +59,18 @@ _rugosa_chart_text (RugosaChart *chart, const char *text, double size_px,
         g_free (key);
       return layout;
     }
+  /* still wanted: back from the older generation, which a trim drops */
+  if (chart->layouts_old != NULL)
+    {
+      gpointer old_key, old_layout;
+      if (g_hash_table_steal_extended (chart->layouts_old, key, &old_key, &old_layout))
+        {
+          g_hash_table_insert (chart->layouts, old_key, old_layout);
+          if (key != stack_key)
+            g_free (key);
+          return old_layout;
+        }
+    }
 
   layout = pango_layout_new (chart->pango);
   PangoFontDescription *fd = pango_font_description_from_string (CHART_FONT_FAMILY);

@@ -22,8 +22,11 @@ const char *const RUGOSA_CHART_CAUTION =
      "ranges. Check designs against local codes and have them reviewed by a "
      "qualified, licensed engineer.");
 
-/* The text cache is dropped when it grows past this many layouts (an age
- * slider makes new readout strings at every step). */
+/* The text cache keeps two generations of layouts: when the one in use
+ * grows past this many (an age slider makes new readout strings at every
+ * step), the older one is dropped and a new one begun; a layout asked for
+ * again moves back into use.  Dropping everything at once made the next
+ * frame lay out every label and number again (115 ms at 1000 lines). */
 enum { TEXT_CACHE_MAX = 4096 };
 
 GQuark
@@ -74,6 +77,8 @@ rugosa_chart_free (RugosaChart *chart)
   g_free (chart->labels);
   if (chart->layouts)
     g_hash_table_destroy (chart->layouts);
+  if (chart->layouts_old)
+    g_hash_table_destroy (chart->layouts_old);
   g_clear_object (&chart->pango);
   g_free (chart);
 }
@@ -95,9 +100,11 @@ trim_text_cache (RugosaChart *chart)
 {
   if (chart->layouts != NULL && g_hash_table_size (chart->layouts) > TEXT_CACHE_MAX)
     {
-      /* placed labels borrow layouts from the cache */
-      g_hash_table_remove_all (chart->layouts);
-      chart->placement_valid = 0;
+      /* labels look their layouts up again when drawn: none is borrowed */
+      if (chart->layouts_old != NULL)
+        g_hash_table_destroy (chart->layouts_old);
+      chart->layouts_old = chart->layouts;
+      chart->layouts = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, g_object_unref);
     }
 }
 
@@ -175,7 +182,9 @@ rugosa_chart_set_lines (RugosaChart *chart, const RugosaChartLine *lines,
       cl->line.readout_head_total = cl->headtotal;
       cl->line.trail = cl->trail;
       const double v = lines[i].rr_new;
-      if (v >= 0 && v <= 0.1 && n_rr < CHART_CURVES_MAX - RUGOSA_CHART_FAMILY_MAX)
+      /* in a crowd, only the curves of the lines that stand out */
+      const int shown = n_lines <= CHART_CROWD || lines[i].selected || lines[i].pinned;
+      if (shown && v >= 0 && v <= 0.1 && n_rr < CHART_CURVES_MAX - RUGOSA_CHART_FAMILY_MAX)
         rr[n_rr++] = v;
     }
   qsort (rr, n_rr, sizeof rr[0], cmp_double);
@@ -193,7 +202,8 @@ rugosa_chart_set_lines (RugosaChart *chart, const RugosaChartLine *lines,
   if (chart->hover >= (int) n_lines)
     chart->hover = -1;
   trim_text_cache (chart);
-  chart->placement_valid = 0;
+  /* placed again only if the labels would move (ensure_placement) */
+  chart->placement_stale = 1;
 }
 
 void
@@ -201,11 +211,13 @@ rugosa_chart_set_hover (RugosaChart *chart, int index)
 {
   if (index < -1 || index >= (int) chart->n_lines)
     index = -1;
-  if (index != chart->hover)
-    {
-      chart->hover = index;
-      chart->placement_valid = 0;
-    }
+  chart->hover = index;
+}
+
+unsigned
+rugosa_chart_placements (const RugosaChart *chart)
+{
+  return chart->placements;
 }
 
 void
@@ -242,6 +254,22 @@ build_background (RugosaChart *chart)
   cairo_surface_flush (chart->bg);
   chart->bg_valid = 1;
   chart->bg_builds++;
+}
+
+void
+_rugosa_chart_ensure_placement (RugosaChart *chart)
+{
+  /* a placement made before the background's labels were known is made
+   * again once they are */
+  if (chart->placement_valid && chart->bg_boxes_valid && !chart->placement_saw_bg_boxes)
+    chart->placement_valid = 0;
+  if (chart->placement_valid && chart->placement_stale)
+    {
+      chart->placement_valid = _rugosa_chart_placement_holds (chart);
+      chart->placement_stale = 0;
+    }
+  if (!chart->placement_valid)
+    _rugosa_chart_place_labels (chart);
 }
 
 void
@@ -301,17 +329,11 @@ rugosa_chart_probe (RugosaChart *chart, double x, double y,
   _rugosa_chart_classify (&chart->spec, &chart->lay, x, y, out);
 }
 
-static void
-ensure_placement (RugosaChart *chart)
-{
-  if (!chart->placement_valid)
-    _rugosa_chart_place_labels (chart);
-}
 
 int
 rugosa_chart_hit_test (RugosaChart *chart, double x, double y, double radius)
 {
-  ensure_placement (chart);
+  _rugosa_chart_ensure_placement (chart);
   int best = -1;
   double best_d = radius;
   for (size_t i = 0; i < chart->n_lines; i++)
@@ -345,6 +367,14 @@ rugosa_chart_hit_test (RugosaChart *chart, double x, double y, double radius)
             && y <= li->box.y + li->box.height)
           return (int) i;
       }
+  /* then the numbers beside unlabelled markers */
+  for (size_t i = 0; i < chart->n_lines; i++)
+    {
+      const RugosaChartLabelInfo *li = &chart->labels[i].info;
+      if (li->numbered && x >= li->tag.x && x <= li->tag.x + li->tag.width
+          && y >= li->tag.y && y <= li->tag.y + li->tag.height)
+        return (int) i;
+    }
   return -1;
 }
 
@@ -354,7 +384,7 @@ rugosa_chart_get_label (RugosaChart *chart, size_t index,
 {
   if (index >= chart->n_lines)
     return 0;
-  ensure_placement (chart);
+  _rugosa_chart_ensure_placement (chart);
   *out = chart->labels[index].info;
   return 1;
 }
@@ -362,7 +392,7 @@ rugosa_chart_get_label (RugosaChart *chart, size_t index,
 RugosaChartRect
 rugosa_chart_legend_box (RugosaChart *chart)
 {
-  ensure_placement (chart);
+  _rugosa_chart_ensure_placement (chart);
   return chart->legend;
 }
 

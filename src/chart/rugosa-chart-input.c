@@ -145,17 +145,25 @@ _trail_cache_get (RugosaTrailCache *cache,
   return e;
 }
 
-/* Forget lines that left the project (deleted, or a file was loaded). */
+/* Forget lines that left the project (deleted, or a file was loaded);
+ * linear in the lines, as a refresh must be. */
 static void
 _trail_cache_prune (RugosaTrailCache *cache,
                     RugosaProject    *project)
 {
   GHashTableIter iter;
   gpointer key;
+  g_autoptr (GHashTable) present = NULL;
+  guint n = rugosa_project_get_n_lines (project);
 
+  if (g_hash_table_size (cache->entries) == 0)
+    return;
+  present = g_hash_table_new (NULL, NULL);
+  for (guint i = 0; i < n; i++)
+    g_hash_table_add (present, rugosa_project_get_line (project, i));
   g_hash_table_iter_init (&iter, cache->entries);
   while (g_hash_table_iter_next (&iter, &key, NULL))
-    if (rugosa_project_find_line (project, key) < 0)
+    if (!g_hash_table_contains (present, key))
       g_hash_table_iter_remove (&iter);
 }
 
@@ -172,6 +180,15 @@ rugosa_chart_input_new (RugosaProject    *project,
                         int               selected,
                         RugosaTrailCache *cache)
 {
+  return rugosa_chart_input_new_view (project, selected, cache, NULL);
+}
+
+RugosaChartInput *
+rugosa_chart_input_new_view (RugosaProject              *project,
+                             int                         selected,
+                             RugosaTrailCache           *cache,
+                             const RugosaChartInputView *view)
+{
   RugosaChartInput *input = g_new0 (RugosaChartInput, 1);
   RugosaSettings *ps = rugosa_project_get_settings (project);
   guint n = rugosa_project_get_n_lines (project);
@@ -180,6 +197,7 @@ rugosa_chart_input_new (RugosaProject    *project,
   const char *u_vel = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_VELOCITY);
   const char *u_grad = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_GRADIENT);
   const char *u_head = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_HEAD);
+  guint readouts_left = RUGOSA_CHART_LABEL_TRIES;
 
   input->owned = g_ptr_array_new_with_free_func (g_free);
   if (cache != NULL)
@@ -192,12 +210,15 @@ rugosa_chart_input_new (RugosaProject    *project,
   for (guint i = 0; i < n; i++)
     {
       RugosaLine *line = rugosa_project_get_line (project, i);
-      const RugosaLineResults *res = rugosa_project_get_results (project, line);
+      const RugosaLineResults *res;
       const RugosaOperatingPoint *design, *pmin, *pmax;
       RugosaChartLine *cl;
       RugosaChartPoint *trail;
       double d, rr_new, rr_aged;
 
+      if (view != NULL && view->drawn != NULL && !view->drawn (line, view->user_data))
+        continue;
+      res = rugosa_project_get_results (project, line);
       if (res == NULL || !res->ok)
         continue;
       design = &res->points[RUGOSA_FLOW_DESIGN];
@@ -273,6 +294,18 @@ rugosa_chart_input_new (RugosaProject    *project,
       g_ptr_array_add (input->owned, trail);
       cl->trail = trail;
 
+      cl->selected = ((int) i == selected);
+      cl->pinned = view != NULL && view->pinned != NULL && view->pinned (line, view->user_data);
+      /* the number beside an unlabelled marker: its place in the list */
+      cl->number = (int) i + 1;
+      /* Readouts only where a label may go: the chart labels the selected
+       * and pinned lines and tries the others in list order, never more
+       * than RUGOSA_CHART_LABEL_TRIES of them; formatting three numbers
+       * for each of a thousand lines was a third of a slider step. */
+      if (!cl->selected && !cl->pinned && readouts_left == 0)
+        continue;
+      if (!cl->selected && !cl->pinned)
+        readouts_left--;
       {
         g_autofree char *v = rugosa_display_format_screen (RG_QTY_VELOCITY, design->result.velocity_m_s, u_vel);
         /* TRANSLATORS: mean velocity readout on the chart, e.g. "V 1.42 m/s"; the
@@ -291,7 +324,6 @@ rugosa_chart_input_new (RugosaProject    *project,
         /* TRANSLATORS: total head loss of the line (pipe and fittings) */
         cl->readout_head_total = _rugosa_chart_input_keep (input, g_strdup_printf (_("total %s"), h));
       }
-      cl->selected = ((int) i == selected);
     }
   return input;
 }

@@ -37,6 +37,22 @@ void              rugosa_trail_cache_free (RugosaTrailCache *cache);
 RugosaChartInput *rugosa_chart_input_new  (RugosaProject    *project,
                                            int               selected,
                                            RugosaTrailCache *cache);
+
+/* What a view shows of the project (the window's visibility): the lines
+ * drawn, and the pinned ones, labelled whatever the crowd.  A NULL
+ * function: every line drawn, none pinned. */
+typedef struct {
+  gboolean (*drawn)  (RugosaLine *line, gpointer user_data);
+  gboolean (*pinned) (RugosaLine *line, gpointer user_data);
+  gpointer   user_data;
+} RugosaChartInputView;
+
+/* The same for a view: lines not drawn are left out (and not evaluated);
+ * every line carries its place in the project as its number. */
+RugosaChartInput *rugosa_chart_input_new_view (RugosaProject              *project,
+                                               int                         selected,
+                                               RugosaTrailCache           *cache,
+                                               const RugosaChartInputView *view);
 void              rugosa_chart_input_free (RugosaChartInput *input);
 
 /* The spec's background fields from the project settings (size, scale

@@ -43,7 +43,13 @@ typedef enum {
 
 enum {
   RUGOSA_CHART_FAMILY_MAX = 64,
-  RUGOSA_CHART_DATE_MAX = 40
+  RUGOSA_CHART_DATE_MAX = 40,
+  /* Lines other than the selected and pinned ones that the overlay tries
+   * to label, in list order: past 80 labels a chart reads as text, and a
+   * label is tried at most three times for each placed.  A line past
+   * these needs no readouts. */
+  RUGOSA_CHART_LABELS_MAX = 80,
+  RUGOSA_CHART_LABEL_TRIES = 3 * RUGOSA_CHART_LABELS_MAX
 };
 
 /* The background description.  Everything here is part of the background
@@ -82,6 +88,11 @@ typedef struct {
   const char *readout_head_per_100m;
   const char *readout_head_total;
   int selected;
+  int pinned;                    /* labelled whatever the crowd, like the
+                                  * selected line */
+  int number;                    /* shown beside the marker when it gets
+                                  * no label: its place in the caller's
+                                  * list (0: index + 1) */
 } RugosaChartLine;
 
 /* One rung of the ladder (chart-ladder.c): a size a sizing tried, as its
@@ -126,7 +137,8 @@ const RugosaChartSpec *rugosa_chart_get_spec (const RugosaChart *chart);
  * background (their curves are drawn there). */
 void rugosa_chart_set_lines (RugosaChart *chart, const RugosaChartLine *lines,
                              size_t n_lines);
-/* Index of the hovered line, or -1. */
+/* Index of the hovered line, or -1.  Only redraws: a hover never moves a
+ * label. */
 void rugosa_chart_set_hover (RugosaChart *chart, int index);
 /* The ladder of a sizing, drawn faintly in `colour` under the lines, in
  * size order (copied; n_rungs 0 removes it).  The background stays. */
@@ -139,6 +151,10 @@ int rugosa_chart_ladder_position (RugosaChart *chart, size_t index,
 /* The rung nearest (x, y) within `radius` device pixels, or -1. */
 int rugosa_chart_ladder_hit_test (RugosaChart *chart, double x, double y,
                                   double radius);
+/* How many times the labels were placed (tests, benchmark): new lines
+ * whose markers stay on the same pixels with labels of the same size keep
+ * the placement. */
+unsigned rugosa_chart_placements (const RugosaChart *chart);
 
 /* Paint the cached background (rebuilt only when stale) then the overlay.
  * `cr` is in device coordinates. */
@@ -182,11 +198,13 @@ int rugosa_chart_hit_test (RugosaChart *chart, double x, double y,
 
 /* Where the overlay put things (after a draw or a call to this function). */
 typedef struct {
-  int visible;             /* 0 when no free place was found */
+  int visible;             /* 0 when the line got no label */
   int compact;             /* name only */
   int has_leader;
   RugosaChartRect box;
   RugosaChartRect marker;  /* the marker's (or transitional bar's) box */
+  int numbered;            /* no label: the line's number beside its marker */
+  RugosaChartRect tag;     /* the number's box */
 } RugosaChartLabelInfo;
 int rugosa_chart_get_label (RugosaChart *chart, size_t index,
                             RugosaChartLabelInfo *out);

@@ -79,8 +79,14 @@ unit_of (RugosaSettings *ps, RugosaDisplayQuantity dq)
 
 /* ---- system curves ------------------------------------------------------ */
 
+static gboolean
+is_shown (const RugosaChartInputView *shown, RugosaLine *line)
+{
+  return shown == NULL || shown->drawn == NULL || shown->drawn (line, shown->user_data);
+}
+
 static double
-flow_extent (RugosaProject *project)
+flow_extent (RugosaProject *project, const RugosaChartInputView *shown)
 {
   double q_max = 0.0;
 
@@ -89,6 +95,9 @@ flow_extent (RugosaProject *project)
       RugosaLine *line = rugosa_project_get_line (project, i);
       g_autoptr (GVariant) curve = NULL;
       gsize n;
+
+      if (!is_shown (shown, line))
+        continue;
 
       q_max = fmax (q_max, FLOW_HEADROOM * fmax (rugosa_line_get_double (line, "flow-design"),
                                                  rugosa_line_get_double (line, "flow-maximum")));
@@ -311,11 +320,12 @@ cost_spec (RugosaPlotInput *input, RugosaProject *project)
 /* ---- both --------------------------------------------------------------- */
 
 RugosaPlotInput *
-rugosa_plot_input_new (RugosaProject *project, RugosaChartView view, int selected)
+rugosa_plot_input_new (RugosaProject *project, RugosaChartView view, int selected,
+                       const RugosaChartInputView *shown)
 {
   RugosaPlotInput *input = g_new0 (RugosaPlotInput, 1);
   guint n = rugosa_project_get_n_lines (project);
-  const double q_max = view == RUGOSA_CHART_VIEW_SYSTEM ? flow_extent (project) : 0.0;
+  const double q_max = view == RUGOSA_CHART_VIEW_SYSTEM ? flow_extent (project, shown) : 0.0;
 
   input->owned = g_ptr_array_new_with_free_func (g_free);
   rugosa_plot_spec_init (&input->spec);
@@ -330,9 +340,12 @@ rugosa_plot_input_new (RugosaProject *project, RugosaChartView view, int selecte
   for (guint i = 0; i < n; i++)
     {
       RugosaLine *line = rugosa_project_get_line (project, i);
-      const RugosaLineResults *r = rugosa_project_get_results (project, line);
+      const RugosaLineResults *r;
       RugosaPlotSeries *s = &input->series[input->n_series];
 
+      if (!is_shown (shown, line))
+        continue;
+      r = rugosa_project_get_results (project, line);
       if (r == NULL || !r->ok || !r->points[RUGOSA_FLOW_DESIGN].ok)
         continue;
       s->name = keep (input, g_strdup (rugosa_line_get_name (line)));

@@ -8,6 +8,7 @@
 
 #include <gio/gio.h>
 
+#include "chart/rugosa-chart-input.h"
 #include "chart/rugosa-chart-plot.h"
 #include "model/rugosa-project.h"
 
@@ -27,11 +28,13 @@ typedef struct {
 #define RUGOSA_PLOT_CURVE_POINTS 81
 
 /* `view` is RUGOSA_CHART_VIEW_SYSTEM or _COST; `selected` the project
- * line drawn on top (-1: none).  Size, scale and theme of the spec are
- * the defaults, for the caller to set. */
-RugosaPlotInput *rugosa_plot_input_new  (RugosaProject   *project,
-                                         RugosaChartView  view,
-                                         int              selected);
+ * line drawn on top (-1: none); `shown` the lines the window shows, as
+ * for rugosa_chart_input_new_view (NULL: every line).  Size, scale and
+ * theme of the spec are the defaults, for the caller to set. */
+RugosaPlotInput *rugosa_plot_input_new  (RugosaProject              *project,
+                                         RugosaChartView             view,
+                                         int                         selected,
+                                         const RugosaChartInputView *shown);
 void             rugosa_plot_input_free (RugosaPlotInput *input);
 
 G_DEFINE_AUTOPTR_CLEANUP_FUNC (RugosaPlotInput, rugosa_plot_input_free)

@@ -150,7 +150,9 @@ cli_args_clear (CliArgs *args)
 gboolean
 cli_args_has (const CliArgs *args, const char *name)
 {
-  return g_hash_table_contains (args->values, name);
+  /* an option with no value left (a blank cell of a batch) is not given */
+  GPtrArray *list = g_hash_table_lookup (args->values, name);
+  return list != NULL && list->len > 0;
 }
 
 const char *

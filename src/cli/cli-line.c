@@ -22,6 +22,7 @@
 #include "core/fluid.h"
 #include "core/units.h"
 #include "model/rugosa-display.h"
+#include "model/rugosa-field-store.h"
 #include "model/rugosa-fields.h"
 #include "model/rugosa-output.h"
 #include "model/rugosa-units.h"
@@ -75,11 +76,16 @@ options_for (gboolean fluid_only)
     return cache[fluid_only];
   a = cli_field_options (fluid_only);
   if (!fluid_only)
-    for (gsize i = 0; i < G_N_ELEMENTS (own_options); i++)
-      {
-        CliOption o = { own_options[i].option, TRUE, FALSE };
-        g_array_append_val (a, o);
-      }
+    {
+      CliOption batch = { "--batch", TRUE, FALSE };
+
+      for (gsize i = 0; i < G_N_ELEMENTS (own_options); i++)
+        {
+          CliOption o = { own_options[i].option, TRUE, FALSE };
+          g_array_append_val (a, o);
+        }
+      g_array_append_val (a, batch);
+    }
   {
     CliOption json = { "--json", FALSE, FALSE };
     g_array_append_val (a, json);
@@ -144,6 +150,47 @@ options_of_subjects (const CliArgs *args, RgSubjects subjects)
   return g_strdup (s->str);
 }
 
+const CliOption *
+cli_line_options (void)
+{
+  return options_for (FALSE);
+}
+
+void
+cli_refusal_clear (CliRefusal *why)
+{
+  g_clear_pointer (&why->option, g_free);
+  g_clear_pointer (&why->sentence, g_free);
+}
+
+int
+cli_fail_refusal (const CliRefusal *why)
+{
+  if (why->option == NULL)
+    return cli_fail ("%s", why->sentence);
+  return cli_fail_option (why->option, why->sentence);
+}
+
+/* Fills `why` (FALSE, for a tail call). */
+static gboolean
+refuse (CliRefusal *why, const char *option, const char *sentence)
+{
+  cli_refusal_clear (why);
+  why->option = g_strdup (option);
+  why->sentence = g_strdup (sentence);
+  return FALSE;
+}
+
+static gboolean
+refuse_subjects (const CliArgs *args, RgSubjects subjects, const char *sentence,
+                 CliRefusal *why)
+{
+  cli_refusal_clear (why);
+  why->option = options_of_subjects (args, subjects);
+  why->sentence = g_strdup (sentence);
+  return FALSE;
+}
+
 int
 cli_fail_subjects (const CliArgs *args, RgSubjects subjects, const char *sentence)
 {
@@ -151,6 +198,36 @@ cli_fail_subjects (const CliArgs *args, RgSubjects subjects, const char *sentenc
 
   return cli_fail_option (options, sentence);
 }
+
+/* Catalog look-ups compare a text with every entry (a pipe designation is
+ * parsed first): the rows of a batch repeat the same few names, so what
+ * each text found is remembered for the life of the process.  Refusals
+ * are not: their sentences are wanted. */
+static GHashTable *
+memo_table (GHashTable **memo)
+{
+  if (*memo == NULL)
+    *memo = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL);
+  return *memo;
+}
+
+#define MEMO_LOOKUP(fn, type)                                             \
+  static RgStatus                                                         \
+  memo_##fn (const char *text, const type **out, RgError *err)            \
+  {                                                                       \
+    static GHashTable *memo;                                              \
+    RgStatus st;                                                          \
+    if ((*out = g_hash_table_lookup (memo_table (&memo), text)) != NULL)  \
+      return RG_OK;                                                       \
+    if ((st = fn (text, out, err)) == RG_OK)                              \
+      g_hash_table_insert (memo, g_strdup (text), (gpointer) *out);       \
+    return st;                                                            \
+  }
+MEMO_LOOKUP (rg_pipe_lookup, RgPipe)
+MEMO_LOOKUP (rg_material_lookup, RgMaterial)
+MEMO_LOOKUP (rg_aging_class_lookup, RgAgingClass)
+MEMO_LOOKUP (rg_fitting_lookup, RgFitting)
+#undef MEMO_LOOKUP
 
 /* "NAME", "NAME x3", "NAMEx3", "NAME*3", "K=0.5", "K=0.5 x2". */
 static gboolean
@@ -202,7 +279,7 @@ parse_fitting (const char *text, const char **id, double *k, double *count,
         }
       return TRUE;
     }
-  if (rg_fitting_lookup (name, &fitting, err) != RG_OK)
+  if (memo_rg_fitting_lookup (name, &fitting, err) != RG_OK)
     return FALSE;
   *id = fitting->id;
   return TRUE;
@@ -220,7 +297,7 @@ apply_number (const CliArgs *args, const RugosaField *row, GObject *target,
                                 density, &stored, err)
       || !rugosa_field_in_range (row, stored, NULL, err))
     return FALSE;
-  g_object_set (target, row->property, stored, NULL);
+  rugosa_field_store_double (target, row, stored);
   return TRUE;
 }
 
@@ -234,17 +311,17 @@ apply_catalog (const CliArgs *args, const RugosaField *row, RugosaLine *line,
     {
       const RgMaterial *m;
 
-      if (rg_material_lookup (text, &m, err) != RG_OK)
+      if (memo_rg_material_lookup (text, &m, err) != RG_OK)
         return FALSE;
-      g_object_set (line, row->property, m->id, NULL);
+      rugosa_field_store_string (line, row, m->id);
     }
   else if (g_str_equal (row->property, "pipe-designation"))
     {
       const RgPipe *p;
 
-      if (rg_pipe_lookup (text, &p, err) != RG_OK)
+      if (memo_rg_pipe_lookup (text, &p, err) != RG_OK)
         return FALSE;
-      g_object_set (line, row->property, p->designation, NULL);
+      rugosa_field_store_string (line, row, p->designation);
     }
   else
     {
@@ -254,9 +331,9 @@ apply_catalog (const CliArgs *args, const RugosaField *row, RugosaLine *line,
       const RugosaField *rate = rugosa_field_find (row->partner);
       double stored = 0.0;
 
-      if (rg_aging_class_lookup (text, &klass, &lookup_err) == RG_OK)
+      if (memo_rg_aging_class_lookup (text, &klass, &lookup_err) == RG_OK)
         {
-          g_object_set (line, row->property, klass->id, NULL);
+          rugosa_field_store_string (line, row, klass->id);
           return TRUE;
         }
       if (strpbrk (text, "0123456789") == NULL)
@@ -270,7 +347,8 @@ apply_catalog (const CliArgs *args, const RugosaField *row, RugosaLine *line,
           err->subjects = row->subjects;
           return FALSE;
         }
-      g_object_set (line, row->property, NULL, rate->property, stored, NULL);
+      rugosa_field_store_string (line, row, NULL);
+      rugosa_field_store_double (line, rate, stored);
     }
   return TRUE;
 }
@@ -302,7 +380,7 @@ apply_enum (const CliArgs *args, const RugosaField *row, GObject *target,
       rg_error_set_on (err, RG_ERR_PARSE, row->subjects, "%s", _("This value is not one of the choices."));
       return FALSE;
     }
-  g_object_set (target, row->property, value, NULL);
+  rugosa_field_store_int (target, row, value);
   return TRUE;
 }
 
@@ -377,7 +455,7 @@ cli_apply_field_options (const CliArgs *args, gboolean fluid_only, RugosaLine *l
                       g_variant_builder_add (&b, "(sdd)", "", k, 1.0);
                   }
                 if (ok)
-                  g_object_set (line, row->property, g_variant_builder_end (&b), NULL);
+                  rugosa_field_store_variant (line, row, g_variant_builder_end (&b));
                 else
                   g_variant_builder_clear (&b);
               }
@@ -406,13 +484,15 @@ cli_apply_field_options (const CliArgs *args, gboolean fluid_only, RugosaLine *l
                            _("The sum of the loss coefficients must be a number from 0 to 100000."));
           return FALSE;
         }
-      g_object_set (line, "fittings", g_variant_new_parsed ("[('', %d, 1.0)]", k), NULL);
+      rugosa_field_store_variant (line, rugosa_field_find ("fittings"),
+                                  g_variant_new_parsed ("[('', %d, 1.0)]", k));
     }
   return TRUE;
 }
 
-int
-cli_set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
+/* The fluid kind from `text`, and the states that kind needs. */
+static gboolean
+set_fluid (const CliArgs *args, const char *text, RugosaLine *line, CliRefusal *why)
 {
   RgFluidKind kind;
   RgError err = { 0 };
@@ -420,8 +500,8 @@ cli_set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
   const RugosaField *rows = rugosa_line_fields (&n);
 
   if (rg_fluid_kind_from_id (text, &kind, &err) != RG_OK)
-    return cli_fail_option ("--fluid", err.text);
-  g_object_set (line, "fluid-kind", (int) kind, NULL);
+    return refuse (why, "--fluid", err.text);
+  rugosa_field_store_int (line, rugosa_field_find ("fluid-kind"), (int) kind);
   for (guint i = 0; i < n; i++)
     if ((rows[i].flags & RUGOSA_FIELD_STATE_REQUIRED)
         && rugosa_field_applies_to_fluid (&rows[i], kind)
@@ -430,9 +510,17 @@ cli_set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
         /* TRANSLATORS: an option, a fluid id, then what the option gives */
         g_autofree char *msg = g_strdup_printf (_("This option is required for the fluid “%s”: %s"),
                                                 rg_fluid_kind_id (kind), _(rows[i].help));
-        return cli_fail_option (rows[i].cli, msg);
+        return refuse (why, rows[i].cli, msg);
       }
-  return CLI_EXIT_OK;
+  return TRUE;
+}
+
+int
+cli_set_fluid (const CliArgs *args, const char *text, RugosaLine *line)
+{
+  g_auto (CliRefusal) why = { 0 };
+
+  return set_fluid (args, text, line, &why) ? CLI_EXIT_OK : cli_fail_refusal (&why);
 }
 
 /* A row of the fluid table in the unit `units` show `dq` in. */
@@ -460,14 +548,14 @@ cli_cmd_fluid (int argc, char **argv)
   RgFluidSpec spec;
   RgFluidProps props;
   const char *option = NULL;
-  int status;
+  g_auto (CliRefusal) why = { 0 };
 
   if (!cli_args_parse (&args, "fluid", options_for (TRUE), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
   if (args.positional->len != 1)
     return cli_fail (_("'fluid' needs exactly one fluid name: water, seawater, oil, air or custom."));
-  if ((status = cli_set_fluid (&args, g_ptr_array_index (args.positional, 0), line)) != CLI_EXIT_OK)
-    return status;
+  if (!set_fluid (&args, g_ptr_array_index (args.positional, 0), line, &why))
+    return cli_fail_refusal (&why);
   if (!cli_apply_field_options (&args, TRUE, line, settings, &option, &err))
     return cli_fail_option (option, err.text);
   if (!cli_apply_units (&args, settings))
@@ -511,6 +599,155 @@ cli_cmd_fluid (int argc, char **argv)
   return cli_write_stdout (out->str);
 }
 
+/* The unit system and overrides of `units` on `settings`. */
+static void
+copy_units (RugosaSettings *settings, RugosaSettings *units)
+{
+  g_autoptr (GVariant) overrides = NULL;
+  int system;
+
+  g_object_get (units, "unit-system", &system, "unit-overrides", &overrides, NULL);
+  g_object_set (settings, "unit-system", system, "unit-overrides", overrides, NULL);
+}
+
+/* --solve and --head-loss: what they ask checked, the head loss parsed. */
+static gboolean
+check_solve (const CliArgs *args, const char *solve, double *head_loss, CliRefusal *why)
+{
+  RgError err = { 0 };
+
+  if (solve != NULL && !g_str_equal (solve, "flow") && !g_str_equal (solve, "diameter"))
+    return refuse (why, "--solve", _("Solve for “flow” (with --head-loss) or for “diameter” (with --head-loss, --max-velocity or --max-gradient)."));
+  if (cli_args_has (args, "--head-loss"))
+    {
+      guint n;
+      const RugosaField *row = rugosa_sizing_fields (&n);
+
+      if (solve == NULL)
+        return refuse (why, "--head-loss", _("The head loss is what --solve flow or --solve diameter works to: give one of them."));
+      if (!rugosa_field_parse_text (row, cli_args_get (args, "--head-loss"), NULL, 0.0, head_loss, &err)
+          || *head_loss == 0.0 || !rugosa_field_in_range (row, *head_loss, NULL, &err))
+        {
+          if (*head_loss == 0.0 && err.text[0] == '\0')
+            (void) rugosa_field_in_range (row, -1.0, NULL, &err);
+          return refuse (why, "--head-loss", err.text);
+        }
+    }
+  if (solve != NULL && g_str_equal (solve, "flow") && !cli_args_has (args, "--head-loss"))
+    return refuse (why, "--solve", _("--solve flow needs the total head loss to find the flow for: add --head-loss, e.g. --head-loss \"12 m\"."));
+  if (solve != NULL && g_str_equal (solve, "diameter"))
+    {
+      if (cli_args_has (args, "--pipe") || cli_args_has (args, "--diameter"))
+        return refuse (why, "--solve", _("--solve diameter finds the bore: give neither --diameter nor --pipe."));
+      if (!cli_args_has (args, "--head-loss") && !cli_args_has (args, "--max-velocity")
+          && !cli_args_has (args, "--max-gradient"))
+        return refuse (why, "--solve", _("--solve diameter needs a limit to keep within: --head-loss, --max-velocity or --max-gradient."));
+    }
+  return TRUE;
+}
+
+/* The flow for the head loss, or the smallest bore within the limits
+ * given, set on the line. */
+static gboolean
+solve_line (const CliArgs *args, RugosaProject *project, RugosaLine *line,
+            const char *solve, double head_loss, CliRefusal *why)
+{
+  RugosaSettings *settings = rugosa_project_get_settings (project);
+  RgError err = { 0 };
+  double solved = 0.0;
+
+  if (g_str_equal (solve, "flow"))
+    {
+      if (!rugosa_solve_flow (project, line, -1.0, head_loss, &solved, &err))
+        return refuse_subjects (args, err.subjects, err.text, why);
+      rugosa_field_store_double (line, rugosa_field_find ("flow-design"), solved);
+    }
+  else
+    {
+      RugosaLimits limits = { 0.0, 0.0, 0.0, head_loss };
+
+      /* the limits given, and no other */
+      if (cli_args_has (args, "--max-velocity"))
+        limits.velocity_max = rugosa_settings_get_double (settings, "velocity-limit");
+      if (cli_args_has (args, "--max-gradient"))
+        limits.gradient_max = rugosa_settings_get_double (settings, "gradient-limit");
+      if (!rugosa_solve_diameter (project, line, -1.0, &limits, &solved, &err))
+        return refuse_subjects (args, err.subjects, err.text, why);
+      rugosa_field_store_double (line, rugosa_field_find ("inner-diameter"), solved);
+    }
+  return TRUE;
+}
+
+const RugosaLineResults *
+cli_line_evaluate (const CliArgs *args, RugosaProject *project, RugosaLine *line,
+                   RugosaSettings *units, CliRefusal *why)
+{
+  RugosaSettings *settings = rugosa_project_get_settings (project);
+  const RugosaLineResults *r;
+  const RugosaOperatingPoint *p;
+  RgError err = { 0 };
+  const char *option = NULL, *fluid, *failed = NULL;
+  const char *solve = cli_args_get (args, "--solve");
+  double head_loss = 0.0;
+
+  /* The inverse problems: the flow for a head loss, or the smallest bore
+   * within the limits given. */
+  if (!check_solve (args, solve, &head_loss, why))
+    return NULL;
+
+  /* What must be given, and what excludes what. */
+  if (cli_args_has (args, "--pipe") && cli_args_has (args, "--diameter"))
+    return refuse (why, NULL, _("Give either --pipe (a catalog designation) or --diameter (an inner diameter), not both.")), NULL;
+  if (!cli_args_has (args, "--pipe") && !cli_args_has (args, "--diameter")
+      && !(solve != NULL && g_str_equal (solve, "diameter")))
+    return refuse (why, NULL, _("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\".")), NULL;
+  if (cli_args_has (args, "--roughness") && cli_args_has (args, "--material"))
+    return refuse (why, NULL, _("Give either --roughness (a value) or --material (a catalog name), not both.")), NULL;
+  if (!cli_args_has (args, "--flow") && !(solve != NULL && g_str_equal (solve, "flow")))
+    return refuse (why, NULL, _("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\".")), NULL;
+  if (!cli_args_has (args, "--length"))
+    return refuse (why, NULL, _("--length is required: give the line length, e.g. --length \"250 m\".")), NULL;
+  if (cli_args_has (args, "--age") && !cli_args_has (args, "--aging"))
+    return refuse (why, NULL, _("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog aging') or a rate such as \"0.05 mm/yr\".")), NULL;
+  if ((fluid = cli_args_get (args, "--fluid")) == NULL)
+    return refuse (why, NULL, _("--fluid is required: water, seawater, oil, air or custom.")), NULL;
+
+  /* A line and settings as new: one row of a batch leaves nothing behind
+   * for the next.  The output units are the settings' too, so that the
+   * warnings are written in them. */
+  rugosa_line_store_defaults (line);
+  rugosa_settings_store_defaults (settings);
+  if (units != NULL)
+    copy_units (settings, units);
+  if (!set_fluid (args, fluid, line, why))
+    return NULL;
+  if (!cli_apply_field_options (args, FALSE, line, settings, &option, &err))
+    return refuse (why, option, err.text), NULL;
+  /* Without a roughness or material, the pipe's usual material. */
+  if (!cli_args_has (args, "--roughness") && !cli_args_has (args, "--material"))
+    {
+      const RgPipe *pipe = NULL;
+
+      if (cli_args_has (args, "--pipe"))
+        (void) memo_rg_pipe_lookup (rugosa_line_get_pipe_designation (line), &pipe, NULL);
+      if (pipe == NULL)
+        return refuse (why, NULL, _("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material.")), NULL;
+      rugosa_field_store_string (line, rugosa_field_find ("material-id"), pipe->material_id);
+    }
+  if (rugosa_settings_check (settings, &failed, &err) != RG_OK)
+    return refuse_subjects (args, err.subjects | rugosa_field_find (failed)->subjects, err.text, why), NULL;
+  if (solve != NULL && !solve_line (args, project, line, solve, head_loss, why))
+    return NULL;
+
+  r = rugosa_project_get_results (project, line);
+  p = &r->points[RUGOSA_FLOW_DESIGN];
+  if (!r->ok)
+    return refuse_subjects (args, r->error_subjects, r->error, why), NULL;
+  if (!p->ok)
+    return refuse_subjects (args, p->error_subjects, p->error, why), NULL;
+  return r;
+}
+
 int
 cli_cmd_line (int argc, char **argv)
 {
@@ -519,16 +756,13 @@ cli_cmd_line (int argc, char **argv)
   g_autoptr (GString) out = g_string_new (NULL);
   g_autoptr (RugosaProject) project = rugosa_project_new ();
   g_autoptr (RugosaLine) line = rugosa_line_new ("line");
-  /* the project's settings are also the output units: its warnings are
-   * written in them too */
+  g_autoptr (RugosaSettings) units = rugosa_settings_new ();
+  g_autofree RugosaLineResults *copy = NULL;
+  g_auto (CliRefusal) why = { 0 };
   RugosaSettings *settings = rugosa_project_get_settings (project);
   const RugosaLineResults *r;
-  g_autofree RugosaLineResults *copy = NULL;
   const RugosaOperatingPoint *p;
-  RgError err = { 0 };
-  const char *option = NULL, *fluid, *failed = NULL, *solve;
-  double head_loss = 0.0, solved = 0.0;
-  int status;
+  const char *solve;
 
   if (!cli_args_parse (&args, "line", options_for (FALSE), argc, argv, 2, msg))
     return cli_fail ("%s", msg->str);
@@ -537,114 +771,22 @@ cli_cmd_line (int argc, char **argv)
       g_autofree char *shown = cli_echo (g_ptr_array_index (args.positional, 0));
       return cli_fail (_("Unexpected argument \"%s\" for 'line'."), shown);
     }
-
-  /* The inverse problems: the flow for a head loss, or the smallest bore
-   * within the limits given. */
-  solve = cli_args_get (&args, "--solve");
-  if (solve != NULL && !g_str_equal (solve, "flow") && !g_str_equal (solve, "diameter"))
-    return cli_fail_option ("--solve", _("Solve for “flow” (with --head-loss) or for “diameter” (with --head-loss, --max-velocity or --max-gradient)."));
-  if (cli_args_has (&args, "--head-loss"))
-    {
-      guint n;
-      const RugosaField *row = rugosa_sizing_fields (&n);
-
-      if (solve == NULL)
-        return cli_fail_option ("--head-loss", _("The head loss is what --solve flow or --solve diameter works to: give one of them."));
-      if (!rugosa_field_parse_text (row, cli_args_get (&args, "--head-loss"), NULL, 0.0, &head_loss, &err)
-          || head_loss == 0.0 || !rugosa_field_in_range (row, head_loss, NULL, &err))
-        {
-          if (head_loss == 0.0 && err.text[0] == '\0')
-            (void) rugosa_field_in_range (row, -1.0, NULL, &err);
-          return cli_fail_option ("--head-loss", err.text);
-        }
-    }
-  if (solve != NULL && g_str_equal (solve, "flow") && !cli_args_has (&args, "--head-loss"))
-    return cli_fail_option ("--solve", _("--solve flow needs the total head loss to find the flow for: add --head-loss, e.g. --head-loss \"12 m\"."));
-  if (solve != NULL && g_str_equal (solve, "diameter"))
-    {
-      if (cli_args_has (&args, "--pipe") || cli_args_has (&args, "--diameter"))
-        return cli_fail_option ("--solve", _("--solve diameter finds the bore: give neither --diameter nor --pipe."));
-      if (!cli_args_has (&args, "--head-loss") && !cli_args_has (&args, "--max-velocity")
-          && !cli_args_has (&args, "--max-gradient"))
-        return cli_fail_option ("--solve", _("--solve diameter needs a limit to keep within: --head-loss, --max-velocity or --max-gradient."));
-    }
-
-  /* What must be given, and what excludes what. */
-  if (cli_args_has (&args, "--pipe") && cli_args_has (&args, "--diameter"))
-    return cli_fail (_("Give either --pipe (a catalog designation) or --diameter (an inner diameter), not both."));
-  if (!cli_args_has (&args, "--pipe") && !cli_args_has (&args, "--diameter")
-      && !(solve != NULL && g_str_equal (solve, "diameter")))
-    return cli_fail (_("--diameter is required (inner diameter, e.g. --diameter \"102.3 mm\"), or name a catalog pipe with --pipe \"NPS 4 Sch 40\"."));
-  if (cli_args_has (&args, "--roughness") && cli_args_has (&args, "--material"))
-    return cli_fail (_("Give either --roughness (a value) or --material (a catalog name), not both."));
-  if (!cli_args_has (&args, "--flow") && !(solve != NULL && g_str_equal (solve, "flow")))
-    return cli_fail (_("--flow is required: give the volumetric flow, e.g. --flow \"12 L/s\"."));
-  if (!cli_args_has (&args, "--length"))
-    return cli_fail (_("--length is required: give the line length, e.g. --length \"250 m\"."));
-  if (cli_args_has (&args, "--age") && !cli_args_has (&args, "--aging"))
-    return cli_fail (_("--age needs --aging: a growth-rate class (see 'rugosa-cli catalog aging') or a rate such as \"0.05 mm/yr\"."));
-  if ((fluid = cli_args_get (&args, "--fluid")) == NULL)
-    return cli_fail (_("--fluid is required: water, seawater, oil, air or custom."));
-
-  if ((status = cli_set_fluid (&args, fluid, line)) != CLI_EXIT_OK)
-    return status;
-  if (!cli_apply_field_options (&args, FALSE, line, settings, &option, &err))
-    return cli_fail_option (option, err.text);
-  if (!cli_apply_units (&args, settings))
+  if (cli_args_has (&args, "--batch"))
+    return cli_line_batch (&args);
+  if (!cli_apply_units (&args, units))
     return CLI_EXIT_USAGE;
-  /* Without a roughness or material, the pipe's usual material. */
-  if (!cli_args_has (&args, "--roughness") && !cli_args_has (&args, "--material"))
-    {
-      const RgPipe *pipe = NULL;
-
-      if (cli_args_has (&args, "--pipe"))
-        (void) rg_pipe_lookup (rugosa_line_get_pipe_designation (line), &pipe, NULL);
-      if (pipe == NULL)
-        return cli_fail (_("--roughness is required (absolute roughness, e.g. --roughness \"0.045 mm\"), or name a catalog material with --material."));
-      g_object_set (line, "material-id", pipe->material_id, NULL);
-    }
-  if (rugosa_settings_check (settings, &failed, &err) != RG_OK)
-    return cli_fail_subjects (&args, err.subjects | rugosa_field_find (failed)->subjects, err.text);
 
   rugosa_project_insert_line (project, 0, line);
-  if (solve != NULL)
-    {
-      gboolean ok;
-
-      if (g_str_equal (solve, "flow"))
-        {
-          ok = rugosa_solve_flow (project, line, -1.0, head_loss, &solved, &err);
-          if (ok)
-            g_object_set (line, "flow-design", solved, NULL);
-        }
-      else
-        {
-          RugosaLimits limits = { 0.0, 0.0, 0.0, head_loss };
-
-          /* the limits given, and no other */
-          if (cli_args_has (&args, "--max-velocity"))
-            limits.velocity_max = rugosa_settings_get_double (settings, "velocity-limit");
-          if (cli_args_has (&args, "--max-gradient"))
-            limits.gradient_max = rugosa_settings_get_double (settings, "gradient-limit");
-          ok = rugosa_solve_diameter (project, line, -1.0, &limits, &solved, &err);
-          if (ok)
-            g_object_set (line, "inner-diameter", solved, NULL);
-        }
-      if (!ok)
-        return cli_fail_subjects (&args, err.subjects, err.text);
-    }
-  r = rugosa_project_get_results (project, line);
-  if (!r->ok)
-    return cli_fail_subjects (&args, r->error_subjects, r->error);
-  if (!r->points[RUGOSA_FLOW_DESIGN].ok)
-    return cli_fail_subjects (&args, r->points[RUGOSA_FLOW_DESIGN].error_subjects,
-                              r->points[RUGOSA_FLOW_DESIGN].error);
+  r = cli_line_evaluate (&args, project, line, units, &why);
+  if (r == NULL)
+    return cli_fail_refusal (&why);
   /* a copy of the results, to add the warnings of the command line's own
    * (whole, so that its design point is still the design point) */
   copy = g_memdup2 (r, sizeof *r);
   r = copy;
   p = &copy->points[RUGOSA_FLOW_DESIGN];
   cli_check_plausible (&args, copy, &copy->points[RUGOSA_FLOW_DESIGN], settings);
+  solve = cli_args_get (&args, "--solve");
 
   if (cli_args_has (&args, "--json"))
     {
@@ -656,7 +798,9 @@ cli_cmd_line (int argc, char **argv)
           /* what was solved for; the flow is no key of a point */
           g_string_append_printf (out, "\n  \"solved\": \"%s\",", solve);
           if (g_str_equal (solve, "flow"))
-            g_string_append_printf (out, "\n  \"flow_m3_s\": %s,", cli_format_exact (solved, buf, sizeof buf));
+            g_string_append_printf (out, "\n  \"flow_m3_s\": %s,",
+                                    cli_format_exact (rugosa_line_get_double (line, "flow-design"),
+                                                      buf, sizeof buf));
         }
       rugosa_output_point_json (out, r, p, "\n  ");
       g_string_append (out, "\n}\n");
@@ -672,6 +816,7 @@ cli_cmd_line (int argc, char **argv)
           gboolean flow = g_str_equal (solve, "flow");
           RugosaDisplayQuantity dq = flow ? RUGOSA_DISPLAY_FLOW : RUGOSA_DISPLAY_DIAMETER;
           const char *unit = rugosa_output_unit (settings, dq);
+          double solved = rugosa_line_get_double (line, flow ? "flow-design" : "inner-diameter");
           double shown = solved;
           char buf[G_ASCII_DTOSTR_BUF_SIZE];
 
@@ -687,7 +832,7 @@ cli_cmd_line (int argc, char **argv)
           cli_pad (out, rugosa_field_label (rugosa_field_find ("pipe-designation")), 38);
           g_string_append_printf (out, "%s\n", designation);
         }
-      if (material_id != NULL && rg_material_lookup (material_id, &material, NULL) == RG_OK)
+      if (material_id != NULL && memo_rg_material_lookup (material_id, &material, NULL) == RG_OK)
         {
           cli_pad (out, rugosa_field_label (rugosa_field_find ("material-id")), 38);
           g_string_append_printf (out, "%s\n", _(material->name));

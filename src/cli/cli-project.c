@@ -316,7 +316,7 @@ cli_cmd_render (int argc, char **argv)
     }
   else
     {
-      g_autoptr (RugosaPlotInput) plot = rugosa_plot_input_new (project, view, -1);
+      g_autoptr (RugosaPlotInput) plot = rugosa_plot_input_new (project, view, -1, NULL);
 
       plot->spec.theme = theme;
       ok = rugosa_plot_export (&plot->spec, plot->series, plot->n_series, format,

@@ -150,6 +150,33 @@ gboolean cli_apply_field_options (const CliArgs *args, gboolean fluid_only,
 /* A refusal naming the options behind `subjects` (those given first). */
 int cli_fail_subjects (const CliArgs *args, RgSubjects subjects,
                        const char *sentence);
+/* Why `line` refused its input: the option(s) at fault ("--flow",
+ * "--a, --b"; NULL when the refusal names none) and one sentence. */
+typedef struct {
+  char *option;
+  char *sentence;
+} CliRefusal;
+void cli_refusal_clear (CliRefusal *why);
+G_DEFINE_AUTO_CLEANUP_CLEAR_FUNC (CliRefusal, cli_refusal_clear)
+/* Reports a refusal on stderr as cli_fail_option or cli_fail does. */
+int cli_fail_refusal (const CliRefusal *why);
+
+/* The options of `line` (every field row with an option, --k-sum, --json,
+ * --batch). */
+const CliOption *cli_line_options (void);
+/* The `line` computation for one set of options: `line` (in `project`)
+ * and the project's settings are set back to their defaults, the units
+ * of `units` (NULL: SI) set on the settings, every option of `args`
+ * applied, --solve solved (the flow or the bore set on the line), and the
+ * line evaluated by the model.  The results (borrowed from the project),
+ * or NULL with `why` filled. */
+const RugosaLineResults *cli_line_evaluate (const CliArgs *args,
+                                            RugosaProject *project,
+                                            RugosaLine *line,
+                                            RugosaSettings *units,
+                                            CliRefusal *why);
+/* rugosa-cli line --batch FILE|- (cli-batch.c); `args` holds --batch. */
+int cli_line_batch (const CliArgs *args);
 
 int cli_cmd_friction (int argc, char **argv);
 int cli_cmd_fluid (int argc, char **argv);

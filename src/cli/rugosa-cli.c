@@ -32,6 +32,8 @@ static const char usage_text[] = N_(
   "             --solve flow --head-loss H: the flow for a total head loss H\n"
   "             --solve diameter [--head-loss H] [--max-velocity V] [--max-gradient G]:\n"
   "                 the smallest bore within the limits given (no --diameter, --pipe)\n"
+  "             --batch FILE|- [--json]: one line a CSV row, its header naming\n"
+  "             the options without dashes (flow,pipe,length,fluid,…)\n"
   "  size       every catalog size of a material for a duty, and the recommended one\n"
   "             --flow Q --length L --material ID --fluid KIND [fluid options]\n"
   "             [--catalog NAME] [--fitting NAME[xN]]... [--elevation DZ]\n"
@@ -71,7 +73,7 @@ static gboolean
 machine_output (int argc, char **argv)
 {
   for (int i = 2; i < argc; i++)
-    if (g_str_equal (argv[i], "--json")
+    if (g_str_equal (argv[i], "--json") || g_str_equal (argv[i], "--batch")
         || (g_str_equal (argv[i], "--format") && i + 1 < argc
             && !g_str_equal (argv[i + 1], "table")))
       return TRUE;

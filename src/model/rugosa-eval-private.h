@@ -26,6 +26,7 @@ typedef struct {
   RgTransition transition;
   RgFittingUse *uses;
   gsize n_uses;
+  gboolean uses_borrowed;    /* the line's cache owns `uses` */
 } RugosaLineSetup;
 
 /* Resolve `line` under the project's settings; FALSE with the sentence

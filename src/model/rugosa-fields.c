@@ -89,6 +89,12 @@ static RugosaField line_fields[] = {
     "#2a7ab0", 0, N_("Colour"),
     N_("The colour of the line's marker, as #rrggbb."),
     NULL, NULL, 0, NULL, NULL, 7, L (colour), -1 },
+  /* a tag for reading many options: the list shows and hides a group's
+   * lines together (not a result: nothing computed depends on it) */
+  { "group", "group", RUGOSA_FIELD_TEXT, RUGOSA_DISPLAY_NUMBER, 1.0, 0, 0, 0, "",
+    0, N_("Group"),
+    N_("A group or tag of the line option; the list of line options filters, shows and hides a group's lines together."),
+    NULL, NULL, 0, NULL, NULL, 100, L (group), -1 },
   { "note", "note", RUGOSA_FIELD_TEXT, RUGOSA_DISPLAY_NUMBER, 1.0, 0, 0, 0, "",
     RUGOSA_FIELD_MULTILINE, N_("Note"),
     N_("Free text about the line option."),

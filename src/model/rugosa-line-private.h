@@ -17,6 +17,7 @@ struct _RugosaLine
    * (rugosa-fields.c), which installs its property */
   char *name;
   char *colour;
+  char *group;
   char *note;
   int fluid_kind;
   double temperature, pressure, salinity, density, viscosity;

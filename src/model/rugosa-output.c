@@ -165,15 +165,24 @@ rugosa_output_key_find (const char *name)
 const char *
 rugosa_output_json_key (const RugosaOutputKey *key)
 {
-  const RugosaDisplayInfo *info = rugosa_display_info (key->display);
+  static const char *json_keys[G_N_ELEMENTS (KEYS)];
+  static gsize done;
 
-  if (info == NULL)
-    return key->name;
-  /* "velocity" + "_" + "m_s", interned once. */
-  {
-    g_autofree char *s = g_strconcat (key->name, "_", info->key_unit, NULL);
-    return g_intern_string (s);
-  }
+  g_return_val_if_fail (key >= KEYS && key < KEYS + G_N_ELEMENTS (KEYS), key->name);
+  /* "velocity" + "_" + "m_s", made once for every key (a batch asks for
+   * them row after row) */
+  if (g_once_init_enter (&done))
+    {
+      for (guint i = 0; i < G_N_ELEMENTS (KEYS); i++)
+        {
+          const RugosaDisplayInfo *info = rugosa_display_info (KEYS[i].display);
+          g_autofree char *s = info != NULL ? g_strconcat (KEYS[i].name, "_", info->key_unit, NULL)
+                                            : g_strdup (KEYS[i].name);
+          json_keys[i] = g_intern_string (s);
+        }
+      g_once_init_leave (&done, 1);
+    }
+  return json_keys[key - KEYS];
 }
 
 gboolean
@@ -299,8 +308,12 @@ rugosa_output_point_json (GString *out, const RugosaLineResults *r,
 
       if (!rugosa_output_present_for (k, r, p))
         continue;
-      g_string_append_printf (out, "%s%s\"%s\": ", first ? "" : ",", indent,
-                              rugosa_output_json_key (k));
+      if (!first)
+        g_string_append_c (out, ',');
+      g_string_append (out, indent);
+      g_string_append_c (out, '"');
+      g_string_append (out, rugosa_output_json_key (k));
+      g_string_append (out, "\": ");
       first = FALSE;
       switch (k->kind)
         {
@@ -446,6 +459,50 @@ append_csv_header (GString *out, const char *name, RugosaDisplayQuantity display
     g_string_append_printf (out, " (%s)", rugosa_display_unit_label (display, unit));
 }
 
+void
+rugosa_output_csv_header (GString *out, RugosaSettings *units)
+{
+  for (guint k = 0; k < G_N_ELEMENTS (KEYS); k++)
+    append_csv_header (out, KEYS[k].name, KEYS[k].display, units);
+}
+
+void
+rugosa_output_point_csv (GString *out, const RugosaLineResults *r,
+                         const RugosaOperatingPoint *p, RugosaSettings *units)
+{
+  const gboolean ok = r->ok && p->ok;
+
+  for (guint k = 0; k < G_N_ELEMENTS (KEYS); k++)
+    {
+      const RugosaOutputKey *key = &KEYS[k];
+
+      g_string_append_c (out, ',');
+      if (!ok || !rugosa_output_present_for (key, r, p))
+        continue;
+      if (key->kind == RUGOSA_OUTPUT_ID)
+        g_string_append (out, key->id (p));
+      else if (key->kind == RUGOSA_OUTPUT_WARNINGS)
+        {
+          g_autoptr (GString) w = g_string_new (NULL);
+
+          for (int j = 0; j < p->warnings.count; j++)
+            g_string_append_printf (w, "%s%s", j ? " " : "", p->warnings.text[j]);
+          append_csv_field (out, w->str);
+        }
+      else if (units == NULL)
+        append_number (out, key->number (r, p)); /* SI as computed */
+      else
+        append_number (out, in_unit (key->display, key->number (r, p),
+                                     rugosa_output_unit (units, key->display)));
+    }
+}
+
+void
+rugosa_output_csv_field (GString *out, const char *text)
+{
+  append_csv_field (out, text);
+}
+
 static void
 format_csv (RugosaProject *self, double age, GString *out)
 {
@@ -453,8 +510,7 @@ format_csv (RugosaProject *self, double age, GString *out)
 
   g_string_append (out, "line,case");
   append_csv_header (out, "flow", RUGOSA_DISPLAY_FLOW, units);
-  for (guint k = 0; k < G_N_ELEMENTS (KEYS); k++)
-    append_csv_header (out, KEYS[k].name, KEYS[k].display, units);
+  rugosa_output_csv_header (out, units);
   g_string_append (out, ",error\r\n");
 
   for (guint i = 0; i < self->lines->len; i++)
@@ -473,27 +529,7 @@ format_csv (RugosaProject *self, double age, GString *out)
           g_string_append_printf (out, ",%s,", rugosa_flow_case_id (c));
           append_number (out, in_unit (RUGOSA_DISPLAY_FLOW, point_flow (line, r, c),
                                        rugosa_output_unit (units, RUGOSA_DISPLAY_FLOW)));
-          for (guint k = 0; k < G_N_ELEMENTS (KEYS); k++)
-            {
-              const RugosaOutputKey *key = &KEYS[k];
-
-              g_string_append_c (out, ',');
-              if (!ok || !rugosa_output_present_for (key, r, p))
-                continue;
-              if (key->kind == RUGOSA_OUTPUT_ID)
-                g_string_append (out, key->id (p));
-              else if (key->kind == RUGOSA_OUTPUT_WARNINGS)
-                {
-                  g_autoptr (GString) w = g_string_new (NULL);
-
-                  for (int j = 0; j < p->warnings.count; j++)
-                    g_string_append_printf (w, "%s%s", j ? " " : "", p->warnings.text[j]);
-                  append_csv_field (out, w->str);
-                }
-              else
-                append_number (out, in_unit (key->display, key->number (r, p),
-                                             rugosa_output_unit (units, key->display)));
-            }
+          rugosa_output_point_csv (out, r, p, units);
           g_string_append_c (out, ',');
           if (!ok)
             append_csv_field (out, point_error (r, p));

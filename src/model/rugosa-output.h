@@ -62,6 +62,18 @@ void rugosa_output_point_json (GString *out, const RugosaLineResults *r,
                                const RugosaOperatingPoint *p,
                                const char *indent);
 
+/* The CSV columns of the output keys, each after a comma: the name and
+ * the unit in `units` (NULL: SI), "velocity (ft/s)". */
+void rugosa_output_csv_header (GString *out, RugosaSettings *units);
+/* One operating point as CSV cells in the order of the header, each after
+ * a comma, numbers exact in `units` (NULL: SI); empty cells when the point
+ * could not be computed. */
+void rugosa_output_point_csv (GString *out, const RugosaLineResults *r,
+                              const RugosaOperatingPoint *p,
+                              RugosaSettings *units);
+/* A CSV field, quoted when it needs to be; control characters as '?'. */
+void rugosa_output_csv_field (GString *out, const char *text);
+
 /* One operating point as "label    value unit" lines, values in `units`
  * (NULL: SI), 4 significant figures. */
 void rugosa_output_point_table (GString *out, const RugosaLineResults *r,

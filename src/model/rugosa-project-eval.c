@@ -48,7 +48,23 @@ typedef struct {
   guint n;
   AgeEntry *ages[AGES_PER_LINE];
   RugosaLifeCycle *life;    /* the sums over the service life, or NULL */
+  /* the line's fittings resolved against the catalog, for its revision:
+   * the same at every age (a slider drag evaluates the line again and
+   * again) */
+  gboolean fittings_known;
+  RgStatus fittings_status;
+  RgError fittings_err;
+  RgFittingUse *uses;
+  gsize n_uses;
 } LineCache;
+
+static void
+line_cache_forget_fittings (LineCache *c)
+{
+  g_clear_pointer (&c->uses, g_free);
+  c->n_uses = 0;
+  c->fittings_known = FALSE;
+}
 
 static void
 line_cache_free (gpointer data)
@@ -58,7 +74,109 @@ line_cache_free (gpointer data)
   for (guint i = 0; i < c->n; i++)
     g_free (c->ages[i]);
   g_free (c->life);
+  line_cache_forget_fittings (c);
   g_free (c);
+}
+
+/* A line's fittings as the core takes them, into `uses` (n entries). */
+static RgStatus
+resolve_fittings (RugosaLine *line, RgFittingUse **uses, gsize *n_uses,
+                  RgError *err)
+{
+  GVariant *fittings = line->fittings;
+  gsize n = g_variant_n_children (fittings);
+  RgStatus st = RG_OK;
+
+  *uses = g_new0 (RgFittingUse, MAX (n, 1));
+  *n_uses = n;
+  for (gsize i = 0; i < n && st == RG_OK; i++)
+    {
+      const char *fid;
+      double k, count;
+
+      g_variant_get_child (fittings, i, "(&sdd)", &fid, &k, &count);
+      (*uses)[i].k_plain = k;
+      (*uses)[i].count = count;
+      if (*fid != '\0')
+        st = rg_fitting_lookup (fid, &(*uses)[i].fitting, err);
+    }
+  return st;
+}
+
+/* The properties of the fluid states met last.  Lines of one project (and
+ * the rows of a batch) share a few states — water at a handful of
+ * temperatures — and the water model is a tenth of a line's evaluation;
+ * a state found here is not computed again while the settings (whose
+ * units its sentences are written in) are unchanged.  Sixteen states, the
+ * least recently used one replaced. */
+enum { FLUID_MEMO_SLOTS = 16 };
+
+typedef struct {
+  guint64 used;              /* 0: empty */
+  guint64 settings_revision;
+  RgFluidSpec spec;
+  RgStatus status;
+  RgFluidProps props;
+  RgWarnings warnings;
+  RgError err;
+} FluidMemoEntry;
+
+struct FluidMemo {
+  guint64 clock;
+  FluidMemoEntry slot[FLUID_MEMO_SLOTS];
+};
+
+/* Every member from the temperature on is a double, with no padding
+ * between them: compared as bytes. */
+static gboolean
+spec_equal (const RgFluidSpec *a, const RgFluidSpec *b)
+{
+  const gsize size = sizeof *a - G_STRUCT_OFFSET (RgFluidSpec, temperature_k);
+
+  return a->kind == b->kind && a->temperature_k == b->temperature_k
+         && memcmp (&a->temperature_k, &b->temperature_k, size) == 0;
+}
+
+static RgStatus
+fluid_properties (RugosaProject *self, const RgFluidSpec *spec, RgFluidProps *props,
+                  RgWarnings *warnings, RgError *err)
+{
+  struct FluidMemo *memo;
+  FluidMemoEntry *e = NULL;
+  const guint64 revision = self->settings->revision;
+
+  if (self->fluid_memo == NULL)
+    self->fluid_memo = g_new0 (struct FluidMemo, 1);
+  memo = self->fluid_memo;
+  for (guint i = 0; i < FLUID_MEMO_SLOTS && e == NULL; i++)
+    if (memo->slot[i].used != 0 && memo->slot[i].settings_revision == revision
+        && spec_equal (&memo->slot[i].spec, spec))
+      e = &memo->slot[i];
+  if (e == NULL)
+    {
+      e = &memo->slot[0];
+      for (guint i = 1; i < FLUID_MEMO_SLOTS; i++)
+        if (memo->slot[i].used < e->used)
+          e = &memo->slot[i];
+      e->spec = *spec;
+      e->settings_revision = revision;
+      memset (&e->warnings, 0, sizeof e->warnings);
+      memset (&e->err, 0, sizeof e->err);
+      e->warnings.units = e->err.units = rugosa_settings_get_unit_choice (self->settings);
+      e->status = rg_fluid_properties (spec, &e->props, &e->warnings, &e->err);
+    }
+  e->used = ++memo->clock;
+  *props = e->props;
+  for (int w = 0; w < e->warnings.count; w++)
+    rg_warnings_add (warnings, "%s", e->warnings.text[w]);
+  if (e->status != RG_OK && err != NULL)
+    {
+      const struct RgUnitChoice *units = err->units;
+
+      *err = e->err;
+      err->units = units;
+    }
+  return e->status;
 }
 
 void
@@ -73,6 +191,7 @@ _rugosa_project_eval_finalize (RugosaProject *self)
 {
   g_clear_pointer (&self->eval_cache, g_hash_table_unref);
   g_clear_pointer (&self->pipe_memo, g_hash_table_unref);
+  g_clear_pointer (&self->fluid_memo, g_free);
 }
 
 /* Parsing a designation compares it with every catalog entry; remember
@@ -229,14 +348,14 @@ _rugosa_line_setup_init (RugosaProject *self, RugosaLine *line,
                          RugosaLineSetup *setup, RgError *err)
 {
   RugosaSettings *settings = self->settings;
-  GVariant *fittings;
+  LineCache *c;
 
   memset (setup, 0, sizeof *setup);
   rugosa_line_get_fluid_spec (line, &setup->spec);
   rg_warnings_clear (&setup->fluid_warnings);
   /* the core's sentences show values in the project's units */
   setup->fluid_warnings.units = rugosa_settings_get_unit_choice (settings);
-  if (rg_fluid_properties (&setup->spec, &setup->props, &setup->fluid_warnings, err) != RG_OK)
+  if (fluid_properties (self, &setup->spec, &setup->props, &setup->fluid_warnings, err) != RG_OK)
     return FALSE;
 
   if (line->pipe_designation != NULL)
@@ -280,22 +399,34 @@ _rugosa_line_setup_init (RugosaProject *self, RugosaLine *line,
   if (rg_transition_check (&setup->transition, err) != RG_OK)
     return FALSE;
 
-  fittings = line->fittings;
-  setup->n_uses = g_variant_n_children (fittings);
-  setup->uses = g_new0 (RgFittingUse, MAX (setup->n_uses, 1));
-  for (gsize i = 0; i < setup->n_uses; i++)
+  /* The fittings of a line of the project are resolved once a revision,
+   * in its cache (borrowed here); another line's, here. */
+  c = g_hash_table_lookup (self->eval_cache, line);
+  if (c != NULL && c->line_revision == line->revision
+      && c->settings_revision == settings->revision)
     {
-      const char *fid;
-      double k, count;
-
-      g_variant_get_child (fittings, i, "(&sdd)", &fid, &k, &count);
-      setup->uses[i].k_plain = k;
-      setup->uses[i].count = count;
-      if (*fid != '\0' && rg_fitting_lookup (fid, &setup->uses[i].fitting, err) != RG_OK)
+      if (!c->fittings_known)
         {
-          _rugosa_line_setup_clear (setup);
+          rg_error_clear (&c->fittings_err);
+          c->fittings_err.units = err != NULL ? err->units : NULL;
+          c->fittings_status = resolve_fittings (line, &c->uses, &c->n_uses, &c->fittings_err);
+          c->fittings_known = TRUE;
+        }
+      setup->uses = c->uses;
+      setup->n_uses = c->n_uses;
+      setup->uses_borrowed = TRUE;
+      if (c->fittings_status != RG_OK)
+        {
+          if (err != NULL)
+            *err = c->fittings_err;
           return FALSE;
         }
+      return TRUE;
+    }
+  if (resolve_fittings (line, &setup->uses, &setup->n_uses, err) != RG_OK)
+    {
+      _rugosa_line_setup_clear (setup);
+      return FALSE;
     }
   return TRUE;
 }
@@ -303,7 +434,9 @@ _rugosa_line_setup_init (RugosaProject *self, RugosaLine *line,
 void
 _rugosa_line_setup_clear (RugosaLineSetup *setup)
 {
-  g_clear_pointer (&setup->uses, g_free);
+  if (!setup->uses_borrowed)
+    g_free (setup->uses);
+  setup->uses = NULL;
   setup->n_uses = 0;
 }
 
@@ -452,7 +585,11 @@ line_cache (RugosaProject *self, RugosaLine *line)
 
   if (c == NULL)
     {
-      g_return_val_if_fail (rugosa_project_find_line (self, line) >= 0, NULL);
+      /* A line of the project is one the project listens to: asked in
+       * constant time, so that the first evaluation of N lines costs N,
+       * not N² (rugosa_project_find_line walks the list). */
+      g_return_val_if_fail (g_signal_handler_find (line, G_SIGNAL_MATCH_DATA, 0, 0, NULL, NULL, self) != 0,
+                            NULL);
       c = g_new0 (LineCache, 1);
       g_hash_table_insert (self->eval_cache, line, c);
     }
@@ -463,6 +600,7 @@ line_cache (RugosaProject *self, RugosaLine *line)
         g_clear_pointer (&c->ages[i], g_free);
       c->n = 0;
       g_clear_pointer (&c->life, g_free);
+      line_cache_forget_fittings (c);
       c->line_revision = line->revision;
       c->settings_revision = self->settings->revision;
     }

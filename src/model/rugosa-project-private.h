@@ -15,6 +15,7 @@ struct _RugosaProject
   cJSON *extra;               /* unknown top-level file fields */
   GHashTable *eval_cache;     /* RugosaLine* (not a ref) -> LineCache* */
   GHashTable *pipe_memo;      /* designation text -> const RgPipe* (catalog) */
+  struct FluidMemo *fluid_memo; /* the last fluid states and their properties */
 
   guint64 evaluation_count;
   guint64 eval_clock;         /* counts cache lookups, for LRU */
