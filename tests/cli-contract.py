@@ -111,6 +111,17 @@ LINE_KEYS = {"velocity_m_s", "reynolds", "relative_roughness", "friction_factor"
              "warnings"}
 G = 9.80665  # Source: standard gravity, CGPM 1901
 
+# The text table: every value starts in the same column, however long the
+# longest label (a life-cycle label is longer than the physical ones).
+code, out, err = run("line", "--flow", "12 L/s", "--pipe", "NPS 4 Sch 40", "--length", "300 m",
+                     "--fluid", "water", "--temperature", "15 C")
+rows = [r for r in out.splitlines() if r and not r.startswith("warning")]
+# columns where every row has a space and then a value
+starts = [w for w in range(1, 80)
+          if all(len(r) > w and r[w - 1] == " " and r[w] != " " for r in rows)]
+check("line table: values in one column", code == 0 and len(starts) >= 1 and len(rows) > 20,
+      f"{starts}\n{out}")
+
 code, out, err = run("line", "--flow", "150 gpm", "--diameter", "4 in", "--length", "1000 ft",
                      "--roughness", "0.045 mm", "--fluid", "water", "--temperature", "68 F",
                      "--k-sum", "2.5", "--elevation", "3 m", "--json")

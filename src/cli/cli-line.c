@@ -810,6 +810,7 @@ cli_cmd_line (int argc, char **argv)
       const char *designation = rugosa_line_get_pipe_designation (line);
       const char *material_id = rugosa_line_get_material_id (line);
       const RgMaterial *material = NULL;
+      const int width = (int) rugosa_output_point_table_width (r, p);
 
       if (solve != NULL)
         {
@@ -821,7 +822,7 @@ cli_cmd_line (int argc, char **argv)
           char buf[G_ASCII_DTOSTR_BUF_SIZE];
 
           (void) rg_units_from_si (flow ? RG_QTY_FLOW : RG_QTY_LENGTH, solved, unit, &shown, NULL);
-          cli_pad (out, flow ? _("Flow for the head loss") : _("Smallest bore within the limits"), 38);
+          cli_pad (out, flow ? _("Flow for the head loss") : _("Smallest bore within the limits"), width);
           g_string_append_printf (out, "%s %s\n", cli_format_short (shown, buf, sizeof buf),
                                   rugosa_display_unit_symbol (unit));
         }
@@ -829,12 +830,12 @@ cli_cmd_line (int argc, char **argv)
       /* what the catalogs chose, named by the rows' labels */
       if (designation != NULL)
         {
-          cli_pad (out, rugosa_field_label (rugosa_field_find ("pipe-designation")), 38);
+          cli_pad (out, rugosa_field_label (rugosa_field_find ("pipe-designation")), width);
           g_string_append_printf (out, "%s\n", designation);
         }
       if (material_id != NULL && memo_rg_material_lookup (material_id, &material, NULL) == RG_OK)
         {
-          cli_pad (out, rugosa_field_label (rugosa_field_find ("material-id")), 38);
+          cli_pad (out, rugosa_field_label (rugosa_field_find ("material-id")), width);
           g_string_append_printf (out, "%s\n", _(material->name));
         }
       rugosa_output_point_table (out, r, p, settings);

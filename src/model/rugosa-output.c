@@ -355,10 +355,25 @@ append_cell (GString *out, const char *text, int width)
     g_string_append_c (out, ' '); /* a wide value still leaves a gap */
 }
 
+guint
+rugosa_output_point_table_width (const RugosaLineResults *r, const RugosaOperatingPoint *p)
+{
+  /* at least the width the shorter tables have always had, so a column of
+   * values stays where scripts and eyes expect it */
+  guint width = 38;
+
+  for (guint i = 0; i < G_N_ELEMENTS (KEYS); i++)
+    if (KEYS[i].kind != RUGOSA_OUTPUT_WARNINGS && rugosa_output_present_for (&KEYS[i], r, p))
+      width = MAX (width, (guint) g_utf8_strlen (_(KEYS[i].label), -1) + 1);
+  return width;
+}
+
 void
 rugosa_output_point_table (GString *out, const RugosaLineResults *r,
                            const RugosaOperatingPoint *p, RugosaSettings *units)
 {
+  const int width = (int) rugosa_output_point_table_width (r, p);
+
   for (guint i = 0; i < G_N_ELEMENTS (KEYS); i++)
     {
       const RugosaOutputKey *k = &KEYS[i];
@@ -386,7 +401,7 @@ rugosa_output_point_table (GString *out, const RugosaLineResults *r,
           value = g_strdup (g_ascii_formatd (buf, sizeof buf, "%.6g",
                                              in_unit (k->display, k->number (r, p), unit)));
         }
-      append_cell (out, _(k->label), 38);
+      append_cell (out, _(k->label), width);
       g_string_append (out, value);
       if (unit != NULL)
         {

@@ -76,6 +76,11 @@ void rugosa_output_csv_field (GString *out, const char *text);
 
 /* One operating point as "label    value unit" lines, values in `units`
  * (NULL: SI), 4 significant figures. */
+/* The width of the label column of that table, in characters: the
+ * longest label of the point's keys and a space, at least 38; rows a
+ * caller adds above the table pad to it. */
+guint rugosa_output_point_table_width (const RugosaLineResults *r,
+                                       const RugosaOperatingPoint *p);
 void rugosa_output_point_table (GString *out, const RugosaLineResults *r,
                                 const RugosaOperatingPoint *p,
                                 RugosaSettings *units);
