@@ -599,15 +599,21 @@ cli_cmd_fluid (int argc, char **argv)
   return cli_write_stdout (out->str);
 }
 
-/* The unit system and overrides of `units` on `settings`. */
+/* The unit system and overrides of `units` on `settings` (stored as the
+ * batch stores every field: without notification, nothing listens). */
 static void
 copy_units (RugosaSettings *settings, RugosaSettings *units)
 {
-  g_autoptr (GVariant) overrides = NULL;
-  int system;
+  const RugosaUnitSystem system = rugosa_settings_get_unit_system (units);
+  g_autoptr (GVariant) have = NULL;
+  g_autoptr (GVariant) want = NULL;
 
-  g_object_get (units, "unit-system", &system, "unit-overrides", &overrides, NULL);
-  g_object_set (settings, "unit-system", system, "unit-overrides", overrides, NULL);
+  if (rugosa_settings_get_unit_system (settings) != system)
+    rugosa_field_store_int (settings, rugosa_field_find ("unit-system"), (int) system);
+  g_object_get (settings, "unit-overrides", &have, NULL);
+  g_object_get (units, "unit-overrides", &want, NULL);
+  if (!g_variant_equal (have, want))
+    rugosa_field_store_variant (settings, rugosa_field_find ("unit-overrides"), want);
 }
 
 /* --solve and --head-loss: what they ask checked, the head loss parsed. */

@@ -593,11 +593,14 @@ pipe_designation_at (int i)
   return rg_catalog_pipes[i].designation;
 }
 
+static int exact_match (const char *key);
+
 /* The first pipe whose normalised designation equals `key`, as an index,
  * or -1; then best[] holds the three nearest designations by edit distance
- * between the normalised forms, so a one-digit slip costs one.  One pass
- * that normalises each catalog designation once: the query is normalised
- * by the caller, once (a long query used to be re-read for every entry). */
+ * between the normalised forms, so a one-digit slip costs one.  The query
+ * is normalised by the caller, once (a long query used to be re-read for
+ * every entry).  The exact match is looked for first, on its own: a name
+ * that is in the catalog costs no edit distance at all. */
 static int
 match_or_closest (const char *key, int best[3])
 {
@@ -605,15 +608,16 @@ match_or_closest (const char *key, int best[3])
   int bd[3] = { 1 << 30, 1 << 30, 1 << 30 };
   /* the lengths rg_catalog_edit_distance compares (at most 63 bytes) */
   int la = (int) strlen (key) < 63 ? (int) strlen (key) : 63;
+  int found;
 
   best[0] = best[1] = best[2] = -1;
+  if (key[0] != '\0' && (found = exact_match (key)) >= 0)
+    return found;
   for (int i = 0; i < rg_catalog_pipes_count; i++)
     {
       int d, lb;
 
       designation_key (rg_catalog_pipes[i].designation, other);
-      if (key[0] != '\0' && strcmp (key, other) == 0)
-        return i;
       /* The difference of the lengths is a lower bound of the edit
        * distance: when it already reaches the third best, this entry
        * cannot enter the three (ties keep the earlier entry). */

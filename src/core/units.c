@@ -1162,6 +1162,13 @@ rg_units_from_si (RgQuantity q, double si, const char *unit, double *value,
   return RG_OK;
 }
 
+RgStatus
+rg_units_conversion (RgQuantity q, const char *unit, double *factor,
+                     double *offset, RgError *err)
+{
+  return conversion_unit (q, unit, factor, offset, err);
+}
+
 const char *
 rg_units_si_symbol (RgQuantity q)
 {

@@ -72,6 +72,11 @@ RgStatus rg_units_to_si (RgQuantity q, double value, const char *unit,
                          double *si, RgError *err);
 RgStatus rg_units_from_si (RgQuantity q, double si, const char *unit,
                            double *value, RgError *err);
+/* The conversion of `unit` as those two use it: value = si / factor −
+ * offset (NULL or blank is SI: 1 and 0).  For callers that convert many
+ * values to one unit and must give the same bits as rg_units_from_si. */
+RgStatus rg_units_conversion (RgQuantity q, const char *unit, double *factor,
+                              double *offset, RgError *err);
 
 /* Canonical display symbol of the SI unit of q ("m³/s", "K", …). */
 const char *rg_units_si_symbol (RgQuantity q);

@@ -479,6 +479,7 @@ _rugosa_life_cycle_compute (RugosaProject *self, RugosaLine *line,
   RugosaLineSetup setup;
   RugosaPumpFit fit;
   RgError err = { 0 };
+  double constant_joules = 0.0;
 
   memset (life, 0, sizeof *life);
   rg_error_clear (&err);
@@ -503,8 +504,18 @@ _rugosa_life_cycle_compute (RugosaProject *self, RugosaLine *line,
     {
       const double w = fmin (1.0, n - (double) (k - 1));
       double joules = 0.0;
+      RgStatus st = RG_OK;
 
-      if (energy_at (self, line, &setup, (double) (k - 1) + 0.5 * w, &joules, &err) != RG_OK)
+      /* A wall that does not roughen costs the same every year: its year
+       * is computed once (the same inputs give the same bits), which makes
+       * a line without aging as cheap as three operating points. */
+      if (k == 1 || setup.rate_m_per_year != 0.0)
+        st = energy_at (self, line, &setup, (double) (k - 1) + 0.5 * w, &joules, &err);
+      else
+        joules = constant_joules;
+      if (k == 1)
+        constant_joules = joules;
+      if (st != RG_OK)
         {
           life->ok = FALSE;
           g_strlcpy (life->error, err.text, sizeof life->error);

@@ -272,15 +272,45 @@ append_csv_field (GString *out, const char *s)
 
 /* The value in the display unit, as a number that reads back exactly in
  * that unit. */
+/* The last unit each display quantity was converted to, and its factor
+ * and offset: a CSV row converts forty values and a batch writes rows by
+ * the hundred thousand, while naming a unit costs a search of the core's
+ * unit table.  Per thread, so exports on a worker thread are safe. */
+typedef struct {
+  char unit[32];          /* "" until known */
+  gboolean ok;
+  double factor, offset;
+} ConversionMemo;
+
+static _Thread_local ConversionMemo conversion_memo[RUGOSA_N_DISPLAY];
+
+/* `si` in `unit`, bit for bit as rg_units_from_si gives it; `si` itself
+ * when it cannot be converted. */
 static double
 in_unit (RugosaDisplayQuantity display, double si, const char *unit)
 {
   const RugosaDisplayInfo *info = rugosa_display_info (display);
+  ConversionMemo *m;
   double v = si;
 
-  if (info != NULL && unit != NULL)
-    (void) rg_units_from_si (info->quantity, si, unit, &v, NULL);
-  return v;
+  if (info == NULL || unit == NULL || (guint) display >= RUGOSA_N_DISPLAY)
+    return si;
+  if (strlen (unit) >= sizeof conversion_memo[0].unit)
+    {
+      (void) rg_units_from_si (info->quantity, si, unit, &v, NULL);
+      return v;
+    }
+  m = &conversion_memo[display];
+  if (m->unit[0] == '\0' || strcmp (m->unit, unit) != 0)
+    {
+      g_strlcpy (m->unit, unit, sizeof m->unit);
+      m->ok = rg_units_conversion (info->quantity, unit, &m->factor, &m->offset, NULL) == RG_OK;
+    }
+  /* what rg_units_from_si refuses is left as it is */
+  if (!m->ok || !isfinite (si) || (info->quantity == RG_QTY_TEMPERATURE && si < 0.0))
+    return si;
+  v = si / m->factor - m->offset;
+  return isfinite (v) ? v : si;
 }
 
 static const char *

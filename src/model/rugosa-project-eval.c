@@ -224,20 +224,6 @@ _rugosa_project_eval_forget (RugosaProject *self, RugosaLine *line)
   g_hash_table_remove (self->eval_cache, line);
 }
 
-void
-_rugosa_format_double (char *buf, gsize size, double x)
-{
-  for (int digits = 15; digits <= 17; digits++)
-    {
-      char fmt[8];
-
-      g_snprintf (fmt, sizeof fmt, "%%.%dg", digits);
-      g_ascii_formatd (buf, (int) size, fmt, x);
-      if (g_ascii_strtod (buf, NULL) == x)
-        return;
-    }
-}
-
 const char *
 rugosa_flow_case_id (RugosaFlowCase flow_case)
 {

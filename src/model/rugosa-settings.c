@@ -146,7 +146,8 @@ rugosa_settings_get_unit (RugosaSettings *self, RugosaDisplayQuantity dq)
     return NULL;
   /* An override this build cannot read (a later build's unit, a hand
    * edit) is kept in the file but not used. */
-  if (g_variant_lookup (self->unit_overrides, info->id, "&s", &unit)
+  if (g_variant_n_children (self->unit_overrides) > 0
+      && g_variant_lookup (self->unit_overrides, info->id, "&s", &unit)
       && rugosa_display_unit_valid (dq, unit))
     return unit;
   return rugosa_display_default_unit (dq, (RugosaUnitSystem) self->unit_system);
