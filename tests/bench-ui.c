@@ -41,6 +41,7 @@
 #include "rugosa-application.h"
 #include "rugosa-canvas.h"
 #include "rugosa-window.h"
+#include "ui-harness.h"
 
 static guint paints;
 static gint64 before_paint_us, last_paint_cost_us;
@@ -107,8 +108,9 @@ main (int argc, char *argv[])
   double first_ms, init_ms, window_ms, load_ms;
   guint n, placements;
 
-  g_setenv ("GSETTINGS_BACKEND", "memory", TRUE);
-  g_setenv ("GSK_RENDERER", "cairo", FALSE);
+  /* settings in memory, and the autosave and recent files in a folder of
+   * its own: a benchmark leaves nothing in the user's state */
+  g_free (ui_harness_private_dirs ("rugosa-bench-ui"));
   gtk_disable_setlocale ();
   if (!gtk_init_check ())
     {
