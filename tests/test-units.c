@@ -127,6 +127,10 @@ static const Factor FACTORS[] = {
   { RG_QTY_ROUGHNESS_RATE, "m/s", 1.0 },
   { RG_QTY_ROUGHNESS_RATE, "mm/yr", 1.0e-3 / YEAR },
   { RG_QTY_ROUGHNESS_RATE, "µm/yr", 1.0e-6 / YEAR },
+  /* Source: NIST SP 811 (2008) B.8, inch = 0.0254 m, mil = 0.001 in */
+  { RG_QTY_ROUGHNESS_RATE, "in/yr", 0.0254 / YEAR },
+  { RG_QTY_ROUGHNESS_RATE, "mil/yr", 2.54e-5 / YEAR },
+  { RG_QTY_ROUGHNESS_RATE, "mpy", 2.54e-5 / YEAR },
   /* Source: SI definition; g/kg and parts per thousand by mass = 1e-3 */
   { RG_QTY_SALINITY, "kg/kg", 1.0 },
   { RG_QTY_SALINITY, "g/kg", 1.0e-3 },

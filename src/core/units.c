@@ -220,6 +220,14 @@ static const UnitDef UNITS[] = {
   { RG_QTY_ROUGHNESS_RATE, "um/yr", 1.0e-6 / S_PER_YEAR, 0.0 },
   { RG_QTY_ROUGHNESS_RATE, "um/year", 1.0e-6 / S_PER_YEAR, 0.0 },
   { RG_QTY_ROUGHNESS_RATE, "um/a", 1.0e-6 / S_PER_YEAR, 0.0 },
+  /* US customary: the inch of the roughness, and the mil (a thousandth of
+   * an inch, NIST SP 811 B.8) of corrosion rates */
+  { RG_QTY_ROUGHNESS_RATE, "in/yr", M_PER_IN / S_PER_YEAR, 0.0 },
+  { RG_QTY_ROUGHNESS_RATE, "in/year", M_PER_IN / S_PER_YEAR, 0.0 },
+  { RG_QTY_ROUGHNESS_RATE, "in/a", M_PER_IN / S_PER_YEAR, 0.0 },
+  { RG_QTY_ROUGHNESS_RATE, "mil/yr", 1.0e-3 * M_PER_IN / S_PER_YEAR, 0.0 },
+  { RG_QTY_ROUGHNESS_RATE, "mil/year", 1.0e-3 * M_PER_IN / S_PER_YEAR, 0.0 },
+  { RG_QTY_ROUGHNESS_RATE, "mpy", 1.0e-3 * M_PER_IN / S_PER_YEAR, 0.0 },
   /* salinity, kg/kg */
   { RG_QTY_SALINITY, "kg/kg", 1.0, 0.0 },
   { RG_QTY_SALINITY, "g/kg", 1.0e-3, 0.0 },
@@ -265,7 +273,7 @@ static const char *const CHOICES[RG_QTY_N][12] = {
   [RG_QTY_VELOCITY] = { "m/s", "ft/s" },
   [RG_QTY_GRADIENT] = { "m/100 m", "ft/100 ft", "m/km", "%", "m/m" },
   [RG_QTY_TIME] = { "s", "min", "h", "d", "yr" },
-  [RG_QTY_ROUGHNESS_RATE] = { "m/s", "mm/yr", "µm/yr" },
+  [RG_QTY_ROUGHNESS_RATE] = { "m/s", "mm/yr", "µm/yr", "in/yr", "mil/yr" },
   [RG_QTY_SALINITY] = { "kg/kg", "g/kg", "ppt" },
   [RG_QTY_POWER] = { "W", "kW", "MW", "hp" },
   [RG_QTY_ENERGY] = { "J", "MJ", "GJ", "kWh", "MWh", "GWh" },
@@ -287,7 +295,7 @@ static const char *const ACCEPTED[RG_QTY_N] = {
   [RG_QTY_VELOCITY] = RG_N_ ("m/s, ft/s"),
   [RG_QTY_GRADIENT] = RG_N_ ("m/100 m (or %), ft/100 ft, m/km, m/m"),
   [RG_QTY_TIME] = RG_N_ ("s, min, h, d, yr (or year, a)"),
-  [RG_QTY_ROUGHNESS_RATE] = RG_N_ ("m/s, mm/yr, µm/yr"),
+  [RG_QTY_ROUGHNESS_RATE] = RG_N_ ("m/s, mm/yr, µm/yr, in/yr, mil/yr, mpy"),
   [RG_QTY_SALINITY] = RG_N_ ("kg/kg, g/kg, ppt"),
   [RG_QTY_POWER] = RG_N_ ("W, kW, MW, hp (550 ft·lbf/s)"),
   [RG_QTY_ENERGY] = RG_N_ ("J, kJ, MJ, GJ, Wh, kWh, MWh, GWh"),

@@ -28,7 +28,7 @@ static const RugosaDisplayInfo DISPLAY[RUGOSA_N_DISPLAY] = {
   [RUGOSA_DISPLAY_GRADIENT] = { "gradient", N_("Hydraulic gradient"), RG_QTY_GRADIENT, "m/100 m", "ft/100 ft", "m_per_100m" },
   [RUGOSA_DISPLAY_HEAD] = { "head", N_("Head and head loss"), RG_QTY_LENGTH, "m", "ft", "m" },
   [RUGOSA_DISPLAY_SALINITY] = { "salinity", N_("Salinity"), RG_QTY_SALINITY, "g/kg", "g/kg", "kg_kg" },
-  [RUGOSA_DISPLAY_ROUGHNESS_RATE] = { "roughness_rate", N_("Roughness growth"), RG_QTY_ROUGHNESS_RATE, "mm/yr", "mm/yr", "m_per_year" },
+  [RUGOSA_DISPLAY_ROUGHNESS_RATE] = { "roughness_rate", N_("Roughness growth"), RG_QTY_ROUGHNESS_RATE, "mm/yr", "in/yr", "m_per_year" },
   [RUGOSA_DISPLAY_AGE] = { "age", N_("Service age"), RG_QTY_TIME, "yr", "yr", "years" },
   /* Pump power in kW, or horsepower in US practice; the JSON keys of
    * eval name the kilowatt ("pump_power_kW"), so their values are in kW. */
