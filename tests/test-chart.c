@@ -571,6 +571,63 @@ check_labels (RugosaChart *chart, const RugosaChartLine *lines, size_t n, size_t
   g_free (info);
 }
 
+/* A projected chart: magnify enlarges type and markers by its factor,
+ * 0 and 1 leave the chart as it was, and the labels still keep apart. */
+static void
+test_magnify (void)
+{
+  static SampleSet set;
+  RugosaChartSpec spec;
+  RgError err = { 0 };
+  RugosaChart *plain = chart_with (1920, 960, RUGOSA_CHART_SHOW_ALL, RUGOSA_CHART_THEME_LIGHT);
+  RugosaChart *big = rugosa_chart_new ();
+  RugosaChartLabelInfo a, b;
+  RugosaChartRect pa, pb;
+  size_t shown = 0;
+  double t1, t0;
+
+  rugosa_chart_spec_init (&spec);
+  g_assert_cmpfloat (spec.magnify, ==, 1);
+  spec.width = 1920;
+  spec.height = 960;
+  t1 = rugosa_chart_spec_text_size (&spec);
+  spec.magnify = 0;
+  t0 = rugosa_chart_spec_text_size (&spec);
+  g_assert_cmpfloat (t0, ==, t1);
+  g_assert_cmpint (rugosa_chart_spec_check (&spec, &err), ==, RG_OK);
+  /* the factor itself: type 1.75 times the size */
+  spec.magnify = 1.75;
+  g_assert_cmpfloat_with_epsilon (rugosa_chart_spec_text_size (&spec) / t1, 1.75, 1e-12);
+  g_assert_cmpint (rugosa_chart_set_spec (big, &spec, &err), ==, RG_OK);
+
+  sample_scene (&set);
+  rugosa_chart_set_lines (plain, set.lines, set.n);
+  rugosa_chart_set_lines (big, set.lines, set.n);
+  cairo_surface_destroy (render (plain));
+  cairo_surface_destroy (render (big));
+  g_assert_true (rugosa_chart_get_label (plain, 0, &a));
+  g_assert_true (rugosa_chart_get_label (big, 0, &b));
+  /* the selected marker (a circle) grows with the type, to the pixel */
+  g_assert_cmpfloat (fabs (b.marker.width - 1.75 * a.marker.width), <=, 1.0);
+  /* wider margins for larger axis numbers: a smaller plot */
+  pa = rugosa_chart_plot_area (plain);
+  pb = rugosa_chart_plot_area (big);
+  g_assert_cmpfloat (pb.width, <, pa.width);
+  g_assert_cmpfloat (pb.height, <, pa.height);
+  check_labels (big, set.lines, set.n, &shown);
+  g_assert_true (b.visible);
+
+  spec.magnify = 0.5;
+  g_assert_cmpint (rugosa_chart_spec_check (&spec, &err), ==, RG_ERR_DOMAIN);
+  g_assert_true (strstr (err.text, "magnification") != NULL);
+  spec.magnify = RUGOSA_CHART_MAGNIFY_MAX + 0.5;
+  g_assert_cmpint (rugosa_chart_spec_check (&spec, &err), ==, RG_ERR_DOMAIN);
+  spec.magnify = NAN;
+  g_assert_cmpint (rugosa_chart_spec_check (&spec, &err), ==, RG_ERR_DOMAIN);
+  rugosa_chart_free (plain);
+  rugosa_chart_free (big);
+}
+
 static void
 test_labels_crowded (void)
 {
@@ -1038,6 +1095,7 @@ main (int argc, char **argv)
   g_test_add_func ("/chart/export/png-reproducible", test_export_png_reproducible);
   g_test_add_func ("/chart/export/pdf-text", test_export_pdf_text);
   g_test_add_func ("/chart/export/svg", test_export_svg);
+  g_test_add_func ("/chart/spec/magnify", test_magnify);
   const int result = g_test_run ();
   if (g_getenv ("RUGOSA_CHART_KEEP") == NULL)
     remove_tmp ();

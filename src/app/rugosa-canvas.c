@@ -11,8 +11,23 @@
 #include "model/rugosa-display.h"
 #include "rugosa-readout.h"
 
-/* Pointer distance, in logical pixels, within which a marker counts as hit. */
+/* Pointer distance, in logical pixels, within which a marker counts as hit
+ * (at magnify 1; it grows with the markers). */
 #define HIT_RADIUS 12.0
+
+/* Type for a projector.  Common practice (no single source): the farthest
+ * seat of a meeting room is no farther than about six image heights from
+ * a projected image (the "4-6-8" rule of thumb, its general-viewing case:
+ * a 1920 × 1080 image 1 m high, read from 6 m), and a letter reads there
+ * when its capitals subtend about 10 minutes of arc: 6 m × tan 10′ =
+ * 17.5 mm, 1/57 of the image height.  The chart's capitals are 0.73 em
+ * high (DejaVu Sans), so its body text, the axis numbers, gets an em of
+ * 1/42 of the image height: 26 px on a 1080-line projector, about 1.75
+ * times what the chart gives itself at that size.  Never less than a
+ * quarter larger than at the desk (a projected chart is always read from
+ * farther away than a monitor), never past the engine's maximum. */
+#define PROJECTOR_TEXT_OF_HEIGHT (1.0 / 42.0)
+#define PROJECTOR_MAGNIFY_MIN 1.25
 
 struct _RugosaCanvas
 {
@@ -31,6 +46,8 @@ struct _RugosaCanvas
   GStrv             ladder_tips;   /* a tooltip per rung of the ladder, or NULL */
 
   int      hover;          /* overlay index under the pointer, or -1 */
+  gboolean projector;      /* type and markers for a projected screen */
+  double   magnify;        /* the chart's, as last set */
   double   pointer_x, pointer_y;
   gboolean frame_log;
   gint64   last_draw_us;
@@ -228,6 +245,39 @@ rugosa_canvas_get_input (RugosaCanvas *self)
   return self->input;
 }
 
+/* The height of the screen the canvas is on, in logical pixels: the
+ * projected image in presentation. */
+static double
+_rugosa_canvas_screen_height (RugosaCanvas *self)
+{
+  GtkNative *native = gtk_widget_get_native (GTK_WIDGET (self));
+  GdkSurface *surface = native ? gtk_native_get_surface (native) : NULL;
+  GdkMonitor *monitor = surface ? gdk_display_get_monitor_at_surface (gdk_surface_get_display (surface), surface)
+                                : NULL;
+  GdkRectangle geometry;
+
+  if (monitor != NULL)
+    {
+      gdk_monitor_get_geometry (monitor, &geometry);
+      if (geometry.height > 0)
+        return geometry.height;
+    }
+  return native ? gtk_widget_get_height (GTK_WIDGET (native)) : gtk_widget_get_height (GTK_WIDGET (self));
+}
+
+/* The magnification PROJECTOR_TEXT_OF_HEIGHT asks of `spec` (at magnify 1). */
+static double
+_rugosa_canvas_projector_magnify (RugosaCanvas    *self,
+                                  RugosaChartSpec *spec)
+{
+  double text, want;
+
+  spec->magnify = 1;
+  text = rugosa_chart_spec_text_size (spec);
+  want = _rugosa_canvas_screen_height (self) * PROJECTOR_TEXT_OF_HEIGHT;
+  return CLAMP (want / text, PROJECTOR_MAGNIFY_MIN, (double) RUGOSA_CHART_MAGNIFY_MAX);
+}
+
 static void
 _rugosa_canvas_update_spec (RugosaCanvas *self)
 {
@@ -245,6 +295,8 @@ _rugosa_canvas_update_spec (RugosaCanvas *self)
   spec.theme = adw_style_manager_get_dark (adw_style_manager_get_default ())
                ? RUGOSA_CHART_THEME_DARK : RUGOSA_CHART_THEME_LIGHT;
   spec.footer_date[0] = '\0';
+  spec.magnify = self->projector ? _rugosa_canvas_projector_magnify (self, &spec) : 1.0;
+  self->magnify = spec.magnify;
   if (rugosa_chart_set_spec (self->chart, &spec, &err) != RG_OK)
     g_debug ("chart spec refused: %s", err.text);
 }
@@ -299,6 +351,35 @@ rugosa_canvas_unrealize (GtkWidget *widget)
 
   g_clear_signal_handler (&self->after_paint_id, gtk_widget_get_frame_clock (widget));
   GTK_WIDGET_CLASS (rugosa_canvas_parent_class)->unrealize (widget);
+}
+
+void
+rugosa_canvas_set_projector (RugosaCanvas *self,
+                             gboolean      projector)
+{
+  g_return_if_fail (RUGOSA_IS_CANVAS (self));
+
+  projector = !!projector;
+  if (self->projector == projector)
+    return;
+  self->projector = projector;
+  _rugosa_canvas_update_spec (self);
+  gtk_widget_queue_draw (GTK_WIDGET (self));
+}
+
+gboolean
+rugosa_canvas_get_projector (RugosaCanvas *self)
+{
+  g_return_val_if_fail (RUGOSA_IS_CANVAS (self), FALSE);
+  return self->projector;
+}
+
+double
+rugosa_canvas_get_magnify (RugosaCanvas *self)
+{
+  g_return_val_if_fail (RUGOSA_IS_CANVAS (self), 1.0);
+  _rugosa_canvas_update_spec (self);
+  return self->magnify;
 }
 
 gboolean
@@ -359,7 +440,7 @@ rugosa_canvas_pointer_at (RugosaCanvas *self,
   _rugosa_canvas_update_spec (self);
   self->pointer_x = x;
   self->pointer_y = y;
-  hover = rugosa_chart_hit_test (self->chart, x, y, HIT_RADIUS);
+  hover = rugosa_chart_hit_test (self->chart, x, y, HIT_RADIUS * self->magnify);
   if (hover != self->hover)
     {
       self->hover = hover;
@@ -419,7 +500,7 @@ rugosa_canvas_select_at (RugosaCanvas *self,
 
   g_return_val_if_fail (RUGOSA_IS_CANVAS (self), FALSE);
   _rugosa_canvas_update_spec (self);
-  hit = rugosa_chart_hit_test (self->chart, x, y, HIT_RADIUS);
+  hit = rugosa_chart_hit_test (self->chart, x, y, HIT_RADIUS * self->magnify);
   if (hit < 0 || self->selection == NULL || self->input == NULL || hit >= (int) self->input->n_lines)
     return FALSE;
   gtk_single_selection_set_selected (self->selection, self->input->line_index[hit]);
@@ -455,7 +536,7 @@ rugosa_canvas_query_tooltip (GtkWidget  *widget,
   if (keyboard)
     hit = -1;
   else
-    hit = rugosa_chart_hit_test (self->chart, x, y, HIT_RADIUS);
+    hit = rugosa_chart_hit_test (self->chart, x, y, HIT_RADIUS * self->magnify);
   if (keyboard)
     {
       int sel = _rugosa_canvas_selected (self);
@@ -466,7 +547,7 @@ rugosa_canvas_query_tooltip (GtkWidget  *widget,
   if (hit < 0 || hit >= (int) self->input->n_lines)
     {
       /* a rung of a sizing's ladder speaks for its size */
-      int rung = keyboard ? -1 : rugosa_chart_ladder_hit_test (self->chart, x, y, HIT_RADIUS / 2);
+      int rung = keyboard ? -1 : rugosa_chart_ladder_hit_test (self->chart, x, y, HIT_RADIUS * self->magnify / 2);
 
       if (rung < 0 || self->ladder_tips == NULL
           || rung >= (int) g_strv_length (self->ladder_tips))
@@ -583,6 +664,7 @@ rugosa_canvas_init (RugosaCanvas *self)
   GtkGesture *click;
 
   self->hover = -1;
+  self->magnify = 1.0;
   self->chart = rugosa_chart_new ();
   self->trails = rugosa_trail_cache_new ();
   self->frame_log = g_getenv ("RUGOSA_FRAME_LOG") != NULL && g_strcmp0 (g_getenv ("RUGOSA_FRAME_LOG"), "0") != 0;

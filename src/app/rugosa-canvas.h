@@ -72,6 +72,14 @@ gboolean    rugosa_canvas_ladder_position (RugosaCanvas *self,
                                            guint         index,
                                            double       *x,
                                            double       *y);
+/* Presentation: type and markers enlarged for a projected screen, by a
+ * rule of the screen's height (rugosa-canvas.c); FALSE: as the widget's
+ * size gives them.  A view: no change to the project. */
+void        rugosa_canvas_set_projector   (RugosaCanvas *self,
+                                           gboolean      projector);
+gboolean    rugosa_canvas_get_projector   (RugosaCanvas *self);
+/* The chart's magnification (rugosa-chart.h): 1 unless presenting. */
+double      rugosa_canvas_get_magnify     (RugosaCanvas *self);
 /* What a pointer at (x, y) would show (hover/probe), as if it moved there. */
 void        rugosa_canvas_pointer_at      (RugosaCanvas *self,
                                            double        x,

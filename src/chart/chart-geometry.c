@@ -57,6 +57,7 @@ rugosa_chart_spec_init (RugosaChartSpec *spec)
   spec->n_family = rugosa_chart_standard_family (spec->family,
                                                  RUGOSA_CHART_FAMILY_MAX);
   spec->show = RUGOSA_CHART_SHOW_ALL;
+  spec->magnify = 1;
 }
 
 RgStatus
@@ -69,6 +70,10 @@ rugosa_chart_spec_check (const RugosaChartSpec *spec, RgError *err)
   if (!(spec->scale >= 1 && spec->scale <= 4))
     return rg_error_set (err, RG_ERR_DOMAIN,
                          "The chart scale factor must lie between 1 and 4.");
+  if (!(spec->magnify == 0 || (spec->magnify >= 1 && spec->magnify <= RUGOSA_CHART_MAGNIFY_MAX)))
+    return rg_error_set (err, RG_ERR_DOMAIN,
+                         "The chart's text magnification must lie between 1 and %d.",
+                         RUGOSA_CHART_MAGNIFY_MAX);
   /* The window a project may hold (model/rugosa-fields.h) is what the
    * chart draws. */
   if (!(spec->re_min >= RUGOSA_CHART_RE_LOWEST && spec->re_max <= RUGOSA_CHART_RE_HIGHEST
@@ -95,6 +100,15 @@ rugosa_chart_spec_check (const RugosaChartSpec *spec, RgError *err)
   return RG_OK;
 }
 
+double
+rugosa_chart_spec_text_size (const RugosaChartSpec *spec)
+{
+  ChartLayout lay;
+
+  _rugosa_chart_layout (spec, &lay);
+  return lay.font_tick;
+}
+
 void
 _rugosa_chart_layout (const RugosaChartSpec *spec, ChartLayout *lay)
 {
@@ -102,6 +116,9 @@ _rugosa_chart_layout (const RugosaChartSpec *spec, ChartLayout *lay)
   double k = sqrt (w * h) / 1100.0;
 
   k = fmin (fmax (k, 0.75), 1.6);
+  /* every size below follows k: type, markers, strokes, margins */
+  if (spec->magnify > 0)
+    k *= spec->magnify;
   lay->width = w;
   lay->height = h;
   lay->k = k;

@@ -117,6 +117,7 @@ spec_equal (const RugosaChartSpec *a, const RugosaChartSpec *b)
       || a->transition.re_laminar_max != b->transition.re_laminar_max
       || a->transition.re_turbulent_min != b->transition.re_turbulent_min
       || a->n_family != b->n_family || a->show != b->show
+      || a->magnify != b->magnify
       || strcmp (a->footer_date, b->footer_date) != 0)
     return 0;
   for (size_t i = 0; i < a->n_family; i++)

@@ -49,7 +49,10 @@ enum {
    * label is tried at most three times for each placed.  A line past
    * these needs no readouts. */
   RUGOSA_CHART_LABELS_MAX = 80,
-  RUGOSA_CHART_LABEL_TRIES = 3 * RUGOSA_CHART_LABELS_MAX
+  RUGOSA_CHART_LABEL_TRIES = 3 * RUGOSA_CHART_LABELS_MAX,
+  /* Past three times, axis numbers and titles take more of a small
+   * chart than its plot. */
+  RUGOSA_CHART_MAGNIFY_MAX = 3
 };
 
 /* The background description.  Everything here is part of the background
@@ -64,6 +67,10 @@ typedef struct {
   size_t n_family;               /* Colebrook curves; 0 in the family = smooth */
   double family[RUGOSA_CHART_FAMILY_MAX];
   unsigned show;                 /* RugosaChartShow bits */
+  /* Type, markers and strokes enlarged by this factor over the size the
+   * chart's own size gives them (a projected chart); 1 (the default; 0
+   * counts as 1) changes nothing, up to RUGOSA_CHART_MAGNIFY_MAX. */
+  double magnify;
   /* Non-empty: a footer with the caution and this date (exports). */
   char footer_date[RUGOSA_CHART_DATE_MAX];
 } RugosaChartSpec;
@@ -119,8 +126,13 @@ typedef struct {
 typedef struct RugosaChart RugosaChart;
 
 /* Defaults: 960 × 600, scale 1, light, Re 500–1e8, f 0.006–0.1,
- * transition 2000–4000, the standard family, everything shown, no footer. */
+ * transition 2000–4000, the standard family, everything shown, no footer,
+ * magnify 1. */
 void rugosa_chart_spec_init (RugosaChartSpec *spec);
+/* The size, in device pixels, of the axis numbers (the chart's body
+ * text) a chart of `spec` draws: what a caller weighs against a screen's
+ * legibility to choose `magnify`. */
+double rugosa_chart_spec_text_size (const RugosaChartSpec *spec);
 /* The standard family of relative roughness values (smooth first). */
 size_t rugosa_chart_standard_family (double *out, size_t max);
 RgStatus rugosa_chart_spec_check (const RugosaChartSpec *spec, RgError *err);
