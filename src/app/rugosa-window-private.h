@@ -1,7 +1,8 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* RugosaWindow is split over rugosa-window.c (layout, selection, editing),
- * rugosa-window-files.c (open, save, recent, drop, autosave, close guard)
- * and rugosa-window-output.c (chart export, CSV, print). */
+ * rugosa-window-files.c (open, save, recent, drop, autosave, close guard),
+ * rugosa-window-output.c (chart export, CSV, print) and
+ * rugosa-window-present.c (presentation mode). */
 #pragma once
 
 #include "rugosa-canvas.h"
@@ -13,6 +14,9 @@
 #include "rugosa-window.h"
 
 G_BEGIN_DECLS
+
+/* What presentation mode puts back on leaving (rugosa-window-present.c). */
+typedef struct _RugosaPresentation RugosaPresentation;
 
 struct _RugosaWindow
 {
@@ -35,6 +39,15 @@ struct _RugosaWindow
   GtkStack           *chart_stack;
   GtkStackPage       *friction_page;
   RugosaCostGroup    *cost_group;
+  /* hidden while presenting, and the hint shown then */
+  GtkWidget          *header_bar;
+  GtkWidget          *sidebar;
+  GtkWidget          *panel_scroller;
+  GtkWidget          *view_switcher;
+  GtkPaned           *outer_paned;
+  GtkPaned           *inner_paned;
+  GtkPaned           *centre_paned;
+  GtkRevealer        *present_hint;
   /* the chart area's other views, added to chart_stack by the window */
   RugosaPlotView     *plot_views[RUGOSA_CHART_N_VIEWS];
 
@@ -49,9 +62,15 @@ struct _RugosaWindow
   GFile              *file;
   GtkWindow          *project_settings; /* while open; weak */
   char               *autosave_id;  /* unique per window */
+  RugosaPresentation *presentation; /* while presenting: what to put back */
+  RugosaPresentation *restoring;    /* after: the dividers, while the size settles */
 
   guint    autosave_source;
   guint    actions_source;   /* a pending update of the actions' state */
+  guint    hint_source;      /* the presentation's key hint fading */
+  guint    restore_tick;     /* the dividers put back, frame by frame */
+  guint    restore_frames;
+  int      restore_width, restore_height;
   gboolean modified;
   gboolean close_confirmed;
   gboolean close_after_save;
@@ -65,6 +84,8 @@ void     _rugosa_window_update_title      (RugosaWindow  *self);
 /* Brings the actions' enabled state up to date once the change in
  * progress is complete (before the next input event). */
 void     _rugosa_window_update_actions    (RugosaWindow  *self);
+/* The same, at once. */
+void     _rugosa_window_apply_actions     (RugosaWindow  *self);
 void     _rugosa_window_toast             (RugosaWindow  *self,
                                            const char    *text);
 /* Replace the project's content (load, new, recovery) and reset history. */
@@ -84,5 +105,12 @@ RugosaChartView _rugosa_window_chart_view (RugosaWindow *self);
 
 /* rugosa-window-output.c */
 void     _rugosa_window_output_class_init (GtkWidgetClass *widget_class);
+
+/* rugosa-window-present.c */
+void     _rugosa_window_present_class_init (GtkWidgetClass *widget_class);
+void     _rugosa_window_present_init      (RugosaWindow   *self);
+void     _rugosa_window_present_dispose   (RugosaWindow   *self);
+/* While presenting, the actions that edit or replace the project off. */
+void     _rugosa_window_present_lock_actions (RugosaWindow *self);
 
 G_END_DECLS

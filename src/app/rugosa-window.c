@@ -66,10 +66,11 @@ rugosa_window_get_modified (RugosaWindow *self)
   return self->modified;
 }
 
+/* Never while presenting: nothing replaces the project on show. */
 gboolean
 rugosa_window_is_pristine (RugosaWindow *self)
 {
-  return self->file == NULL && !self->modified;
+  return self->file == NULL && !self->modified && self->presentation == NULL;
 }
 
 GtkWidget *
@@ -154,7 +155,7 @@ _rugosa_window_update_title (RugosaWindow *self)
   gtk_window_set_title (GTK_WINDOW (self), title);
 }
 
-static void
+void
 _rugosa_window_apply_actions (RugosaWindow *self)
 {
   guint n = rugosa_project_get_n_lines (self->project);
@@ -169,6 +170,7 @@ _rugosa_window_apply_actions (RugosaWindow *self)
   /* Each direction on its own: at the top of the list there is no "up". */
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-up", has && pos > 0);
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-down", has && pos + 1 < n);
+  _rugosa_window_present_lock_actions (self);
 }
 
 static gboolean
@@ -754,6 +756,9 @@ _rugosa_window_setup (RugosaWindow *self)
   g_signal_connect_object (self->history, "notify::can-undo", G_CALLBACK (_rugosa_window_history_changed), self, G_CONNECT_SWAPPED);
   g_signal_connect_object (self->history, "notify::can-redo", G_CALLBACK (_rugosa_window_history_changed), self, G_CONNECT_SWAPPED);
 
+  /* before the files' close guard: a window closed while presenting
+   * keeps the size it had before */
+  _rugosa_window_present_init (self);
   _rugosa_window_files_init (self);
   _rugosa_window_project_replaced (self);
   self->modified = FALSE;
@@ -767,6 +772,7 @@ rugosa_window_dispose (GObject *object)
   RugosaWindow *self = RUGOSA_WINDOW (object);
 
   _rugosa_window_files_dispose (self);
+  _rugosa_window_present_dispose (self);
   if (self->project_settings != NULL)
     {
       g_object_remove_weak_pointer (G_OBJECT (self->project_settings), (gpointer *) &self->project_settings);
@@ -848,6 +854,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
   _rugosa_window_files_class_init (widget_class);
   _rugosa_window_output_class_init (widget_class);
   _rugosa_window_sizing_class_init (widget_class);
+  _rugosa_window_present_class_init (widget_class);
 }
 
 static void

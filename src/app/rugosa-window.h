@@ -68,6 +68,17 @@ gboolean       rugosa_window_print_to_pdf    (RugosaWindow      *self,
  * window's palette, in turn (for lines added by other windows). */
 const char    *rugosa_window_palette_colour (guint position);
 
+/* Presentation mode (win.present, F5): the chart alone, full screen, in
+ * large type, driven from the keyboard; leaving puts the window back as
+ * it was.  Nothing in it changes the project. */
+gboolean       rugosa_window_get_presenting (RugosaWindow *self);
+void           rugosa_window_set_presenting (RugosaWindow *self,
+                                             gboolean      presenting);
+/* What key `number` (1–9) does while presenting: line `number` of the
+ * list shown or hidden; FALSE when there is no such line. */
+gboolean       rugosa_window_present_toggle_line (RugosaWindow *self,
+                                                  guint         number);
+
 /* Pieces, for tests and the benchmark. */
 GtkWidget     *rugosa_window_get_canvas     (RugosaWindow *self);
 GtkWidget     *rugosa_window_get_line_panel (RugosaWindow *self);
