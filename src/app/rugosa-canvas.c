@@ -109,6 +109,8 @@ rugosa_canvas_refresh (RugosaCanvas *self)
 }
 
 static void _rugosa_canvas_update_spec (RugosaCanvas *self);
+static void _rugosa_canvas_set_probe_text (RugosaCanvas *self,
+                                           char         *text);
 
 void
 rugosa_canvas_set_ladder (RugosaCanvas           *self,
@@ -363,6 +365,8 @@ rugosa_canvas_set_projector (RugosaCanvas *self,
   if (self->projector == projector)
     return;
   self->projector = projector;
+  if (projector)
+    _rugosa_canvas_set_probe_text (self, NULL);
   _rugosa_canvas_update_spec (self);
   gtk_widget_queue_draw (GTK_WIDGET (self));
 }
@@ -449,8 +453,10 @@ rugosa_canvas_pointer_at (RugosaCanvas *self,
     }
 
   rugosa_chart_probe (self->chart, x, y, &probe);
-  /* Over a marker the tooltip speaks for the line instead. */
-  if (!probe.in_plot || hover >= 0)
+  /* Over a marker the tooltip speaks for the line instead.  Presenting,
+   * none: at a projector's size the readout would cover the callouts
+   * the room reads, wherever the pointer was left. */
+  if (!probe.in_plot || hover >= 0 || self->projector)
     {
       _rugosa_canvas_set_probe_text (self, NULL);
       return;

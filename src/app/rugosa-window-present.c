@@ -280,6 +280,21 @@ _rugosa_window_restore_tick (GtkWidget     *widget,
   return G_SOURCE_REMOVE;
 }
 
+/* Marks along the slider for the room to read the age between its ends:
+ * every ten years (the unit is in the large value beside it). */
+static void
+_rugosa_window_mark_ages (RugosaWindow *self)
+{
+  double upper = gtk_adjustment_get_upper (self->age_adjustment);
+
+  for (double years = 0; years <= upper + 1e-9; years += 10)
+    {
+      g_autofree char *text = g_strdup_printf ("%.0f", years);
+
+      gtk_scale_add_mark (self->age_scale, years, GTK_POS_BOTTOM, text);
+    }
+}
+
 static void
 _rugosa_window_present_enter (RugosaWindow *self)
 {
@@ -331,6 +346,7 @@ _rugosa_window_present_enter (RugosaWindow *self)
   gtk_widget_set_visible (self->view_switcher, FALSE);
   gtk_stack_set_visible_child_name (self->chart_stack, rugosa_chart_view_id (RUGOSA_CHART_VIEW_FRICTION));
   rugosa_canvas_set_projector (self->canvas, TRUE);
+  _rugosa_window_mark_ages (self);
   gtk_widget_set_visible (GTK_WIDGET (self->present_hint), TRUE);
   _rugosa_window_show_hint (self, TRUE);
   _rugosa_window_present_lock_actions (self);
@@ -359,6 +375,7 @@ _rugosa_window_present_leave (RugosaWindow *self)
   gtk_revealer_set_reveal_child (self->present_hint, FALSE);
   gtk_widget_set_visible (GTK_WIDGET (self->present_hint), FALSE);
   rugosa_canvas_set_projector (self->canvas, FALSE);
+  gtk_scale_clear_marks (self->age_scale);
   gtk_widget_remove_css_class (GTK_WIDGET (self), "presenting");
   gtk_widget_set_visible (self->header_bar, p->header);
   gtk_widget_set_visible (self->sidebar, p->sidebar);
