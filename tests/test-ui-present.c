@@ -183,7 +183,20 @@ test_present_and_back (void)
   g_assert_true (rugosa_window_get_presenting (win));
   g_assert_true (gtk_widget_has_css_class (GTK_WIDGET (win), "presenting"));
   if (!gtk_window_is_fullscreen (GTK_WINDOW (win)))
-    g_test_message ("no window manager answered the full-screen request");
+    {
+      /* what a window manager does: the window at the screen's size */
+      GdkMonitor *monitor = gdk_display_get_monitor_at_surface (gtk_widget_get_display (GTK_WIDGET (win)),
+                                                                gtk_native_get_surface (GTK_NATIVE (win)));
+      GdkRectangle screen;
+
+      g_test_message ("no window manager answered the full-screen request");
+      gdk_monitor_get_geometry (monitor, &screen);
+      g_assert_cmpint (screen.width, >, width);
+      gtk_window_set_default_size (GTK_WINDOW (win), screen.width, screen.height);
+      ui_harness_wait (200);
+      gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
+      g_assert_cmpint (gtk_widget_get_width (GTK_WIDGET (win)), >, width);
+    }
   g_assert_false (gtk_widget_get_mapped (header));
   g_assert_false (gtk_widget_get_mapped (list));
   g_assert_false (gtk_widget_get_mapped (panel));
@@ -273,8 +286,22 @@ test_present_and_back (void)
 
   /* out, with Escape */
   g_assert_true (press (win, GDK_KEY_Escape, 0));
+  if (!was_fullscreen && !gtk_window_is_fullscreen (GTK_WINDOW (win)))
+    {
+      /* a window manager answers a few frames later: the panels are
+       * back while the window still has the screen's size, then it
+       * shrinks, and the dividers must still come back where they were */
+      GdkMonitor *monitor = gdk_display_get_monitor_at_surface (gtk_widget_get_display (GTK_WIDGET (win)),
+                                                                gtk_native_get_surface (GTK_NATIVE (win)));
+      GdkRectangle screen;
+
+      gdk_monitor_get_geometry (monitor, &screen);
+      gtk_window_set_default_size (GTK_WINDOW (win), screen.width, screen.height);
+      ui_harness_wait (150);
+      gtk_window_set_default_size (GTK_WINDOW (win), width, height);
+    }
   gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
-  ui_harness_wait (100);
+  ui_harness_wait (600);
   g_assert_false (rugosa_window_get_presenting (win));
   g_assert_false (gtk_widget_has_css_class (GTK_WIDGET (win), "presenting"));
   g_assert_true (gtk_window_is_fullscreen (GTK_WINDOW (win)) == was_fullscreen);

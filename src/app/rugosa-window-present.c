@@ -33,7 +33,10 @@
 #define HINT_SECONDS 8
 /* Frames over which the dividers are put back while the window returns to
  * its size (a window manager answers the full-screen request a few frames
- * later; without one the size never changes). */
+ * later; without one the size never changes).  GtkPaned's own arithmetic
+ * mostly brings them back by itself, but a divider between two children
+ * that both resize is scaled in proportion and rounded each way: the
+ * saved positions make it exact. */
 #define RESTORE_FRAMES 30
 
 /* The actions that edit the project or replace it. */
