@@ -4,7 +4,8 @@
  * file given as the first argument), then the service-age slider driven
  * from 0 to 50 years, one frame a step (over 10 line options for the
  * demo: its own and copies), then the pointer moved from marker to
- * marker and to empty places (hover).  Prints JSON lines; targets: first
+ * marker and to empty places (hover), then presentation mode entered,
+ * a line toggled by its number and left.  Prints JSON lines; targets: first
  * frame within 500 ms (the demo), slider work under 16 ms and hover work
  * under 8 ms at 100 lines, no frame over 100 ms at 1000 lines.
  *
@@ -237,6 +238,43 @@ main (int argc, char *argv[])
              "\"placements\":%u}\n",
              n, steps, hover_work[steps / 2], hover_work[(int) (steps * 0.95)], hover_work[steps - 1],
              hover_frame[steps - 1], rugosa_canvas_get_placements (canvas) - placements);
+  }
+
+  /* Presentation: entering (the frame at the larger type, the background
+   * rebuilt), a line hidden and shown again by its number key, leaving
+   * (the window's lines shown, selection and age put back).  Entering
+   * and leaving visit each line once. */
+  {
+    double enter_cpu, enter_ms, toggle_cpu = 0, toggle_ms = 0, leave_cpu, leave_ms, magnify, c0;
+    gint64 t0;
+
+    c0 = cpu_ms ();
+    t0 = g_get_monotonic_time ();
+    rugosa_window_set_presenting (win, TRUE);
+    wait_paint ();
+    enter_cpu = cpu_ms () - c0;
+    enter_ms = (g_get_monotonic_time () - t0) / 1000.0;
+    magnify = rugosa_canvas_get_magnify (canvas);
+    for (int k = 0; k < 2; k++)
+      {
+        c0 = cpu_ms ();
+        t0 = g_get_monotonic_time ();
+        rugosa_window_present_toggle_line (win, 1);
+        wait_paint ();
+        toggle_cpu = MAX (toggle_cpu, cpu_ms () - c0);
+        toggle_ms = MAX (toggle_ms, (g_get_monotonic_time () - t0) / 1000.0);
+      }
+    c0 = cpu_ms ();
+    t0 = g_get_monotonic_time ();
+    rugosa_window_set_presenting (win, FALSE);
+    wait_paint ();
+    leave_cpu = cpu_ms () - c0;
+    leave_ms = (g_get_monotonic_time () - t0) / 1000.0;
+    g_print ("{\"bench\":\"ui-present\",\"lines\":%u,\"magnify\":%.2f,\"enter_cpu_ms\":%.3f,"
+             "\"enter_ms\":%.3f,\"toggle_cpu_max_ms\":%.3f,\"toggle_max_ms\":%.3f,"
+             "\"leave_cpu_ms\":%.3f,\"leave_ms\":%.3f,\"clock\":\"thread-cpu\"}\n",
+             n, magnify, enter_cpu, enter_ms, toggle_cpu, toggle_ms,
+             leave_cpu, leave_ms);
   }
 
   gtk_window_destroy (GTK_WINDOW (win));

@@ -25,8 +25,6 @@
 
 #include "config.h"
 
-#include <glib/gi18n.h>
-
 #include "rugosa-window-private.h"
 
 /* Seconds the key hint stays before it fades. */
@@ -178,13 +176,14 @@ _rugosa_window_present_key (GtkEventControllerKey *controller,
                             GdkModifierType        state,
                             RugosaWindow          *self)
 {
-  /* a page of the slider, in whole years */
-  int page = MAX (1, (int) gtk_adjustment_get_page_increment (self->age_adjustment));
-  int age_step = (state & GDK_SHIFT_MASK) ? page : 1;
+  int page, age_step;
 
   if (self->presentation == NULL
       || (state & (GDK_CONTROL_MASK | GDK_ALT_MASK | GDK_SUPER_MASK | GDK_META_MASK)))
     return FALSE;
+  /* a year, or with Shift a page of the slider in whole years */
+  page = MAX (1, (int) gtk_adjustment_get_page_increment (self->age_adjustment));
+  age_step = (state & GDK_SHIFT_MASK) ? page : 1;
   switch (keyval)
     {
     case GDK_KEY_Escape:
