@@ -234,6 +234,23 @@ test_present_and_back (void)
    * height). */
   g_assert_cmpfloat (rugosa_canvas_get_magnify (canvas), >=, 1.25);
   g_assert_true (rugosa_canvas_get_projector (canvas));
+  {
+    /* Common practice (no single source): the farthest seat at six image
+     * heights, capitals of 10′ there, DejaVu Sans capitals 0.73 em: the
+     * axis numbers at 1/42 of the screen's height (rugosa-canvas.c). */
+    GdkMonitor *monitor = gdk_display_get_monitor_at_surface (gtk_widget_get_display (GTK_WIDGET (win)),
+                                                              gtk_native_get_surface (GTK_NATIVE (win)));
+    GdkRectangle screen;
+    RugosaChartSpec spec;
+    double want;
+
+    gdk_monitor_get_geometry (monitor, &screen);
+    rugosa_chart_spec_init (&spec);
+    spec.width = gtk_widget_get_width (GTK_WIDGET (canvas));
+    spec.height = gtk_widget_get_height (GTK_WIDGET (canvas));
+    want = CLAMP (screen.height / 42.0 / rugosa_chart_spec_text_size (&spec), 1.25, RUGOSA_CHART_MAGNIFY_MAX);
+    g_assert_cmpfloat_with_epsilon (rugosa_canvas_get_magnify (canvas), want, 1e-9);
+  }
   /* the editing actions are off: the sidebar's Add and the shortcut */
   g_assert_false (gtk_widget_get_sensitive (add));
   gtk_widget_activate_action (GTK_WIDGET (win), "win.line-delete", NULL);
