@@ -279,98 +279,6 @@ _rugosa_chart_tag_layout (RugosaChart *chart, size_t i, double *w, double *h)
   return l;
 }
 
-/* ---- the legend ---- */
-
-size_t
-_rugosa_chart_legend_rows (const RugosaChart *chart)
-{
-  const ChartLayout *lay = &chart->lay;
-  const double row = lay->font_label * 1.45;
-  const size_t max_rows = (size_t) fmax (1, floor (0.4 * lay->plot.height / row));
-  return chart->n_lines <= max_rows ? chart->n_lines : max_rows;
-}
-
-/* Line `row` of the legend: the selected line first, then the pinned
- * ones, then the others in list order; -1 past the end. */
-int
-_rugosa_chart_legend_line (const RugosaChart *chart, size_t row)
-{
-  size_t seen = 0;
-  for (int pass = 0; pass < 3; pass++)
-    for (size_t i = 0; i < chart->n_lines; i++)
-      {
-        const RugosaChartLine *l = &chart->lines[i].line;
-        const int p = l->selected ? 0 : l->pinned ? 1 : 2;
-        if (p != pass)
-          continue;
-        if (seen++ == row)
-          return (int) i;
-      }
-  return -1;
-}
-
-/* The legend's last row when not every line has a row of its own. */
-char *
-_rugosa_chart_legend_more (const RugosaChart *chart, size_t rows)
-{
-  const size_t n_more = chart->n_lines - rows + 1;
-  /* TRANSLATORS: the last row of the chart's legend when not every line
-   * fits; the lines without a label carry their number in the list */
-  return g_strdup_printf (ngettext ("%zu more, numbered as in the list",
-                                    "%zu more, numbered as in the list", n_more),
-                          n_more);
-}
-
-static RugosaChartRect
-legend_geometry (RugosaChart *chart)
-{
-  const ChartLayout *lay = &chart->lay;
-  const RugosaChartRect *pl = &lay->plot;
-  const double k = lay->k;
-  RugosaChartRect r = { 0, 0, 0, 0 };
-
-  if (!(chart->spec.show & RUGOSA_CHART_SHOW_LEGEND) || chart->n_lines == 0)
-    return r;
-  const double row = lay->font_label * 1.45;
-  const size_t rows = _rugosa_chart_legend_rows (chart);
-  double wmax = 0;
-  for (size_t i = 0; i < rows; i++)
-    {
-      double w, h;
-      const int line = _rugosa_chart_legend_line (chart, i);
-      /* measured bold: the selected line's name is drawn bold */
-      PangoLayout *l = _rugosa_chart_text (chart, chart->lines[line].name,
-                                           lay->font_label * 0.95, TEXT_BOLD, 0);
-      _rugosa_chart_text_size (l, &w, &h);
-      wmax = fmax (wmax, w);
-    }
-  if (chart->n_lines > rows)
-    {
-      double w, h;
-      g_autofree char *more = _rugosa_chart_legend_more (chart, rows);
-      PangoLayout *l = _rugosa_chart_text (chart, more, lay->font_label * 0.95, TEXT_PLAIN, 0);
-      _rugosa_chart_text_size (l, &w, &h);
-      wmax = fmax (wmax, w);
-    }
-  wmax = fmin (fmax (wmax, 70 * k), 0.3 * pl->width);
-  r.width = wmax + 30 * k;
-  r.height = (double) rows * row + 10 * k;
-  /* Bottom left of the turbulent strip: on default axes that corner lies
-   * below the smooth-pipe curve, where no operating point can fall. */
-  double x, y;
-  _rugosa_chart_xy (lay, chart->spec.transition.re_turbulent_min, 0.02, &x, &y);
-  r.x = x + 10 * k;
-  if (r.x + r.width > pl->x + pl->width - 10 * k)
-    r.x = pl->x + 10 * k;
-  r.y = pl->y + pl->height - 10 * k - r.height;
-  /* whole pixels, so its cached image is copied rather than resampled */
-  r.x = round (r.x);
-  r.y = round (r.y);
-  r.width = ceil (r.width);
-  r.height = ceil (r.height);
-  return r;
-}
-
 /* ---- candidates ---- */
 
 enum {
@@ -570,8 +478,6 @@ _rugosa_chart_place_labels (RugosaChart *chart)
 
   chart->labels = g_new0 (ChartLabel, n ? n : 1);
   chart->n_labels = n;
-  chart->legend = legend_geometry (chart);
-  index_add (&s.ix, &chart->legend, BOX_LEGEND);
   if (chart->bg_boxes_valid)
     for (size_t b = 0; b < chart->n_bg_boxes; b++)
       index_add (&s.ix, &chart->bg_boxes[b], BOX_SOFT);
@@ -610,6 +516,9 @@ _rugosa_chart_place_labels (RugosaChart *chart)
         lb->info.marker = (RugosaChartRect) { 0, 0, 0, 0 };
     }
   g_free (old);
+  /* the legend after the markers: it takes the corner that hides least */
+  chart->legend = _rugosa_chart_legend_geometry (chart);
+  index_add (&s.ix, &chart->legend, BOX_LEGEND);
   g_qsort_with_data (order, (gint) n_order, sizeof *order, cmp_priority, chart);
 
   /* Labels: the selected and pinned lines whatever it takes, the others
@@ -682,7 +591,7 @@ _rugosa_chart_placement_holds (RugosaChart *chart)
           || lb->key_name != g_str_hash (chart->lines[i].name))
         return 0;
     }
-  const RugosaChartRect legend = legend_geometry (chart);
+  const RugosaChartRect legend = _rugosa_chart_legend_geometry (chart);
   if (memcmp (&legend, &chart->legend, sizeof legend) != 0)
     return 0;
   for (size_t i = 0; i < chart->n_lines; i++)

@@ -11,6 +11,8 @@
 
 #include "chart/rugosa-chart-input.h"
 #include "model/rugosa-display.h"
+#include "model/rugosa-enums.h"
+#include "model/rugosa-fields.h"
 
 void
 rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
@@ -175,6 +177,15 @@ _rugosa_chart_input_keep (RugosaChartInput *input,
   return owned;
 }
 
+/* "25 years", as the window's service-age slider says it. */
+static char *
+_rugosa_chart_input_years (double age)
+{
+  g_autofree char *years = rugosa_display_significant_screen (age, 3);
+
+  return g_strdup_printf (ngettext ("%s year", "%s years", age == 1.0 ? 1 : 2), years);
+}
+
 RugosaChartInput *
 rugosa_chart_input_new (RugosaProject    *project,
                         int               selected,
@@ -204,6 +215,11 @@ rugosa_chart_input_new_view (RugosaProject              *project,
     _trail_cache_prune (cache, project);
   rugosa_chart_spec_init (&input->spec);
   rugosa_chart_input_fill_spec (&input->spec, project);
+  if (age > 0.0)
+    {
+      g_autofree char *years = _rugosa_chart_input_years (age);
+      g_strlcpy (input->spec.age_text, years, sizeof input->spec.age_text);
+    }
   input->lines = g_new0 (RugosaChartLine, MAX (n, 1));
   input->line_index = g_new0 (guint, MAX (n, 1));
 
@@ -337,4 +353,79 @@ rugosa_chart_input_free (RugosaChartInput *input)
   g_free (input->line_index);
   g_ptr_array_unref (input->owned);
   g_free (input);
+}
+
+/* "Label: value", the pairs of the conditions line. */
+static void
+_rugosa_chart_input_pair (GString    *out,
+                          const char *property,
+                          const char *value)
+{
+  if (out->len > 0)
+    g_string_append (out, "  ·  ");
+  /* TRANSLATORS: one condition of an exported chart, a field's label and
+   * its value, e.g. "Friction model: Colebrook (1939)" */
+  g_string_append_printf (out, _("%s: %s"), rugosa_field_label (rugosa_field_find (property)), value);
+}
+
+char *
+rugosa_chart_input_conditions (RugosaChartInput *input,
+                               RugosaProject    *project)
+{
+  RugosaSettings *ps = rugosa_project_get_settings (project);
+  const char *u_temp = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_TEMPERATURE);
+  g_autoptr (GString) out = g_string_new (NULL);
+  g_autoptr (GString) fluids = g_string_new (NULL);
+  g_autoptr (GHashTable) seen = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL);
+  g_autofree char *years = _rugosa_chart_input_years (rugosa_settings_get_double (ps, "service-age"));
+  const int model = rugosa_settings_get_friction_model (ps);
+
+  _rugosa_chart_input_pair (out, "service-age", years);
+  /* each fluid of the lines drawn once, in list order: linear in the lines */
+  for (size_t i = 0; i < input->n_lines; i++)
+    {
+      RugosaLine *line = rugosa_project_get_line (project, input->line_index[i]);
+      RgFluidSpec fs;
+      g_autofree char *t = NULL, *one = NULL;
+
+      rugosa_line_get_fluid_spec (line, &fs);
+      t = rugosa_display_format_screen (RG_QTY_TEMPERATURE, fs.temperature_k, u_temp);
+      /* a fluid given by its properties has no temperature to name */
+      one = fs.kind == RG_FLUID_CUSTOM
+              ? g_strdup (rugosa_fluid_kind_title (fs.kind))
+              /* TRANSLATORS: a fluid of an exported chart's conditions: its
+               * property model and temperature, e.g. "Water (IAPWS-IF97) at 15 °C" */
+              : g_strdup_printf (_("%s at %s"), rugosa_fluid_kind_title (fs.kind), t);
+      if (g_hash_table_contains (seen, one))
+        continue;
+      if (fluids->len > 0)
+        g_string_append (fluids, "; ");
+      g_string_append (fluids, one);
+      g_hash_table_add (seen, g_steal_pointer (&one));
+    }
+  if (fluids->len > 0)
+    _rugosa_chart_input_pair (out, "fluid-kind", fluids->str);
+  _rugosa_chart_input_pair (out, "friction-model", rg_friction_model_title ((RgFrictionModel) model));
+  return g_strdup (out->str);
+}
+
+void
+rugosa_chart_input_set_heading (RugosaChartInput *input,
+                                RugosaProject    *project,
+                                const char       *title)
+{
+  g_autofree char *conditions = NULL;
+
+  input->spec.title[0] = '\0';
+  input->spec.conditions[0] = '\0';
+  if (title == NULL || *title == '\0')
+    return;
+  /* cut on a character, never inside one */
+  g_utf8_strncpy (input->spec.title, title,
+                  MIN ((gsize) g_utf8_strlen (title, -1), (sizeof input->spec.title - 4) / 4));
+  conditions = rugosa_chart_input_conditions (input, project);
+  if (strlen (conditions) < sizeof input->spec.conditions)
+    g_strlcpy (input->spec.conditions, conditions, sizeof input->spec.conditions);
+  else
+    g_utf8_strncpy (input->spec.conditions, conditions, (sizeof input->spec.conditions - 4) / 4);
 }
