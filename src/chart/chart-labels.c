@@ -3,7 +3,9 @@
  *
  * What gets a label: the selected line and the pinned lines always; the
  * other lines in list order while labels fit, up to a budget that grows
- * with the plot's area.  Every other line whose marker is on the plot gets
+ * with the plot's area, in full while the callouts cover less than a
+ * tenth of the plot, then by name alone up to 15 % (FULL_SHARE,
+ * CALLOUT_SHARE).  Every other line whose marker is on the plot gets
  * a small number beside its marker instead, its place in the list.
  *
  * How: greedy, with a spatial index.  Every obstacle (markers, the legend,
@@ -358,7 +360,8 @@ try_rings (const Space *s, const ChartLabel *lb, double w, double h, double k,
  * over them; for a line that must be labelled, further out and finally
  * over other markers. */
 static int
-place_label (RugosaChart *chart, Space *s, size_t i, int must)
+place_label (RugosaChart *chart, Space *s, size_t i, int must, double room_full,
+             double room_compact)
 {
   static const struct { int compact; int far; unsigned mask; } ATTEMPTS[] = {
     { 0, 0, BOX_MARKER | BOX_LABEL | BOX_LEGEND | BOX_SOFT | BOX_TAG },
@@ -381,6 +384,8 @@ place_label (RugosaChart *chart, Space *s, size_t i, int must)
       int ring = 0, dir = 0;
       RugosaChartRect r;
       _rugosa_chart_label_size (chart, i, ATTEMPTS[a].compact, &w, &h);
+      if (w * h > (ATTEMPTS[a].compact ? room_compact : room_full))
+        continue;
       if (try_rings (s, lb, w, h, k, ATTEMPTS[a].far ? RINGS_FAR : RINGS, ATTEMPTS[a].mask,
                      &ring, &dir, &r) != 0)
         continue;
@@ -421,6 +426,16 @@ place_tag (RugosaChart *chart, Space *s, size_t i)
           }
       }
 }
+
+/* The design rule for callouts: together they cover at most
+ * CALLOUT_SHARE of the plot's area, and full callouts (name and readouts)
+ * stop at FULL_SHARE; past these a line gets its name alone, then its
+ * number beside the marker, keyed to the legend.  The selected and pinned
+ * lines are labelled whatever the share (their area counts).  Measured on
+ * the demo project: 4.7 % at 1280 × 720, 14.7 % at 640 × 400 before the
+ * rule. */
+#define FULL_SHARE 0.10
+#define CALLOUT_SHARE 0.15
 
 /* How many ordinary labels a plot of this size holds legibly: a label of
  * four short lines takes about 120 × 55 px at k = 1; past a third of the
@@ -525,6 +540,8 @@ _rugosa_chart_place_labels (RugosaChart *chart)
    * while the budget lasts; a failed attempt costs as much as a placed
    * label, so attempts are bounded too. */
   const size_t budget = label_budget (lay);
+  const double plot_area = lay->plot.width * lay->plot.height;
+  double covered = 0;
   size_t placed = 0, attempts = 0;
   for (size_t o = 0; o < n_order; o++)
     {
@@ -535,7 +552,12 @@ _rugosa_chart_place_labels (RugosaChart *chart)
         continue;
       if (!must)
         attempts++;
-      if (place_label (chart, &s, i, must) && !must)
+      const double room_full = must ? INFINITY : FULL_SHARE * plot_area - covered;
+      const double room_compact = must ? INFINITY : CALLOUT_SHARE * plot_area - covered;
+      if (!place_label (chart, &s, i, must, room_full, room_compact))
+        continue;
+      covered += chart->labels[i].info.box.width * chart->labels[i].info.box.height;
+      if (!must)
         placed++;
     }
   /* Numbers for the rest, in list order. */

@@ -285,28 +285,40 @@ plan (RugosaChart *chart, double *width, double *height)
   /* the key first: it is what the lines' rows must leave room for */
   key_needs (chart, &need);
   const size_t max_rows = (size_t) fmax (1, floor ((LEGEND_SHARE * lay->plot.height - 2 * pad) / row));
-  double key_w = 0;
-  GArray *saved = chart->legend_entries;
-  chart->legend_entries = g_array_new (FALSE, FALSE, sizeof (LegendEntry));
   double lines_w = 0;
   for (size_t r = 0; r < MIN (chart->n_lines, max_rows); r++)
     lines_w = fmax (lines_w, 16 * k + num_w
                                + text_width (chart, chart->lines[legend_line (chart, r)].name, TEXT_BOLD));
-  double key_h = plan_key (chart, &need, 0, lines_w, max_w, &key_w);
-  GArray *key = chart->legend_entries;
-  chart->legend_entries = saved;
-  const size_t key_rows = (size_t) lround (key_h / row);
-  size_t line_rows;
-  if (key_rows + MIN (chart->n_lines, 2) + 1 > max_rows)
+  /* The whole key while every line keeps its row; else the symbols
+   * without the bands (whose names the chart writes on them) while three
+   * lines keep theirs; else no key. */
+  double key_w = 0, key_h = 0;
+  GArray *key = NULL;
+  size_t line_rows = MIN (chart->n_lines, max_rows);
+  for (int variant = 0; variant < 2; variant++)
     {
-      for (guint i = 0; i < key->len; i++)
-        g_free (g_array_index (key, LegendEntry, i).text);
-      g_array_set_size (key, 0);
-      key_h = 0;
-      line_rows = MIN (chart->n_lines, max_rows);
+      GArray *saved = chart->legend_entries;
+      KeyNeeds try = need;
+      double w = 0;
+      try.bands = variant == 0 && need.bands;
+      chart->legend_entries = g_array_new (FALSE, FALSE, sizeof (LegendEntry));
+      const double h = plan_key (chart, &try, 0, lines_w, max_w, &w);
+      GArray *entries = chart->legend_entries;
+      chart->legend_entries = saved;
+      const size_t rows = (size_t) lround (h / row);
+      const size_t keep = variant == 0 ? chart->n_lines : MIN (chart->n_lines, 3);
+      if (entries->len > 0 && rows + keep + 1 <= max_rows)
+        {
+          key = entries;
+          key_w = w;
+          key_h = h;
+          line_rows = MIN (chart->n_lines, max_rows - rows - 1);
+          break;
+        }
+      for (guint i = 0; i < entries->len; i++)
+        g_free (g_array_index (entries, LegendEntry, i).text);
+      g_array_unref (entries);
     }
-  else
-    line_rows = MIN (chart->n_lines, max_rows - key_rows - 1);
 
   double y = 0;
   for (size_t r = 0; r < line_rows; r++)
@@ -332,7 +344,7 @@ plan (RugosaChart *chart, double *width, double *height)
         }
       y += row;
     }
-  if (key->len > 0)
+  if (key != NULL)
     {
       y += 6 * k;   /* the rule between the lines and the key */
       chart->legend_rule = y - 3 * k;
@@ -344,10 +356,10 @@ plan (RugosaChart *chart, double *width, double *height)
         }
       y += key_h;
       wmax = fmax (wmax, key_w);
+      g_array_unref (key);
     }
   else
     chart->legend_rule = 0;
-  g_array_unref (key);
   chart->legend_num_w = num_w;
 
   *width = ceil (fmin (fmax (wmax, 70 * k), max_w) + 2 * pad);
