@@ -438,6 +438,18 @@ export_draw (cairo_t *cr, gpointer data)
   rugosa_chart_draw_direct (data, cr);
 }
 
+void
+rugosa_chart_lines_for_export (RugosaChartLine *lines, size_t n_lines)
+{
+  /* the selected line keeps its label, as a pinned one, without the ring */
+  for (size_t i = 0; i < n_lines; i++)
+    if (lines[i].selected)
+      {
+        lines[i].selected = 0;
+        lines[i].pinned = 1;
+      }
+}
+
 gboolean
 rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
                      size_t n_lines, RugosaChartFormat format, double width,
@@ -466,16 +478,10 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
       return FALSE;
     }
 
-  /* No selection in a picture that leaves the program: the selected line
-   * keeps its label, as a pinned one, without the ring (hover and the
-   * probe belong to the window and never reach the engine's export). */
+  /* hover and the probe belong to the window's chart and never reach a
+   * new one; the selection is dropped here */
   RugosaChartLine *shown = g_memdup2 (lines, (n_lines ? n_lines : 1) * sizeof *lines);
-  for (size_t i = 0; i < n_lines; i++)
-    if (shown[i].selected)
-      {
-        shown[i].selected = 0;
-        shown[i].pinned = 1;
-      }
+  rugosa_chart_lines_for_export (shown, n_lines);
   chart = rugosa_chart_new ();
   rugosa_chart_set_spec (chart, &s, NULL);
   rugosa_chart_set_lines (chart, shown, n_lines);

@@ -226,7 +226,7 @@ RugosaChartRect rugosa_chart_legend_box (RugosaChart *chart);
  * the key's entries.  NULL-terminated; free with g_strfreev. */
 char **rugosa_chart_legend_entries (RugosaChart *chart);
 /* The share of the plot's area the callouts (labels and numbers) cover,
- * 0..1, counting overlaps once per box (tests and measurements). */
+ * 0..1; they never overlap, so their areas add (tests and measurements). */
 double rugosa_chart_callout_share (RugosaChart *chart);
 
 /* Export: the same drawing code at width × height logical pixels (PNG at
@@ -240,6 +240,12 @@ typedef enum {
 } RugosaChartFormat;
 
 extern const char *const RUGOSA_CHART_CAUTION;
+
+/* Lines as a picture that leaves the program shows them: no selection
+ * (a selected line becomes a pinned one, labelled without the ring).
+ * rugosa_chart_export does this itself; a caller that draws an export or
+ * a print with its own chart calls it first. */
+void rugosa_chart_lines_for_export (RugosaChartLine *lines, size_t n_lines);
 
 #define RUGOSA_CHART_ERROR (rugosa_chart_error_quark ())
 typedef enum {
