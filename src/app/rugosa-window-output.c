@@ -300,18 +300,33 @@ _rugosa_window_export_chart (GtkWidget  *widget,
   g_autofree char *format = g_settings_get_string (self->settings, "export-format");
   guint f = 0;
 
-  for (guint i = 0; i < G_N_ELEMENTS (export_sizes); i++)
-    {
-      size_ids[i] = export_sizes[i].id;
-      size_labels[i] = _(export_sizes[i].label);
-    }
+  /* The last export's choices first: GTK 4.8's own dialog shows the
+   * first option of a drop-down whatever gtk_file_chooser_set_choice
+   * asks, so the remembered one leads its list; the others keep their
+   * order. */
   for (guint i = 0; i < G_N_ELEMENTS (export_formats); i++)
-    {
-      format_ids[i] = export_formats[i].id;
-      format_labels[i] = export_formats[i].label;
-      if (g_str_equal (format, export_formats[i].id))
-        f = i;
-    }
+    if (g_str_equal (format, export_formats[i].id))
+      f = i;
+  for (guint i = 0, n = 0; i < G_N_ELEMENTS (export_sizes); i++)
+    if (g_str_equal (size, export_sizes[i].id))
+      {
+        size_ids[n] = export_sizes[i].id;
+        size_labels[n++] = _(export_sizes[i].label);
+      }
+  for (guint i = 0, n = size_ids[0] != NULL ? 1 : 0; i < G_N_ELEMENTS (export_sizes); i++)
+    if (!g_str_equal (size, export_sizes[i].id))
+      {
+        size_ids[n] = export_sizes[i].id;
+        size_labels[n++] = _(export_sizes[i].label);
+      }
+  format_ids[0] = export_formats[f].id;
+  format_labels[0] = export_formats[f].label;
+  for (guint i = 0, n = 1; i < G_N_ELEMENTS (export_formats); i++)
+    if (i != f)
+      {
+        format_ids[n] = export_formats[i].id;
+        format_labels[n++] = export_formats[i].label;
+      }
   dialog = gtk_file_chooser_native_new (_("Export the Chart"), GTK_WINDOW (self),
                                         GTK_FILE_CHOOSER_ACTION_SAVE, _("_Export"), _("_Cancel"));
   gtk_file_chooser_add_choice (GTK_FILE_CHOOSER (dialog), "format", _("Format"), format_ids, format_labels);
