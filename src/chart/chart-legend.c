@@ -8,8 +8,10 @@
  *
  * Size: rows of one height; the band swatches flow several to a row.  The
  * whole legend takes at most LEGEND_SHARE of the plot's height: the lines'
- * rows give way first (the last one counts the lines left out), the key
- * goes when not even two lines would be left.
+ * rows give way first (the last one counts the lines left out); the band
+ * key goes when the lines would not all fit or the legend would cover
+ * more than a tenth of the plot, the symbols' key past three lines or
+ * 15 % of the plot.
  *
  * Place: a few candidate corners; the one covering the least data wins —
  * operating points and flow-range ends count most, then the background's
@@ -26,6 +28,9 @@
 
 /* The legend's height at most, as a share of the plot's. */
 #define LEGEND_SHARE 0.62
+/* The legend's area at most, as a share of the plot's, with the whole
+ * key and with the symbols' key alone; past both, no key. */
+static const double KEY_AREA_SHARE[] = { 0.10, 0.15 };
 
 typedef enum {
   ENTRY_LINE,
@@ -137,15 +142,14 @@ line_number (const RugosaChart *chart, size_t i)
   return chart->lines[i].line.number > 0 ? chart->lines[i].line.number : (int) i + 1;
 }
 
-/* Whether the legend shows the lines' numbers: when some marker carries
- * its number instead of a label (known once the labels are placed). */
+/* Whether the legend shows the lines' numbers, their places in the list:
+ * whenever there are several lines, so that a marker that carries its
+ * number instead of a label (decided after the legend is placed) is
+ * always keyed, and the legend reads like the window's list. */
 static int
 shows_numbers (const RugosaChart *chart)
 {
-  for (size_t i = 0; i < chart->n_labels && chart->labels != NULL; i++)
-    if (chart->labels[i].info.numbered)
-      return 1;
-  return 0;
+  return chart->n_lines > 1;
 }
 
 /* What the chart draws, so the key explains only that. */
@@ -307,7 +311,13 @@ plan (RugosaChart *chart, double *width, double *height)
       chart->legend_entries = saved;
       const size_t rows = (size_t) lround (h / row);
       const size_t keep = variant == 0 ? chart->n_lines : MIN (chart->n_lines, 3);
-      if (entries->len > 0 && rows + keep + 1 <= max_rows)
+      /* the legend's area with this key, at most KEY_AREA_SHARE[variant]
+       * of the plot's: on a small plot the key gives way first */
+      const double area = (fmax (fmin (fmax (lines_w, w), max_w), 70 * k) + 2 * pad)
+                          * ((double) (rows + MIN (chart->n_lines, max_rows - MIN (rows + 1, max_rows))) * row
+                             + 6 * k + 2 * pad);
+      if (entries->len > 0 && rows + keep + 1 <= max_rows
+          && area <= KEY_AREA_SHARE[variant] * lay->plot.width * lay->plot.height)
         {
           key = entries;
           key_w = w;

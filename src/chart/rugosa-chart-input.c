@@ -14,6 +14,15 @@
 #include "model/rugosa-enums.h"
 #include "model/rugosa-fields.h"
 
+/* "25 years", as the window's service-age slider says it. */
+static char *
+_rugosa_chart_input_years (double age)
+{
+  g_autofree char *years = rugosa_display_significant_screen (age, 3);
+
+  return g_strdup_printf (ngettext ("%s year", "%s years", age == 1.0 ? 1 : 2), years);
+}
+
 void
 rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
                               RugosaProject   *project)
@@ -26,6 +35,13 @@ rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
   spec->f_max = rugosa_settings_get_double (ps, "chart-f-max");
   spec->transition.re_laminar_max = rugosa_settings_get_double (ps, "re-laminar-max");
   spec->transition.re_turbulent_min = rugosa_settings_get_double (ps, "re-turbulent-min");
+  /* the legend's aging key names the age shown (no background change) */
+  spec->age_text[0] = '\0';
+  if (rugosa_settings_get_double (ps, "service-age") > 0.0)
+    {
+      g_autofree char *years = _rugosa_chart_input_years (rugosa_settings_get_double (ps, "service-age"));
+      g_strlcpy (spec->age_text, years, sizeof spec->age_text);
+    }
 }
 
 static RugosaChartRgba
@@ -177,15 +193,6 @@ _rugosa_chart_input_keep (RugosaChartInput *input,
   return owned;
 }
 
-/* "25 years", as the window's service-age slider says it. */
-static char *
-_rugosa_chart_input_years (double age)
-{
-  g_autofree char *years = rugosa_display_significant_screen (age, 3);
-
-  return g_strdup_printf (ngettext ("%s year", "%s years", age == 1.0 ? 1 : 2), years);
-}
-
 RugosaChartInput *
 rugosa_chart_input_new (RugosaProject    *project,
                         int               selected,
@@ -215,11 +222,6 @@ rugosa_chart_input_new_view (RugosaProject              *project,
     _trail_cache_prune (cache, project);
   rugosa_chart_spec_init (&input->spec);
   rugosa_chart_input_fill_spec (&input->spec, project);
-  if (age > 0.0)
-    {
-      g_autofree char *years = _rugosa_chart_input_years (age);
-      g_strlcpy (input->spec.age_text, years, sizeof input->spec.age_text);
-    }
   input->lines = g_new0 (RugosaChartLine, MAX (n, 1));
   input->line_index = g_new0 (guint, MAX (n, 1));
 

@@ -67,8 +67,9 @@ void rugosa_chart_input_set_heading (RugosaChartInput *input,
 char *rugosa_chart_input_conditions (RugosaChartInput *input,
                                      RugosaProject    *project);
 
-/* The spec's background fields from the project settings (size, scale
- * and theme are left as they are). */
+/* The spec's background fields from the project settings, and the
+ * service age the legend names (size, scale and theme are left as they
+ * are). */
 void rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
                                    RugosaProject   *project);
 
