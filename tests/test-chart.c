@@ -1126,6 +1126,21 @@ test_legend_entries (void)
                       && y >= legend.y && y <= legend.y + legend.height);
     }
 
+  /* a wide chart gives the legend a column beside the plot */
+  RugosaChartSpec wide = spec;
+  wide.width = 1800;
+  wide.height = 800;
+  RugosaChart *wchart = rugosa_chart_new ();
+  g_assert_cmpint (rugosa_chart_set_spec (wchart, &wide, NULL), ==, RG_OK);
+  rugosa_chart_set_lines (wchart, set.lines, set.n);
+  const RugosaChartRect wl = rugosa_chart_legend_box (wchart);
+  const RugosaChartRect wp = rugosa_chart_plot_area (wchart);
+  g_assert_cmpfloat (wl.width, >, 0);
+  g_assert_cmpfloat (wl.x, >=, wp.x + wp.width);
+  g_assert_cmpfloat (wl.x + wl.width, <=, wide.width);
+  g_assert_cmpfloat (wl.y + wl.height, <=, wp.y + wp.height);
+  rugosa_chart_free (wchart);
+
   /* in the PDF export, as text */
   char *pdf = tmp_path ("legend.pdf"), *svg = tmp_path ("legend.svg"), *png = tmp_path ("legend.png");
   g_assert_true (rugosa_chart_export (&spec, set.lines, set.n, RUGOSA_CHART_FORMAT_PDF, 1200, 760,

@@ -138,7 +138,12 @@ _rugosa_chart_layout (const RugosaChartSpec *spec, ChartLayout *lay)
     }
 
   const double left = 14 * k + lay->font_title * 1.5 + lay->font_tick * 3.6;
-  const double right = 20 * k;
+  /* A wide chart (twice as wide as high or more) gives the legend a
+   * column of its own beside the plot, where it hides nothing. */
+  lay->side_w = 0;
+  if ((spec->show & RUGOSA_CHART_SHOW_LEGEND) && w >= 2.0 * h)
+    lay->side_w = round (fmin (fmax (0.17 * w, 170 * k), 300 * k));
+  const double right = 20 * k + lay->side_w;
   const double top = 10 * k + lay->font_title * 1.5 + lay->font_tick * 1.5
                      + lay->heading_h;
   const double bottom = 10 * k + lay->font_tick * 1.9 + lay->font_title * 1.7

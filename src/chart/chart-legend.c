@@ -13,7 +13,9 @@
  * more than a tenth of the plot, the symbols' key past three lines or
  * 15 % of the plot.
  *
- * Place: a few candidate corners; the one covering the least data wins —
+ * Place: on a wide chart, a column of its own beside the plot
+ * (chart-geometry.c); else a few candidate corners, the one covering the
+ * least data winning —
  * operating points and flow-range ends count most, then the background's
  * own labels, the laminar line and the roughness curves; ties go to the
  * first candidate, the foot of the turbulent strip, which on default axes
@@ -283,12 +285,15 @@ plan (RugosaChart *chart, double *width, double *height)
   for (char *c = num; *c; c++)
     *c = '0';
   const double num_w = text_width (chart, num, TEXT_BOLD) + 5 * k;
-  const double max_w = fmax (120 * k, 0.42 * lay->plot.width) - 2 * pad;
+  const int side = lay->side_w > 0;
+  const double max_w = side ? lay->side_w - 12 * k - 2 * pad
+                            : fmax (120 * k, 0.42 * lay->plot.width) - 2 * pad;
   double wmax = 0;
 
   /* the key first: it is what the lines' rows must leave room for */
   key_needs (chart, &need);
-  const size_t max_rows = (size_t) fmax (1, floor ((LEGEND_SHARE * lay->plot.height - 2 * pad) / row));
+  const size_t max_rows = (size_t) fmax (1, floor (((side ? 1.0 : LEGEND_SHARE) * lay->plot.height
+                                                     - 2 * pad) / row));
   double lines_w = 0;
   for (size_t r = 0; r < MIN (chart->n_lines, max_rows); r++)
     lines_w = fmax (lines_w, 16 * k + num_w
@@ -317,7 +322,7 @@ plan (RugosaChart *chart, double *width, double *height)
                           * ((double) (rows + MIN (chart->n_lines, max_rows - MIN (rows + 1, max_rows))) * row
                              + 6 * k + 2 * pad);
       if (entries->len > 0 && rows + keep + 1 <= max_rows
-          && area <= KEY_AREA_SHARE[variant] * lay->plot.width * lay->plot.height)
+          && (side || area <= KEY_AREA_SHARE[variant] * lay->plot.width * lay->plot.height))
         {
           key = entries;
           key_w = w;
@@ -445,6 +450,15 @@ _rugosa_chart_legend_geometry (RugosaChart *chart)
 
   if (!plan (chart, &w, &h))
     return r;
+  if (lay->side_w > 0)
+    {
+      /* beside the plot, level with its top */
+      r.x = round (pl->x + pl->width + 12 * k);
+      r.y = pl->y;
+      r.width = w;
+      r.height = h;
+      return r;
+    }
   _rugosa_chart_xy (lay, chart->spec.transition.re_turbulent_min, 0.02, &x, &y);
   const double foot = x + m + w <= pl->x + pl->width - m ? x + m : pl->x + m;
   const double left = pl->x + m, right = pl->x + pl->width - m - w;
@@ -674,7 +688,11 @@ _rugosa_chart_draw_legend (RugosaChart *chart, cairo_t *cr, const RugosaChartPal
     return;
   if (!cached)
     {
+      /* as its cached image is drawn, so both pictures agree */
+      cairo_save (cr);
+      cairo_set_antialias (cr, CAIRO_ANTIALIAS_FAST);
       draw_legend (chart, cr, p);
+      cairo_restore (cr);
       return;
     }
   /* The legend changes only with the lines' names, shapes, colours,

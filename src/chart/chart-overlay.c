@@ -360,7 +360,6 @@ _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached)
     for (size_t i = 0; i < chart->n_lines; i++)
       if (layer (chart, i) == pass)
         draw_line_marker (chart, cr, i, &p);
-  _rugosa_chart_draw_legend (chart, cr, &p, cached);
   for (size_t i = 0; i < chart->n_lines; i++)
     draw_tag (chart, cr, i, &p);
   for (int pass = 0; pass < 3; pass++)
@@ -368,6 +367,9 @@ _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached)
       if (layer (chart, i) == pass)
         draw_label (chart, cr, i, &p);
   cairo_restore (cr);
+  /* outside the plot's clip: a wide chart's legend stands beside it; no
+   * label or number ever overlaps it */
+  _rugosa_chart_draw_legend (chart, cr, &p, cached);
 }
 
 void

@@ -24,6 +24,8 @@ typedef struct {
   double font_tick, font_title, font_curve, font_band, font_label, font_footer;
   double footer_h;
   double heading_h;                /* the title and conditions (0: none) */
+  double side_w;                   /* a wide chart's column for the legend,
+                                    * right of the plot (0: none) */
 } ChartLayout;
 
 typedef struct {
