@@ -378,32 +378,53 @@ rugosa_chart_input_conditions (RugosaChartInput *input,
   const char *u_temp = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_TEMPERATURE);
   g_autoptr (GString) out = g_string_new (NULL);
   g_autoptr (GString) fluids = g_string_new (NULL);
-  g_autoptr (GHashTable) seen = g_hash_table_new_full (g_str_hash, g_str_equal, g_free, NULL);
   g_autofree char *years = _rugosa_chart_input_years (rugosa_settings_get_double (ps, "service-age"));
   const int model = rugosa_settings_get_friction_model (ps);
 
   _rugosa_chart_input_pair (out, "service-age", years);
-  /* each fluid of the lines drawn once, in list order: linear in the lines */
+  /* each kind of fluid of the lines drawn once, in list order, with the
+   * range of its temperatures: linear in the lines */
+  double t_min[RG_FLUID_N_KINDS], t_max[RG_FLUID_N_KINDS];
+  int order[RG_FLUID_N_KINDS], n_kinds = 0;
+  for (int k = 0; k < RG_FLUID_N_KINDS; k++)
+    t_min[k] = t_max[k] = -1.0;
   for (size_t i = 0; i < input->n_lines; i++)
     {
       RugosaLine *line = rugosa_project_get_line (project, input->line_index[i]);
       RgFluidSpec fs;
-      g_autofree char *t = NULL, *one = NULL;
 
       rugosa_line_get_fluid_spec (line, &fs);
-      t = rugosa_display_format_screen (RG_QTY_TEMPERATURE, fs.temperature_k, u_temp);
-      /* a fluid given by its properties has no temperature to name */
-      one = fs.kind == RG_FLUID_CUSTOM
-              ? g_strdup (rugosa_fluid_kind_title (fs.kind))
-              /* TRANSLATORS: a fluid of an exported chart's conditions: its
-               * property model and temperature, e.g. "Water (IAPWS-IF97) at 15 °C" */
-              : g_strdup_printf (_("%s at %s"), rugosa_fluid_kind_title (fs.kind), t);
-      if (g_hash_table_contains (seen, one))
+      if ((int) fs.kind < 0 || fs.kind >= RG_FLUID_N_KINDS)
         continue;
+      if (t_min[fs.kind] < 0.0)
+        {
+          order[n_kinds++] = (int) fs.kind;
+          t_min[fs.kind] = t_max[fs.kind] = fs.temperature_k;
+        }
+      t_min[fs.kind] = MIN (t_min[fs.kind], fs.temperature_k);
+      t_max[fs.kind] = MAX (t_max[fs.kind], fs.temperature_k);
+    }
+  for (int o = 0; o < n_kinds; o++)
+    {
+      const int kind = order[o];
+      g_autofree char *lo = rugosa_display_format_screen (RG_QTY_TEMPERATURE, t_min[kind], u_temp);
+      g_autofree char *hi = rugosa_display_format_screen (RG_QTY_TEMPERATURE, t_max[kind], u_temp);
+      g_autofree char *one = NULL;
+
+      if (kind == RG_FLUID_CUSTOM)
+        /* a fluid given by its properties has no temperature to name */
+        one = g_strdup (rugosa_fluid_kind_title (kind));
+      else if (g_str_equal (lo, hi))
+        /* TRANSLATORS: a fluid of an exported chart's conditions: its
+         * property model and temperature, e.g. "Water (IAPWS-IF97) at 15 °C" */
+        one = g_strdup_printf (_("%s at %s"), rugosa_fluid_kind_title (kind), lo);
+      else
+        /* TRANSLATORS: the same for lines at several temperatures, e.g.
+         * "Water (IAPWS-IF97) at 5 °C to 60 °C" */
+        one = g_strdup_printf (_("%s at %s to %s"), rugosa_fluid_kind_title (kind), lo, hi);
       if (fluids->len > 0)
         g_string_append (fluids, "; ");
       g_string_append (fluids, one);
-      g_hash_table_add (seen, g_steal_pointer (&one));
     }
   if (fluids->len > 0)
     _rugosa_chart_input_pair (out, "fluid-kind", fluids->str);
