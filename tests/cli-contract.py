@@ -331,6 +331,19 @@ if pdftotext:
     for needle in ("Reynolds number", "Darcy friction factor", "Steel NPS 6 Sch 40",
                    "licensed engineer", "2025-12-02"):
         check(f"render pdf text {needle}", needle in text, text[:200])
+    # The legend names every line and explains the chart's symbols; with
+    # --title a heading carries the title and the conditions.
+    titled = os.path.join(tmp, "titled.pdf")
+    code, out, err = run_env(env_date, "render", demo, "-o", titled, "--age", "25",
+                             "--title", "Riser options")
+    check("render --title", code == 0 and out == "" and err == "", err)
+    text = subprocess.run([pdftotext, "-raw", titled, "-"], capture_output=True, text=True).stdout
+    names = [line["name"] for line in json.load(open(demo, encoding="utf-8"))["lines"]]
+    for needle in names + ["Riser options", "Service age: 25.0 years",
+                           "Friction model: Colebrook (1939)", "Water (IAPWS-IF97) at",
+                           "flow range, minimum to maximum", "aging, new → 25.0 years",
+                           "curve of a line’s ε/D, new", "turbulent:", "transitionally rough"]:
+        check(f"render --title pdf text {needle}", needle in text, text[:300])
 a, b = os.path.join(tmp, "a.png"), os.path.join(tmp, "b.png")
 run_env(env_date, "render", demo, "-o", a, "--theme", "dark", "--age", "40")
 run_env(env_date, "render", demo, "-o", b, "--theme", "dark", "--age", "40")
@@ -344,6 +357,8 @@ for name, args, needle in [
     ("bad view", ["render", demo, "-o", a, "--view", "pump"], "--view"),
     ("bad age", ["render", demo, "-o", a, "--age", "-3"], "--age"),
     ("missing project", ["render", "/nonexistent.rugosa", "-o", a], "nonexistent"),
+    ("title with a control character", ["render", demo, "-o", a, "--title", "a\x01b"], "--title"),
+    ("title on another view", ["render", demo, "-o", a, "--view", "cost", "--title", "x"], "--title"),
 ]:
     code, out, err = run(*args)
     check(f"render refuses {name}", code == 2 and out == "" and len(err.splitlines()) == 1

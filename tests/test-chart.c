@@ -659,6 +659,70 @@ test_labels_crowded (void)
   rugosa_chart_free (chart);
 }
 
+/* The design rule for callouts (chart-labels.c): on a small plot they fall
+ * back to names alone and then to numbers keyed to the legend before they
+ * cover more than 15 % of the plot, and the legend then shows the numbers. */
+static void
+test_labels_small_share (void)
+{
+  static SampleSet set;
+  GRand *rand = g_rand_new_with_seed (640);
+  size_t fallbacks = 0;
+  for (int scene = 0; scene < 20; scene++)
+    {
+      RugosaChart *chart = chart_with (640, 400, RUGOSA_CHART_SHOW_ALL, RUGOSA_CHART_THEME_LIGHT);
+      size_t shown = 0, compact = 0, numbered = 0, full = 0;
+      double labels = 0;
+      sample_random (&set, rand, 12);
+      rugosa_chart_set_lines (chart, set.lines, set.n);
+      check_labels (chart, set.lines, set.n, &shown);
+      for (size_t i = 0; i < set.n; i++)
+        {
+          RugosaChartLabelInfo info;
+          g_assert_true (rugosa_chart_get_label (chart, i, &info));
+          compact += info.visible && info.compact;
+          full += info.visible && !info.compact;
+          numbered += info.numbered;
+          labels += info.visible ? info.box.width * info.box.height : 0;
+        }
+      const RugosaChartRect pl = rugosa_chart_plot_area (chart);
+      const double share = rugosa_chart_callout_share (chart);
+      labels /= pl.width * pl.height;
+      g_test_message ("640 × 400, 12 lines: %zu full, %zu names, %zu numbers; labels %.1f %%, "
+                      "with the numbers %.1f %% of the plot", full, compact, numbered,
+                      100 * labels, 100 * share);
+      /* Common practice (no single source): our design rule, labels over
+       * at most 15 % of the plot (a chart under its labels no longer
+       * reads as a chart); the numbers beside the other markers add a
+       * little more */
+      g_assert_cmpfloat (labels, <=, 0.15);
+      g_assert_cmpfloat (share, >=, labels);
+      fallbacks += compact + numbered;
+      /* a number on the plot is keyed to the legend: its row there, or
+       * the last row saying the rest are numbered as in the list */
+      char **entries = rugosa_chart_legend_entries (chart);
+      gboolean has_more = FALSE;
+      for (char **e = entries; *e != NULL; e++)
+        has_more |= strstr (*e, "numbered as in the list") != NULL;
+      for (size_t i = 0; i < set.n; i++)
+        {
+          RugosaChartLabelInfo info;
+          g_assert_true (rugosa_chart_get_label (chart, i, &info));
+          if (info.numbered)
+            {
+              char *row = g_strdup_printf ("%zu %s", i + 1, set.names[i]);
+              g_assert_true (has_more || g_strv_contains ((const char *const *) entries, row));
+              g_free (row);
+            }
+        }
+      g_strfreev (entries);
+      rugosa_chart_free (chart);
+    }
+  /* twelve full callouts of this size would cover a third of the plot */
+  g_assert_cmpuint (fallbacks, >, 0);
+  g_rand_free (rand);
+}
+
 /* A thousand lines: the selected and a pinned line are labelled wherever
  * they are in the list, nothing overlaps, and lines without a label carry
  * their number when there is room beside the marker. */
@@ -874,7 +938,8 @@ test_cache (void)
 
 static char *tmp_dir = NULL;
 static const char *const TMP_FILES[] = { "a.png", "b.png", "c.png", "chart.pdf",
-                                         "chart.svg", "chart.png" };
+                                         "chart.svg", "chart.png", "sel.svg", "pin.svg",
+                                         "legend.pdf", "legend.svg", "legend.png" };
 
 static char *
 tmp_path (const char *name)
@@ -1075,6 +1140,224 @@ test_export_svg (void)
   g_free (png);
 }
 
+/* The legend names every line and explains every symbol the chart
+ * draws; its entries are text in a PDF export and drawn alike in SVG. */
+static void
+test_legend_entries (void)
+{
+  static SampleSet set;
+  RugosaChartSpec spec;
+  GError *error = NULL;
+  sample_scene (&set);
+  rugosa_chart_spec_init (&spec);
+  spec.width = 1200;
+  spec.height = 760;
+  g_strlcpy (spec.age_text, "25 years", sizeof spec.age_text);
+  RugosaChart *chart = rugosa_chart_new ();
+  g_assert_cmpint (rugosa_chart_set_spec (chart, &spec, NULL), ==, RG_OK);
+  rugosa_chart_set_lines (chart, set.lines, set.n);
+  char **entries = rugosa_chart_legend_entries (chart);
+  const char *const KEY[] = {
+    "flow range, minimum to maximum", "aging, new → 25 years",
+    "transitional: laminar to turbulent f", "curve of a line’s ε/D, new",
+    "laminar", "transitional", "turbulent:", "hydraulically smooth",
+    "transitionally rough", "fully rough",
+  };
+  /* each line by its number in the list and its name */
+  for (size_t i = 0; i < set.n; i++)
+    {
+      char *row = g_strdup_printf ("%zu %s", i + 1, set.names[i]);
+      g_assert_true (g_strv_contains ((const char *const *) entries, row));
+      g_free (row);
+    }
+  for (size_t i = 0; i < G_N_ELEMENTS (KEY); i++)
+    g_assert_true (g_strv_contains ((const char *const *) entries, KEY[i]));
+  /* the legend hides no operating point */
+  const RugosaChartRect legend = rugosa_chart_legend_box (chart);
+  g_assert_cmpfloat (legend.width, >, 0);
+  for (size_t i = 0; i < set.n; i++)
+    {
+      double x, y;
+      rugosa_chart_to_device (chart, set.lines[i].re, set.lines[i].f, &x, &y);
+      g_assert_false (x >= legend.x && x <= legend.x + legend.width
+                      && y >= legend.y && y <= legend.y + legend.height);
+    }
+
+  /* a wide chart gives the legend a column beside the plot */
+  RugosaChartSpec wide = spec;
+  wide.width = 1800;
+  wide.height = 800;
+  RugosaChart *wchart = rugosa_chart_new ();
+  g_assert_cmpint (rugosa_chart_set_spec (wchart, &wide, NULL), ==, RG_OK);
+  rugosa_chart_set_lines (wchart, set.lines, set.n);
+  const RugosaChartRect wl = rugosa_chart_legend_box (wchart);
+  const RugosaChartRect wp = rugosa_chart_plot_area (wchart);
+  g_assert_cmpfloat (wl.width, >, 0);
+  g_assert_cmpfloat (wl.x, >=, wp.x + wp.width);
+  g_assert_cmpfloat (wl.x + wl.width, <=, wide.width);
+  g_assert_cmpfloat (wl.y + wl.height, <=, wp.y + wp.height);
+  rugosa_chart_free (wchart);
+
+  /* in the PDF export, as text */
+  char *pdf = tmp_path ("legend.pdf"), *svg = tmp_path ("legend.svg"), *png = tmp_path ("legend.png");
+  g_assert_true (rugosa_chart_export (&spec, set.lines, set.n, RUGOSA_CHART_FORMAT_PDF, 1200, 760,
+                                      TEST_DATE, pdf, &error));
+  g_assert_true (rugosa_chart_export (&spec, set.lines, set.n, RUGOSA_CHART_FORMAT_SVG, 1200, 760,
+                                      TEST_DATE, svg, &error));
+  g_assert_true (rugosa_chart_export (&spec, set.lines, set.n, RUGOSA_CHART_FORMAT_PNG, 1200, 760,
+                                      TEST_DATE, png, &error));
+  g_assert_no_error (error);
+  char *prog = g_find_program_in_path ("pdftotext");
+  if (prog != NULL)
+    {
+      char *out = NULL;
+      int status;
+      const char *argv[] = { prog, "-raw", pdf, "-", NULL };
+      g_assert_true (g_spawn_sync (NULL, (char **) argv, NULL, G_SPAWN_STDERR_TO_DEV_NULL, NULL,
+                                   NULL, &out, NULL, &status, NULL));
+      g_assert_true (g_spawn_check_wait_status (status, NULL));
+      for (char **e = entries; *e != NULL; e++)
+        if (strstr (out, *e) == NULL)
+          g_test_fail_printf ("the PDF's text lacks the legend entry “%s”", *e);
+      g_free (out);
+      g_free (prog);
+    }
+  else
+    g_test_message ("pdftotext (poppler-utils) is not installed: PDF text not checked");
+
+  /* in the SVG export, drawn as in the PNG: Cairo's SVG writes glyphs as
+   * shapes, so the legend's box is compared as pixels (gdk-pixbuf's SVG
+   * loader) with the PNG export's */
+  GdkPixbuf *a = gdk_pixbuf_new_from_file_at_size (svg, 1200, 760, NULL);
+  GdkPixbuf *b = gdk_pixbuf_new_from_file (png, &error);
+  g_assert_no_error (error);
+  if (a != NULL)
+    {
+      GdkPixbuf *la = gdk_pixbuf_new_subpixbuf (a, (int) legend.x, (int) legend.y,
+                                                (int) legend.width / 8 * 8, (int) legend.height / 8 * 8);
+      GdkPixbuf *lb = gdk_pixbuf_new_subpixbuf (b, (int) legend.x, (int) legend.y,
+                                                (int) legend.width / 8 * 8, (int) legend.height / 8 * 8);
+      const size_t nb = (size_t) (legend.width / 8) * (size_t) (legend.height / 8) * 3;
+      double *ma = g_new (double, nb), *mb = g_new (double, nb), sum = 0, ink = 0;
+      block_means (la, 8, ma);
+      block_means (lb, 8, mb);
+      for (size_t i = 0; i < nb; i++)
+        {
+          sum += fabs (ma[i] - mb[i]);
+          ink += 255 - mb[i];
+        }
+      g_test_message ("legend box, SVG vs PNG: mean |Δ| %.2f over %zu block channels", sum / nb, nb);
+      /* Common practice (no single source): as in /chart/export/svg, two
+       * rasterisers of one picture agree within a few levels over 8 × 8
+       * blocks; a legend missing from either would differ by tens */
+      g_assert_cmpfloat (sum / nb, <, 4.0);
+      g_assert_cmpfloat (ink / nb, >, 5.0);   /* and the box is not blank */
+      g_free (ma);
+      g_free (mb);
+      g_object_unref (la);
+      g_object_unref (lb);
+      g_object_unref (a);
+    }
+  else
+    g_test_message ("no SVG loader for gdk-pixbuf: the SVG legend not compared");
+  g_object_unref (b);
+  g_strfreev (entries);
+  rugosa_chart_free (chart);
+  g_free (pdf);
+  g_free (svg);
+  g_free (png);
+}
+
+/* An export carries no selection: the scene with its selected line
+ * exports exactly as with that line pinned instead, while the window's
+ * drawing of the same scene shows the ring. */
+static void
+test_export_no_selection (void)
+{
+  static SampleSet set;
+  RugosaChartSpec spec;
+  GError *error = NULL;
+  char *sel = tmp_path ("sel.svg"), *pin = tmp_path ("pin.svg");
+  char *da, *db;
+  gsize na, nb;
+  size_t selected = G_MAXSIZE;
+  sample_scene (&set);
+  for (size_t i = 0; i < set.n; i++)
+    if (set.lines[i].selected)
+      selected = i;
+  g_assert_cmpuint (selected, <, set.n);
+  rugosa_chart_spec_init (&spec);
+  g_assert_true (rugosa_chart_export (&spec, set.lines, set.n, RUGOSA_CHART_FORMAT_SVG, 1200, 760,
+                                      TEST_DATE, sel, &error));
+  set.lines[selected].selected = 0;
+  set.lines[selected].pinned = 1;
+  g_assert_true (rugosa_chart_export (&spec, set.lines, set.n, RUGOSA_CHART_FORMAT_SVG, 1200, 760,
+                                      TEST_DATE, pin, &error));
+  g_assert_no_error (error);
+  g_assert_true (g_file_get_contents (sel, &da, &na, NULL));
+  g_assert_true (g_file_get_contents (pin, &db, &nb, NULL));
+  /* Cairo numbers its SVG surfaces across the process: the names aside,
+   * the two files are the same drawing */
+  GRegex *ids = g_regex_new ("surface[0-9]+", 0, 0, NULL);
+  char *ca = g_regex_replace_literal (ids, da, (gssize) na, 0, "surface", 0, NULL);
+  char *cb = g_regex_replace_literal (ids, db, (gssize) nb, 0, "surface", 0, NULL);
+  g_assert_cmpstr (ca, ==, cb);
+  g_regex_unref (ids);
+  g_free (ca);
+  g_free (cb);
+  g_free (da);
+  g_free (db);
+
+  /* the control: drawn for the window, the selection shows */
+  spec.width = 1200;
+  spec.height = 760;
+  RugosaChart *chart = rugosa_chart_new ();
+  g_assert_cmpint (rugosa_chart_set_spec (chart, &spec, NULL), ==, RG_OK);
+  rugosa_chart_set_lines (chart, set.lines, set.n);
+  cairo_surface_t *pinned = render (chart);
+  set.lines[selected].selected = 1;
+  set.lines[selected].pinned = 0;
+  rugosa_chart_set_lines (chart, set.lines, set.n);
+  cairo_surface_t *ring = render (chart);
+  const int stride = cairo_image_surface_get_stride (ring);
+  g_assert_true (memcmp (cairo_image_surface_get_data (ring), cairo_image_surface_get_data (pinned),
+                         (size_t) stride * 760) != 0);
+  cairo_surface_destroy (ring);
+  cairo_surface_destroy (pinned);
+  rugosa_chart_free (chart);
+  g_free (sel);
+  g_free (pin);
+}
+
+/* The heading: a title and the conditions over the plot, which moves
+ * down to make room; without a title nothing changes. */
+static void
+test_export_heading (void)
+{
+  RugosaChartSpec spec;
+  rugosa_chart_spec_init (&spec);
+  RugosaChart *chart = rugosa_chart_new ();
+  g_assert_cmpint (rugosa_chart_set_spec (chart, &spec, NULL), ==, RG_OK);
+  const RugosaChartRect plain = rugosa_chart_plot_area (chart);
+  g_strlcpy (spec.title, "Riser options", sizeof spec.title);
+  g_strlcpy (spec.conditions, "Service age: 25 years  ·  Friction model: Colebrook (1939)",
+             sizeof spec.conditions);
+  g_assert_cmpint (rugosa_chart_set_spec (chart, &spec, NULL), ==, RG_OK);
+  const RugosaChartRect headed = rugosa_chart_plot_area (chart);
+  g_assert_cmpfloat (headed.y, >, plain.y);
+  g_assert_cmpfloat (headed.y + headed.height, ==, plain.y + plain.height);
+  /* a new age text redraws the legend only, never the background */
+  const unsigned builds = rugosa_chart_background_builds (chart);
+  cairo_surface_t *s = render (chart);
+  cairo_surface_destroy (s);
+  g_strlcpy (spec.age_text, "7 years", sizeof spec.age_text);
+  g_assert_cmpint (rugosa_chart_set_spec (chart, &spec, NULL), ==, RG_OK);
+  s = render (chart);
+  cairo_surface_destroy (s);
+  g_assert_cmpuint (rugosa_chart_background_builds (chart), ==, builds + 1);
+  rugosa_chart_free (chart);
+}
+
 int
 main (int argc, char **argv)
 {
@@ -1096,6 +1379,10 @@ main (int argc, char **argv)
   g_test_add_func ("/chart/export/pdf-text", test_export_pdf_text);
   g_test_add_func ("/chart/export/svg", test_export_svg);
   g_test_add_func ("/chart/spec/magnify", test_magnify);
+  g_test_add_func ("/chart/export/no-selection", test_export_no_selection);
+  g_test_add_func ("/chart/export/heading", test_export_heading);
+  g_test_add_func ("/chart/legend/entries", test_legend_entries);
+  g_test_add_func ("/chart/overlay/small-share", test_labels_small_share);
   const int result = g_test_run ();
   if (g_getenv ("RUGOSA_CHART_KEEP") == NULL)
     remove_tmp ();

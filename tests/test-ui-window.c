@@ -28,6 +28,8 @@
 #include "rugosa-results-table.h"
 #include "rugosa-quantity-entry.h"
 #include "rugosa-window.h"
+/* the window's visibility, to pin a line as its list's pin button does */
+#include "rugosa-window-private.h"
 #include "ui-harness.h"
 
 static RugosaApplication *app;
@@ -576,6 +578,91 @@ test_export_corrected_name_asks (void)
   ui_harness_close_window (win);
 }
 
+/* The export dialog opens with the choices of the last export that
+ * succeeded: size, format and the heading check button; the name offered
+ * carries the format's extension. */
+static void
+test_export_remembers (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  g_autofree char *folder = g_build_filename (tmpdir, "export-remember", NULL);
+  g_autofree char *written = g_build_filename (folder, "remembered.svg", NULL);
+  g_autoptr (GSettings) settings = g_settings_new ("org.rugosa.Rugosa");
+  g_autofree char *offered = NULL;
+  GtkFileChooser *chooser;
+
+  g_assert_cmpint (g_mkdir_with_parents (folder, 0700), ==, 0);
+  g_settings_reset (settings, "export-size");
+  g_settings_reset (settings, "export-format");
+  g_settings_reset (settings, "export-heading");
+
+  ui_harness_click (action_button (win, "win.export-chart", NULL));
+  chooser = wait_for_chooser (win);
+  /* the schema's defaults */
+  g_assert_cmpstr (gtk_file_chooser_get_choice (chooser, "format"), ==, "png");
+  g_assert_cmpstr (gtk_file_chooser_get_choice (chooser, "size"), ==, "1280x800");
+  g_assert_cmpstr (gtk_file_chooser_get_choice (chooser, "heading"), ==, "false");
+  pick_shown (GTK_WIDGET (chooser), "Size", "960 × 600 (slides)");
+  gtk_file_chooser_set_choice (chooser, "heading", "true");
+  fill_chooser (chooser, folder, "Format", "SVG", "remembered");
+  g_assert_true (ui_harness_wait_until (file_exists, written, 5000));
+  ui_harness_drain ();
+  g_assert_cmpstr (g_settings_get_string (settings, "export-format"), ==, "svg");
+  g_assert_cmpstr (g_settings_get_string (settings, "export-size"), ==, "960x600");
+  g_assert_true (g_settings_get_boolean (settings, "export-heading"));
+
+  ui_harness_click (action_button (win, "win.export-chart", NULL));
+  chooser = wait_for_chooser (win);
+  g_assert_cmpstr (gtk_file_chooser_get_choice (chooser, "format"), ==, "svg");
+  g_assert_cmpstr (gtk_file_chooser_get_choice (chooser, "size"), ==, "960x600");
+  g_assert_cmpstr (gtk_file_chooser_get_choice (chooser, "heading"), ==, "true");
+  offered = gtk_file_chooser_get_current_name (chooser);
+  g_assert_true (g_str_has_suffix (offered, ".svg"));
+  ui_harness_click (gtk_dialog_get_widget_for_response (GTK_DIALOG (chooser), GTK_RESPONSE_CANCEL));
+  ui_harness_drain ();
+  g_settings_reset (settings, "export-size");
+  g_settings_reset (settings, "export-format");
+  g_settings_reset (settings, "export-heading");
+  ui_harness_close_window (win);
+}
+
+/* An exported SVG carries no selection: with line 0 selected and line 1
+ * pinned it is the same drawing as with line 1 selected and line 0
+ * pinned (each selected line drawn as a pinned one, without its ring). */
+static void
+test_export_no_selection (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaLine *l0 = rugosa_project_get_line (project, 0), *l1 = rugosa_project_get_line (project, 1);
+  g_autofree char *a = g_build_filename (tmpdir, "selected-0.svg", NULL);
+  g_autofree char *b = g_build_filename (tmpdir, "selected-1.svg", NULL);
+  g_autofree char *da = NULL, *db = NULL;
+  g_autofree char *ca = NULL, *cb = NULL;
+  g_autoptr (GRegex) ids = g_regex_new ("surface[0-9]+", 0, 0, NULL);
+  g_autoptr (GError) error = NULL;
+
+  select_line (win, 0);
+  rugosa_visibility_set_pinned (win->visibility, l1, TRUE);
+  ui_harness_drain ();
+  g_assert_true (rugosa_window_export_chart_to (win, a, RUGOSA_CHART_FORMAT_SVG, 960, 600, &error));
+  g_assert_no_error (error);
+  select_line (win, 1);
+  rugosa_visibility_set_pinned (win->visibility, l1, FALSE);
+  rugosa_visibility_set_pinned (win->visibility, l0, TRUE);
+  ui_harness_drain ();
+  g_assert_true (rugosa_window_export_chart_to (win, b, RUGOSA_CHART_FORMAT_SVG, 960, 600, &error));
+  g_assert_no_error (error);
+  rugosa_visibility_set_pinned (win->visibility, l0, FALSE);
+  g_assert_true (g_file_get_contents (a, &da, NULL, NULL));
+  g_assert_true (g_file_get_contents (b, &db, NULL, NULL));
+  /* Cairo numbers its SVG surfaces across the process: names aside */
+  ca = g_regex_replace_literal (ids, da, -1, 0, "surface", 0, NULL);
+  cb = g_regex_replace_literal (ids, db, -1, 0, "surface", 0, NULL);
+  g_assert_cmpstr (ca, ==, cb);
+  ui_harness_close_window (win);
+}
+
 /* The results table is written as CSV into a file named .csv. */
 static void
 test_export_csv_extension (void)
@@ -967,6 +1054,8 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/files/export-format-wins", test_export_format_wins);
   g_test_add_func ("/ui/files/export-corrected-name-asks", test_export_corrected_name_asks);
   g_test_add_func ("/ui/files/export-csv-extension", test_export_csv_extension);
+  g_test_add_func ("/ui/files/export-remembers", test_export_remembers);
+  g_test_add_func ("/ui/files/export-no-selection", test_export_no_selection);
   g_test_add_func ("/ui/files/quit-discard", test_quit_discard);
   g_test_add_func ("/ui/files/quit-save", test_quit_save);
   g_test_add_func ("/ui/files/quit-save-as", test_quit_save_as);

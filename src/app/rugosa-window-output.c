@@ -27,6 +27,23 @@ _rugosa_window_today (void)
   return g_date_time_format (now, "%Y-%m-%d");
 }
 
+/* The title of an exported chart: the project's file name without its
+ * extension, or what the window calls an unsaved project. */
+static char *
+_rugosa_window_export_title (RugosaWindow *self)
+{
+  g_autofree char *base = NULL;
+  char *dot;
+
+  if (self->file == NULL)
+    return g_strdup (_("Unsaved project"));
+  base = g_file_get_basename (self->file);
+  dot = strrchr (base, '.');
+  if (dot != NULL && dot != base)
+    *dot = '\0';
+  return g_steal_pointer (&base);
+}
+
 gboolean
 rugosa_window_export_chart_to (RugosaWindow       *self,
                                const char         *path,
@@ -34,6 +51,18 @@ rugosa_window_export_chart_to (RugosaWindow       *self,
                                double              width,
                                double              height,
                                GError            **error)
+{
+  return rugosa_window_export_chart_with (self, path, format, width, height, FALSE, error);
+}
+
+gboolean
+rugosa_window_export_chart_with (RugosaWindow       *self,
+                                 const char         *path,
+                                 RugosaChartFormat   format,
+                                 double              width,
+                                 double              height,
+                                 gboolean            heading,
+                                 GError            **error)
 {
   guint pos = gtk_single_selection_get_selected (self->selection);
   const int selected = pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos;
@@ -52,6 +81,12 @@ rugosa_window_export_chart_to (RugosaWindow       *self,
     }
   input = rugosa_chart_input_new_view (self->project, selected, NULL,
                                        rugosa_visibility_chart_view (self->visibility));
+  if (heading)
+    {
+      g_autofree char *title = _rugosa_window_export_title (self);
+      rugosa_chart_input_set_heading (input, self->project, title);
+    }
+  /* no selection ring in the file (rugosa_chart_export drops it) */
   return rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
                               width, height, date, path, error);
 }
@@ -108,6 +143,11 @@ typedef struct
   RugosaChartFormat  format;
   double             width;
   double             height;
+  gboolean           heading;
+  gboolean           offered_heading;   /* the friction chart's dialog */
+  /* the dialog's choices, remembered once the export succeeds */
+  const char        *size_id;
+  const char        *format_id;
 } RugosaExportJob;
 
 static void
@@ -127,7 +167,8 @@ _rugosa_window_export_run (RugosaWindow    *self,
   if (job->csv)
     ok = rugosa_window_export_csv_to (self, job->path, &error);
   else
-    ok = rugosa_window_export_chart_to (self, job->path, job->format, job->width, job->height, &error);
+    ok = rugosa_window_export_chart_with (self, job->path, job->format, job->width, job->height,
+                                          job->heading, &error);
   if (!ok)
     {
       const char *heading = job->csv ? _("Could not export the results") : _("Could not export the chart");
@@ -143,6 +184,12 @@ _rugosa_window_export_run (RugosaWindow    *self,
     {
       g_autofree char *base = g_path_get_basename (job->path);
       g_autofree char *text = g_strdup_printf (_("Chart exported to %s."), base);
+
+      /* the next export starts from the choices that worked */
+      g_settings_set_string (self->settings, "export-size", job->size_id);
+      g_settings_set_string (self->settings, "export-format", job->format_id);
+      if (job->offered_heading)
+        g_settings_set_boolean (self->settings, "export-heading", job->heading);
       _rugosa_window_toast (self, text);
     }
 }
@@ -212,16 +259,27 @@ _rugosa_window_export_response (GtkNativeDialog *dialog,
   format_id = gtk_file_chooser_get_choice (GTK_FILE_CHOOSER (dialog), "format");
 
   job = g_new0 (RugosaExportJob, 1);
-  job->width = 960, job->height = 600;
+  job->width = export_sizes[0].w, job->height = export_sizes[0].h;
+  job->size_id = export_sizes[0].id;
   for (guint i = 0; i < G_N_ELEMENTS (export_sizes); i++)
     if (g_strcmp0 (size_id, export_sizes[i].id) == 0)
-      job->width = export_sizes[i].w, job->height = export_sizes[i].h;
+      {
+        job->width = export_sizes[i].w, job->height = export_sizes[i].h;
+        job->size_id = export_sizes[i].id;
+      }
   for (guint i = 0; i < G_N_ELEMENTS (export_formats); i++)
     if (g_strcmp0 (format_id, export_formats[i].id) == 0)
       f = i;
   /* The Format shown in the dialog is the format written; the file's
    * extension is made to say the same, whatever extension was typed. */
   job->format = export_formats[f].format;
+  job->format_id = export_formats[f].id;
+  {
+    const char *heading = gtk_file_chooser_get_choice (GTK_FILE_CHOOSER (dialog), "heading");
+
+    job->offered_heading = heading != NULL;
+    job->heading = g_strcmp0 (heading, "true") == 0;
+  }
   job->path = _rugosa_window_with_extension (typed, export_formats[f].ext, TRUE);
   g_object_unref (dialog);
   _rugosa_window_export_settled (self, typed, job);
@@ -238,27 +296,56 @@ _rugosa_window_export_chart (GtkWidget  *widget,
   const char *size_labels[G_N_ELEMENTS (export_sizes) + 1] = { 0 };
   const char *format_ids[G_N_ELEMENTS (export_formats) + 1] = { 0 };
   const char *format_labels[G_N_ELEMENTS (export_formats) + 1] = { 0 };
+  g_autofree char *size = g_settings_get_string (self->settings, "export-size");
+  g_autofree char *format = g_settings_get_string (self->settings, "export-format");
+  guint f = 0;
 
-  for (guint i = 0; i < G_N_ELEMENTS (export_sizes); i++)
-    {
-      size_ids[i] = export_sizes[i].id;
-      size_labels[i] = _(export_sizes[i].label);
-    }
+  /* The last export's choices first: GTK 4.8's own dialog shows the
+   * first option of a drop-down whatever gtk_file_chooser_set_choice
+   * asks, so the remembered one leads its list; the others keep their
+   * order. */
   for (guint i = 0; i < G_N_ELEMENTS (export_formats); i++)
-    {
-      format_ids[i] = export_formats[i].id;
-      format_labels[i] = export_formats[i].label;
-    }
+    if (g_str_equal (format, export_formats[i].id))
+      f = i;
+  for (guint i = 0, n = 0; i < G_N_ELEMENTS (export_sizes); i++)
+    if (g_str_equal (size, export_sizes[i].id))
+      {
+        size_ids[n] = export_sizes[i].id;
+        size_labels[n++] = _(export_sizes[i].label);
+      }
+  for (guint i = 0, n = size_ids[0] != NULL ? 1 : 0; i < G_N_ELEMENTS (export_sizes); i++)
+    if (!g_str_equal (size, export_sizes[i].id))
+      {
+        size_ids[n] = export_sizes[i].id;
+        size_labels[n++] = _(export_sizes[i].label);
+      }
+  format_ids[0] = export_formats[f].id;
+  format_labels[0] = export_formats[f].label;
+  for (guint i = 0, n = 1; i < G_N_ELEMENTS (export_formats); i++)
+    if (i != f)
+      {
+        format_ids[n] = export_formats[i].id;
+        format_labels[n++] = export_formats[i].label;
+      }
   dialog = gtk_file_chooser_native_new (_("Export the Chart"), GTK_WINDOW (self),
                                         GTK_FILE_CHOOSER_ACTION_SAVE, _("_Export"), _("_Cancel"));
   gtk_file_chooser_add_choice (GTK_FILE_CHOOSER (dialog), "format", _("Format"), format_ids, format_labels);
-  gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "format", export_formats[0].id);
+  /* the last export's choices (the schema's choices keep them valid) */
+  gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "format", export_formats[f].id);
   gtk_file_chooser_add_choice (GTK_FILE_CHOOSER (dialog), "size", _("Size"), size_ids, size_labels);
-  gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "size", "1280x800");
+  gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "size", size);
+  if (_rugosa_window_chart_view (self) == RUGOSA_CHART_VIEW_FRICTION)
+    {
+      /* a check button: the title and the conditions over the chart */
+      gtk_file_chooser_add_choice (GTK_FILE_CHOOSER (dialog), "heading",
+                                   _("Title and conditions"), NULL, NULL);
+      gtk_file_chooser_set_choice (GTK_FILE_CHOOSER (dialog), "heading",
+                                   g_settings_get_boolean (self->settings, "export-heading") ? "true" : "false");
+    }
   {
-    /* TRANSLATORS: the file name offered for an exported chart: the view's
-     * name, e.g. "System curves.png" */
-    g_autofree char *name = g_strdup_printf (_("%s.png"), rugosa_chart_view_title (_rugosa_window_chart_view (self)));
+    /* the view's name and the format's extension, e.g. "System curves.png" */
+    g_autofree char *name = g_strconcat (rugosa_chart_view_title (_rugosa_window_chart_view (self)),
+                                         export_formats[f].ext, NULL);
 
     gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), name);
   }
@@ -348,6 +435,8 @@ _rugosa_window_draw_page (GtkPrintOperation *op,
   input->spec.scale = 1;
   input->spec.theme = RUGOSA_CHART_THEME_LIGHT;
   g_strlcpy (input->spec.footer_date, date, sizeof input->spec.footer_date);
+  /* a print shows no selection ring, as an export */
+  rugosa_chart_lines_for_export (input->lines, input->n_lines);
   if (rugosa_chart_set_spec (chart, &input->spec, &err) == RG_OK)
     {
       rugosa_chart_set_lines (chart, input->lines, input->n_lines);

@@ -57,6 +57,15 @@ gboolean       rugosa_window_export_chart_to (RugosaWindow      *self,
                                               double             width,
                                               double             height,
                                               GError           **error);
+/* The same, with the title (the project's file name) and the conditions
+ * over the chart when `heading` (the friction chart only). */
+gboolean       rugosa_window_export_chart_with (RugosaWindow    *self,
+                                                const char      *path,
+                                                RugosaChartFormat format,
+                                                double           width,
+                                                double           height,
+                                                gboolean         heading,
+                                                GError         **error);
 gboolean       rugosa_window_export_csv_to   (RugosaWindow      *self,
                                               const char        *path,
                                               GError           **error);

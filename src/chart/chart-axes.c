@@ -194,7 +194,7 @@ _rugosa_chart_draw_axes (RugosaChart *chart, cairo_t *cr,
   PangoLayout *cap = _rugosa_chart_text (chart, caption, lay->font_tick, TEXT_PLAIN, 0);
   _rugosa_chart_text_size (cap, &w, &h);
   if (w < lay->width - pl->x - 160 * k)
-    _rugosa_chart_show (cr, cap, pl->x, 6 * k, &p->muted, NULL, 0);
+    _rugosa_chart_show (cr, cap, pl->x, lay->heading_h + 6 * k, &p->muted, NULL, 0);
 
   /* Threshold values above the frame. */
   double x_lam, x_turb, yy;

@@ -139,9 +139,30 @@ _rugosa_chart_layout (const RugosaChartSpec *spec, ChartLayout *lay)
       lay->footer_h = lines * lay->font_footer * 1.3 + 12.0 * k;
     }
 
+  /* The heading: the title on one line (cut with an ellipsis), the
+   * conditions wrapped like the footer. */
+  lay->heading_h = 0;
+  if (spec->title[0] != '\0')
+    {
+      lay->heading_h = 10.0 * k + lay->font_title * 1.3 * 1.35;
+      if (spec->conditions[0] != '\0')
+        {
+          const double chars = (double) g_utf8_strlen (spec->conditions, -1);
+          const double per_line = fmax (1.0, (w - 32.0 * k) / (0.62 * lay->font_footer * 1.1));
+          lay->heading_h += ceil (chars / per_line) * lay->font_footer * 1.1 * 1.35;
+        }
+      lay->heading_h = ceil (lay->heading_h);
+    }
+
   const double left = 14 * k + lay->font_title * 1.5 + lay->font_tick * 3.6;
-  const double right = 20 * k;
-  const double top = 10 * k + lay->font_title * 1.5 + lay->font_tick * 1.5;
+  /* A wide chart (twice as wide as high or more) gives the legend a
+   * column of its own beside the plot, where it hides nothing. */
+  lay->side_w = 0;
+  if ((spec->show & RUGOSA_CHART_SHOW_LEGEND) && w >= 2.0 * h)
+    lay->side_w = round (fmin (fmax (0.17 * w, 170 * k), 300 * k));
+  const double right = 20 * k + lay->side_w;
+  const double top = 10 * k + lay->font_title * 1.5 + lay->font_tick * 1.5
+                     + lay->heading_h;
   const double bottom = 10 * k + lay->font_tick * 1.9 + lay->font_title * 1.7
                         + lay->footer_h;
 

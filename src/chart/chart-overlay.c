@@ -326,105 +326,6 @@ draw_tag (RugosaChart *chart, cairo_t *cr, size_t i, const RugosaChartPalette *p
   _rugosa_chart_show (cr, layout, b->x + (b->width - tw) / 2, b->y, &p->ink, NULL, 0);
 }
 
-static void
-draw_legend (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
-{
-  const ChartLayout *lay = &chart->lay;
-  const RugosaChartRect *r = &chart->legend;
-  const double k = lay->k;
-  if (r->width <= 0)
-    return;
-  const double row = lay->font_label * 1.45;
-  const size_t rows = (size_t) floor ((r->height - 10 * k) / row + 0.5);
-  RugosaChartRgba bg = p->plot, border = p->grid;
-  border.a = fmin (1, border.a * 3);
-  /* everything inside the box, so its cached image is opaque */
-  cairo_rectangle (cr, r->x, r->y, r->width, r->height);
-  _rugosa_chart_set_rgba (cr, &bg);
-  cairo_fill (cr);
-  cairo_rectangle (cr, r->x + 0.5, r->y + 0.5, r->width - 1, r->height - 1);
-  _rugosa_chart_set_rgba (cr, &border);
-  cairo_set_line_width (cr, 1.0);
-  cairo_stroke (cr);
-
-  cairo_save (cr);
-  cairo_rectangle (cr, r->x, r->y, r->width - 4 * k, r->height);
-  cairo_clip (cr);
-  for (size_t row_i = 0; row_i < rows && row_i < chart->n_lines; row_i++)
-    {
-      const double y = r->y + 5 * k + (double) row_i * row;
-      const int i = _rugosa_chart_legend_line (chart, row_i);
-      g_autofree char *more = NULL;
-      const char *name = chart->lines[i].name;
-      int is_more = row_i == rows - 1 && chart->n_lines > rows;
-      if (is_more)
-        {
-          more = _rugosa_chart_legend_more (chart, rows);
-          name = more;
-        }
-      else
-        draw_marker (cr, i, r->x + 11 * k, y + row / 2, 3.8 * k,
-                     &chart->lines[i].line.colour, NULL, k, 0);
-      PangoLayout *l = _rugosa_chart_text (chart, name, lay->font_label * 0.95,
-                                           !is_more && chart->lines[i].line.selected
-                                             ? TEXT_BOLD : TEXT_PLAIN, 0);
-      double w, h;
-      _rugosa_chart_text_size (l, &w, &h);
-      _rugosa_chart_show (cr, l, r->x + 22 * k, y + (row - h) / 2,
-                          is_more ? &p->muted : &p->ink, NULL, 0);
-    }
-  cairo_restore (cr);
-}
-
-/* The legend changes only with the lines' names, colours and selection,
- * not with their age or hover: keep it as pixels between frames. */
-static void
-draw_legend_cached (RugosaChart *chart, cairo_t *cr, const RugosaChartPalette *p)
-{
-  const RugosaChartRect *r = &chart->legend;
-  if (r->width <= 0)
-    return;
-  GString *key = g_string_new (NULL);
-  g_string_append_printf (key, "%d|%.3f|%.3f|%g|%g|%g|%g", chart->spec.theme, chart->lay.k,
-                          chart->spec.scale, r->x, r->y, r->width, r->height);
-  /* the rows shown, and how many are left out */
-  const size_t rows = _rugosa_chart_legend_rows (chart);
-  g_string_append_printf (key, "|%zu", chart->n_lines);
-  for (size_t row = 0; row < rows; row++)
-    {
-      const int i = _rugosa_chart_legend_line (chart, row);
-      const RugosaChartLine *l = &chart->lines[i].line;
-      g_string_append_printf (key, "|%s|%a|%a|%a|%a|%d", chart->lines[i].name, l->colour.r,
-                              l->colour.g, l->colour.b, l->colour.a, l->selected);
-    }
-  if (chart->legend_img == NULL || chart->legend_key == NULL
-      || !g_string_equal (key, chart->legend_key))
-    {
-      const double s = chart->spec.scale;
-      g_clear_pointer (&chart->legend_img, cairo_surface_destroy);
-      chart->legend_img = cairo_image_surface_create (CAIRO_FORMAT_ARGB32,
-                                                      (int) ceil (r->width * s),
-                                                      (int) ceil (r->height * s));
-      cairo_surface_set_device_scale (chart->legend_img, s, s);
-      cairo_t *lc = cairo_create (chart->legend_img);
-      cairo_translate (lc, -r->x, -r->y);
-      cairo_set_antialias (lc, CAIRO_ANTIALIAS_FAST); /* as in the overlay */
-      draw_legend (chart, lc, p);
-      cairo_destroy (lc);
-      if (chart->legend_key)
-        g_string_free (chart->legend_key, TRUE);
-      chart->legend_key = key;
-    }
-  else
-    g_string_free (key, TRUE);
-  cairo_save (cr);
-  cairo_set_source_surface (cr, chart->legend_img, r->x, r->y);
-  cairo_set_operator (cr, CAIRO_OPERATOR_SOURCE);
-  cairo_rectangle (cr, r->x, r->y, r->width, r->height);
-  cairo_fill (cr);
-  cairo_restore (cr);
-}
-
 /* Drawing order: 0 the crowd, 1 pinned or hovered, 2 the selected line. */
 static int
 layer (const RugosaChart *chart, size_t i)
@@ -459,10 +360,6 @@ _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached)
     for (size_t i = 0; i < chart->n_lines; i++)
       if (layer (chart, i) == pass)
         draw_line_marker (chart, cr, i, &p);
-  if (cached)
-    draw_legend_cached (chart, cr, &p);
-  else
-    draw_legend (chart, cr, &p);
   for (size_t i = 0; i < chart->n_lines; i++)
     draw_tag (chart, cr, i, &p);
   for (int pass = 0; pass < 3; pass++)
@@ -470,6 +367,9 @@ _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached)
       if (layer (chart, i) == pass)
         draw_label (chart, cr, i, &p);
   cairo_restore (cr);
+  /* outside the plot's clip: a wide chart's legend stands beside it; no
+   * label or number ever overlaps it */
+  _rugosa_chart_draw_legend (chart, cr, &p, cached);
 }
 
 void
@@ -488,4 +388,28 @@ _rugosa_chart_draw_footer (RugosaChart *chart, cairo_t *cr)
                                        lay->width - 32 * k);
   _rugosa_chart_show (cr, l, 16 * k, lay->height - lay->footer_h + 5 * k,
                       &p.muted, NULL, 0);
+}
+
+void
+_rugosa_chart_draw_heading (RugosaChart *chart, cairo_t *cr)
+{
+  const ChartLayout *lay = &chart->lay;
+  const double k = lay->k;
+  RugosaChartPalette p;
+  double w, h;
+  if (chart->spec.title[0] == '\0')
+    return;
+  rugosa_chart_palette (chart->spec.theme, &p);
+  PangoLayout *t = _rugosa_chart_text (chart, chart->spec.title, lay->font_title * 1.3,
+                                       TEXT_BOLD, 0);
+  pango_layout_set_width (t, (int) ((lay->width - 32 * k) * PANGO_SCALE));
+  pango_layout_set_ellipsize (t, PANGO_ELLIPSIZE_END);
+  _rugosa_chart_text_size (t, &w, &h);
+  _rugosa_chart_show (cr, t, 16 * k, 8 * k, &p.ink, NULL, 0);
+  if (chart->spec.conditions[0] != '\0')
+    {
+      PangoLayout *c = _rugosa_chart_text (chart, chart->spec.conditions, lay->font_footer * 1.1,
+                                           TEXT_PLAIN, lay->width - 32 * k);
+      _rugosa_chart_show (cr, c, 16 * k, 8 * k + h + 1 * k, &p.muted, NULL, 0);
+    }
 }

@@ -23,6 +23,9 @@ typedef struct {
   double lx0, lx1, ly0, ly1;       /* log10 of the axis ranges */
   double font_tick, font_title, font_curve, font_band, font_label, font_footer;
   double footer_h;
+  double heading_h;                /* the title and conditions (0: none) */
+  double side_w;                   /* a wide chart's column for the legend,
+                                    * right of the plot (0: none) */
 } ChartLayout;
 
 typedef struct {
@@ -80,6 +83,9 @@ struct RugosaChart {
   ChartLabel *labels;
   size_t n_labels;
   RugosaChartRect legend;
+  GArray *legend_entries;          /* chart-legend.c: what it shows, where */
+  double legend_rule;              /* the rule over the key (0: none) */
+  double legend_num_w;             /* the width of the numbers' column */
   cairo_surface_t *legend_img;     /* the legend as pixels, and its key */
   GString *legend_key;
 
@@ -209,9 +215,14 @@ void _rugosa_chart_label_size (RugosaChart *chart, size_t i, int compact,
                                double *w, double *h);
 PangoLayout *_rugosa_chart_tag_layout (RugosaChart *chart, size_t i,
                                        double *w, double *h);
-size_t _rugosa_chart_legend_rows (const RugosaChart *chart);
-int _rugosa_chart_legend_line (const RugosaChart *chart, size_t row);
-char *_rugosa_chart_legend_more (const RugosaChart *chart, size_t rows);
+
+/* chart-legend.c: the legend's entries and its place (the markers, the
+ * background's labels and curves are known), its drawing (`cached`: kept
+ * as pixels between frames) */
+RugosaChartRect _rugosa_chart_legend_geometry (RugosaChart *chart);
+void _rugosa_chart_draw_legend (RugosaChart *chart, cairo_t *cr,
+                                const RugosaChartPalette *p, int cached);
+void _rugosa_chart_free_legend (RugosaChart *chart);
 
 /* chart.c: place the labels unless the last placement still holds */
 void _rugosa_chart_ensure_placement (RugosaChart *chart);
@@ -219,6 +230,8 @@ void _rugosa_chart_ensure_placement (RugosaChart *chart);
 /* chart-overlay.c */
 void _rugosa_chart_draw_overlay (RugosaChart *chart, cairo_t *cr, int cached);
 void _rugosa_chart_draw_footer (RugosaChart *chart, cairo_t *cr);
+/* The title and conditions over the plot, when the spec has a title. */
+void _rugosa_chart_draw_heading (RugosaChart *chart, cairo_t *cr);
 
 static inline int
 _rugosa_chart_rects_overlap (const RugosaChartRect *a, const RugosaChartRect *b)

@@ -72,6 +72,7 @@ rugosa_chart_free (RugosaChart *chart)
   _rugosa_chart_free_curves (chart);
   g_clear_pointer (&chart->bg, cairo_surface_destroy);
   g_clear_pointer (&chart->legend_img, cairo_surface_destroy);
+  _rugosa_chart_free_legend (chart);
   if (chart->legend_key)
     g_string_free (chart->legend_key, TRUE);
   g_free (chart->labels);
@@ -118,7 +119,9 @@ spec_equal (const RugosaChartSpec *a, const RugosaChartSpec *b)
       || a->transition.re_turbulent_min != b->transition.re_turbulent_min
       || a->n_family != b->n_family || a->show != b->show
       || a->magnify != b->magnify
-      || strcmp (a->footer_date, b->footer_date) != 0)
+      || strcmp (a->footer_date, b->footer_date) != 0
+      || strcmp (a->title, b->title) != 0
+      || strcmp (a->conditions, b->conditions) != 0)
     return 0;
   for (size_t i = 0; i < a->n_family; i++)
     if (a->family[i] != b->family[i])
@@ -134,9 +137,21 @@ rugosa_chart_set_spec (RugosaChart *chart, const RugosaChartSpec *spec,
   if (st != RG_OK)
     return st;
   if (spec_equal (spec, &chart->spec))
-    return RG_OK;
+    {
+      /* the age only names the legend's aging key: the legend may change
+       * size, the background stays */
+      if (strncmp (spec->age_text, chart->spec.age_text, RUGOSA_CHART_DATE_MAX) != 0)
+        {
+          g_strlcpy (chart->spec.age_text, spec->age_text, RUGOSA_CHART_DATE_MAX);
+          chart->placement_stale = 1;
+        }
+      return RG_OK;
+    }
   chart->spec = *spec;
   chart->spec.footer_date[RUGOSA_CHART_DATE_MAX - 1] = '\0';
+  chart->spec.title[RUGOSA_CHART_TITLE_MAX - 1] = '\0';
+  chart->spec.conditions[RUGOSA_CHART_CONDITIONS_MAX - 1] = '\0';
+  chart->spec.age_text[RUGOSA_CHART_DATE_MAX - 1] = '\0';
   _rugosa_chart_layout (&chart->spec, &chart->lay);
   trim_text_cache (chart);
   invalidate_all (chart);
@@ -251,6 +266,7 @@ build_background (RugosaChart *chart)
   cairo_t *cr = cairo_create (chart->bg);
   _rugosa_chart_draw_background (chart, cr);
   _rugosa_chart_draw_footer (chart, cr);
+  _rugosa_chart_draw_heading (chart, cr);
   cairo_destroy (cr);
   cairo_surface_flush (chart->bg);
   chart->bg_valid = 1;
@@ -298,6 +314,7 @@ rugosa_chart_draw_direct (RugosaChart *chart, cairo_t *cr)
   cairo_save (cr);
   _rugosa_chart_draw_background (chart, cr);
   _rugosa_chart_draw_footer (chart, cr);
+  _rugosa_chart_draw_heading (chart, cr);
   cairo_restore (cr);
   _rugosa_chart_draw_ladder (chart, cr);
   _rugosa_chart_draw_overlay (chart, cr, 0);
@@ -397,12 +414,41 @@ rugosa_chart_legend_box (RugosaChart *chart)
   return chart->legend;
 }
 
+double
+rugosa_chart_callout_share (RugosaChart *chart)
+{
+  _rugosa_chart_ensure_placement (chart);
+  const RugosaChartRect *pl = &chart->lay.plot;
+  double covered = 0;
+  for (size_t i = 0; i < chart->n_lines; i++)
+    {
+      const RugosaChartLabelInfo *li = &chart->labels[i].info;
+      if (li->visible)
+        covered += li->box.width * li->box.height;
+      if (li->numbered)
+        covered += li->tag.width * li->tag.height;
+    }
+  return pl->width > 0 && pl->height > 0 ? covered / (pl->width * pl->height) : 0;
+}
+
 /* --- export --- */
 
 static void
 export_draw (cairo_t *cr, gpointer data)
 {
   rugosa_chart_draw_direct (data, cr);
+}
+
+void
+rugosa_chart_lines_for_export (RugosaChartLine *lines, size_t n_lines)
+{
+  /* the selected line keeps its label, as a pinned one, without the ring */
+  for (size_t i = 0; i < n_lines; i++)
+    if (lines[i].selected)
+      {
+        lines[i].selected = 0;
+        lines[i].pinned = 1;
+      }
 }
 
 gboolean
@@ -433,9 +479,14 @@ rugosa_chart_export (const RugosaChartSpec *spec, const RugosaChartLine *lines,
       return FALSE;
     }
 
+  /* hover and the probe belong to the window's chart and never reach a
+   * new one; the selection is dropped here */
+  RugosaChartLine *shown = g_memdup2 (lines, (n_lines ? n_lines : 1) * sizeof *lines);
+  rugosa_chart_lines_for_export (shown, n_lines);
   chart = rugosa_chart_new ();
   rugosa_chart_set_spec (chart, &s, NULL);
-  rugosa_chart_set_lines (chart, lines, n_lines);
+  rugosa_chart_set_lines (chart, shown, n_lines);
+  g_free (shown);
   ok = _rugosa_chart_export_surface (format, width, height, s.footer_date,
                                      _("Friction chart"), path, export_draw, chart, error);
   rugosa_chart_free (chart);

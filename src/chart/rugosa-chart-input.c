@@ -11,6 +11,17 @@
 
 #include "chart/rugosa-chart-input.h"
 #include "model/rugosa-display.h"
+#include "model/rugosa-enums.h"
+#include "model/rugosa-fields.h"
+
+/* "25 years", as the window's service-age slider says it. */
+static char *
+_rugosa_chart_input_years (double age)
+{
+  g_autofree char *years = rugosa_display_significant_screen (age, 3);
+
+  return g_strdup_printf (ngettext ("%s year", "%s years", age == 1.0 ? 1 : 2), years);
+}
 
 void
 rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
@@ -24,6 +35,13 @@ rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
   spec->f_max = rugosa_settings_get_double (ps, "chart-f-max");
   spec->transition.re_laminar_max = rugosa_settings_get_double (ps, "re-laminar-max");
   spec->transition.re_turbulent_min = rugosa_settings_get_double (ps, "re-turbulent-min");
+  /* the legend's aging key names the age shown (no background change) */
+  spec->age_text[0] = '\0';
+  if (rugosa_settings_get_double (ps, "service-age") > 0.0)
+    {
+      g_autofree char *years = _rugosa_chart_input_years (rugosa_settings_get_double (ps, "service-age"));
+      g_strlcpy (spec->age_text, years, sizeof spec->age_text);
+    }
 }
 
 static RugosaChartRgba
@@ -337,4 +355,100 @@ rugosa_chart_input_free (RugosaChartInput *input)
   g_free (input->line_index);
   g_ptr_array_unref (input->owned);
   g_free (input);
+}
+
+/* "Label: value", the pairs of the conditions line. */
+static void
+_rugosa_chart_input_pair (GString    *out,
+                          const char *property,
+                          const char *value)
+{
+  if (out->len > 0)
+    g_string_append (out, "  ·  ");
+  /* TRANSLATORS: one condition of an exported chart, a field's label and
+   * its value, e.g. "Friction model: Colebrook (1939)" */
+  g_string_append_printf (out, _("%s: %s"), rugosa_field_label (rugosa_field_find (property)), value);
+}
+
+char *
+rugosa_chart_input_conditions (RugosaChartInput *input,
+                               RugosaProject    *project)
+{
+  RugosaSettings *ps = rugosa_project_get_settings (project);
+  const char *u_temp = rugosa_settings_get_unit (ps, RUGOSA_DISPLAY_TEMPERATURE);
+  g_autoptr (GString) out = g_string_new (NULL);
+  g_autoptr (GString) fluids = g_string_new (NULL);
+  g_autofree char *years = _rugosa_chart_input_years (rugosa_settings_get_double (ps, "service-age"));
+  const int model = rugosa_settings_get_friction_model (ps);
+
+  _rugosa_chart_input_pair (out, "service-age", years);
+  /* each kind of fluid of the lines drawn once, in list order, with the
+   * range of its temperatures: linear in the lines */
+  double t_min[RG_FLUID_N_KINDS], t_max[RG_FLUID_N_KINDS];
+  int order[RG_FLUID_N_KINDS], n_kinds = 0;
+  for (int k = 0; k < RG_FLUID_N_KINDS; k++)
+    t_min[k] = t_max[k] = -1.0;
+  for (size_t i = 0; i < input->n_lines; i++)
+    {
+      RugosaLine *line = rugosa_project_get_line (project, input->line_index[i]);
+      RgFluidSpec fs;
+
+      rugosa_line_get_fluid_spec (line, &fs);
+      if ((int) fs.kind < 0 || fs.kind >= RG_FLUID_N_KINDS)
+        continue;
+      if (t_min[fs.kind] < 0.0)
+        {
+          order[n_kinds++] = (int) fs.kind;
+          t_min[fs.kind] = t_max[fs.kind] = fs.temperature_k;
+        }
+      t_min[fs.kind] = MIN (t_min[fs.kind], fs.temperature_k);
+      t_max[fs.kind] = MAX (t_max[fs.kind], fs.temperature_k);
+    }
+  for (int o = 0; o < n_kinds; o++)
+    {
+      const int kind = order[o];
+      g_autofree char *lo = rugosa_display_format_screen (RG_QTY_TEMPERATURE, t_min[kind], u_temp);
+      g_autofree char *hi = rugosa_display_format_screen (RG_QTY_TEMPERATURE, t_max[kind], u_temp);
+      g_autofree char *one = NULL;
+
+      if (kind == RG_FLUID_CUSTOM)
+        /* a fluid given by its properties has no temperature to name */
+        one = g_strdup (rugosa_fluid_kind_title (kind));
+      else if (g_str_equal (lo, hi))
+        /* TRANSLATORS: a fluid of an exported chart's conditions: its
+         * property model and temperature, e.g. "Water (IAPWS-IF97) at 15 °C" */
+        one = g_strdup_printf (_("%s at %s"), rugosa_fluid_kind_title (kind), lo);
+      else
+        /* TRANSLATORS: the same for lines at several temperatures, e.g.
+         * "Water (IAPWS-IF97) at 5 °C to 60 °C" */
+        one = g_strdup_printf (_("%s at %s to %s"), rugosa_fluid_kind_title (kind), lo, hi);
+      if (fluids->len > 0)
+        g_string_append (fluids, "; ");
+      g_string_append (fluids, one);
+    }
+  if (fluids->len > 0)
+    _rugosa_chart_input_pair (out, "fluid-kind", fluids->str);
+  _rugosa_chart_input_pair (out, "friction-model", rg_friction_model_title ((RgFrictionModel) model));
+  return g_strdup (out->str);
+}
+
+void
+rugosa_chart_input_set_heading (RugosaChartInput *input,
+                                RugosaProject    *project,
+                                const char       *title)
+{
+  g_autofree char *conditions = NULL;
+
+  input->spec.title[0] = '\0';
+  input->spec.conditions[0] = '\0';
+  if (title == NULL || *title == '\0')
+    return;
+  /* cut on a character, never inside one */
+  g_utf8_strncpy (input->spec.title, title,
+                  MIN ((gsize) g_utf8_strlen (title, -1), (sizeof input->spec.title - 4) / 4));
+  conditions = rugosa_chart_input_conditions (input, project);
+  if (strlen (conditions) < sizeof input->spec.conditions)
+    g_strlcpy (input->spec.conditions, conditions, sizeof input->spec.conditions);
+  else
+    g_utf8_strncpy (input->spec.conditions, conditions, (sizeof input->spec.conditions - 4) / 4);
 }

@@ -55,8 +55,21 @@ RugosaChartInput *rugosa_chart_input_new_view (RugosaProject              *proje
                                                const RugosaChartInputView *view);
 void              rugosa_chart_input_free (RugosaChartInput *input);
 
-/* The spec's background fields from the project settings (size, scale
- * and theme are left as they are). */
+/* The heading of an exported chart: `title` over the plot and under it
+ * the conditions the chart is drawn for — the service age, the fluids of
+ * the lines drawn (by property model, with their temperatures) and the
+ * friction model — in the project's display units.  An empty or NULL
+ * title clears the heading. */
+void rugosa_chart_input_set_heading (RugosaChartInput *input,
+                                     RugosaProject    *project,
+                                     const char       *title);
+/* The conditions line alone (newly allocated). */
+char *rugosa_chart_input_conditions (RugosaChartInput *input,
+                                     RugosaProject    *project);
+
+/* The spec's background fields from the project settings, and the
+ * service age the legend names (size, scale and theme are left as they
+ * are). */
 void rugosa_chart_input_fill_spec (RugosaChartSpec *spec,
                                    RugosaProject   *project);
 

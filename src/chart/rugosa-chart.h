@@ -44,6 +44,8 @@ typedef enum {
 enum {
   RUGOSA_CHART_FAMILY_MAX = 64,
   RUGOSA_CHART_DATE_MAX = 40,
+  RUGOSA_CHART_TITLE_MAX = 160,
+  RUGOSA_CHART_CONDITIONS_MAX = 320,
   /* Lines other than the selected and pinned ones that the overlay tries
    * to label, in list order: past 80 labels a chart reads as text, and a
    * label is tried at most three times for each placed.  A line past
@@ -73,6 +75,15 @@ typedef struct {
   double magnify;
   /* Non-empty: a footer with the caution and this date (exports). */
   char footer_date[RUGOSA_CHART_DATE_MAX];
+  /* Non-empty: a heading over the plot (exports that ask for it): the
+   * title, and under it the conditions (service age, fluid, friction
+   * model) in a smaller line.  Text longer than the field is cut. */
+  char title[RUGOSA_CHART_TITLE_MAX];
+  char conditions[RUGOSA_CHART_CONDITIONS_MAX];
+  /* The service age as shown ("25 years"), for the legend's aging key;
+   * empty: the key shows no age.  The one field outside the background's
+   * key: a new age redraws the legend, not the background. */
+  char age_text[RUGOSA_CHART_DATE_MAX];
 } RugosaChartSpec;
 
 /* One line option on the overlay.  Strings are copied by
@@ -222,9 +233,18 @@ int rugosa_chart_get_label (RugosaChart *chart, size_t index,
                             RugosaChartLabelInfo *out);
 /* The legend box (empty when hidden). */
 RugosaChartRect rugosa_chart_legend_box (RugosaChart *chart);
+/* The legend's entries as drawn, one text per entry in drawing order:
+ * each line's name (with its number when the legend shows numbers), then
+ * the key's entries.  NULL-terminated; free with g_strfreev. */
+char **rugosa_chart_legend_entries (RugosaChart *chart);
+/* The share of the plot's area the callouts (labels and numbers) cover,
+ * 0..1; they never overlap, so their areas add (tests and measurements). */
+double rugosa_chart_callout_share (RugosaChart *chart);
 
 /* Export: the same drawing code at width × height logical pixels (PNG at
- * scale 1), with the caution footer carrying `date`. */
+ * scale 1), with the caution footer carrying `date`.  An export shows no
+ * selection: a selected line is drawn as a pinned one (labelled, no
+ * ring); the spec's title, conditions and age text are drawn as given. */
 typedef enum {
   RUGOSA_CHART_FORMAT_PNG = 0,
   RUGOSA_CHART_FORMAT_SVG,
@@ -232,6 +252,12 @@ typedef enum {
 } RugosaChartFormat;
 
 extern const char *const RUGOSA_CHART_CAUTION;
+
+/* Lines as a picture that leaves the program shows them: no selection
+ * (a selected line becomes a pinned one, labelled without the ring).
+ * rugosa_chart_export does this itself; a caller that draws an export or
+ * a print with its own chart calls it first. */
+void rugosa_chart_lines_for_export (RugosaChartLine *lines, size_t n_lines);
 
 #define RUGOSA_CHART_ERROR (rugosa_chart_error_quark ())
 typedef enum {

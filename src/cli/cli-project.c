@@ -206,6 +206,7 @@ static const CliOption render_options[] = {
   { "--age", TRUE, FALSE },
   { "--theme", TRUE, FALSE },
   { "--view", TRUE, FALSE },
+  { "--title", TRUE, FALSE },
   { NULL, FALSE, FALSE },
 };
 
@@ -258,7 +259,7 @@ cli_cmd_render (int argc, char **argv)
   RugosaChartFormat format;
   RugosaChartTheme theme = RUGOSA_CHART_THEME_LIGHT;
   RugosaChartView view = RUGOSA_CHART_VIEW_FRICTION;
-  const char *path, *theme_text, *view_text;
+  const char *path, *theme_text, *view_text, *title;
   double age, width, height;
   gboolean ok;
 
@@ -298,6 +299,15 @@ cli_cmd_render (int argc, char **argv)
       g_autofree char *shown = cli_echo (view_text);
       return cli_fail (_("--view must be friction, system or cost, not \"%s\"."), shown);
     }
+  title = cli_args_get (&args, "--title");
+  if (title != NULL)
+    {
+      /* one line of text, as a line's name is */
+      if (rugosa_field_text_problem (NULL, title) != RUGOSA_TEXT_OK)
+        return cli_fail (_("--title must be one line of UTF-8 text without control characters."));
+      if (view != RUGOSA_CHART_VIEW_FRICTION)
+        return cli_fail (_("--title is drawn on the friction chart only (--view friction)."));
+    }
   if ((project = cli_load_project (&args, "render")) == NULL)
     return CLI_EXIT_USAGE;
   /* the readouts of the chart in the project's units, or the options' */
@@ -311,6 +321,8 @@ cli_cmd_render (int argc, char **argv)
     {
       input = rugosa_chart_input_new (project, -1, NULL);
       input->spec.theme = theme;
+      /* the title, and under it the conditions the chart is drawn for */
+      rugosa_chart_input_set_heading (input, project, title);
       ok = rugosa_chart_export (&input->spec, input->lines, input->n_lines, format,
                                 width, height, date, path, &error);
     }

@@ -48,6 +48,7 @@ static const char usage_text[] = N_(
   "             curves with the pumps, or the life-cycle cost\n"
   "             PROJECT -o FILE.png|.svg|.pdf [--view friction|system|cost]\n"
   "             [--width W] [--height H] [--age YEARS] [--theme light|dark]\n"
+  "             [--title TEXT] (a heading: TEXT and the chart's conditions)\n"
   "  catalog    list a catalog: materials, pipes, fittings, fluids or aging [--json]\n"
   "\n"
   "Values take units: \"12 L/s\", \"150 gpm\", \"4 in\", \"0.045 mm\", \"20 C\", \"68 F\".\n"

@@ -3,6 +3,7 @@
 
 #include "config.h"
 
+#include <glib/gi18n-lib.h>
 #include <string.h>
 
 #include "rugosa-enums.h"
@@ -103,4 +104,21 @@ rugosa_enum_from_nick (GType enum_type, const char *nick, int *value)
     *value = v->value;
   g_type_class_unref (klass);
   return v != NULL;
+}
+
+/* The fluids by the property model behind each. */
+static const char *fluid_titles[RG_FLUID_N_KINDS] = {
+  [RG_FLUID_WATER] = N_("Water (IAPWS-IF97)"),
+  [RG_FLUID_CUSTOM] = N_("Given density and viscosity"),
+  [RG_FLUID_SEAWATER] = N_("Seawater (Sharqawy et al. 2010)"),
+  [RG_FLUID_OIL] = N_("Petroleum oil (ASTM D341)"),
+  [RG_FLUID_AIR] = N_("Air (ideal gas)"),
+};
+
+const char *
+rugosa_fluid_kind_title (int kind)
+{
+  if (kind < 0 || kind >= RG_FLUID_N_KINDS)
+    return "";
+  return _(fluid_titles[kind]);
 }
