@@ -37,6 +37,7 @@ static const struct {
   const char *path_prefix;
   const char *title;
 } groups[] = {
+  { "project.", N_("Project details") },
   { "units.", N_("Units") },
   { "friction_model", N_("Friction factor") },
   { "transition.", N_("Regime thresholds") },
@@ -163,8 +164,10 @@ _rugosa_settings_page_text_commit (RugosaSettingsPage *self,
     return;
   if (!rugosa_field_text_ok (row, text))
     {
-      g_autofree char *why = g_strdup_printf (_("%s takes at most %d characters, without control characters."),
-                                              rugosa_field_label (row), row->max_chars);
+      g_autofree char *why = (row->flags & RUGOSA_FIELD_DATE)
+        ? g_strdup_printf (_("%s takes a date as YYYY-MM-DD, or nothing."), rugosa_field_label (row))
+        : g_strdup_printf (_("%s takes at most %d characters, without control characters."),
+                           rugosa_field_label (row), row->max_chars);
 
       gtk_widget_add_css_class (GTK_WIDGET (editable), "error");
       gtk_widget_set_tooltip_text (GTK_WIDGET (editable), why);
@@ -202,7 +205,9 @@ _rugosa_settings_page_add_text (RugosaSettingsPage *self,
   adw_preferences_row_set_title (ADW_PREFERENCES_ROW (arow), rugosa_field_label (row));
   adw_action_row_set_subtitle (ADW_ACTION_ROW (arow), _(row->help));
   adw_action_row_set_subtitle_lines (ADW_ACTION_ROW (arow), 4);
-  gtk_editable_set_width_chars (GTK_EDITABLE (entry), 8);
+  /* a currency label or a revision mark is short; a title or a name
+   * needs room */
+  gtk_editable_set_width_chars (GTK_EDITABLE (entry), row->max_chars > 20 ? 24 : row->max_chars > 10 ? 10 : 8);
   gtk_widget_set_valign (entry, GTK_ALIGN_CENTER);
   gtk_widget_set_tooltip_text (entry, _(row->help));
   gtk_widget_set_name (entry, row->property);
