@@ -220,6 +220,8 @@ typedef enum {
 } RugosaChartFormat;
 
 extern const char *const RUGOSA_CHART_CAUTION;
+/* The cautions in full (the About window, the report), untranslated. */
+extern const char *const RUGOSA_CHART_CAUTION_FULL;
 
 #define RUGOSA_CHART_ERROR (rugosa_chart_error_quark ())
 typedef enum {

@@ -48,6 +48,9 @@ static const char usage_text[] = N_(
   "             curves with the pumps, or the life-cycle cost\n"
   "             PROJECT -o FILE.png|.svg|.pdf [--view friction|system|cost]\n"
   "             [--width W] [--height H] [--age YEARS] [--theme light|dark]\n"
+  "  report     the report of a project file as a PDF: its details, the chart,\n"
+  "             each line option's inputs and results, the cautions\n"
+  "             PROJECT -o FILE.pdf [--paper a4|letter] [--age YEARS]\n"
   "  catalog    list a catalog: materials, pipes, fittings, fluids or aging [--json]\n"
   "\n"
   "Values take units: \"12 L/s\", \"150 gpm\", \"4 in\", \"0.045 mm\", \"20 C\", \"68 F\".\n"
@@ -96,6 +99,7 @@ main (int argc, char **argv)
     { "catalog", cli_cmd_catalog },
     { "eval", cli_cmd_eval },
     { "render", cli_cmd_render },
+    { "report", cli_cmd_report },
   };
 
   /* Messages may be translated; numbers are always written and read in the
