@@ -25,7 +25,7 @@
 
 /* Points. */
 #define CELL_PAD_X 4.0
-#define CELL_PAD_Y 2.6
+#define CELL_PAD_Y 2.0
 #define TITLE_CELL_PAD 5.0
 
 /* The report's own colours: dark ink, a muted grey for labels, hairline
@@ -47,7 +47,7 @@ static const struct {
   [REPORT_TEXT_SUBHEADING] = { 9.8, TRUE, FALSE },
   [REPORT_TEXT_TITLE] = { 18.0, TRUE, FALSE },
   [REPORT_TEXT_LABEL] = { 6.4, TRUE, FALSE },
-  [REPORT_TEXT_CELL] = { 7.6, FALSE, FALSE },
+  [REPORT_TEXT_CELL] = { 7.4, FALSE, FALSE },
   [REPORT_TEXT_CELL_HEAD] = { 7.0, TRUE, FALSE },
 };
 
@@ -404,7 +404,11 @@ block_render (RugosaReport *report, ReportBlock *b, cairo_t *cr, double x, doubl
       if (cr != NULL)
         {
           /* the chart engine, as on screen, stroked directly (vector) */
+          /* the engine paints its whole surface: keep it to the figure */
           cairo_save (cr);
+          cairo_rectangle (cr, x, y, rugosa_chart_get_spec (b->chart)->width,
+                           rugosa_chart_get_spec (b->chart)->height);
+          cairo_clip (cr);
           cairo_translate (cr, x, y);
           rugosa_chart_draw_direct (b->chart, cr);
           cairo_restore (cr);
@@ -414,6 +418,9 @@ block_render (RugosaReport *report, ReportBlock *b, cairo_t *cr, double x, doubl
       if (cr != NULL)
         {
           cairo_save (cr);
+          cairo_rectangle (cr, x, y, rugosa_plot_get_spec (b->plot)->width,
+                           rugosa_plot_get_spec (b->plot)->height);
+          cairo_clip (cr);
           cairo_translate (cr, x, y);
           rugosa_plot_draw (b->plot, cr);
           cairo_restore (cr);

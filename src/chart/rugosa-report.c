@@ -17,6 +17,7 @@
 #include "config.h"
 
 #include <glib/gi18n-lib.h>
+#include <locale.h>
 #include <math.h>
 #include <stdio.h>
 #include <string.h>
@@ -92,6 +93,25 @@ rugosa_paper_for_locale (const char *locale)
 
 /* --- values ------------------------------------------------------------ */
 
+/* A count or a number of years: as few digits as it needs ("4", "2.5"). */
+static char *
+plain (double x)
+{
+  char *s = rugosa_display_significant_screen (x, 4);
+  const char *point = localeconv ()->decimal_point;
+
+  if (strstr (s, point) != NULL && strchr (s, 'e') == NULL)
+    {
+      char *end = s + strlen (s) - 1;
+
+      while (end > s && *end == '0')
+        *end-- = '\0';
+      if (g_str_has_suffix (s, point))
+        s[strlen (s) - strlen (point)] = '\0';
+    }
+  return s;
+}
+
 /* A value of `dq` in the project's display unit, the number alone. */
 static char *
 value_text (RugosaSettings *settings, RugosaDisplayQuantity dq, double si)
@@ -149,7 +169,8 @@ key_value (RugosaSettings *settings, const RugosaOutputKey *k,
   if (!p->present || !p->ok || !rugosa_output_present_for (k, r, p))
     return NULL;
   if (k->kind == RUGOSA_OUTPUT_ID)
-    return g_strdup (k->id (p));
+    /* "transitionally rough": an identifier that may wrap */
+    return g_strdelimit (g_strdup (k->id (p)), "-", ' ');
   return value_text (settings, k->display, k->number (r, p));
 }
 
@@ -248,7 +269,7 @@ basis_table (RugosaReport *report, RugosaProject *project, gboolean energy)
               }
             else if (row->display == RUGOSA_DISPLAY_NUMBER || row->to_si != 1.0)
               {
-                g_autofree char *n = rugosa_display_significant_screen (stored, 4);
+                g_autofree char *n = plain (stored);
                 const char *u = rugosa_field_si_unit (row);
 
                 value = *u ? g_strdup_printf ("%s %s", n, u) : g_steal_pointer (&n);
@@ -280,7 +301,7 @@ fittings_text (RugosaLine *line)
   while (g_variant_iter_next (&iter, "(&sdd)", &id, &k, &count))
     {
       const RgFitting *f = NULL;
-      g_autofree char *n = rugosa_display_significant_screen (count, 4);
+      g_autofree char *n = plain (count);
 
       if (out->len > 0)
         g_string_append_c (out, '\n');
@@ -289,7 +310,7 @@ fittings_text (RugosaLine *line)
         g_string_append_printf (out, _("%s × %s"), n, _(f->name));
       else
         {
-          g_autofree char *kt = rugosa_display_significant_screen (k, 4);
+          g_autofree char *kt = plain (k);
 
           /* TRANSLATORS: a plain loss coefficient of a line in the report: the count, then K */
           g_string_append_printf (out, _("%s × K %s"), n, kt);
@@ -368,7 +389,7 @@ inputs_table (RugosaReport *report, RugosaSettings *s, RugosaLine *line,
       NUMBER_ROW (right, row_label ("aging-rate"), RUGOSA_DISPLAY_ROUGHNESS_RATE,
                   r->aging_rate_m_per_year);
       {
-        g_autofree char *years = rugosa_display_significant_screen (age, 4);
+        g_autofree char *years = plain (age);
         /* TRANSLATORS: a row of the report's inputs: the roughness after %s years */
         g_autofree char *label = g_strdup_printf (_("Roughness after %s years"), years);
 
@@ -443,10 +464,10 @@ results_table (RugosaReport *report, RugosaSettings *s, RugosaLine *line,
     if (r->points[order[i]].present)
       cases[n_cases++] = order[i];
   n_cols = 2 + n_cases * (aged ? 2 : 1);
-  fraction[0] = 0.30;
-  fraction[1] = 0.10;
+  fraction[0] = 0.22;
+  fraction[1] = 0.09;
   for (guint c = 2; c < n_cols; c++)
-    fraction[c] = 0.60 / (n_cols - 2);
+    fraction[c] = 0.69 / (n_cols - 2);
   t = _rugosa_report_table_new (n_cols, aged ? 2 : 1, fraction);
   t->right[1] = FALSE;
 
@@ -461,7 +482,7 @@ results_table (RugosaReport *report, RugosaSettings *s, RugosaLine *line,
     }
   if (aged)
     {
-      g_autofree char *years = rugosa_display_significant_screen (age, 4);
+      g_autofree char *years = plain (age);
 
       /* TRANSLATORS: the column of the report's results at the service age */
       age_text = g_strdup_printf (_("after %s years"), years);
