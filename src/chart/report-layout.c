@@ -25,7 +25,7 @@
 
 /* Points. */
 #define CELL_PAD_X 4.0
-#define CELL_PAD_Y 2.0
+#define CELL_PAD_Y 1.7
 #define TITLE_CELL_PAD 5.0
 
 /* The report's own colours: dark ink, a muted grey for labels, hairline

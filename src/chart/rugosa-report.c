@@ -325,7 +325,7 @@ static ReportBlock *
 inputs_table (RugosaReport *report, RugosaSettings *s, RugosaLine *line,
               const RugosaLineResults *r, double age)
 {
-  static const double fraction[] = { 0.17, 0.19, 0.09, 0.17, 0.29, 0.09 };
+  static const double fraction[] = { 0.14, 0.18, 0.07, 0.19, 0.33, 0.09 };
   ReportTable *t = _rugosa_report_table_new (6, 1, fraction);
   ReportBlock *b = _rugosa_report_block_new (BLOCK_TABLE);
   GPtrArray *left = g_ptr_array_new_with_free_func (g_free);
@@ -386,8 +386,9 @@ inputs_table (RugosaReport *report, RugosaSettings *s, RugosaLine *line,
       ROW (right, row_label ("aging-class-id"),
            g_strdup (aging != NULL && rg_aging_class_lookup (aging, &a, NULL) == RG_OK ? _(a->name)
                                                                                      : _("given growth rate")), "");
+      /* kept per year: the row's own factor to SI */
       NUMBER_ROW (right, row_label ("aging-rate"), RUGOSA_DISPLAY_ROUGHNESS_RATE,
-                  r->aging_rate_m_per_year);
+                  r->aging_rate_m_per_year * rugosa_field_find ("aging-rate")->to_si);
       {
         g_autofree char *years = plain (age);
         /* TRANSLATORS: a row of the report's inputs: the roughness after %s years */
@@ -658,7 +659,7 @@ figure_chart (RugosaReport *report, RugosaProject *project, double width)
   RgError err = { 0 };
 
   input->spec.width = width;
-  input->spec.height = round (width * 0.64);
+  input->spec.height = round (width * 0.6);
   input->spec.scale = 1;
   input->spec.theme = RUGOSA_CHART_THEME_LIGHT;
   input->spec.footer_date[0] = '\0';
@@ -751,11 +752,10 @@ rugosa_report_new (RugosaProject *project, RugosaPaper paper, const char *today)
       heading (report, row_label ("project-note"));
       paragraphs (report, NULL, note, REPORT_TEXT_BODY, 5.0);
     }
-  heading (report, _("Basis of calculation"));
-  basis_table (report, project, capital || pumps);
-
   heading (report, rugosa_chart_view_title (RUGOSA_CHART_VIEW_FRICTION));
   add (report, figure_chart (report, project, width));
+  heading (report, _("Basis of calculation"));
+  basis_table (report, project, capital || pumps);
 
   heading (report, _("Line options"))->keep_with_next = TRUE;
   for (guint i = 0; i < n; i++)
