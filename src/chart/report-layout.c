@@ -25,7 +25,7 @@
 
 /* Points. */
 #define CELL_PAD_X 4.0
-#define CELL_PAD_Y 1.7
+#define CELL_PAD_Y 1.3
 #define TITLE_CELL_PAD 5.0
 
 /* The report's own colours: dark ink, a muted grey for labels, hairline
@@ -47,8 +47,8 @@ static const struct {
   [REPORT_TEXT_SUBHEADING] = { 9.8, TRUE, FALSE },
   [REPORT_TEXT_TITLE] = { 18.0, TRUE, FALSE },
   [REPORT_TEXT_LABEL] = { 6.4, TRUE, FALSE },
-  [REPORT_TEXT_CELL] = { 7.4, FALSE, FALSE },
-  [REPORT_TEXT_CELL_HEAD] = { 7.0, TRUE, FALSE },
+  [REPORT_TEXT_CELL] = { 7.0, FALSE, FALSE },
+  [REPORT_TEXT_CELL_HEAD] = { 6.8, TRUE, FALSE },
 };
 
 static void

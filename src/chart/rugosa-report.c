@@ -319,13 +319,13 @@ fittings_text (RugosaLine *line)
   return out->len > 0 ? g_string_free (g_steal_pointer (&out), FALSE) : g_strdup (_("none"));
 }
 
-/* The inputs in two columns of (input, value, unit): the fluid and the
- * flows on the left, the pipe on the right. */
+/* The inputs in two columns of (input, value, unit): the fluid, the run
+ * and the flows on the left, the pipe on the right. */
 static ReportBlock *
 inputs_table (RugosaReport *report, RugosaSettings *s, RugosaLine *line,
               const RugosaLineResults *r, double age)
 {
-  static const double fraction[] = { 0.14, 0.18, 0.07, 0.19, 0.33, 0.09 };
+  static const double fraction[] = { 0.16, 0.16, 0.07, 0.19, 0.33, 0.09 };
   ReportTable *t = _rugosa_report_table_new (6, 1, fraction);
   ReportBlock *b = _rugosa_report_block_new (BLOCK_TABLE);
   GPtrArray *left = g_ptr_array_new_with_free_func (g_free);
@@ -357,6 +357,8 @@ inputs_table (RugosaReport *report, RugosaSettings *s, RugosaLine *line,
       NUMBER_ROW (left, _(rugosa_display_info (RUGOSA_DISPLAY_DYNAMIC_VISCOSITY)->label),
                   RUGOSA_DISPLAY_DYNAMIC_VISCOSITY, r->dynamic_viscosity_pa_s);
     }
+  NUMBER_ROW (left, row_label ("length"), RUGOSA_DISPLAY_LENGTH, rugosa_line_get_double (line, "length"));
+  NUMBER_ROW (left, row_label ("elevation"), RUGOSA_DISPLAY_LENGTH, rugosa_line_get_double (line, "elevation"));
   {
     static const char *const flows[] = { "flow-minimum", "flow-design", "flow-maximum" };
 
@@ -401,8 +403,6 @@ inputs_table (RugosaReport *report, RugosaSettings *s, RugosaLine *line,
   ROW (right, _("Pipe size"), g_strdup (id != NULL ? id : _("given bore")), "");
   NUMBER_ROW (right, row_label ("inner-diameter"), RUGOSA_DISPLAY_DIAMETER,
               r->ok ? r->inner_diameter_m : rugosa_line_get_double (line, "inner-diameter"));
-  NUMBER_ROW (right, row_label ("length"), RUGOSA_DISPLAY_LENGTH, rugosa_line_get_double (line, "length"));
-  NUMBER_ROW (right, row_label ("elevation"), RUGOSA_DISPLAY_LENGTH, rugosa_line_get_double (line, "elevation"));
   ROW (right, row_label ("fittings"), fittings_text (line), "");
   if (r->ok && r->points[RUGOSA_FLOW_DESIGN].ok)
     {
@@ -413,7 +413,7 @@ inputs_table (RugosaReport *report, RugosaSettings *s, RugosaLine *line,
 #undef ROW
 #undef NUMBER_ROW
 
-  _rugosa_report_table_add (t, _("Fluid and flows"));
+  _rugosa_report_table_add (t, _("Fluid, run and flows"));
   _rugosa_report_table_add (t, _("Value"));
   _rugosa_report_table_add (t, _("Unit"));
   _rugosa_report_table_add (t, _("Pipe"));
@@ -710,8 +710,8 @@ rugosa_report_new (RugosaProject *project, RugosaPaper paper, const char *today)
   rugosa_paper_size (paper, &report->width, &report->height);
   /* 15 mm at the sides; room for the running header and the footer */
   report->margin = 15.0 * 72.0 / 25.4;
-  report->top = 62.0;
-  report->bottom = 60.0;
+  report->top = 56.0;
+  report->bottom = 52.0;
   report->today = g_strdup (today);
   report->blocks = g_ptr_array_new_with_free_func (_rugosa_report_block_free);
   report->pages = g_ptr_array_new_with_free_func ((GDestroyNotify) g_array_unref);
