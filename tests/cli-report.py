@@ -154,6 +154,29 @@ for k in range(1, N + 1):
     check(f"line {k}: one heading, its last row on its page", len(where) == 1 and where[0][1],
           str(where))
 
+# --- what is taller than a page: divided where it may be ---------------------
+# The demo's lines thirty times (a life-cycle table of 150 rows) and a line
+# note of 1200 sentences: the table's header is repeated on every page it
+# runs over, and not a sentence of the note is lost.
+demo["lines"] = [dict(l, name=f"{l['name']} #{i + 1}") for i in range(30) for l in demo["lines"]]
+demo["lines"][3]["note"] = ("A long note. " * 40 + "\n") * 30
+big = os.path.join(tmp, "big.rugosa")
+with open(big, "w", encoding="utf-8") as f:
+    json.dump(demo, f)
+big_pdf = os.path.join(tmp, "big.pdf")
+code, out, err = run("report", big, "-o", big_pdf)
+check("150 lines written", code == 0 and err == "", err)
+pages, _, _ = info(big_pdf)
+texts = page_texts(big_pdf, pages)
+first = next(i for i, t in enumerate(texts) if "Energy and life-cycle cost" in t)
+last = next(i for i, t in enumerate(texts) if "System curves" in t)
+check("the life-cycle table runs over pages", last - first >= 2, f"{first} {last}")
+for i in range(first, last):
+    check(f"page {i + 1}: the table's header repeated", "Capital cost" in texts[i] or "Duty flow" in texts[i])
+text = " ".join(texts)
+check("the long note whole", len(re.findall(r"A\s+long\s+note\.", text)) == 1200,
+      str(len(re.findall(r"A\s+long\s+note\.", text))))
+
 # --- bad input --------------------------------------------------------------
 for name, args in (("no -o", ["report", DEMO]),
                    ("not .pdf", ["report", DEMO, "-o", os.path.join(tmp, "x.svg")]),

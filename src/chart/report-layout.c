@@ -434,9 +434,14 @@ block_render (RugosaReport *report, ReportBlock *b, cairo_t *cr, double x, doubl
           {
             ReportBlock *child = g_ptr_array_index (b->children, i);
 
+            double h;
+
             if (i > 0)
               y += child->space_before;
-            y += block_render (report, child, cr, x, y, width);
+            h = block_render (report, child, cr, x, y, width);
+            if (cr == NULL)
+              child->height = h;
+            y += h;
           }
         return y - top;
       }
@@ -509,73 +514,166 @@ place (RugosaReport *report, ReportBlock *b, double *y)
   *y = p.y + b->height;
 }
 
+/* Rows r0 … r1 - 1 of a table under its header rows, measured. */
+static ReportBlock *
+table_slice (RugosaReport *report, ReportBlock *b, guint r0, guint r1, double width)
+{
+  const ReportTable *t = b->table;
+  ReportTable *part = _rugosa_report_table_new (t->n_cols, t->n_header, t->fraction);
+  ReportBlock *slice = _rugosa_report_block_new (BLOCK_TABLE);
+
+  memcpy (part->right, t->right, sizeof part->right);
+  for (guint r = 0; r < t->n_rows; r++)
+    if (r < t->n_header || (r >= r0 && r < r1))
+      for (guint c = 0; c < t->n_cols; c++)
+        {
+          const char *cell = g_ptr_array_index (t->cells, r * t->n_cols + c);
+
+          g_ptr_array_add (part->cells, cell != NULL ? g_strdup (cell) : NULL);
+        }
+  slice->table = part;
+  slice->space_before = r0 == t->n_header ? b->space_before : 0.0;
+  slice->height = table_render (report, part, NULL, 0, 0, width);
+  return slice;
+}
+
+typedef struct {
+  RugosaReport *report;
+  double width, bottom;
+  double y;
+  GPtrArray *runs;    /* blocks made while placing, owned by the report */
+} Flow;
+
+static GArray *
+current_page (Flow *f)
+{
+  return g_ptr_array_index (f->report->pages, f->report->pages->len - 1);
+}
+
+/* Place `b` (followed by `next`, or NULL) whole on the current page or
+ * the next; what is taller than a page is divided where it may be:
+ * running text between its lines, a table between its rows (its header
+ * repeated), a group between its parts. */
+static void
+flow_block (Flow *f, ReportBlock *b, ReportBlock *next)
+{
+  RugosaReport *report = f->report;
+  const double page_height = f->bottom - report->top;
+  double need = (current_page (f)->len > 0 ? b->space_before : 0.0) + b->height;
+
+  if (b->keep_with_next && next != NULL)
+    /* a heading goes with what follows: all of it when that is placed
+     * whole, else its first lines (text) or rows (a table, a group) */
+    need += next->space_before + (next->height <= page_height ? next->height
+                                  : next->kind == BLOCK_TEXT ? 40.0 : 80.0);
+  if (b->height <= page_height || b->kind == BLOCK_CHART || b->kind == BLOCK_PLOT
+      || b->kind == BLOCK_TITLE || b->kind == BLOCK_SPACE)
+    {
+      if (f->y + need > f->bottom && current_page (f)->len > 0)
+        new_page (report, &f->y);
+      place (report, b, &f->y);
+      return;
+    }
+  switch (b->kind)
+    {
+    case BLOCK_GROUP:
+      for (guint i = 0; i < b->children->len; i++)
+        {
+          ReportBlock *child = g_ptr_array_index (b->children, i);
+
+          if (i == 0)
+            child->space_before = b->space_before;
+          flow_block (f, child, i + 1 < b->children->len ? g_ptr_array_index (b->children, i + 1) : next);
+        }
+      break;
+    case BLOCK_TABLE:
+      {
+        const ReportTable *t = b->table;
+        double head = 0.0;
+        guint r = t->n_header;
+
+        for (guint i = 0; i < t->n_header; i++)
+          head += t->row_height[i];
+        while (r < t->n_rows)
+          {
+            const gboolean empty = current_page (f)->len == 0;
+            double space = f->bottom - f->y - (empty ? 0.0 : b->space_before) - head;
+            guint r1 = r;
+            ReportBlock *slice;
+
+            while (r1 < t->n_rows && t->row_height[r1] <= space)
+              space -= t->row_height[r1++];
+            if (r1 == r && !empty)
+              {
+                new_page (report, &f->y);
+                continue;
+              }
+            /* a row taller than a page is placed on a page of its own */
+            r1 = MAX (r1, r + 1);
+            slice = table_slice (report, b, r, r1, f->width);
+            g_ptr_array_add (f->runs, slice);
+            place (report, slice, &f->y);
+            r = r1;
+            if (r < t->n_rows)
+              new_page (report, &f->y);
+          }
+      }
+      break;
+    case BLOCK_TEXT:
+      {
+        const double width = f->width - (b->has_swatch ? 13.0 : 0.0);
+        g_autoptr (PangoLayout) whole = _rugosa_report_layout (report, b->text, b->style, width);
+        const int n_lines = pango_layout_get_line_count (whole);
+        int first = 0;
+
+        while (first < n_lines)
+          {
+            const gboolean empty = current_page (f)->len == 0;
+            int after;
+            ReportBlock *run = text_run (report, b, first,
+                                         f->bottom - f->y - (!empty && first == 0 ? b->space_before : 0.0),
+                                         width, &after);
+
+            if (run == NULL)
+              {
+                if (empty)
+                  break;   /* not one line fits an empty page: nothing to do */
+                new_page (report, &f->y);
+                continue;
+              }
+            g_ptr_array_add (f->runs, run);
+            place (report, run, &f->y);
+            first = after;
+            if (first < n_lines)
+              new_page (report, &f->y);
+          }
+      }
+      break;
+    default:
+      place (report, b, &f->y);
+      break;
+    }
+}
+
 void
 _rugosa_report_paginate (RugosaReport *report)
 {
-  const double width = report->width - 2 * report->margin;
-  const double bottom = report->height - report->bottom;
-  GPtrArray *runs = g_ptr_array_new_with_free_func (_rugosa_report_block_free);
-  double y;
+  Flow f = { report, report->width - 2 * report->margin, report->height - report->bottom,
+             0.0, g_ptr_array_new_with_free_func (_rugosa_report_block_free) };
 
   for (guint i = 0; i < report->blocks->len; i++)
     {
       ReportBlock *b = g_ptr_array_index (report->blocks, i);
-      b->height = block_render (report, b, NULL, 0, 0, width);
+      b->height = block_render (report, b, NULL, 0, 0, f.width);
     }
-  new_page (report, &y);
+  new_page (report, &f.y);
   for (guint i = 0; i < report->blocks->len; i++)
-    {
-      ReportBlock *b = g_ptr_array_index (report->blocks, i);
-      GArray *page = g_ptr_array_index (report->pages, report->pages->len - 1);
-      double need = (page->len > 0 ? b->space_before : 0.0) + b->height;
-
-      if (b->keep_with_next && i + 1 < report->blocks->len)
-        {
-          ReportBlock *next = g_ptr_array_index (report->blocks, i + 1);
-          /* a heading goes with the start of what follows: all of it, or
-           * the first lines of running text */
-          need += next->space_before + (next->kind == BLOCK_TEXT ? MIN (next->height, 40.0) : next->height);
-        }
-      if (b->kind == BLOCK_TEXT && b->height > bottom - report->top - 1.0)
-        {
-          /* running text longer than a page: split between its lines */
-          int first = 0;
-
-          while (first >= 0)
-            {
-              int next;
-              ReportBlock *run;
-
-              page = g_ptr_array_index (report->pages, report->pages->len - 1);
-              run = text_run (report, b, first,
-                              bottom - y - (page->len > 0 && first == 0 ? b->space_before : 0.0),
-                              width - (b->has_swatch ? 13.0 : 0.0), &next);
-              if (run == NULL)
-                {
-                  new_page (report, &y);
-                  continue;
-                }
-              g_ptr_array_add (runs, run);
-              place (report, run, &y);
-              {
-                g_autoptr (PangoLayout) whole = _rugosa_report_layout (report, b->text, b->style,
-                                                                       width - (b->has_swatch ? 13.0 : 0.0));
-                if (next >= pango_layout_get_line_count (whole))
-                  break;
-              }
-              first = next;
-              new_page (report, &y);
-            }
-          continue;
-        }
-      if (y + need > bottom && page->len > 0)
-        new_page (report, &y);
-      place (report, b, &y);
-    }
-  /* the runs live as long as the report's blocks */
-  for (guint i = 0; i < runs->len; i++)
-    g_ptr_array_add (report->blocks, g_ptr_array_index (runs, i));
-  g_ptr_array_free (runs, FALSE);
+    flow_block (&f, g_ptr_array_index (report->blocks, i),
+                i + 1 < report->blocks->len ? g_ptr_array_index (report->blocks, i + 1) : NULL);
+  /* the pieces live as long as the report's blocks */
+  for (guint i = 0; i < f.runs->len; i++)
+    g_ptr_array_add (report->blocks, g_ptr_array_index (f.runs, i));
+  g_ptr_array_free (f.runs, FALSE);
 }
 
 /* The frame of every page: the running header from the second page on,
