@@ -9,7 +9,9 @@ and its design head loss as `rugosa-cli eval --json` gives it (pdftotext),
 "Page n of N" and the version, every font embedded (pdffonts).  A
 generated project of many line options: several pages, and every line's
 block whole on one page (its heading and its last results row on the same
-page).  US Letter on request and from the locale; bad input refused."""
+page).  What is taller than a page (a life-cycle table of 150 rows, a
+long note) runs over pages whole.  US Letter on request and from the
+locale; bad input refused."""
 import json
 import os
 import re
