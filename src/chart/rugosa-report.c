@@ -30,6 +30,7 @@
 #include "core/catalog.h"
 #include "core/fittings.h"
 #include "model/rugosa-display.h"
+#include "model/rugosa-enums.h"
 #include "model/rugosa-fields.h"
 #include "model/rugosa-output.h"
 #include "model/rugosa-units.h"
@@ -168,9 +169,13 @@ key_value (RugosaSettings *settings, const RugosaOutputKey *k,
 {
   if (!p->present || !p->ok || !rugosa_output_present_for (k, r, p))
     return NULL;
+  /* the regime and the zone as the window names them */
+  if (g_str_equal (k->name, "regime"))
+    return g_strdup (rugosa_regime_title (p->result.friction.regime));
+  if (g_str_equal (k->name, "roughness_zone"))
+    return g_strdup (rugosa_zone_title (p->result.friction.zone));
   if (k->kind == RUGOSA_OUTPUT_ID)
-    /* "transitionally rough": an identifier that may wrap */
-    return g_strdelimit (g_strdup (k->id (p)), "-", ' ');
+    return g_strdup (k->id (p));
   return value_text (settings, k->display, k->number (r, p));
 }
 

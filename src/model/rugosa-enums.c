@@ -8,6 +8,7 @@
 
 #include "core/fluid.h"
 #include "core/friction.h"
+#include "core/regime.h"
 
 #include "rugosa-enums.h"
 #include "rugosa-units.h"
@@ -134,4 +135,29 @@ rugosa_enum_title (GType enum_type, int value)
   if (enum_type == RUGOSA_TYPE_FRICTION_MODEL && value >= 0 && value < RG_FRICTION_N_MODELS)
     return rg_friction_model_title ((RgFrictionModel) value);
   return rugosa_enum_nick (enum_type, value);
+}
+
+const char *
+rugosa_regime_title (RgRegime regime)
+{
+  switch (regime)
+    {
+    case RG_REGIME_LAMINAR: return _("laminar");
+    case RG_REGIME_TRANSITIONAL: return _("transitional");
+    case RG_REGIME_TURBULENT: return _("turbulent");
+    default: return "—";
+    }
+}
+
+const char *
+rugosa_zone_title (RgRoughnessZone zone)
+{
+  switch (zone)
+    {
+    case RG_ZONE_SMOOTH: return _("smooth");
+    case RG_ZONE_TRANSITIONALLY_ROUGH: return _("transitionally rough");
+    case RG_ZONE_FULLY_ROUGH: return _("fully rough");
+    case RG_ZONE_NONE:
+    default: return "—";
+    }
 }
