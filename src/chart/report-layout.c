@@ -673,7 +673,8 @@ _rugosa_report_paginate (RugosaReport *report)
   /* the pieces live as long as the report's blocks */
   for (guint i = 0; i < f.runs->len; i++)
     g_ptr_array_add (report->blocks, g_ptr_array_index (f.runs, i));
-  g_ptr_array_free (f.runs, FALSE);
+  g_ptr_array_set_free_func (f.runs, NULL);
+  g_ptr_array_unref (f.runs);
 }
 
 /* The frame of every page: the running header from the second page on,
