@@ -787,8 +787,16 @@ rugosa_report_new (RugosaProject *project, RugosaPaper paper, const char *today)
   heading (report, _("Cautions"));
   paragraphs (report, NULL, _(RUGOSA_CHART_CAUTION_FULL), REPORT_TEXT_BODY, 5.0);
 
-  _rugosa_report_paginate (report);
+  /* laid out when first asked for: a PDF whose file cannot be created
+   * is refused before any text is measured */
   return report;
+}
+
+static void
+ensure_pages (RugosaReport *report)
+{
+  if (report->pages->len == 0)
+    _rugosa_report_paginate (report);
 }
 
 void
@@ -811,6 +819,7 @@ guint
 rugosa_report_get_n_pages (RugosaReport *report)
 {
   g_return_val_if_fail (report != NULL, 0);
+  ensure_pages (report);
   return report->pages->len;
 }
 
@@ -826,6 +835,7 @@ void
 rugosa_report_draw_page (RugosaReport *report, cairo_t *cr, guint page)
 {
   g_return_if_fail (report != NULL);
+  ensure_pages (report);
   _rugosa_report_draw_page (report, cr, page);
 }
 
@@ -834,6 +844,7 @@ draw_all (cairo_t *cr, gpointer data)
 {
   RugosaReport *report = data;
 
+  ensure_pages (report);
   for (guint i = 0; i < report->pages->len; i++)
     {
       _rugosa_report_draw_page (report, cr, i);

@@ -6,7 +6,7 @@
  * when the project has them, the notes and the cautions, every page
  * numbered.
  *
- * The pages are laid out once, when the report is made: every block is
+ * The pages are laid out once, when first counted or drawn: every block is
  * measured with Pango first and placed whole (a block, a table row or a
  * line option's block never runs over a page break).  The same pages are
  * drawn into a PDF (rugosa_report_write_pdf) and into a print context
