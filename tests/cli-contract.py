@@ -363,6 +363,26 @@ for name, args, needle in [
     code, out, err = run(*args)
     check(f"render refuses {name}", code == 2 and out == "" and len(err.splitlines()) == 1
           and needle in err, f"{code} {err!r}")
+# --- report: the PDF of a project (its contents: tests/cli-report.py) ------
+r1, r2 = os.path.join(tmp, "r1.pdf"), os.path.join(tmp, "r2.pdf")
+code, out, err = run_env(env_date, "report", demo, "-o", r1)
+check("report writes a PDF", code == 0 and out == "" and err == ""
+      and open(r1, "rb").read(5) == b"%PDF-", f"{code} {err!r}")
+run_env(env_date, "report", demo, "-o", r2)
+check("report reproducible", os.path.exists(r2) and open(r1, "rb").read() == open(r2, "rb").read())
+for name, args, needle in [
+    ("no output", ["report", demo], "-o"),
+    ("bad extension", ["report", demo, "-o", os.path.join(tmp, "x.png")], "-o"),
+    ("bad paper", ["report", demo, "-o", r1, "--paper", "legal"], "--paper"),
+    ("bad age", ["report", demo, "-o", r1, "--age", "forty"], "--age"),
+    ("unknown option", ["report", demo, "-o", r1, "--view", "cost"], "--view"),
+    ("missing project", ["report", "/nonexistent.rugosa", "-o", r1], "nonexistent"),
+    ("two projects", ["report", demo, demo, "-o", r1], "report"),
+]:
+    code, out, err = run(*args)
+    check(f"report refuses {name}", code == 2 and out == "" and len(err.splitlines()) == 1
+          and needle in err, f"{code} {err!r}")
+
 # The chart window a project may hold (its settings rows) is what render
 # draws: the widest window renders; a window under one decade is refused
 # when the file is read, with its path.

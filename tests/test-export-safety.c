@@ -1,6 +1,6 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* Exports never destroy a file: a failure at any step of writing a chart
- * (PNG, SVG, PDF) or the results table (CSV) — the first write, a write
+ * (PNG, SVG, PDF), the results table (CSV) or the report (PDF) — the first write, a write
  * after short writes, fsync, close, rename — over an existing file and
  * into a new name leaves the previous file byte for byte as it was (or no
  * file at all), leaves no temporary file, and reports one sentence naming
@@ -19,12 +19,13 @@
 #include <glib/gstdio.h>
 
 #include "chart/rugosa-chart-input.h"
+#include "chart/rugosa-report.h"
 #include "model/rugosa-project.h"
 
 /* A fixed footer date, so that two exports of one project are the same. */
 #define EXPORT_DATE "2026-03-14"
 
-typedef enum { FMT_PNG, FMT_SVG, FMT_PDF, FMT_CSV, N_FMTS } Fmt;
+typedef enum { FMT_PNG, FMT_SVG, FMT_PDF, FMT_CSV, FMT_REPORT, N_FMTS } Fmt;
 
 static const struct {
   const char *id;
@@ -40,6 +41,8 @@ static const struct {
   { "pdf", "chart.pdf", "%PDF-", "%%EOF\n" },
   /* Source: the first column names of rugosa-cli eval --format csv */
   { "csv", "results.csv", "line,case", "\r\n" },
+  /* Source: ISO 32000-1, 7.5.2 header and 7.5.5 "%%EOF" trailer */
+  { "report", "report.pdf", "%PDF-", "%%EOF\n" },
 };
 
 static RugosaProject *
@@ -70,6 +73,12 @@ export (Fmt fmt, const char *path, int variant, GError **error)
                         variant == 0 ? "First generation" : "Second generation");
   if (fmt == FMT_CSV)
     return rugosa_project_export_eval (p, (double) variant, RUGOSA_EVAL_FORMAT_CSV, path, error);
+  if (fmt == FMT_REPORT)
+    {
+      g_autoptr (RugosaReport) report = rugosa_report_new (p, RUGOSA_PAPER_A4, EXPORT_DATE);
+
+      return rugosa_report_write_pdf (report, path, error);
+    }
   input = rugosa_chart_input_new (p, variant, NULL);
   return rugosa_chart_export (&input->spec, input->lines, input->n_lines, chart[fmt],
                               640, 400, EXPORT_DATE, path, error);

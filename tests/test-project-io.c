@@ -242,6 +242,13 @@ static const BadFile bad_files[] = {
     RUGOSA_PROJECT_ERROR_VALUE, "settings.units.system: expected \"si\" or \"us\", found \"imperial\"" },
   { "override-not-string", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"units\": {\"overrides\": {\"flow\": 3}}}, \"lines\": []}", -1,
     RUGOSA_PROJECT_ERROR_VALUE, "settings.units.overrides.flow: expected a string, found a number" },
+  /* the project's date: ISO text of a real day, or empty */
+  { "date-not-iso", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"project\": {\"date\": \"2.12.2026\"}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.project.date: expected a date as \"YYYY-MM-DD\" or an empty string" },
+  { "date-no-such-day", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"project\": {\"date\": \"2026-02-30\"}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.project.date: expected a date" },
+  { "title-control", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"settings\": {\"project\": {\"title\": \"a\\nb\"}}, \"lines\": []}", -1,
+    RUGOSA_PROJECT_ERROR_VALUE, "settings.project.title: the text holds a control character" },
   { "lines-not-array", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"lines\": {}}", -1,
     RUGOSA_PROJECT_ERROR_VALUE, "lines: expected an array, found an object" },
   { "duplicate-key-top", "{\"format\": \"rugosa-line-options\", \"version\": 1, \"version\": 2, \"lines\": []}", -1,

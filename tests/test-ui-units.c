@@ -389,6 +389,57 @@ test_project_friction_model_undo (void)
   ui_harness_close_window (win);
 }
 
+/* The project's details: a text row edited in Project Settings is one
+ * undo step named after the row; a date that is not ISO text is refused
+ * and the last value stays. */
+static void
+test_project_details (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+  RugosaSettings *ps = rugosa_project_get_settings (rugosa_window_get_project (win));
+  RugosaHistory *history = rugosa_window_get_history (win);
+  RugosaSettingsPage *page = open_project_settings (win);
+  GtkWidget *title = rugosa_settings_page_get_text (page, "project-title");
+  GtkWidget *date = rugosa_settings_page_get_text (page, "project-date");
+  GtkWidget *note = rugosa_settings_page_get_text (page, "project-note");
+  g_autofree char *before = g_strdup (rugosa_settings_get_string (ps, "project-title"));
+  g_autofree char *date_before = g_strdup (rugosa_settings_get_string (ps, "project-date"));
+
+  g_assert_true (GTK_IS_ENTRY (title));
+  g_assert_true (GTK_IS_ENTRY (date));
+  /* the note takes several lines */
+  g_assert_true (GTK_IS_TEXT_VIEW (note));
+  g_assert_cmpstr (gtk_editable_get_text (GTK_EDITABLE (title)), ==, before);
+
+  gtk_editable_set_text (GTK_EDITABLE (title), "Second feed main");
+  g_signal_emit_by_name (title, "activate");
+  ui_harness_drain ();
+  g_assert_cmpstr (rugosa_settings_get_string (ps, "project-title"), ==, "Second feed main");
+  g_assert_true (rugosa_history_can_undo (history));
+  g_assert_nonnull (strstr (rugosa_history_get_undo_label (history),
+                            rugosa_field_label (rugosa_field_find ("project-title"))));
+
+  gtk_editable_set_text (GTK_EDITABLE (date), "30.11.2026");
+  g_signal_emit_by_name (date, "activate");
+  ui_harness_drain ();
+  g_assert_true (gtk_widget_has_css_class (date, "error"));
+  g_assert_cmpstr (rugosa_settings_get_string (ps, "project-date"), ==, date_before);
+  gtk_editable_set_text (GTK_EDITABLE (date), "2026-12-01");
+  g_signal_emit_by_name (date, "activate");
+  ui_harness_drain ();
+  g_assert_false (gtk_widget_has_css_class (date, "error"));
+  g_assert_cmpstr (rugosa_settings_get_string (ps, "project-date"), ==, "2026-12-01");
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  ui_harness_drain ();
+  g_assert_cmpstr (rugosa_settings_get_string (ps, "project-title"), ==, before);
+  g_assert_cmpstr (rugosa_settings_get_string (ps, "project-date"), ==, date_before);
+  /* the window follows the undo */
+  g_assert_cmpstr (gtk_editable_get_text (GTK_EDITABLE (title)), ==, before);
+  ui_harness_close_window (win);
+}
+
 static void
 test_project_settings_refuse (void)
 {
@@ -788,6 +839,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/units/preference-change-leaves-project", test_preference_change_leaves_project);
   g_test_add_func ("/ui/units/project-friction-model-undo", test_project_friction_model_undo);
   g_test_add_func ("/ui/units/project-settings-refuse", test_project_settings_refuse);
+  g_test_add_func ("/ui/units/project-details", test_project_details);
   g_test_add_func ("/ui/units/project-units-reach-every-view", test_project_units_reach_every_view);
   g_test_add_func ("/ui/units/custom-viscosity-kinematic", test_custom_viscosity_kinematic);
   g_test_add_func ("/ui/units/air-compressibility-warning", test_air_compressibility_warning);

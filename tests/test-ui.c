@@ -899,6 +899,7 @@ test_outputs (void)
   g_autofree char *svg = g_build_filename (tmpdir, "chart.svg", NULL);
   g_autofree char *pdf = g_build_filename (tmpdir, "chart.pdf", NULL);
   g_autofree char *printed = g_build_filename (tmpdir, "printed.pdf", NULL);
+  g_autofree char *report = g_build_filename (tmpdir, "report.pdf", NULL);
   g_autofree char *csv = g_build_filename (tmpdir, "results.csv", NULL);
   g_autofree char *csv_text = NULL;
   g_autoptr (GError) error = NULL;
@@ -924,6 +925,10 @@ test_outputs (void)
   g_assert_true (rugosa_window_print_to_pdf (win, printed, &error));
   g_assert_no_error (error);
   g_assert_true (file_starts_with (printed, "%PDF", 4));
+  /* The report (win.export-report) writes the same pages as a PDF. */
+  g_assert_true (rugosa_window_export_report_to (win, report, &error));
+  g_assert_no_error (error);
+  g_assert_true (file_starts_with (report, "%PDF", 4));
 
   /* The results table: one header line and one row a line option. */
   g_assert_true (rugosa_window_export_csv_to (win, csv, &error));

@@ -5,6 +5,7 @@
 
 #include <glib/gi18n.h>
 
+#include "chart/rugosa-chart.h"
 #include "rugosa-application.h"
 #include "rugosa-preferences-window.h"
 #include "rugosa-window.h"
@@ -262,13 +263,7 @@ _rugosa_application_about (GSimpleAction *action,
   adw_about_window_add_legal_section (ADW_ABOUT_WINDOW (about),
                                       _("Cautions"),
                                       NULL, GTK_LICENSE_CUSTOM,
-                                      _("Rugosa's numbers are estimates from published correlations and "
-                                        "property formulations, each valid only inside its stated range; "
-                                        "lines outside those ranges are flagged, not refused. Pipe sizing "
-                                        "mistakes can hurt people: burst lines, starved fire protection, "
-                                        "unsafe velocities in hazardous fluids. Check every design against "
-                                        "the applicable local codes and have it reviewed by a qualified, "
-                                        "licensed engineer."));
+                                      _(RUGOSA_CHART_CAUTION_FULL));
   gtk_window_present (GTK_WINDOW (about));
 }
 

@@ -5,28 +5,14 @@
 
 #include <glib/gi18n.h>
 
-#include "core/fluid.h"
-#include "core/friction.h"
 #include "model/rugosa-enums.h"
 #include "rugosa-field-choices.h"
-
-static const char *system_titles[] = {
-  [RUGOSA_UNIT_SYSTEM_SI] = N_("SI (metric)"),
-  [RUGOSA_UNIT_SYSTEM_US] = N_("US customary"),
-};
 
 const char *
 rugosa_field_choice_title (GType enum_type,
                            int   value)
 {
-  if (enum_type == RUGOSA_TYPE_FLUID_KIND && value >= 0 && value < RG_FLUID_N_KINDS)
-    return rugosa_fluid_kind_title (value);
-  if (enum_type == RUGOSA_TYPE_UNIT_SYSTEM && value >= 0 && value < (int) G_N_ELEMENTS (system_titles))
-    return _(system_titles[value]);
-  /* Published names, the same in every language. */
-  if (enum_type == RUGOSA_TYPE_FRICTION_MODEL && value >= 0 && value < RG_FRICTION_N_MODELS)
-    return rg_friction_model_title ((RgFrictionModel) value);
-  return rugosa_enum_nick (enum_type, value);
+  return rugosa_enum_title (enum_type, value);
 }
 
 GtkStringList *

@@ -8,6 +8,7 @@
 
 #include "core/hazen-williams.h"
 #include "model/rugosa-display.h"
+#include "model/rugosa-enums.h"
 #include "model/rugosa-life-cycle.h"
 #include "model/rugosa-units.h"
 #include "rugosa-readout.h"
@@ -24,26 +25,13 @@ rugosa_readout_results (RugosaProject *project,
 const char *
 rugosa_readout_regime (RgRegime regime)
 {
-  switch (regime)
-    {
-    case RG_REGIME_LAMINAR: return _("laminar");
-    case RG_REGIME_TRANSITIONAL: return _("transitional");
-    case RG_REGIME_TURBULENT: return _("turbulent");
-    default: return "—";
-    }
+  return rugosa_regime_title (regime);
 }
 
 const char *
 rugosa_readout_zone (RgRoughnessZone zone)
 {
-  switch (zone)
-    {
-    case RG_ZONE_SMOOTH: return _("smooth");
-    case RG_ZONE_TRANSITIONALLY_ROUGH: return _("transitionally rough");
-    case RG_ZONE_FULLY_ROUGH: return _("fully rough");
-    case RG_ZONE_NONE:
-    default: return "—";
-    }
+  return rugosa_zone_title (zone);
 }
 
 char *

@@ -37,6 +37,7 @@ static const struct {
   const char *path_prefix;
   const char *title;
 } groups[] = {
+  { "project.", N_("Project details") },
   { "units.", N_("Units") },
   { "friction_model", N_("Friction factor") },
   { "transition.", N_("Regime thresholds") },
@@ -149,12 +150,26 @@ _rugosa_settings_page_add_number (RugosaSettingsPage *self,
 
 /* --- texts -------------------------------------------------------------- */
 
+/* The text of a text row's editor: an entry, or a multi-line view. */
+static char *
+_rugosa_settings_page_text_of (GtkWidget *widget)
+{
+  GtkTextIter start, end;
+  GtkTextBuffer *buffer;
+
+  if (GTK_IS_EDITABLE (widget))
+    return g_strdup (gtk_editable_get_text (GTK_EDITABLE (widget)));
+  buffer = gtk_text_view_get_buffer (GTK_TEXT_VIEW (widget));
+  gtk_text_buffer_get_bounds (buffer, &start, &end);
+  return gtk_text_buffer_get_text (buffer, &start, &end, FALSE);
+}
+
 static void
 _rugosa_settings_page_text_commit (RugosaSettingsPage *self,
-                                   GtkEditable        *editable)
+                                   GtkWidget          *widget)
 {
-  const RugosaField *row = g_object_get_data (G_OBJECT (editable), "rugosa-field");
-  const char *text = gtk_editable_get_text (editable);
+  const RugosaField *row = g_object_get_data (G_OBJECT (widget), "rugosa-field");
+  g_autofree char *text = _rugosa_settings_page_text_of (widget);
   g_autofree char *current = NULL;
   g_auto (GValue) v = G_VALUE_INIT;
 
@@ -163,15 +178,17 @@ _rugosa_settings_page_text_commit (RugosaSettingsPage *self,
     return;
   if (!rugosa_field_text_ok (row, text))
     {
-      g_autofree char *why = g_strdup_printf (_("%s takes at most %d characters, without control characters."),
-                                              rugosa_field_label (row), row->max_chars);
+      g_autofree char *why = (row->flags & RUGOSA_FIELD_DATE)
+        ? g_strdup_printf (_("%s takes a date as YYYY-MM-DD, or nothing."), rugosa_field_label (row))
+        : g_strdup_printf (_("%s takes at most %d characters, without control characters."),
+                           rugosa_field_label (row), row->max_chars);
 
-      gtk_widget_add_css_class (GTK_WIDGET (editable), "error");
-      gtk_widget_set_tooltip_text (GTK_WIDGET (editable), why);
+      gtk_widget_add_css_class (widget, "error");
+      gtk_widget_set_tooltip_text (widget, why);
       return;
     }
-  gtk_widget_remove_css_class (GTK_WIDGET (editable), "error");
-  gtk_widget_set_tooltip_text (GTK_WIDGET (editable), _(row->help));
+  gtk_widget_remove_css_class (widget, "error");
+  gtk_widget_set_tooltip_text (widget, _(row->help));
   g_value_init (&v, G_TYPE_STRING);
   g_value_set_string (&v, text);
   _rugosa_settings_page_apply (self, row->property, &v);
@@ -181,14 +198,14 @@ static void
 _rugosa_settings_page_text_activate (GtkEntry           *entry,
                                      RugosaSettingsPage *self)
 {
-  _rugosa_settings_page_text_commit (self, GTK_EDITABLE (entry));
+  _rugosa_settings_page_text_commit (self, GTK_WIDGET (entry));
 }
 
 static void
 _rugosa_settings_page_text_leave (GtkEventControllerFocus *focus,
                                   RugosaSettingsPage      *self)
 {
-  _rugosa_settings_page_text_commit (self, GTK_EDITABLE (gtk_event_controller_get_widget (GTK_EVENT_CONTROLLER (focus))));
+  _rugosa_settings_page_text_commit (self, gtk_event_controller_get_widget (GTK_EVENT_CONTROLLER (focus)));
 }
 
 static void
@@ -202,7 +219,9 @@ _rugosa_settings_page_add_text (RugosaSettingsPage *self,
   adw_preferences_row_set_title (ADW_PREFERENCES_ROW (arow), rugosa_field_label (row));
   adw_action_row_set_subtitle (ADW_ACTION_ROW (arow), _(row->help));
   adw_action_row_set_subtitle_lines (ADW_ACTION_ROW (arow), 4);
-  gtk_editable_set_width_chars (GTK_EDITABLE (entry), 8);
+  /* a currency label or a revision mark is short; a title or a name
+   * needs room */
+  gtk_editable_set_width_chars (GTK_EDITABLE (entry), row->max_chars > 20 ? 24 : row->max_chars > 10 ? 10 : 8);
   gtk_widget_set_valign (entry, GTK_ALIGN_CENTER);
   gtk_widget_set_tooltip_text (entry, _(row->help));
   gtk_widget_set_name (entry, row->property);
@@ -214,6 +233,42 @@ _rugosa_settings_page_add_text (RugosaSettingsPage *self,
   adw_action_row_set_activatable_widget (ADW_ACTION_ROW (arow), entry);
   adw_preferences_group_add (_rugosa_settings_page_group (self, row), arow);
   g_hash_table_insert (self->texts, (gpointer) row->property, entry);
+}
+
+/* A text of several lines (a note): its row names it, the view below
+ * holds it; committed when the focus leaves. */
+static void
+_rugosa_settings_page_add_multiline (RugosaSettingsPage *self,
+                                     const RugosaField  *row)
+{
+  GtkWidget *arow = adw_action_row_new ();
+  GtkWidget *scroll = gtk_scrolled_window_new ();
+  GtkWidget *view = gtk_text_view_new ();
+  GtkEventController *focus = gtk_event_controller_focus_new ();
+  AdwPreferencesGroup *group = _rugosa_settings_page_group (self, row);
+
+  adw_preferences_row_set_title (ADW_PREFERENCES_ROW (arow), rugosa_field_label (row));
+  adw_action_row_set_subtitle (ADW_ACTION_ROW (arow), _(row->help));
+  adw_action_row_set_subtitle_lines (ADW_ACTION_ROW (arow), 4);
+  gtk_text_view_set_wrap_mode (GTK_TEXT_VIEW (view), GTK_WRAP_WORD_CHAR);
+  gtk_text_view_set_top_margin (GTK_TEXT_VIEW (view), 6);
+  gtk_text_view_set_bottom_margin (GTK_TEXT_VIEW (view), 6);
+  gtk_text_view_set_left_margin (GTK_TEXT_VIEW (view), 8);
+  gtk_text_view_set_right_margin (GTK_TEXT_VIEW (view), 8);
+  gtk_widget_set_tooltip_text (view, _(row->help));
+  gtk_widget_set_name (view, row->property);
+  g_object_set_data (G_OBJECT (view), "rugosa-field", (gpointer) row);
+  g_signal_connect_object (focus, "leave", G_CALLBACK (_rugosa_settings_page_text_leave), self, 0);
+  gtk_widget_add_controller (view, focus);
+  gtk_scrolled_window_set_child (GTK_SCROLLED_WINDOW (scroll), view);
+  gtk_scrolled_window_set_policy (GTK_SCROLLED_WINDOW (scroll), GTK_POLICY_NEVER, GTK_POLICY_AUTOMATIC);
+  gtk_scrolled_window_set_min_content_height (GTK_SCROLLED_WINDOW (scroll), 90);
+  gtk_widget_add_css_class (scroll, "card");
+  gtk_widget_set_margin_top (scroll, 6);
+  adw_preferences_group_add (group, arow);
+  /* not a row: placed under the group's list */
+  adw_preferences_group_add (group, scroll);
+  g_hash_table_insert (self->texts, (gpointer) row->property, view);
 }
 
 /* --- enumerations -------------------------------------------------------- */
@@ -432,10 +487,15 @@ _rugosa_settings_page_refresh (RugosaSettingsPage *self)
       const RugosaField *row = g_object_get_data (G_OBJECT (widget), "rugosa-field");
       g_autofree char *text = NULL;
 
+      g_autofree char *shown = _rugosa_settings_page_text_of (widget);
+
       g_object_get (self->settings, row->property, &text, NULL);
-      if (!gtk_widget_has_css_class (widget, "error")
-          && g_strcmp0 (gtk_editable_get_text (GTK_EDITABLE (widget)), text ? text : "") != 0)
+      if (gtk_widget_has_css_class (widget, "error") || g_strcmp0 (shown, text ? text : "") == 0)
+        continue;
+      if (GTK_IS_EDITABLE (widget))
         gtk_editable_set_text (GTK_EDITABLE (widget), text ? text : "");
+      else
+        gtk_text_buffer_set_text (gtk_text_view_get_buffer (GTK_TEXT_VIEW (widget)), text ? text : "", -1);
     }
   g_hash_table_iter_init (&iter, self->choices);
   while (g_hash_table_iter_next (&iter, &key, &widget))
@@ -501,7 +561,10 @@ rugosa_settings_page_build (RugosaSettingsPage *self,
             _rugosa_settings_page_add_units (self, row);
             break;
           case RUGOSA_FIELD_TEXT:
-            _rugosa_settings_page_add_text (self, row);
+            if (row->flags & RUGOSA_FIELD_MULTILINE)
+              _rugosa_settings_page_add_multiline (self, row);
+            else
+              _rugosa_settings_page_add_text (self, row);
             break;
           default:
             g_warn_if_reached ();
@@ -551,6 +614,14 @@ rugosa_settings_page_get_entry (RugosaSettingsPage *self,
 {
   g_return_val_if_fail (RUGOSA_IS_SETTINGS_PAGE (self), NULL);
   return g_hash_table_lookup (self->entries, property);
+}
+
+GtkWidget *
+rugosa_settings_page_get_text (RugosaSettingsPage *self,
+                               const char         *property)
+{
+  g_return_val_if_fail (RUGOSA_IS_SETTINGS_PAGE (self), NULL);
+  return g_hash_table_lookup (self->texts, property);
 }
 
 AdwComboRow *

@@ -48,6 +48,10 @@ RugosaSettings      *rugosa_settings_page_get_settings   (RugosaSettingsPage *se
 /* The entry of a number row ("velocity-limit"), or NULL. */
 RugosaQuantityEntry *rugosa_settings_page_get_entry      (RugosaSettingsPage *self,
                                                           const char         *property);
+/* The editor of a text row ("project-title": a GtkEntry; a multi-line
+ * row, "project-note": a GtkTextView), or NULL. */
+GtkWidget           *rugosa_settings_page_get_text       (RugosaSettingsPage *self,
+                                                          const char         *property);
 /* The choice of an enumeration row ("friction-model") or of a quantity's
  * unit (named as its preferences key, "unit-flow"), or NULL. */
 AdwComboRow         *rugosa_settings_page_get_choice     (RugosaSettingsPage *self,

@@ -8,6 +8,7 @@
 
 #include "chart/rugosa-chart-input.h"
 #include "chart/rugosa-plot-input.h"
+#include "chart/rugosa-report.h"
 #include "rugosa-window-private.h"
 
 /* Sizes offered for an exported chart, logical pixels (PNG pixels; SVG and
@@ -33,8 +34,12 @@ static char *
 _rugosa_window_export_title (RugosaWindow *self)
 {
   g_autofree char *base = NULL;
+  const char *title = rugosa_settings_get_string (rugosa_project_get_settings (self->project), "project-title");
   char *dot;
 
+  /* the project's own title, else its file's name */
+  if (title != NULL && *title != '\0')
+    return g_strdup (title);
   if (self->file == NULL)
     return g_strdup (_("Unsaved project"));
   base = g_file_get_basename (self->file);
@@ -91,6 +96,33 @@ rugosa_window_export_chart_with (RugosaWindow       *self,
                               width, height, date, path, error);
 }
 
+/* The paper of the locale (LC_PAPER), as GTK knows it. */
+static RugosaPaper
+_rugosa_window_paper (void)
+{
+  return g_strcmp0 (gtk_paper_size_get_default (), GTK_PAPER_NAME_LETTER) == 0
+         ? RUGOSA_PAPER_LETTER : RUGOSA_PAPER_A4;
+}
+
+static RugosaReport *
+_rugosa_window_report (RugosaWindow *self)
+{
+  g_autofree char *date = _rugosa_window_today ();
+
+  return rugosa_report_new (self->project, _rugosa_window_paper (), date);
+}
+
+gboolean
+rugosa_window_export_report_to (RugosaWindow  *self,
+                                const char    *path,
+                                GError       **error)
+{
+  g_autoptr (RugosaReport) report = _rugosa_window_report (self);
+
+  /* Written atomically: a failure leaves the previous file as it was. */
+  return rugosa_report_write_pdf (report, path, error);
+}
+
 gboolean
 rugosa_window_export_csv_to (RugosaWindow  *self,
                              const char    *path,
@@ -140,6 +172,7 @@ typedef struct
 {
   char              *path;
   gboolean           csv;
+  gboolean           report;
   RugosaChartFormat  format;
   double             width;
   double             height;
@@ -166,12 +199,16 @@ _rugosa_window_export_run (RugosaWindow    *self,
 
   if (job->csv)
     ok = rugosa_window_export_csv_to (self, job->path, &error);
+  else if (job->report)
+    ok = rugosa_window_export_report_to (self, job->path, &error);
   else
     ok = rugosa_window_export_chart_with (self, job->path, job->format, job->width, job->height,
                                           job->heading, &error);
   if (!ok)
     {
-      const char *heading = job->csv ? _("Could not export the results") : _("Could not export the chart");
+      const char *heading = job->csv ? _("Could not export the results")
+                            : job->report ? _("Could not write the report")
+                            : _("Could not export the chart");
       GtkWidget *msg = adw_message_dialog_new (GTK_WINDOW (self), heading, error->message);
 
       adw_message_dialog_add_response (ADW_MESSAGE_DIALOG (msg), "close", _("_Close"));
@@ -180,6 +217,12 @@ _rugosa_window_export_run (RugosaWindow    *self,
   else if (job->csv)
     /* The CSV's columns name their units: the project's (model/rugosa-output.h). */
     _rugosa_window_toast (self, _("Results exported as CSV, in the project’s units."));
+  else if (job->report)
+    {
+      g_autofree char *base = g_path_get_basename (job->path);
+      g_autofree char *text = g_strdup_printf (_("Report written to %s."), base);
+      _rugosa_window_toast (self, text);
+    }
   else
     {
       g_autofree char *base = g_path_get_basename (job->path);
@@ -387,65 +430,63 @@ _rugosa_window_export_csv (GtkWidget  *widget,
   gtk_native_dialog_show (GTK_NATIVE_DIALOG (dialog));
 }
 
+static void
+_rugosa_window_report_response (GtkNativeDialog *dialog,
+                                int              response,
+                                RugosaWindow    *self)
+{
+  if (response == GTK_RESPONSE_ACCEPT)
+    {
+      g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
+      g_autofree char *typed = g_file_get_path (file);
+      RugosaExportJob *job = g_new0 (RugosaExportJob, 1);
+
+      job->report = TRUE;
+      job->path = _rugosa_window_with_extension (typed, ".pdf", FALSE);
+      _rugosa_window_export_settled (self, typed, job);
+    }
+  g_object_unref (dialog);
+}
+
+static void
+_rugosa_window_export_report (GtkWidget  *widget,
+                              const char *action_name,
+                              GVariant   *param)
+{
+  RugosaWindow *self = RUGOSA_WINDOW (widget);
+  GtkFileChooserNative *dialog;
+
+  dialog = gtk_file_chooser_native_new (_("Write the Report"), GTK_WINDOW (self),
+                                        GTK_FILE_CHOOSER_ACTION_SAVE, _("_Save"), _("_Cancel"));
+  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), _("report.pdf"));
+  g_signal_connect (dialog, "response", G_CALLBACK (_rugosa_window_report_response), self);
+  gtk_native_dialog_show (GTK_NATIVE_DIALOG (dialog));
+}
+
 /* --- print ----------------------------------------------------------- */
 
+/* Each page of the report, scaled to the printable area (the report's
+ * own margins stay inside it). */
 static void
 _rugosa_window_draw_page (GtkPrintOperation *op,
                           GtkPrintContext   *context,
                           int                page_nr,
-                          RugosaWindow      *self)
+                          RugosaReport      *report)
 {
   cairo_t *cr = gtk_print_context_get_cairo_context (context);
   double w = gtk_print_context_get_width (context);
   double h = gtk_print_context_get_height (context);
-  guint pos = gtk_single_selection_get_selected (self->selection);
-  g_autoptr (RugosaChartInput) input = NULL;
-  g_autofree char *date = _rugosa_window_today ();
-  RugosaChart *chart;
-  RgError err = { 0 };
+  double pw, ph, k;
 
-  /* the view the chart area shows, as its export draws it */
-  if (_rugosa_window_chart_view (self) != RUGOSA_CHART_VIEW_FRICTION)
-    {
-      g_autoptr (RugosaPlotInput) plot = rugosa_plot_input_new (self->project, _rugosa_window_chart_view (self),
-                                                                pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos,
-                                                                rugosa_visibility_chart_view (self->visibility));
-      RugosaPlot *p = rugosa_plot_new ();
-
-      plot->spec.width = MAX (w, 200);
-      plot->spec.height = MAX (h, 150);
-      plot->spec.theme = RUGOSA_CHART_THEME_LIGHT;
-      g_strlcpy (plot->spec.footer_date, date, sizeof plot->spec.footer_date);
-      if (rugosa_plot_set_spec (p, &plot->spec, &err) == RG_OK)
-        {
-          rugosa_plot_set_series (p, plot->series, plot->n_series);
-          rugosa_plot_draw (p, cr);
-        }
-      else
-        g_warning ("Cannot print the chart: %s", err.text);
-      rugosa_plot_free (p);
-      return;
-    }
-  chart = rugosa_chart_new ();
-  input = rugosa_chart_input_new_view (self->project, pos == GTK_INVALID_LIST_POSITION ? -1 : (int) pos,
-                                       NULL, rugosa_visibility_chart_view (self->visibility));
-  /* The page in points; the chart keeps its own proportions below 200 × 150. */
-  input->spec.width = MAX (w, 200);
-  input->spec.height = MAX (h, 150);
-  input->spec.scale = 1;
-  input->spec.theme = RUGOSA_CHART_THEME_LIGHT;
-  g_strlcpy (input->spec.footer_date, date, sizeof input->spec.footer_date);
-  /* a print shows no selection ring, as an export */
-  rugosa_chart_lines_for_export (input->lines, input->n_lines);
-  if (rugosa_chart_set_spec (chart, &input->spec, &err) == RG_OK)
-    {
-      rugosa_chart_set_lines (chart, input->lines, input->n_lines);
-      /* Vector output: the same drawing code as the screen and exports. */
-      rugosa_chart_draw_direct (chart, cr);
-    }
-  else
-    g_warning ("Cannot print the chart: %s", err.text);
-  rugosa_chart_free (chart);
+  if (page_nr < 0 || (guint) page_nr >= rugosa_report_get_n_pages (report))
+    return;
+  rugosa_report_get_page_size (report, &pw, &ph);
+  k = MIN (w / pw, h / ph);
+  cairo_save (cr);
+  cairo_translate (cr, (w - pw * k) / 2.0, (h - ph * k) / 2.0);
+  cairo_scale (cr, k, k);
+  rugosa_report_draw_page (report, cr, (guint) page_nr);
+  cairo_restore (cr);
 }
 
 static GtkPrintOperation *
@@ -453,13 +494,21 @@ _rugosa_window_print_operation (RugosaWindow *self)
 {
   GtkPrintOperation *op = gtk_print_operation_new ();
   g_autoptr (GtkPageSetup) setup = gtk_page_setup_new ();
+  RugosaReport *report = _rugosa_window_report (self);
+  GtkPaperSize *paper = gtk_paper_size_new (_rugosa_window_paper () == RUGOSA_PAPER_LETTER
+                                            ? GTK_PAPER_NAME_LETTER : GTK_PAPER_NAME_A4);
 
-  gtk_page_setup_set_orientation (setup, GTK_PAGE_ORIENTATION_LANDSCAPE);
+  /* the report's pages, on its paper */
+  gtk_page_setup_set_orientation (setup, GTK_PAGE_ORIENTATION_PORTRAIT);
+  gtk_page_setup_set_paper_size_and_default_margins (setup, paper);
+  gtk_paper_size_free (paper);
   gtk_print_operation_set_default_page_setup (op, setup);
-  gtk_print_operation_set_n_pages (op, 1);
-  gtk_print_operation_set_job_name (op, rugosa_chart_view_title (_rugosa_window_chart_view (self)));
+  gtk_print_operation_set_use_full_page (op, TRUE);
+  gtk_print_operation_set_n_pages (op, (int) rugosa_report_get_n_pages (report));
+  gtk_print_operation_set_job_name (op, _("Pipe line report"));
   gtk_print_operation_set_embed_page_setup (op, TRUE);
-  g_signal_connect (op, "draw-page", G_CALLBACK (_rugosa_window_draw_page), self);
+  g_object_set_data_full (G_OBJECT (op), "rugosa-report", report, (GDestroyNotify) rugosa_report_free);
+  g_signal_connect (op, "draw-page", G_CALLBACK (_rugosa_window_draw_page), report);
   return op;
 }
 
@@ -495,5 +544,6 @@ _rugosa_window_output_class_init (GtkWidgetClass *widget_class)
 {
   gtk_widget_class_install_action (widget_class, "win.export-chart", NULL, _rugosa_window_export_chart);
   gtk_widget_class_install_action (widget_class, "win.export-csv", NULL, _rugosa_window_export_csv);
+  gtk_widget_class_install_action (widget_class, "win.export-report", NULL, _rugosa_window_export_report);
   gtk_widget_class_install_action (widget_class, "win.print", NULL, _rugosa_window_print);
 }

@@ -69,6 +69,11 @@ gboolean       rugosa_window_export_chart_with (RugosaWindow    *self,
 gboolean       rugosa_window_export_csv_to   (RugosaWindow      *self,
                                               const char        *path,
                                               GError           **error);
+/* The project's report (chart/rugosa-report.h) on the paper of the
+ * locale's default paper size; printing draws the same pages. */
+gboolean       rugosa_window_export_report_to (RugosaWindow     *self,
+                                               const char       *path,
+                                               GError          **error);
 gboolean       rugosa_window_print_to_pdf    (RugosaWindow      *self,
                                               const char        *path,
                                               GError           **error);

@@ -22,6 +22,15 @@ const char *const RUGOSA_CHART_CAUTION =
      "ranges. Check designs against local codes and have them reviewed by a "
      "qualified, licensed engineer.");
 
+const char *const RUGOSA_CHART_CAUTION_FULL =
+  N_("Rugosa's numbers are estimates from published correlations and "
+     "property formulations, each valid only inside its stated range; "
+     "lines outside those ranges are flagged, not refused. Pipe sizing "
+     "mistakes can hurt people: burst lines, starved fire protection, "
+     "unsafe velocities in hazardous fluids. Check every design against "
+     "the applicable local codes and have it reviewed by a qualified, "
+     "licensed engineer.");
+
 /* The text cache keeps two generations of layouts: when the one in use
  * grows past this many (an age slider makes new readout strings at every
  * step), the older one is dropped and a new one begun; a layout asked for

@@ -252,6 +252,8 @@ typedef enum {
 } RugosaChartFormat;
 
 extern const char *const RUGOSA_CHART_CAUTION;
+/* The cautions in full (the About window, the report), untranslated. */
+extern const char *const RUGOSA_CHART_CAUTION_FULL;
 
 /* Lines as a picture that leaves the program shows them: no selection
  * (a selected line becomes a pinned one, labelled without the ring).

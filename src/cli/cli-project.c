@@ -212,8 +212,8 @@ static const CliOption render_options[] = {
 
 /* The footer date: today, or SOURCE_DATE_EPOCH when set (reproducible
  * output, as the reproducible-builds convention has it). */
-static char *
-footer_date (void)
+char *
+cli_today (void)
 {
   const char *epoch = g_getenv ("SOURCE_DATE_EPOCH");
   g_autoptr (GDateTime) when = NULL;
@@ -316,7 +316,7 @@ cli_cmd_render (int argc, char **argv)
   if (age >= 0.0)
     g_object_set (rugosa_project_get_settings (project), "service-age", age, NULL);
 
-  date = footer_date ();
+  date = cli_today ();
   if (view == RUGOSA_CHART_VIEW_FRICTION)
     {
       input = rugosa_chart_input_new (project, -1, NULL);

@@ -185,6 +185,11 @@ int cli_cmd_size (int argc, char **argv);
 int cli_cmd_catalog (int argc, char **argv);
 int cli_cmd_eval (int argc, char **argv);
 int cli_cmd_render (int argc, char **argv);
+int cli_cmd_report (int argc, char **argv);
+
+/* The date of a drawing or report, "YYYY-MM-DD": today, or the day of
+ * SOURCE_DATE_EPOCH when set (reproducible output). */
+char *cli_today (void);
 
 /* Shared by the project commands (cli-project.c). */
 RugosaProject *cli_load_project (const CliArgs *args, const char *command);

@@ -49,6 +49,9 @@ static const char usage_text[] = N_(
   "             PROJECT -o FILE.png|.svg|.pdf [--view friction|system|cost]\n"
   "             [--width W] [--height H] [--age YEARS] [--theme light|dark]\n"
   "             [--title TEXT] (a heading: TEXT and the chart's conditions)\n"
+  "  report     the report of a project file as a PDF: its details, the chart,\n"
+  "             each line option's inputs and results, the cautions\n"
+  "             PROJECT -o FILE.pdf [--paper a4|letter] [--age YEARS]\n"
   "  catalog    list a catalog: materials, pipes, fittings, fluids or aging [--json]\n"
   "\n"
   "Values take units: \"12 L/s\", \"150 gpm\", \"4 in\", \"0.045 mm\", \"20 C\", \"68 F\".\n"
@@ -97,6 +100,7 @@ main (int argc, char **argv)
     { "catalog", cli_cmd_catalog },
     { "eval", cli_cmd_eval },
     { "render", cli_cmd_render },
+    { "report", cli_cmd_report },
   };
 
   /* Messages may be translated; numbers are always written and read in the

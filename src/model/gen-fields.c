@@ -79,6 +79,9 @@ range_text (const RugosaField *f)
     case RUGOSA_FIELD_ENUM:
       return nicks (f->enum_type (), ", ");
     case RUGOSA_FIELD_TEXT:
+      if (f->flags & RUGOSA_FIELD_DATE)
+        return g_strdup ("`\"YYYY-MM-DD\"` or `\"\"`");
+      return g_strdup_printf ("≤ %d characters", f->max_chars);
     case RUGOSA_FIELD_CATALOG:
       return g_strdup_printf ("≤ %d characters", f->max_chars);
     case RUGOSA_FIELD_UNIT_MAP:

@@ -6,6 +6,10 @@
 #include <glib/gi18n-lib.h>
 #include <string.h>
 
+#include "core/fluid.h"
+#include "core/friction.h"
+#include "core/regime.h"
+
 #include "rugosa-enums.h"
 #include "rugosa-units.h"
 
@@ -121,4 +125,47 @@ rugosa_fluid_kind_title (int kind)
   if (kind < 0 || kind >= RG_FLUID_N_KINDS)
     return "";
   return _(fluid_titles[kind]);
+}
+
+static const char *system_titles[] = {
+  [RUGOSA_UNIT_SYSTEM_SI] = N_("SI (metric)"),
+  [RUGOSA_UNIT_SYSTEM_US] = N_("US customary"),
+};
+
+const char *
+rugosa_enum_title (GType enum_type, int value)
+{
+  if (enum_type == RUGOSA_TYPE_FLUID_KIND && value >= 0 && value < RG_FLUID_N_KINDS)
+    return _(fluid_titles[value]);
+  if (enum_type == RUGOSA_TYPE_UNIT_SYSTEM && value >= 0 && value < (int) G_N_ELEMENTS (system_titles))
+    return _(system_titles[value]);
+  /* Published names, the same in every language. */
+  if (enum_type == RUGOSA_TYPE_FRICTION_MODEL && value >= 0 && value < RG_FRICTION_N_MODELS)
+    return rg_friction_model_title ((RgFrictionModel) value);
+  return rugosa_enum_nick (enum_type, value);
+}
+
+const char *
+rugosa_regime_title (RgRegime regime)
+{
+  switch (regime)
+    {
+    case RG_REGIME_LAMINAR: return _("laminar");
+    case RG_REGIME_TRANSITIONAL: return _("transitional");
+    case RG_REGIME_TURBULENT: return _("turbulent");
+    default: return "—";
+    }
+}
+
+const char *
+rugosa_zone_title (RgRoughnessZone zone)
+{
+  switch (zone)
+    {
+    case RG_ZONE_SMOOTH: return _("smooth");
+    case RG_ZONE_TRANSITIONALLY_ROUGH: return _("transitionally rough");
+    case RG_ZONE_FULLY_ROUGH: return _("fully rough");
+    case RG_ZONE_NONE:
+    default: return "—";
+    }
 }

@@ -7,6 +7,8 @@
 
 #include <glib-object.h>
 
+#include "core/regime.h"
+
 #include "core/fluid.h"
 #include "core/friction.h"
 
@@ -67,6 +69,13 @@ typedef enum {
 GType rugosa_display_quantity_get_type (void) G_GNUC_CONST;
 
 /* The nick of `value` in `enum_type`, or NULL. */
+/* How a value reads for people, translated ("US customary", "Colebrook
+ * (1939)", "Water (IAPWS-IF97)"); its nick when the type has no titles. */
+/* A flow regime and a roughness zone as people read them, translated
+ * ("turbulent", "transitionally rough"); "—" for none. */
+const char *rugosa_regime_title (RgRegime regime);
+const char *rugosa_zone_title (RgRoughnessZone zone);
+const char *rugosa_enum_title (GType enum_type, int value);
 const char *rugosa_enum_nick (GType enum_type, int value);
 /* The value whose nick is `nick`; FALSE when there is none. */
 gboolean rugosa_enum_from_nick (GType enum_type, const char *nick,

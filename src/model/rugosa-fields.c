@@ -35,6 +35,7 @@
 #include <glib/gi18n-lib.h>
 
 #include <math.h>
+#include <stdlib.h>
 #include <string.h>
 
 #include "core/aging.h"
@@ -227,7 +228,34 @@ static RugosaField line_fields[] = {
     NULL, NULL, 0, NULL, NULL, 0, L (pump_curve), -1, 0 },
 };
 
+/* The project's details, shown in the title block of its report: texts
+ * of a printed line's length (a title or a client name of up to 200
+ * characters, a revision mark of up to 20), the date as ISO text, and a
+ * free note as long as a line option's. */
+#define PROJECT_TEXT(prop, path, fl, label, help, max, off) \
+  { prop, path, RUGOSA_FIELD_TEXT, RUGOSA_DISPLAY_NUMBER, 1.0, 0, 0, 0, "", \
+    fl, label, help, NULL, NULL, 0, NULL, NULL, max, off, -1, 0 }
+
 static RugosaField settings_fields[] = {
+  PROJECT_TEXT ("project-title", "project.title", 0, N_("Project title"),
+                N_("The title of the project, at the head of its report."),
+                200, S (project_title)),
+  PROJECT_TEXT ("project-client", "project.client", 0, N_("Client"),
+                N_("Who the work is for."), 200, S (project_client)),
+  PROJECT_TEXT ("project-location", "project.location", 0, N_("Location"),
+                N_("Where the lines are, as a site or a place name."),
+                200, S (project_location)),
+  PROJECT_TEXT ("project-author", "project.author", 0, N_("Author"),
+                N_("Who prepared the calculation."), 200, S (project_author)),
+  PROJECT_TEXT ("project-revision", "project.revision", 0, N_("Revision"),
+                N_("The revision mark of the calculation (\"A\", \"2\", \"P03\")."),
+                20, S (project_revision)),
+  PROJECT_TEXT ("project-date", "project.date", RUGOSA_FIELD_DATE, N_("Date"),
+                N_("The date of this revision, as YYYY-MM-DD; empty: the report shows the day it is made."),
+                10, S (project_date)),
+  PROJECT_TEXT ("project-note", "project.note", RUGOSA_FIELD_MULTILINE, N_("Project note"),
+                N_("Free text about the project: the purpose, the basis of the data, what is left open."),
+                20000, S (project_note)),
   { "unit-system", "units.system", RUGOSA_FIELD_ENUM, RUGOSA_DISPLAY_NUMBER, 1.0,
     0, 0, RUGOSA_UNIT_SYSTEM_SI, NULL, RUGOSA_FIELD_SEEDED, N_("Unit system"),
     N_("The family of units results are shown in: SI, or US customary."),
@@ -655,9 +683,25 @@ rugosa_field_parse_text (const RugosaField *field, const char *text,
 }
 
 gboolean
+rugosa_field_date_ok (const char *text)
+{
+  int y, m, d;
+
+  if (text == NULL || strlen (text) != 10 || text[4] != '-' || text[7] != '-')
+    return FALSE;
+  for (int i = 0; i < 10; i++)
+    if (i != 4 && i != 7 && !g_ascii_isdigit (text[i]))
+      return FALSE;
+  y = atoi (text), m = atoi (text + 5), d = atoi (text + 8);
+  return y >= 1000 && g_date_valid_dmy ((GDateDay) d, (GDateMonth) m, (GDateYear) y);
+}
+
+gboolean
 rugosa_field_text_ok (const RugosaField *field, const char *text)
 {
   if (text == NULL || !g_utf8_validate (text, -1, NULL))
+    return FALSE;
+  if ((field->flags & RUGOSA_FIELD_DATE) && *text != '\0' && !rugosa_field_date_ok (text))
     return FALSE;
   if (field->max_chars > 0 && g_utf8_strlen (text, -1) > field->max_chars)
     return FALSE;

@@ -61,6 +61,8 @@ typedef enum {
   /* a state of the fluid that rugosa-cli asks for when the line's fluid
    * is one of `fluid_kinds` (the others have a usable default) */
   RUGOSA_FIELD_STATE_REQUIRED = 1 << 9,
+  /* a TEXT holding a calendar date as ISO 8601 "YYYY-MM-DD", or empty */
+  RUGOSA_FIELD_DATE = 1 << 10,
 } RugosaFieldFlags;
 
 typedef struct {
@@ -170,16 +172,22 @@ gboolean rugosa_field_in_range (const RugosaField *field, double stored,
 
 /* Whether a text takes `text` as it is, on load and on entry: valid
  * UTF-8, no control character (Unicode Cc: C0, DEL and C1; a MULTILINE
- * row takes line breaks and tabs) and at most the row's `max_chars`
- * characters.  `field` may be NULL: one line, no length limit.  Each face
+ * row takes line breaks and tabs), at most the row's `max_chars`
+ * characters and, for a DATE row, empty or a real calendar date
+ * "YYYY-MM-DD" (rugosa_field_date_ok).  `field` may be NULL: one line, no length limit.  Each face
  * words the refusal its own way (rugosa-project-load.c). */
 typedef enum {
   RUGOSA_TEXT_OK,
   RUGOSA_TEXT_NOT_UTF8,
   RUGOSA_TEXT_CONTROL,
   RUGOSA_TEXT_TOO_LONG,
+  RUGOSA_TEXT_NOT_DATE,    /* a DATE row: neither empty nor "YYYY-MM-DD" */
 } RugosaTextProblem;
 RugosaTextProblem rugosa_field_text_problem (const RugosaField *field,
                                              const char *text);
+
+/* Whether `text` is a calendar date written as ISO 8601 "YYYY-MM-DD"
+ * (years 1000–9999, a day that exists in its month). */
+gboolean rugosa_field_date_ok (const char *text);
 
 G_END_DECLS

@@ -161,6 +161,9 @@ rugosa_field_text_problem (const RugosaField *field, const char *text)
     }
   if (field != NULL && field->max_chars > 0 && n > field->max_chars)
     return RUGOSA_TEXT_TOO_LONG;
+  if (field != NULL && (field->flags & RUGOSA_FIELD_DATE) && *text != '\0'
+      && !rugosa_field_date_ok (text))
+    return RUGOSA_TEXT_NOT_DATE;
   return RUGOSA_TEXT_OK;
 }
 
@@ -183,6 +186,9 @@ read_string (Ctx *ctx, const cJSON *v, const RugosaField *row, const char **out)
                    (row->flags & RUGOSA_FIELD_MULTILINE)
                      ? _("the text holds a control character other than a line break or a tab")
                      : _("the text holds a control character (a line break, a tab or another)"));
+    case RUGOSA_TEXT_NOT_DATE:
+      return fail (ctx, RUGOSA_PROJECT_ERROR_VALUE,
+                   _("expected a date as \"YYYY-MM-DD\" or an empty string"));
     case RUGOSA_TEXT_OK:
     default:
       break;

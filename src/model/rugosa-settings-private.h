@@ -15,6 +15,8 @@ struct _RugosaSettings
   GObject parent_instance;
 
   /* owned; each field below is a row of the settings field table */
+  char *project_title, *project_client, *project_location, *project_author;
+  char *project_revision, *project_date, *project_note;
   int unit_system;
   GVariant *unit_overrides; /* a{ss}, never NULL */
   int friction_model;
