@@ -146,6 +146,10 @@ texts = page_texts(many_pdf, pages)
 LAST_ROW = "Electric input power"
 found = {}
 for p, t in enumerate(texts):
+    # the chart's page: its legend numbers and names the lines as the
+    # blocks do, and no block opens there
+    if "Reynolds number" in t and LAST_ROW not in t:
+        continue
     heads = [(m.start(), int(m.group(1))) for m in
              re.finditer(r"^(\d+)\s+Option (\d+)$", t, re.M) if m.group(1) == m.group(2)]
     for i, (start, k) in enumerate(heads):
