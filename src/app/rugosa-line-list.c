@@ -33,12 +33,15 @@ struct _RugosaLineList
   /* owned references */
   GtkCustomFilter    *filter;
   GtkFilterListModel *listed;
-  GtkSingleSelection *list_selection;
+  GtkMultiSelection  *list_selection; /* the lines an edit applies to */
   GHashTable         *numbers;       /* RugosaLine -> place in the project + 1 */
   GPtrArray          *bound;         /* rows on screen */
   char               *filter_text;   /* casefolded; NULL: no filter */
 
+  RugosaLine         *pressed_line;  /* the row last pressed; weak */
+  guint               n_selected;
   gboolean updating;                 /* rows being set from the model */
+  gboolean following;                /* the list's selection being set from the window's */
 };
 
 G_DEFINE_FINAL_TYPE (RugosaLineList, rugosa_line_list, GTK_TYPE_WIDGET)
@@ -49,6 +52,14 @@ enum {
 };
 
 static guint signals[N_SIGNALS];
+
+enum {
+  PROP_0,
+  PROP_N_SELECTED,
+  N_PROPS
+};
+
+static GParamSpec *properties[N_PROPS];
 
 typedef struct {
   GtkWidget *number, *swatch, *name, *readout, *warn, *pin, *eye;
@@ -269,6 +280,29 @@ _rugosa_line_list_warn_tooltip (GtkWidget      *warn,
 }
 
 static void
+_rugosa_line_list_set_pressed (RugosaLineList *self,
+                               RugosaLine     *line)
+{
+  if (self->pressed_line != NULL)
+    g_object_remove_weak_pointer (G_OBJECT (self->pressed_line), (gpointer *) &self->pressed_line);
+  self->pressed_line = line;
+  if (line != NULL)
+    g_object_add_weak_pointer (G_OBJECT (line), (gpointer *) &self->pressed_line);
+}
+
+static void
+_rugosa_line_list_row_pressed (GtkGestureClick *gesture,
+                               int              n_press,
+                               double           x,
+                               double           y,
+                               RugosaLineList  *self)
+{
+  GtkWidget *box = gtk_event_controller_get_widget (GTK_EVENT_CONTROLLER (gesture));
+
+  _rugosa_line_list_set_pressed (self, g_object_get_data (G_OBJECT (box), "line"));
+}
+
+static void
 _rugosa_line_list_row_setup (GtkSignalListItemFactory *factory,
                              GtkListItem              *item,
                              RugosaLineList           *self)
@@ -333,6 +367,16 @@ _rugosa_line_list_row_setup (GtkSignalListItemFactory *factory,
   gtk_box_append (GTK_BOX (box), row->pin);
   gtk_box_append (GTK_BOX (box), row->eye);
   g_object_set_data_full (G_OBJECT (box), "row", row, g_free);
+  /* which row a click selects, before the list selects it: that line
+   * becomes the window's (see _rugosa_line_list_current) */
+  {
+    GtkGesture *press = gtk_gesture_click_new ();
+
+    gtk_gesture_single_set_button (GTK_GESTURE_SINGLE (press), 0);
+    gtk_event_controller_set_propagation_phase (GTK_EVENT_CONTROLLER (press), GTK_PHASE_CAPTURE);
+    g_signal_connect (press, "pressed", G_CALLBACK (_rugosa_line_list_row_pressed), self);
+    gtk_widget_add_controller (box, GTK_EVENT_CONTROLLER (press));
+  }
   gtk_list_item_set_child (item, box);
 }
 
@@ -553,15 +597,231 @@ _rugosa_line_list_items_changed (RugosaLineList *self)
   _rugosa_line_list_refresh_rows (self);
 }
 
-static void
-_rugosa_line_list_selection_changed (RugosaLineList *self)
+/* The list's own selection (several lines, for an edit applied to them
+ * all) and the window's (one line, the "current": the panel edits it, the
+ * chart marks it) follow each other.  The current line is the one the
+ * user last clicked or moved to in the list; a change of the window's
+ * line (picked on the chart, added, brought back by undo) selects that
+ * line alone, unless it is one of the lines selected already. */
+
+static guint
+_rugosa_line_list_find (GListModel *model,
+                        gpointer    item)
 {
-  guint pos = gtk_single_selection_get_selected (self->list_selection);
+  guint n = g_list_model_get_n_items (model);
+
+  /* linear: once per selection change, not per frame */
+  for (guint i = 0; i < n; i++)
+    {
+      g_autoptr (GObject) at = g_list_model_get_item (model, i);
+      if ((gpointer) at == item)
+        return i;
+    }
+  return GTK_INVALID_LIST_POSITION;
+}
+
+static void
+_rugosa_line_list_count_selected (RugosaLineList *self)
+{
+  g_autoptr (GtkBitset) set = gtk_selection_model_get_selection (GTK_SELECTION_MODEL (self->list_selection));
+  guint n = (guint) gtk_bitset_get_size (set);
+
+  if (n != self->n_selected)
+    {
+      self->n_selected = n;
+      g_object_notify_by_pspec (G_OBJECT (self), properties[PROP_N_SELECTED]);
+    }
+}
+
+/* The line of the list row holding the keyboard focus, or NULL. */
+static RugosaLine *
+_rugosa_line_list_focused_line (RugosaLineList *self)
+{
+  GtkRoot *root = gtk_widget_get_root (GTK_WIDGET (self));
+  GtkWidget *focus = root != NULL ? gtk_root_get_focus (root) : NULL;
+
+  for (GtkWidget *w = focus; w != NULL && w != GTK_WIDGET (self->view); w = gtk_widget_get_parent (w))
+    {
+      GtkWidget *child = gtk_widget_get_first_child (w);
+      gpointer line = g_object_get_data (G_OBJECT (w), "line");
+
+      /* the focus is on the list's row, which holds our row box */
+      if (line == NULL && child != NULL)
+        line = g_object_get_data (G_OBJECT (child), "line");
+      if (line != NULL)
+        return line;
+    }
+  return NULL;
+}
+
+/* The line at `position` of the list, borrowed: the project holds it. */
+static RugosaLine *
+_rugosa_line_list_line_at (RugosaLineList *self,
+                           guint           position)
+{
+  RugosaLine *line = g_list_model_get_item (G_LIST_MODEL (self->listed), position);
+
+  if (line != NULL)
+    g_object_unref (line);
+  return line;
+}
+
+static gboolean
+_rugosa_line_list_selected_in (RugosaLineList *self,
+                               RugosaLine     *line,
+                               guint           position,
+                               guint           n_items)
+{
+  GListModel *model = G_LIST_MODEL (self->list_selection);
+
+  for (guint i = position; i < position + n_items; i++)
+    {
+      g_autoptr (GObject) at = g_list_model_get_item (model, i);
+
+      if ((gpointer) at == (gpointer) line)
+        return gtk_selection_model_is_selected (GTK_SELECTION_MODEL (self->list_selection), i);
+    }
+  return FALSE;
+}
+
+/* Which selected line becomes the window's after the list's selection
+ * changed in position … position + n_items: the row just clicked, else
+ * the row the keyboard moved to, else a single line just added, else the
+ * window's line while it stays selected, else the first selected. */
+static RugosaLine *
+_rugosa_line_list_current (RugosaLineList *self,
+                           guint           position,
+                           guint           n_items)
+{
+  GtkSelectionModel *model = GTK_SELECTION_MODEL (self->list_selection);
+  RugosaLine *line = self->pressed_line;
+  RugosaLine *main_line = gtk_single_selection_get_selected_item (self->selection);
+  g_autoptr (GtkBitset) set = NULL;
+  guint main_pos;
+
+  if (line != NULL && _rugosa_line_list_selected_in (self, line, position, n_items))
+    return line;
+  line = _rugosa_line_list_focused_line (self);
+  if (line != NULL && _rugosa_line_list_selected_in (self, line, position, n_items))
+    return line;
+  if (n_items == 1 && gtk_selection_model_is_selected (model, position))
+    return _rugosa_line_list_line_at (self, position);
+  main_pos = main_line != NULL ? _rugosa_line_list_find (G_LIST_MODEL (model), main_line)
+                               : GTK_INVALID_LIST_POSITION;
+  if (main_pos != GTK_INVALID_LIST_POSITION && gtk_selection_model_is_selected (model, main_pos))
+    return main_line;
+  set = gtk_selection_model_get_selection (model);
+  if (gtk_bitset_is_empty (set))
+    return NULL;
+  return _rugosa_line_list_line_at (self, gtk_bitset_get_minimum (set));
+}
+
+static void
+_rugosa_line_list_view_changed (RugosaLineList *self,
+                                guint           position,
+                                guint           n_items)
+{
+  RugosaLine *line;
+  guint pos;
+
+  _rugosa_line_list_count_selected (self);
+  if (self->following)
+    return;
+  line = _rugosa_line_list_current (self, position, n_items);
+  _rugosa_line_list_set_pressed (self, NULL);
+  if (line == NULL)
+    return;
+  pos = (guint) rugosa_project_find_line (self->project, line);
+  self->following = TRUE;
+  if (pos != GTK_INVALID_LIST_POSITION && gtk_single_selection_get_selected (self->selection) != pos)
+    gtk_single_selection_set_selected (self->selection, pos);
+  self->following = FALSE;
+}
+
+static void
+_rugosa_line_list_selection_changed (GtkSelectionModel *model,
+                                     guint              position,
+                                     guint              n_items,
+                                     RugosaLineList    *self)
+{
+  _rugosa_line_list_view_changed (self, position, n_items);
+}
+
+/* The window's line changed: select it in the list. */
+static void
+_rugosa_line_list_follow_window (RugosaLineList *self)
+{
+  RugosaLine *line;
+  guint pos;
 
   _rugosa_line_list_show_group (self);
+  if (self->following)
+    return;
+  line = gtk_single_selection_get_selected_item (self->selection);
+  pos = line != NULL ? _rugosa_line_list_find (G_LIST_MODEL (self->listed), line)
+                     : GTK_INVALID_LIST_POSITION;
+  self->following = TRUE;
+  if (pos == GTK_INVALID_LIST_POSITION)
+    gtk_selection_model_unselect_all (GTK_SELECTION_MODEL (self->list_selection));
+  else if (!gtk_selection_model_is_selected (GTK_SELECTION_MODEL (self->list_selection), pos))
+    gtk_selection_model_select_item (GTK_SELECTION_MODEL (self->list_selection), pos, TRUE);
+  self->following = FALSE;
   /* a line picked on the chart comes into view */
   if (pos != GTK_INVALID_LIST_POSITION)
     gtk_widget_activate_action (GTK_WIDGET (self->view), "list.scroll-to-item", "u", pos);
+}
+
+/* The filter moved the rows: the lines it left keep their selection; with
+ * none selected, the window's line is selected again when listed. */
+static void
+_rugosa_line_list_listed_changed (RugosaLineList *self)
+{
+  g_autoptr (GtkBitset) set = gtk_selection_model_get_selection (GTK_SELECTION_MODEL (self->list_selection));
+  RugosaLine *line = gtk_single_selection_get_selected_item (self->selection);
+  guint pos;
+
+  if (gtk_bitset_is_empty (set) && line != NULL
+      && (pos = _rugosa_line_list_find (G_LIST_MODEL (self->listed), line)) != GTK_INVALID_LIST_POSITION)
+    {
+      self->following = TRUE;
+      gtk_selection_model_select_item (GTK_SELECTION_MODEL (self->list_selection), pos, TRUE);
+      self->following = FALSE;
+    }
+  _rugosa_line_list_count_selected (self);
+}
+
+guint
+rugosa_line_list_get_n_selected (RugosaLineList *self)
+{
+  g_return_val_if_fail (RUGOSA_IS_LINE_LIST (self), 0);
+  return self->n_selected;
+}
+
+GPtrArray *
+rugosa_line_list_get_selected_lines (RugosaLineList *self)
+{
+  GPtrArray *lines = g_ptr_array_new ();
+  g_autoptr (GtkBitset) set = NULL;
+  GtkBitsetIter iter;
+  guint pos;
+
+  g_return_val_if_fail (RUGOSA_IS_LINE_LIST (self), lines);
+  if (self->list_selection == NULL)
+    return lines;
+  set = gtk_selection_model_get_selection (GTK_SELECTION_MODEL (self->list_selection));
+  for (gboolean more = gtk_bitset_iter_init_first (&iter, set, &pos); more;
+       more = gtk_bitset_iter_next (&iter, &pos))
+    {
+      g_ptr_array_add (lines, _rugosa_line_list_line_at (self, pos));
+    }
+  return lines;
+}
+
+GtkSelectionModel *
+rugosa_line_list_get_selection (RugosaLineList *self)
+{
+  g_return_val_if_fail (RUGOSA_IS_LINE_LIST (self), NULL);
+  return GTK_SELECTION_MODEL (self->list_selection);
 }
 
 static void
@@ -596,10 +856,7 @@ rugosa_line_list_set_context (RugosaLineList     *self,
   self->visibility = visibility;
   self->listed = gtk_filter_list_model_new (g_object_ref (G_LIST_MODEL (project)),
                                             g_object_ref (GTK_FILTER (self->filter)));
-  self->list_selection = gtk_single_selection_new (g_object_ref (G_LIST_MODEL (self->listed)));
-  gtk_single_selection_set_autoselect (self->list_selection, FALSE);
-  gtk_single_selection_set_can_unselect (self->list_selection, TRUE);
-  rugosa_selection_link (selection, self->list_selection);
+  self->list_selection = gtk_multi_selection_new (g_object_ref (G_LIST_MODEL (self->listed)));
   gtk_list_view_set_model (self->view, GTK_SELECTION_MODEL (self->list_selection));
   /* the binding goes with whichever of the two is finalized first */
   g_object_bind_property (visibility, "only-selected", self->only_selected_button, "active",
@@ -609,12 +866,15 @@ rugosa_line_list_set_context (RugosaLineList     *self,
                            self, G_CONNECT_SWAPPED);
   g_signal_connect_object (visibility, "changed", G_CALLBACK (_rugosa_line_list_refresh_rows),
                            self, G_CONNECT_SWAPPED);
-  g_signal_connect_object (self->list_selection, "notify::selected",
-                           G_CALLBACK (_rugosa_line_list_selection_changed), self, G_CONNECT_SWAPPED);
+  g_signal_connect_object (self->list_selection, "selection-changed",
+                           G_CALLBACK (_rugosa_line_list_selection_changed), self, 0);
   g_signal_connect_object (selection, "notify::selected",
-                           G_CALLBACK (_rugosa_line_list_show_group), self, G_CONNECT_SWAPPED);
+                           G_CALLBACK (_rugosa_line_list_follow_window), self, G_CONNECT_SWAPPED);
+  g_signal_connect_object (self->listed, "items-changed",
+                           G_CALLBACK (_rugosa_line_list_listed_changed), self,
+                           G_CONNECT_SWAPPED | G_CONNECT_AFTER);
   _rugosa_line_list_renumber (self);
-  _rugosa_line_list_show_group (self);
+  _rugosa_line_list_follow_window (self);
 }
 
 /* --- object ------------------------------------------------------------------ */
@@ -630,6 +890,7 @@ rugosa_line_list_dispose (GObject *object)
   /* Template children without an id are not cleared by the call above. */
   for (GtkWidget *child; (child = gtk_widget_get_first_child (GTK_WIDGET (self))) != NULL;)
     gtk_widget_unparent (child);
+  _rugosa_line_list_set_pressed (self, NULL);
   g_clear_object (&self->list_selection);
   g_clear_object (&self->listed);
   g_clear_object (&self->filter);
@@ -640,12 +901,34 @@ rugosa_line_list_dispose (GObject *object)
 }
 
 static void
+rugosa_line_list_get_property (GObject    *object,
+                               guint       prop_id,
+                               GValue     *value,
+                               GParamSpec *pspec)
+{
+  RugosaLineList *self = RUGOSA_LINE_LIST (object);
+
+  switch (prop_id)
+    {
+    case PROP_N_SELECTED: g_value_set_uint (value, self->n_selected); break;
+    default: G_OBJECT_WARN_INVALID_PROPERTY_ID (object, prop_id, pspec);
+    }
+}
+
+static void
 rugosa_line_list_class_init (RugosaLineListClass *klass)
 {
   GObjectClass *object_class = G_OBJECT_CLASS (klass);
   GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
 
   object_class->dispose = rugosa_line_list_dispose;
+  object_class->get_property = rugosa_line_list_get_property;
+
+  properties[PROP_N_SELECTED] =
+    g_param_spec_uint ("n-selected", NULL, "How many lines are selected in the list",
+                       0, G_MAXUINT, 0,
+                       G_PARAM_READABLE | G_PARAM_EXPLICIT_NOTIFY | G_PARAM_STATIC_STRINGS);
+  g_object_class_install_properties (object_class, N_PROPS, properties);
 
   signals[SIGNAL_EDIT_LINE] =
     g_signal_new ("edit-line", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST,
