@@ -49,9 +49,9 @@ fixture_setup (Fixture *f, gconstpointer data)
                 "fluid-kind", RG_FLUID_SEAWATER,
                 "temperature", 288.15,
                 "pressure", 2.0e5,
-                /* Common practice (no single source): 35 g/kg, the usual
-                 * salinity of open seawater (an input, not a check) */
-                "salinity", 0.035,
+                /* an invented input, 30 g/kg: not the default, so that
+                 * the copy shows */
+                "salinity", 0.030,
                 "aging-class-id", "moderate",
                 "flow-minimum", 0.004,
                 "flow-maximum", 0.012,
@@ -142,6 +142,9 @@ test_fluid_three_of_five (Fixture *f, gconstpointer data)
 
   for (guint i = 0; i < N_LINES; i++)
     others_before[i] = others_text (f->lines[i], RUGOSA_LINE_PART_FLUID);
+  /* the targets' salinity differs from the source's before */
+  g_assert_cmpfloat (rugosa_line_get_double (f->lines[3], "salinity"), !=,
+                     rugosa_line_get_double (f->lines[0], "salinity"));
   f->changed = 0;
   g_assert_cmpuint (rugosa_apply_part (f->history, f->lines[0], RUGOSA_LINE_PART_FLUID,
                                        targets, G_N_ELEMENTS (targets)), ==, 3);

@@ -1,7 +1,8 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* RugosaWindow is split over rugosa-window.c (layout, selection, editing),
  * rugosa-window-files.c (open, save, recent, drop, autosave, close guard)
- * and rugosa-window-output.c (chart export, CSV, print). */
+ * rugosa-window-output.c (chart export, CSV, print) and
+ * rugosa-window-edits.c (edits applied to several lines). */
 #pragma once
 
 #include "rugosa-canvas.h"
@@ -81,6 +82,12 @@ void     _rugosa_window_remove_autosave   (RugosaWindow   *self);
 
 /* The view the chart area shows (the one exports and prints draw). */
 RugosaChartView _rugosa_window_chart_view (RugosaWindow *self);
+
+/* rugosa-window-edits.c: a line's fluid, aging or flows applied to the
+ * other selected lines */
+void     _rugosa_window_edits_class_init  (GtkWidgetClass *widget_class);
+void     _rugosa_window_edits_init        (RugosaWindow   *self);
+void     _rugosa_window_edits_update_actions (RugosaWindow *self);
 
 /* rugosa-window-output.c */
 void     _rugosa_window_output_class_init (GtkWidgetClass *widget_class);

@@ -169,6 +169,7 @@ _rugosa_window_apply_actions (RugosaWindow *self)
   /* Each direction on its own: at the top of the list there is no "up". */
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-up", has && pos > 0);
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-down", has && pos + 1 < n);
+  _rugosa_window_edits_update_actions (self);
 }
 
 static gboolean
@@ -755,6 +756,7 @@ _rugosa_window_setup (RugosaWindow *self)
   g_signal_connect_object (self->history, "notify::can-redo", G_CALLBACK (_rugosa_window_history_changed), self, G_CONNECT_SWAPPED);
 
   _rugosa_window_files_init (self);
+  _rugosa_window_edits_init (self);
   _rugosa_window_project_replaced (self);
   self->modified = FALSE;
   _rugosa_window_update_title (self);
@@ -847,6 +849,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
 
   _rugosa_window_files_class_init (widget_class);
   _rugosa_window_output_class_init (widget_class);
+  _rugosa_window_edits_class_init (widget_class);
   _rugosa_window_sizing_class_init (widget_class);
 }
 
