@@ -42,6 +42,7 @@ struct _RugosaLineList
   guint               n_selected;
   gboolean updating;                 /* rows being set from the model */
   gboolean following;                /* the list's selection being set from the window's */
+  gboolean follow_pending;           /* the window's line changed while the project's list did */
 };
 
 G_DEFINE_FINAL_TYPE (RugosaLineList, rugosa_line_list, GTK_TYPE_WIDGET)
@@ -757,6 +758,17 @@ _rugosa_line_list_follow_window (RugosaLineList *self)
   _rugosa_line_list_show_group (self);
   if (self->following)
     return;
+  /* Inside the project's items-changed (a line removed or added) the
+   * filtered list may not have followed yet: select once it has. */
+  {
+    GSignalInvocationHint *hint = g_signal_get_invocation_hint (self->project);
+
+    if (hint != NULL && hint->signal_id == g_signal_lookup ("items-changed", G_TYPE_LIST_MODEL))
+      {
+        self->follow_pending = TRUE;
+        return;
+      }
+  }
   line = gtk_single_selection_get_selected_item (self->selection);
   pos = line != NULL ? _rugosa_line_list_find (G_LIST_MODEL (self->listed), line)
                      : GTK_INVALID_LIST_POSITION;
@@ -769,6 +781,15 @@ _rugosa_line_list_follow_window (RugosaLineList *self)
   /* a line picked on the chart comes into view */
   if (pos != GTK_INVALID_LIST_POSITION)
     gtk_widget_activate_action (GTK_WIDGET (self->view), "list.scroll-to-item", "u", pos);
+}
+
+static void
+_rugosa_line_list_project_changed_after (RugosaLineList *self)
+{
+  if (!self->follow_pending)
+    return;
+  self->follow_pending = FALSE;
+  _rugosa_line_list_follow_window (self);
 }
 
 /* The filter moved the rows: the lines it left keep their selection; with
@@ -870,6 +891,9 @@ rugosa_line_list_set_context (RugosaLineList     *self,
                            G_CALLBACK (_rugosa_line_list_selection_changed), self, 0);
   g_signal_connect_object (selection, "notify::selected",
                            G_CALLBACK (_rugosa_line_list_follow_window), self, G_CONNECT_SWAPPED);
+  g_signal_connect_object (project, "items-changed",
+                           G_CALLBACK (_rugosa_line_list_project_changed_after), self,
+                           G_CONNECT_SWAPPED | G_CONNECT_AFTER);
   g_signal_connect_object (self->listed, "items-changed",
                            G_CALLBACK (_rugosa_line_list_listed_changed), self,
                            G_CONNECT_SWAPPED | G_CONNECT_AFTER);
