@@ -376,10 +376,19 @@ test_group_entry (void)
   ui_harness_close_window (win);
 }
 
+/* The label above the panel's "Fluid", "Aging" and "Flows" buttons. */
+static GtkLabel *
+apply_label (GtkWidget *button)
+{
+  GtkWidget *box = gtk_widget_get_parent (gtk_widget_get_parent (button));
+
+  return GTK_LABEL (gtk_widget_get_first_child (box));
+}
+
 /* The fluid of one line given to three others, along the user's path:
  * the lines selected in the list (Ctrl-click: the line clicked last is
- * the one the panel edits), the panel's "Apply to 3 other lines" beside
- * the fluid, and one undo. */
+ * the one the panel edits), the panel's "Apply to the 3 other selected
+ * lines: Fluid", and one undo. */
 static void
 test_apply_fluid (void)
 {
@@ -398,7 +407,7 @@ test_apply_fluid (void)
   g_assert_nonnull (apply);
   /* one line selected: nothing to apply to */
   g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 1);
-  g_assert_false (gtk_widget_get_visible (apply));
+  g_assert_false (gtk_widget_is_visible (apply));
 
   /* the first line made seawater, as the panel would (one edit each) */
   rugosa_history_set (history, source, "fluid-kind", RG_FLUID_SEAWATER, NULL);
@@ -417,8 +426,9 @@ test_apply_fluid (void)
   g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 4);
   g_assert_cmpuint (gtk_single_selection_get_selected (rugosa_window_get_selection (win)), ==, 0);
   g_assert_true (rugosa_line_panel_get_line (RUGOSA_LINE_PANEL (panel)) == source);
-  g_assert_true (gtk_widget_get_visible (apply));
-  g_assert_cmpstr (gtk_button_get_label (GTK_BUTTON (apply)), ==, "Apply to 3 other lines");
+  g_assert_true (gtk_widget_is_visible (apply));
+  g_assert_cmpstr (gtk_label_get_text (apply_label (apply)), ==, "Apply to the 3 other selected lines:");
+  ui_harness_save_png (GTK_WIDGET (win), "rugosa-apply.png");
 
   ui_harness_click (apply);
   ui_harness_drain ();
@@ -450,7 +460,7 @@ test_apply_fluid (void)
   ui_harness_drain ();
   g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, LINES);
   g_assert_cmpuint (gtk_single_selection_get_selected (rugosa_window_get_selection (win)), ==, 0);
-  g_assert_cmpstr (gtk_button_get_label (GTK_BUTTON (apply)), ==, "Apply to 999 other lines");
+  g_assert_cmpstr (gtk_label_get_text (apply_label (apply)), ==, "Apply to the 999 other selected lines:");
 
   /* a line picked elsewhere (the chart) among the selected keeps them;
    * one outside them is selected alone, as a plain click does */
@@ -465,7 +475,7 @@ test_apply_fluid (void)
   ui_harness_drain ();
   g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 1);
   g_assert_cmpstr (rugosa_line_get_name (rugosa_line_panel_get_line (RUGOSA_LINE_PANEL (panel))), ==, "Option 18");
-  g_assert_false (gtk_widget_get_visible (apply));
+  g_assert_false (gtk_widget_is_visible (apply));
   rugosa_line_list_set_filter (list, "");
   ui_harness_drain ();
   g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 1);

@@ -35,9 +35,8 @@ struct _RugosaLinePanel
   RugosaSizePicker *pipe_picker;
   AdwExpanderRow   *fittings_row;
   GtkDropDown      *fitting_add_dropdown;
-  GtkButton        *apply_fluid_button;
-  GtkButton        *apply_aging_button;
-  GtkButton        *apply_flow_button;
+  GtkBox           *apply_box;
+  GtkLabel         *apply_label;
 
   /* borrowed references */
   RugosaProject *project;
@@ -93,21 +92,14 @@ rugosa_line_panel_set_n_others (RugosaLinePanel *self,
                                 guint            n)
 {
   g_autofree char *label = NULL;
-  g_autofree char *aging = NULL;
 
   g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
-  /* TRANSLATORS: a button beside the heading of the fluid or the flows;
-   * %u is a number of other selected line options */
-  label = g_strdup_printf (ngettext ("Apply to %u other line", "Apply to %u other lines", n), n);
-  /* TRANSLATORS: a button beside the heading of the pipe wall (its
-   * roughness growth); %u is a number of other selected line options */
-  aging = g_strdup_printf (ngettext ("Apply aging to %u other line", "Apply aging to %u other lines", n), n);
-  gtk_button_set_label (self->apply_fluid_button, label);
-  gtk_button_set_label (self->apply_flow_button, label);
-  gtk_button_set_label (self->apply_aging_button, aging);
-  for (GtkWidget **b = (GtkWidget *[]) { GTK_WIDGET (self->apply_fluid_button), GTK_WIDGET (self->apply_aging_button),
-                                         GTK_WIDGET (self->apply_flow_button), NULL }; *b != NULL; b++)
-    gtk_widget_set_visible (*b, n > 0);
+  /* TRANSLATORS: above three buttons, "Fluid", "Aging" and "Flows", that
+   * give other line options this line's values; %u is how many */
+  label = g_strdup_printf (ngettext ("Apply to the %u other selected line:",
+                                     "Apply to the %u other selected lines:", n), n);
+  gtk_label_set_text (self->apply_label, label);
+  gtk_widget_set_visible (GTK_WIDGET (self->apply_box), n > 0);
 }
 
 RugosaLine *
@@ -1110,9 +1102,8 @@ rugosa_line_panel_class_init (RugosaLinePanelClass *klass)
   BIND (pipe_picker);
   BIND (fittings_row);
   BIND (fitting_add_dropdown);
-  BIND (apply_fluid_button);
-  BIND (apply_aging_button);
-  BIND (apply_flow_button);
+  BIND (apply_box);
+  BIND (apply_label);
 #undef BIND
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_committed);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_fluid_kind_changed);

@@ -25,8 +25,8 @@ void        rugosa_line_panel_set_line     (RugosaLinePanel *self,
                                             RugosaLine      *line);
 RugosaLine *rugosa_line_panel_get_line     (RugosaLinePanel *self);
 /* How many other lines the list has selected besides the panel's: with
- * one or more, the fluid, pipe wall and flows groups offer to apply this
- * line's fluid, aging or flows to them (the window's "win.apply-part"). */
+ * one or more, the panel offers under the line's name to apply its
+ * fluid, aging or flows to them (the window's "win.apply-part"). */
 void        rugosa_line_panel_set_n_others (RugosaLinePanel *self,
                                             guint            n);
 /* Re-read the line and its results (after any change). */
