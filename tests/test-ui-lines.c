@@ -482,6 +482,64 @@ test_apply_fluid (void)
   ui_harness_close_window (win);
 }
 
+/* Whether a label under `root` shows `text` (a toast's title). */
+static gboolean
+shows_text (GtkWidget  *root,
+            const char *text)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    if ((GTK_IS_LABEL (c) && g_strcmp0 (gtk_label_get_text (GTK_LABEL (c)), text) == 0)
+        || shows_text (c, text))
+      return TRUE;
+  return FALSE;
+}
+
+/* Flows that suit a wide line given to a narrow one: applied, undoable,
+ * and the line that stops evaluating is counted. */
+static void
+test_apply_flows_beyond_range (void)
+{
+  RugosaWindow *win = open_thousand ();
+  RugosaLineList *list = line_list (win);
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaHistory *history = rugosa_window_get_history (win);
+  GtkSelectionModel *selected = rugosa_line_list_get_selection (list);
+  g_autoptr (GVariant) flow = g_variant_ref_sink (g_variant_new_string ("flow"));
+  GtkWidget *apply = ui_harness_find_action_widget (rugosa_window_get_line_panel (win), "win.apply-part", flow);
+  RugosaLine *wide = rugosa_project_get_line (project, 0);
+  RugosaLine *narrow = rugosa_project_get_line (project, 1);
+  g_autofree char *before = NULL;
+  gsize n;
+
+  /* invented inputs: 100 m³/s in a 2 m bore is Re ≈ 6e7, in a 10 mm bore
+   * Re ≈ 1e10, beyond the friction correlations' range (RG_FRICTION_RE_MAX) */
+  rugosa_history_set (history, wide, "pipe-designation", NULL, "inner-diameter", 2.0,
+                      "flow-design", 100.0, NULL);
+  rugosa_history_set (history, narrow, "pipe-designation", NULL, "inner-diameter", 0.01, NULL);
+  ui_harness_drain ();
+  before = rugosa_project_to_data (project, &n);
+
+  gtk_selection_model_select_item (selected, 1, TRUE);
+  gtk_selection_model_select_item (selected, 2, FALSE);
+  gtk_selection_model_select_item (selected, 0, FALSE);
+  ui_harness_drain ();
+  g_assert_true (rugosa_line_panel_get_line (RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win))) == wide);
+  ui_harness_click (apply);
+  ui_harness_drain ();
+  g_assert_cmpfloat (rugosa_line_get_double (narrow, "flow-design"), ==, 100.0);
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (project, 2), "flow-design"), ==, 100.0);
+  g_assert_cmpstr (rugosa_history_get_undo_label (history), ==, "Apply the flows to 2 lines");
+  g_assert_true (shows_text (GTK_WIDGET (win), "1 line cannot be evaluated with these values: Ctrl+Z takes them back."));
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  ui_harness_drain ();
+  {
+    g_autofree char *undone = rugosa_project_to_data (project, &n);
+    g_assert_cmpstr (undone, ==, before);
+  }
+  ui_harness_close_window (win);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -504,6 +562,7 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/lines/only-selected-and-pin", test_only_selected_and_pin);
   g_test_add_func ("/ui/lines/group-entry", test_group_entry);
   g_test_add_func ("/ui/lines/apply-fluid", test_apply_fluid);
+  g_test_add_func ("/ui/lines/apply-flows-beyond-range", test_apply_flows_beyond_range);
 
   status = g_test_run ();
   g_object_unref (app);

@@ -47,7 +47,9 @@ _rugosa_window_apply_part (GtkWidget  *widget,
   RugosaWindow *self = RUGOSA_WINDOW (widget);
   RugosaLine *current = gtk_single_selection_get_selected_item (self->selection);
   g_autoptr (GPtrArray) lines = NULL;
+  g_autofree gboolean *ok_before = NULL;
   int part = RUGOSA_LINE_PART_NONE;
+  guint broken = 0;
 
   if (!rugosa_enum_from_nick (RUGOSA_TYPE_LINE_PART, g_variant_get_string (param, NULL), &part)
       || part == RUGOSA_LINE_PART_NONE)
@@ -58,10 +60,26 @@ _rugosa_window_apply_part (GtkWidget  *widget,
   if (current == NULL)
     return;
   lines = rugosa_line_list_get_selected_lines (self->line_list);
+  /* Values that suit the current line may not suit another (a flow beyond
+   * the correlations' range in a narrow bore, a gas's pressure drop along
+   * a long run): applied all the same, as one step to take back, and the
+   * lines that stop evaluating are counted for the user. */
+  ok_before = g_new (gboolean, lines->len);
+  for (guint i = 0; i < lines->len; i++)
+    ok_before[i] = _rugosa_window_line_ok (self, g_ptr_array_index (lines, i));
   if (rugosa_apply_part (self->history, current, (RugosaLinePart) part,
                          (RugosaLine *const *) lines->pdata, lines->len) == 0)
     _rugosa_window_toast (self, _("The other selected lines hold these values already."));
   rugosa_history_break_merge (self->history);
+  for (guint i = 0; i < lines->len; i++)
+    broken += ok_before[i] && !_rugosa_window_line_ok (self, g_ptr_array_index (lines, i));
+  if (broken > 0)
+    {
+      g_autofree char *text = g_strdup_printf (ngettext ("%u line cannot be evaluated with these values: Ctrl+Z takes them back.",
+                                                         "%u lines cannot be evaluated with these values: Ctrl+Z takes them back.",
+                                                         broken), broken);
+      _rugosa_window_toast (self, text);
+    }
 }
 
 void

@@ -68,6 +68,9 @@ void     _rugosa_window_update_title      (RugosaWindow  *self);
 void     _rugosa_window_update_actions    (RugosaWindow  *self);
 void     _rugosa_window_toast             (RugosaWindow  *self,
                                            const char    *text);
+/* Whether `line` evaluates (at the design flow too, when it has one). */
+gboolean _rugosa_window_line_ok           (RugosaWindow  *self,
+                                           RugosaLine    *line);
 /* Replace the project's content (load, new, recovery) and reset history. */
 void     _rugosa_window_project_replaced  (RugosaWindow  *self);
 

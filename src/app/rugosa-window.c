@@ -395,7 +395,7 @@ _rugosa_window_trial (RugosaWindow *self,
   return TRUE;
 }
 
-static gboolean
+gboolean
 _rugosa_window_line_ok (RugosaWindow *self,
                         RugosaLine   *line)
 {
