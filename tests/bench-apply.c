@@ -18,8 +18,12 @@
  * re-evaluation per changed line that follows (what a window's refresh
  * costs on top, chart drawing aside).
  *
- * Measured on the development machine (2 cores shared with other work),
- * n = 100 and 1000: see DEVELOPERS.md ("Benchmarks") for the figures.
+ * Measured on the development machine (2 cores shared with other work,
+ * load near 2), three runs: n = 100: apply 0.29–0.48 ms, undo 0.13–0.18
+ * ms, evaluation after either 1.1–1.7 ms; n = 1000: apply 3.3–5.4 ms,
+ * undo 1.5–2.4 ms, evaluation 11–17 ms (apply 9.7 ms under heavier
+ * load).  Per line: 3–5 µs to apply, 1.3–2.4 µs to undo, 12–17 µs to
+ * evaluate, the same at both sizes within the noise: linear.
  *
  * Output: one JSON line per project on stdout.  Exit status 0 whatever
  * the figures: a measurement, not a test. */
