@@ -376,6 +376,23 @@ test_group_entry (void)
   ui_harness_close_window (win);
 }
 
+/* The label under `root` showing `text`, or NULL. */
+static GtkWidget *
+find_label (GtkWidget  *root,
+            const char *text)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkWidget *found;
+
+      if (GTK_IS_LABEL (c) && g_strcmp0 (gtk_label_get_text (GTK_LABEL (c)), text) == 0)
+        return c;
+      if ((found = find_label (c, text)) != NULL)
+        return found;
+    }
+  return NULL;
+}
+
 /* The label above the panel's "Fluid", "Aging" and "Flows" buttons. */
 static GtkLabel *
 apply_label (GtkWidget *button)
@@ -429,6 +446,9 @@ test_apply_fluid (void)
   g_assert_true (gtk_widget_is_visible (apply));
   g_assert_cmpstr (gtk_label_get_text (apply_label (apply)), ==, "Apply to the 3 other selected lines:");
   ui_harness_save_png (GTK_WIDGET (win), "rugosa-apply.png");
+  /* in the list, the line the panel edits stands out */
+  g_assert_true (gtk_widget_has_css_class (find_label (rugosa_line_list_get_view (list), "Option 1"), "heading"));
+  g_assert_false (gtk_widget_has_css_class (find_label (rugosa_line_list_get_view (list), "Option 2"), "heading"));
 
   ui_harness_click (apply);
   ui_harness_drain ();

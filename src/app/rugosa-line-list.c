@@ -189,6 +189,19 @@ _rugosa_line_list_update_row (RugosaLineList *self,
   gtk_widget_queue_draw (row->swatch);
   if (g_strcmp0 (gtk_label_get_text (GTK_LABEL (row->name)), rugosa_line_get_name (line)) != 0)
     gtk_label_set_text (GTK_LABEL (row->name), rugosa_line_get_name (line));
+  /* among several selected lines, the one the panel edits stands out */
+  {
+    gboolean current = self->n_selected > 1 && self->selection != NULL
+                       && gtk_single_selection_get_selected_item (self->selection) == (gpointer) line;
+
+    if (gtk_widget_has_css_class (row->name, "heading") != current)
+      {
+        if (current)
+          gtk_widget_add_css_class (row->name, "heading");
+        else
+          gtk_widget_remove_css_class (row->name, "heading");
+      }
+  }
 
   g_object_get (line, "group", &group, NULL);
   res = rugosa_readout_results (self->project, line);
@@ -630,6 +643,7 @@ _rugosa_line_list_count_selected (RugosaLineList *self)
   if (n != self->n_selected)
     {
       self->n_selected = n;
+      _rugosa_line_list_refresh_rows (self);
       g_object_notify_by_pspec (G_OBJECT (self), properties[PROP_N_SELECTED]);
     }
 }
@@ -756,6 +770,7 @@ _rugosa_line_list_follow_window (RugosaLineList *self)
   guint pos;
 
   _rugosa_line_list_show_group (self);
+  _rugosa_line_list_refresh_rows (self);
   if (self->following)
     return;
   /* Inside the project's items-changed (a line removed or added) the
