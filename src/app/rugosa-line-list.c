@@ -386,7 +386,7 @@ _rugosa_line_list_row_setup (GtkSignalListItemFactory *factory,
   {
     GtkGesture *press = gtk_gesture_click_new ();
 
-    gtk_gesture_single_set_button (GTK_GESTURE_SINGLE (press), 0);
+    gtk_gesture_single_set_button (GTK_GESTURE_SINGLE (press), GDK_BUTTON_PRIMARY);
     gtk_event_controller_set_propagation_phase (GTK_EVENT_CONTROLLER (press), GTK_PHASE_CAPTURE);
     g_signal_connect (press, "pressed", G_CALLBACK (_rugosa_line_list_row_pressed), self);
     gtk_widget_add_controller (box, GTK_EVENT_CONTROLLER (press));
@@ -655,6 +655,8 @@ _rugosa_line_list_focused_line (RugosaLineList *self)
   GtkRoot *root = gtk_widget_get_root (GTK_WIDGET (self));
   GtkWidget *focus = root != NULL ? gtk_root_get_focus (root) : NULL;
 
+  if (focus == NULL || !gtk_widget_is_ancestor (focus, GTK_WIDGET (self->view)))
+    return NULL;
   for (GtkWidget *w = focus; w != NULL && w != GTK_WIDGET (self->view); w = gtk_widget_get_parent (w))
     {
       GtkWidget *child = gtk_widget_get_first_child (w);
