@@ -419,12 +419,24 @@ test_apply_fluid (void)
   GtkWidget *apply = ui_harness_find_action_widget (panel, "win.apply-part", fluid);
   RugosaLine *source = rugosa_project_get_line (project, 0);
   g_autofree char *before = NULL;
+  guint64 one_line;
   gsize n;
 
   g_assert_nonnull (apply);
   /* one line selected: nothing to apply to */
   g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 1);
   g_assert_false (gtk_widget_is_visible (apply));
+
+  /* what one edit of one line costs the window in evaluations */
+  {
+    RugosaLine *other = rugosa_project_get_line (project, 4);
+    guint64 count = rugosa_project_get_evaluation_count (project);
+
+    rugosa_history_set (history, other, "length", 1.5 * rugosa_line_get_double (other, "length"), NULL);
+    ui_harness_drain ();
+    one_line = rugosa_project_get_evaluation_count (project) - count;
+    g_assert_cmpuint (one_line, >, 0);
+  }
 
   /* the first line made seawater, as the panel would (one edit each) */
   rugosa_history_set (history, source, "fluid-kind", RG_FLUID_SEAWATER, NULL);
@@ -450,8 +462,17 @@ test_apply_fluid (void)
   g_assert_true (gtk_widget_has_css_class (find_label (rugosa_line_list_get_view (list), "Option 1"), "heading"));
   g_assert_false (gtk_widget_has_css_class (find_label (rugosa_line_list_get_view (list), "Option 2"), "heading"));
 
-  ui_harness_click (apply);
-  ui_harness_drain ();
+  {
+    guint64 count = rugosa_project_get_evaluation_count (project);
+
+    ui_harness_click (apply);
+    ui_harness_drain ();
+    /* one refresh: each of the three lines evaluated as after one edit,
+     * not once for each of the values it took */
+    g_print ("# evaluations: one edit %" G_GUINT64_FORMAT ", apply to 3 %" G_GUINT64_FORMAT "\n",
+             one_line, rugosa_project_get_evaluation_count (project) - count);
+    g_assert_cmpuint (rugosa_project_get_evaluation_count (project) - count, ==, 3 * one_line);
+  }
   for (guint i = 1; i <= 3; i++)
     {
       RugosaLine *line = rugosa_project_get_line (project, i);
