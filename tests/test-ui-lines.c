@@ -4,7 +4,8 @@
  * group or number, show and hide per line and per group, "only the
  * selected line", pins, the group entry (an undoable edit), and the chart
  * and results table following what is shown; the chart keeps its label
- * placement across a hover.
+ * placement across a hover; several lines selected and one line's fluid
+ * applied to them as one undo step.
  *
  * Run through the 'ui' suite (xvfb-run and dbus-run-session); without a
  * display the program reports a skip.  g_test_init() makes every GLib
@@ -20,6 +21,7 @@
 #include "rugosa-application.h"
 #include "rugosa-canvas.h"
 #include "rugosa-line-list.h"
+#include "rugosa-line-panel.h"
 #include "rugosa-window.h"
 #include "ui-harness.h"
 
@@ -374,6 +376,211 @@ test_group_entry (void)
   ui_harness_close_window (win);
 }
 
+/* The label under `root` showing `text`, or NULL. */
+static GtkWidget *
+find_label (GtkWidget  *root,
+            const char *text)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    {
+      GtkWidget *found;
+
+      if (GTK_IS_LABEL (c) && g_strcmp0 (gtk_label_get_text (GTK_LABEL (c)), text) == 0)
+        return c;
+      if ((found = find_label (c, text)) != NULL)
+        return found;
+    }
+  return NULL;
+}
+
+/* The label above the panel's "Fluid", "Aging" and "Flows" buttons. */
+static GtkLabel *
+apply_label (GtkWidget *button)
+{
+  GtkWidget *box = gtk_widget_get_parent (gtk_widget_get_parent (button));
+
+  return GTK_LABEL (gtk_widget_get_first_child (box));
+}
+
+/* The fluid of one line given to three others, along the user's path:
+ * the lines selected in the list (Ctrl-click: the line clicked last is
+ * the one the panel edits), the panel's "Apply to the 3 other selected
+ * lines: Fluid", and one undo. */
+static void
+test_apply_fluid (void)
+{
+  RugosaWindow *win = open_thousand ();
+  RugosaLineList *list = line_list (win);
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaHistory *history = rugosa_window_get_history (win);
+  GtkSelectionModel *selected = rugosa_line_list_get_selection (list);
+  GtkWidget *panel = rugosa_window_get_line_panel (win);
+  g_autoptr (GVariant) fluid = g_variant_ref_sink (g_variant_new_string ("fluid"));
+  GtkWidget *apply = ui_harness_find_action_widget (panel, "win.apply-part", fluid);
+  RugosaLine *source = rugosa_project_get_line (project, 0);
+  g_autofree char *before = NULL;
+  guint64 one_line;
+  gsize n;
+
+  g_assert_nonnull (apply);
+  /* one line selected: nothing to apply to */
+  g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 1);
+  g_assert_false (gtk_widget_is_visible (apply));
+
+  /* what one edit of one line costs the window in evaluations */
+  {
+    RugosaLine *other = rugosa_project_get_line (project, 4);
+    guint64 count = rugosa_project_get_evaluation_count (project);
+
+    rugosa_history_set (history, other, "length", 1.5 * rugosa_line_get_double (other, "length"), NULL);
+    ui_harness_drain ();
+    one_line = rugosa_project_get_evaluation_count (project) - count;
+    g_assert_cmpuint (one_line, >, 0);
+  }
+
+  /* the first line made seawater, as the panel would (one edit each) */
+  rugosa_history_set (history, source, "fluid-kind", RG_FLUID_SEAWATER, NULL);
+  rugosa_history_break_merge (history);
+  /* an invented input, 30 g/kg (not the default) */
+  rugosa_history_set (history, source, "salinity", 0.030, NULL);
+  ui_harness_drain ();
+  before = rugosa_project_to_data (project, &n);
+
+  /* lines 2, 3 and 4 selected, then the first added last */
+  gtk_selection_model_select_item (selected, 1, TRUE);
+  gtk_selection_model_select_item (selected, 2, FALSE);
+  gtk_selection_model_select_item (selected, 3, FALSE);
+  gtk_selection_model_select_item (selected, 0, FALSE);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 4);
+  g_assert_cmpuint (gtk_single_selection_get_selected (rugosa_window_get_selection (win)), ==, 0);
+  g_assert_true (rugosa_line_panel_get_line (RUGOSA_LINE_PANEL (panel)) == source);
+  g_assert_true (gtk_widget_is_visible (apply));
+  g_assert_cmpstr (gtk_label_get_text (apply_label (apply)), ==, "Apply to the 3 other selected lines:");
+  ui_harness_save_png (GTK_WIDGET (win), "rugosa-apply.png");
+  /* in the list, the line the panel edits stands out */
+  g_assert_true (gtk_widget_has_css_class (find_label (rugosa_line_list_get_view (list), "Option 1"), "heading"));
+  g_assert_false (gtk_widget_has_css_class (find_label (rugosa_line_list_get_view (list), "Option 2"), "heading"));
+
+  {
+    guint64 count = rugosa_project_get_evaluation_count (project);
+
+    ui_harness_click (apply);
+    ui_harness_drain ();
+    /* one refresh: each of the three lines evaluated as after one edit,
+     * not once for each of the values it took */
+    g_print ("# evaluations: one edit %" G_GUINT64_FORMAT ", apply to 3 %" G_GUINT64_FORMAT "\n",
+             one_line, rugosa_project_get_evaluation_count (project) - count);
+    g_assert_cmpuint (rugosa_project_get_evaluation_count (project) - count, ==, 3 * one_line);
+  }
+  for (guint i = 1; i <= 3; i++)
+    {
+      RugosaLine *line = rugosa_project_get_line (project, i);
+
+      g_assert_cmpint (rugosa_line_get_fluid_kind (line), ==, RG_FLUID_SEAWATER);
+      /* Expected: the first line's own values (a copy) */
+      g_assert_cmpfloat (rugosa_line_get_double (line, "salinity"), ==, rugosa_line_get_double (source, "salinity"));
+      g_assert_cmpfloat (rugosa_line_get_double (line, "temperature"), ==, rugosa_line_get_double (source, "temperature"));
+    }
+  g_assert_cmpint (rugosa_line_get_fluid_kind (rugosa_project_get_line (project, 4)), ==, RG_FLUID_WATER);
+  g_assert_cmpstr (rugosa_history_get_undo_label (history), ==, "Apply the fluid to 3 lines");
+  /* the selection stays for the next part */
+  g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 4);
+
+  /* one undo brings every value back */
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  ui_harness_drain ();
+  {
+    g_autofree char *undone = rugosa_project_to_data (project, &n);
+    g_assert_cmpstr (undone, ==, before);
+  }
+  g_assert_cmpstr (rugosa_history_get_undo_label (history), ==, "Change “Salinity”");
+
+  /* Ctrl+A selects every listed line; the panel's line stays */
+  gtk_widget_activate_action (rugosa_line_list_get_view (list), "list.select-all", NULL);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, LINES);
+  g_assert_cmpuint (gtk_single_selection_get_selected (rugosa_window_get_selection (win)), ==, 0);
+  g_assert_cmpstr (gtk_label_get_text (apply_label (apply)), ==, "Apply to the 999 other selected lines:");
+
+  /* a line picked elsewhere (the chart) among the selected keeps them;
+   * one outside them is selected alone, as a plain click does */
+  gtk_single_selection_set_selected (rugosa_window_get_selection (win), 7);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, LINES);
+  rugosa_line_list_set_filter (list, "zone b");
+  ui_harness_drain ();
+  /* the filter leaves Zone B's lines, still selected */
+  g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, LINES / GROUPS);
+  gtk_selection_model_select_item (selected, 2, TRUE);
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 1);
+  g_assert_cmpstr (rugosa_line_get_name (rugosa_line_panel_get_line (RUGOSA_LINE_PANEL (panel))), ==, "Option 18");
+  g_assert_false (gtk_widget_is_visible (apply));
+  rugosa_line_list_set_filter (list, "");
+  ui_harness_drain ();
+  g_assert_cmpuint (rugosa_line_list_get_n_selected (list), ==, 1);
+  ui_harness_close_window (win);
+}
+
+/* Whether a label under `root` shows `text` (a toast's title). */
+static gboolean
+shows_text (GtkWidget  *root,
+            const char *text)
+{
+  for (GtkWidget *c = gtk_widget_get_first_child (root); c; c = gtk_widget_get_next_sibling (c))
+    if ((GTK_IS_LABEL (c) && g_strcmp0 (gtk_label_get_text (GTK_LABEL (c)), text) == 0)
+        || shows_text (c, text))
+      return TRUE;
+  return FALSE;
+}
+
+/* Flows that suit a wide line given to a narrow one: applied, undoable,
+ * and the line that stops evaluating is counted. */
+static void
+test_apply_flows_beyond_range (void)
+{
+  RugosaWindow *win = open_thousand ();
+  RugosaLineList *list = line_list (win);
+  RugosaProject *project = rugosa_window_get_project (win);
+  RugosaHistory *history = rugosa_window_get_history (win);
+  GtkSelectionModel *selected = rugosa_line_list_get_selection (list);
+  g_autoptr (GVariant) flow = g_variant_ref_sink (g_variant_new_string ("flow"));
+  GtkWidget *apply = ui_harness_find_action_widget (rugosa_window_get_line_panel (win), "win.apply-part", flow);
+  RugosaLine *wide = rugosa_project_get_line (project, 0);
+  RugosaLine *narrow = rugosa_project_get_line (project, 1);
+  g_autofree char *before = NULL;
+  gsize n;
+
+  /* invented inputs: 100 m³/s in a 2 m bore is Re ≈ 6e7, in a 10 mm bore
+   * Re ≈ 1e10, beyond the friction correlations' range (RG_FRICTION_RE_MAX) */
+  rugosa_history_set (history, wide, "pipe-designation", NULL, "inner-diameter", 2.0,
+                      "flow-design", 100.0, NULL);
+  rugosa_history_set (history, narrow, "pipe-designation", NULL, "inner-diameter", 0.01, NULL);
+  ui_harness_drain ();
+  before = rugosa_project_to_data (project, &n);
+
+  gtk_selection_model_select_item (selected, 1, TRUE);
+  gtk_selection_model_select_item (selected, 2, FALSE);
+  gtk_selection_model_select_item (selected, 0, FALSE);
+  ui_harness_drain ();
+  g_assert_true (rugosa_line_panel_get_line (RUGOSA_LINE_PANEL (rugosa_window_get_line_panel (win))) == wide);
+  ui_harness_click (apply);
+  ui_harness_drain ();
+  g_assert_cmpfloat (rugosa_line_get_double (narrow, "flow-design"), ==, 100.0);
+  g_assert_cmpfloat (rugosa_line_get_double (rugosa_project_get_line (project, 2), "flow-design"), ==, 100.0);
+  g_assert_cmpstr (rugosa_history_get_undo_label (history), ==, "Apply the flows to 2 lines");
+  g_assert_true (shows_text (GTK_WIDGET (win), "1 line cannot be evaluated with these values: Ctrl+Z takes them back."));
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.undo", NULL);
+  ui_harness_drain ();
+  {
+    g_autofree char *undone = rugosa_project_to_data (project, &n);
+    g_assert_cmpstr (undone, ==, before);
+  }
+  ui_harness_close_window (win);
+}
+
 int
 main (int argc, char *argv[])
 {
@@ -395,6 +602,8 @@ main (int argc, char *argv[])
   g_test_add_func ("/ui/lines/groups", test_groups_popover);
   g_test_add_func ("/ui/lines/only-selected-and-pin", test_only_selected_and_pin);
   g_test_add_func ("/ui/lines/group-entry", test_group_entry);
+  g_test_add_func ("/ui/lines/apply-fluid", test_apply_fluid);
+  g_test_add_func ("/ui/lines/apply-flows-beyond-range", test_apply_flows_beyond_range);
 
   status = g_test_run ();
   g_object_unref (app);

@@ -6,40 +6,11 @@
 #include <glib/gi18n.h>
 
 #include "model/rugosa-display.h"
-#include "rugosa-line-list.h"
+#include "rugosa-line-list-private.h"
 #include "rugosa-readout.h"
 
 /* Groups listed in the groups popover; past these the filter finds them. */
 #define GROUPS_SHOWN_MAX 200
-
-struct _RugosaLineList
-{
-  GtkWidget parent_instance;
-
-  /* template widgets */
-  GtkToggleButton *only_selected_button;
-  GtkMenuButton   *groups_button;
-  GtkPopover      *groups_popover;
-  GtkListBox      *groups_box;
-  GtkSearchEntry  *filter_entry;
-  GtkListView     *view;
-  GtkEntry        *group_entry;
-
-  /* borrowed references */
-  RugosaProject      *project;
-  GtkSingleSelection *selection;     /* the window's, over every line */
-  RugosaVisibility   *visibility;
-
-  /* owned references */
-  GtkCustomFilter    *filter;
-  GtkFilterListModel *listed;
-  GtkSingleSelection *list_selection;
-  GHashTable         *numbers;       /* RugosaLine -> place in the project + 1 */
-  GPtrArray          *bound;         /* rows on screen */
-  char               *filter_text;   /* casefolded; NULL: no filter */
-
-  gboolean updating;                 /* rows being set from the model */
-};
 
 G_DEFINE_FINAL_TYPE (RugosaLineList, rugosa_line_list, GTK_TYPE_WIDGET)
 
@@ -49,6 +20,14 @@ enum {
 };
 
 static guint signals[N_SIGNALS];
+
+enum {
+  PROP_0,
+  PROP_N_SELECTED,
+  N_PROPS
+};
+
+static GParamSpec *properties[N_PROPS];
 
 typedef struct {
   GtkWidget *number, *swatch, *name, *readout, *warn, *pin, *eye;
@@ -177,6 +156,19 @@ _rugosa_line_list_update_row (RugosaLineList *self,
   gtk_widget_queue_draw (row->swatch);
   if (g_strcmp0 (gtk_label_get_text (GTK_LABEL (row->name)), rugosa_line_get_name (line)) != 0)
     gtk_label_set_text (GTK_LABEL (row->name), rugosa_line_get_name (line));
+  /* among several selected lines, the one the panel edits stands out */
+  {
+    gboolean current = self->n_selected > 1 && self->selection != NULL
+                       && gtk_single_selection_get_selected_item (self->selection) == (gpointer) line;
+
+    if (gtk_widget_has_css_class (row->name, "heading") != current)
+      {
+        if (current)
+          gtk_widget_add_css_class (row->name, "heading");
+        else
+          gtk_widget_remove_css_class (row->name, "heading");
+      }
+  }
 
   g_object_get (line, "group", &group, NULL);
   res = rugosa_readout_results (self->project, line);
@@ -333,6 +325,16 @@ _rugosa_line_list_row_setup (GtkSignalListItemFactory *factory,
   gtk_box_append (GTK_BOX (box), row->pin);
   gtk_box_append (GTK_BOX (box), row->eye);
   g_object_set_data_full (G_OBJECT (box), "row", row, g_free);
+  /* which row a click selects, before the list selects it: that line
+   * becomes the window's (see _rugosa_line_list_current) */
+  {
+    GtkGesture *press = gtk_gesture_click_new ();
+
+    gtk_gesture_single_set_button (GTK_GESTURE_SINGLE (press), GDK_BUTTON_PRIMARY);
+    gtk_event_controller_set_propagation_phase (GTK_EVENT_CONTROLLER (press), GTK_PHASE_CAPTURE);
+    g_signal_connect (press, "pressed", G_CALLBACK (_rugosa_line_list_row_pressed), self);
+    gtk_widget_add_controller (box, GTK_EVENT_CONTROLLER (press));
+  }
   gtk_list_item_set_child (item, box);
 }
 
@@ -369,7 +371,7 @@ _rugosa_line_list_row_unbind (GtkSignalListItemFactory *factory,
   g_object_set_data (G_OBJECT (row->warn), "line", NULL);
 }
 
-static void
+void
 _rugosa_line_list_refresh_rows (RugosaLineList *self)
 {
   for (guint i = 0; i < self->bound->len; i++)
@@ -378,7 +380,7 @@ _rugosa_line_list_refresh_rows (RugosaLineList *self)
 
 /* --- the selected line's group ----------------------------------------------- */
 
-static void
+void
 _rugosa_line_list_show_group (RugosaLineList *self)
 {
   RugosaLine *line = self->selection ? gtk_single_selection_get_selected_item (self->selection) : NULL;
@@ -554,17 +556,6 @@ _rugosa_line_list_items_changed (RugosaLineList *self)
 }
 
 static void
-_rugosa_line_list_selection_changed (RugosaLineList *self)
-{
-  guint pos = gtk_single_selection_get_selected (self->list_selection);
-
-  _rugosa_line_list_show_group (self);
-  /* a line picked on the chart comes into view */
-  if (pos != GTK_INVALID_LIST_POSITION)
-    gtk_widget_activate_action (GTK_WIDGET (self->view), "list.scroll-to-item", "u", pos);
-}
-
-static void
 _rugosa_line_list_activated (RugosaLineList *self,
                              guint           position)
 {
@@ -596,10 +587,7 @@ rugosa_line_list_set_context (RugosaLineList     *self,
   self->visibility = visibility;
   self->listed = gtk_filter_list_model_new (g_object_ref (G_LIST_MODEL (project)),
                                             g_object_ref (GTK_FILTER (self->filter)));
-  self->list_selection = gtk_single_selection_new (g_object_ref (G_LIST_MODEL (self->listed)));
-  gtk_single_selection_set_autoselect (self->list_selection, FALSE);
-  gtk_single_selection_set_can_unselect (self->list_selection, TRUE);
-  rugosa_selection_link (selection, self->list_selection);
+  self->list_selection = gtk_multi_selection_new (g_object_ref (G_LIST_MODEL (self->listed)));
   gtk_list_view_set_model (self->view, GTK_SELECTION_MODEL (self->list_selection));
   /* the binding goes with whichever of the two is finalized first */
   g_object_bind_property (visibility, "only-selected", self->only_selected_button, "active",
@@ -609,12 +597,18 @@ rugosa_line_list_set_context (RugosaLineList     *self,
                            self, G_CONNECT_SWAPPED);
   g_signal_connect_object (visibility, "changed", G_CALLBACK (_rugosa_line_list_refresh_rows),
                            self, G_CONNECT_SWAPPED);
-  g_signal_connect_object (self->list_selection, "notify::selected",
-                           G_CALLBACK (_rugosa_line_list_selection_changed), self, G_CONNECT_SWAPPED);
+  g_signal_connect_object (self->list_selection, "selection-changed",
+                           G_CALLBACK (_rugosa_line_list_selection_changed), self, 0);
   g_signal_connect_object (selection, "notify::selected",
-                           G_CALLBACK (_rugosa_line_list_show_group), self, G_CONNECT_SWAPPED);
+                           G_CALLBACK (_rugosa_line_list_follow_window), self, G_CONNECT_SWAPPED);
+  g_signal_connect_object (project, "items-changed",
+                           G_CALLBACK (_rugosa_line_list_project_changed_after), self,
+                           G_CONNECT_SWAPPED | G_CONNECT_AFTER);
+  g_signal_connect_object (self->listed, "items-changed",
+                           G_CALLBACK (_rugosa_line_list_listed_changed), self,
+                           G_CONNECT_SWAPPED | G_CONNECT_AFTER);
   _rugosa_line_list_renumber (self);
-  _rugosa_line_list_show_group (self);
+  _rugosa_line_list_follow_window (self);
 }
 
 /* --- object ------------------------------------------------------------------ */
@@ -630,6 +624,7 @@ rugosa_line_list_dispose (GObject *object)
   /* Template children without an id are not cleared by the call above. */
   for (GtkWidget *child; (child = gtk_widget_get_first_child (GTK_WIDGET (self))) != NULL;)
     gtk_widget_unparent (child);
+  _rugosa_line_list_set_pressed (self, NULL);
   g_clear_object (&self->list_selection);
   g_clear_object (&self->listed);
   g_clear_object (&self->filter);
@@ -639,6 +634,27 @@ rugosa_line_list_dispose (GObject *object)
   G_OBJECT_CLASS (rugosa_line_list_parent_class)->dispose (object);
 }
 
+void
+_rugosa_line_list_notify_n_selected (RugosaLineList *self)
+{
+  g_object_notify_by_pspec (G_OBJECT (self), properties[PROP_N_SELECTED]);
+}
+
+static void
+rugosa_line_list_get_property (GObject    *object,
+                               guint       prop_id,
+                               GValue     *value,
+                               GParamSpec *pspec)
+{
+  RugosaLineList *self = RUGOSA_LINE_LIST (object);
+
+  switch (prop_id)
+    {
+    case PROP_N_SELECTED: g_value_set_uint (value, self->n_selected); break;
+    default: G_OBJECT_WARN_INVALID_PROPERTY_ID (object, prop_id, pspec);
+    }
+}
+
 static void
 rugosa_line_list_class_init (RugosaLineListClass *klass)
 {
@@ -646,6 +662,13 @@ rugosa_line_list_class_init (RugosaLineListClass *klass)
   GtkWidgetClass *widget_class = GTK_WIDGET_CLASS (klass);
 
   object_class->dispose = rugosa_line_list_dispose;
+  object_class->get_property = rugosa_line_list_get_property;
+
+  properties[PROP_N_SELECTED] =
+    g_param_spec_uint ("n-selected", NULL, "How many lines are selected in the list",
+                       0, G_MAXUINT, 0,
+                       G_PARAM_READABLE | G_PARAM_EXPLICIT_NOTIFY | G_PARAM_STATIC_STRINGS);
+  g_object_class_install_properties (object_class, N_PROPS, properties);
 
   signals[SIGNAL_EDIT_LINE] =
     g_signal_new ("edit-line", G_TYPE_FROM_CLASS (klass), G_SIGNAL_RUN_LAST,

@@ -17,7 +17,10 @@ G_DECLARE_FINAL_TYPE (RugosaLineList, rugosa_line_list, RUGOSA, LINE_LIST, GtkWi
  * each row's number (the one the chart writes beside a marker that has no
  * label), a show/hide and a pin toggle per line, the groups shown or
  * hidden together, "only the selected line", and the selected line's
- * group.  The list's selection follows the window's and sets it.  Like
+ * group.  Several lines may be selected (Ctrl- and Shift-click, Ctrl+A),
+ * for an edit applied to them all; the window's selection is the one line
+ * last clicked or moved to among them, and a line the window selects
+ * (on the chart, by undo) is selected in the list.  Like
  * the panel it never edits a line: the group is emitted as `edit-line`
  * (line, "group", a "s" variant) for the window's undo history. */
 
@@ -34,6 +37,13 @@ void       rugosa_line_list_set_filter    (RugosaLineList     *self,
 /* The lines the filter leaves, in project order (tests, "show the
  * listed"). */
 GListModel *rugosa_line_list_get_listed   (RugosaLineList     *self);
+/* How many lines are selected in the list (property "n-selected"). */
+guint       rugosa_line_list_get_n_selected (RugosaLineList *self);
+/* The lines selected in the list, in list order; the array is new, the
+ * lines borrowed (the project holds them). */
+GPtrArray  *rugosa_line_list_get_selected_lines (RugosaLineList *self);
+/* The list's selection model (tests). */
+GtkSelectionModel *rugosa_line_list_get_selection (RugosaLineList *self);
 /* The list view (tests). */
 GtkWidget  *rugosa_line_list_get_view     (RugosaLineList     *self);
 

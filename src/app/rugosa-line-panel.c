@@ -35,6 +35,8 @@ struct _RugosaLinePanel
   RugosaSizePicker *pipe_picker;
   AdwExpanderRow   *fittings_row;
   GtkDropDown      *fitting_add_dropdown;
+  GtkBox           *apply_box;
+  GtkLabel         *apply_label;
 
   /* borrowed references */
   RugosaProject *project;
@@ -83,6 +85,21 @@ const char *
 rugosa_line_panel_get_fluid_readout (RugosaLinePanel *self)
 {
   return adw_action_row_get_subtitle (self->fluid_props_row);
+}
+
+void
+rugosa_line_panel_set_n_others (RugosaLinePanel *self,
+                                guint            n)
+{
+  g_autofree char *label = NULL;
+
+  g_return_if_fail (RUGOSA_IS_LINE_PANEL (self));
+  /* TRANSLATORS: above three buttons, "Fluid", "Aging" and "Flows", that
+   * give other line options this line's values; %u is how many */
+  label = g_strdup_printf (ngettext ("Apply to the %u other selected line:",
+                                     "Apply to the %u other selected lines:", n), n);
+  gtk_label_set_text (self->apply_label, label);
+  gtk_widget_set_visible (GTK_WIDGET (self->apply_box), n > 0);
 }
 
 RugosaLine *
@@ -1085,6 +1102,8 @@ rugosa_line_panel_class_init (RugosaLinePanelClass *klass)
   BIND (pipe_picker);
   BIND (fittings_row);
   BIND (fitting_add_dropdown);
+  BIND (apply_box);
+  BIND (apply_label);
 #undef BIND
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_committed);
   gtk_widget_class_bind_template_callback (widget_class, _rugosa_line_panel_fluid_kind_changed);

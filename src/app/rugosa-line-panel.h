@@ -24,6 +24,11 @@ void        rugosa_line_panel_set_context  (RugosaLinePanel *self,
 void        rugosa_line_panel_set_line     (RugosaLinePanel *self,
                                             RugosaLine      *line);
 RugosaLine *rugosa_line_panel_get_line     (RugosaLinePanel *self);
+/* How many other lines the list has selected besides the panel's: with
+ * one or more, the panel offers under the line's name to apply its
+ * fluid, aging or flows to them (the window's "win.apply-part"). */
+void        rugosa_line_panel_set_n_others (RugosaLinePanel *self,
+                                            guint            n);
 /* Re-read the line and its results (after any change). */
 void        rugosa_line_panel_refresh      (RugosaLinePanel *self);
 /* Re-read only what the service age changes (the warnings). */

@@ -41,7 +41,7 @@
 static const char *const locked_actions[] = {
   "win.undo", "win.redo", "win.line-add", "win.line-duplicate", "win.line-delete",
   "win.line-move-up", "win.line-move-down", "win.line-rename", "win.project-settings",
-  "win.size-pipe", "win.new", "win.open", "win.open-recent",
+  "win.size-pipe", "win.new", "win.open", "win.open-recent", "win.apply-part",
 };
 
 struct _RugosaPresentation

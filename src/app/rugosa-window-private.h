@@ -1,7 +1,8 @@
 /* SPDX-License-Identifier: GPL-3.0-or-later */
 /* RugosaWindow is split over rugosa-window.c (layout, selection, editing),
  * rugosa-window-files.c (open, save, recent, drop, autosave, close guard),
- * rugosa-window-output.c (chart export, CSV, print) and
+ * rugosa-window-output.c (chart export, CSV, print),
+ * rugosa-window-edits.c (edits applied to several lines) and
  * rugosa-window-present.c (presentation mode). */
 #pragma once
 
@@ -88,6 +89,9 @@ void     _rugosa_window_update_actions    (RugosaWindow  *self);
 void     _rugosa_window_apply_actions     (RugosaWindow  *self);
 void     _rugosa_window_toast             (RugosaWindow  *self,
                                            const char    *text);
+/* Whether `line` evaluates (at the design flow too, when it has one). */
+gboolean _rugosa_window_line_ok           (RugosaWindow  *self,
+                                           RugosaLine    *line);
 /* Replace the project's content (load, new, recovery) and reset history. */
 void     _rugosa_window_project_replaced  (RugosaWindow  *self);
 
@@ -102,6 +106,12 @@ void     _rugosa_window_remove_autosave   (RugosaWindow   *self);
 
 /* The view the chart area shows (the one exports and prints draw). */
 RugosaChartView _rugosa_window_chart_view (RugosaWindow *self);
+
+/* rugosa-window-edits.c: a line's fluid, aging or flows applied to the
+ * other selected lines */
+void     _rugosa_window_edits_class_init  (GtkWidgetClass *widget_class);
+void     _rugosa_window_edits_init        (RugosaWindow   *self);
+void     _rugosa_window_edits_update_actions (RugosaWindow *self);
 
 /* rugosa-window-output.c */
 void     _rugosa_window_output_class_init (GtkWidgetClass *widget_class);

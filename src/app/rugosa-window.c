@@ -170,6 +170,7 @@ _rugosa_window_apply_actions (RugosaWindow *self)
   /* Each direction on its own: at the top of the list there is no "up". */
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-up", has && pos > 0);
   gtk_widget_action_set_enabled (GTK_WIDGET (self), "win.line-move-down", has && pos + 1 < n);
+  _rugosa_window_edits_update_actions (self);
   _rugosa_window_present_lock_actions (self);
 }
 
@@ -396,7 +397,7 @@ _rugosa_window_trial (RugosaWindow *self,
   return TRUE;
 }
 
-static gboolean
+gboolean
 _rugosa_window_line_ok (RugosaWindow *self,
                         RugosaLine   *line)
 {
@@ -760,6 +761,7 @@ _rugosa_window_setup (RugosaWindow *self)
    * keeps the size it had before */
   _rugosa_window_present_init (self);
   _rugosa_window_files_init (self);
+  _rugosa_window_edits_init (self);
   _rugosa_window_project_replaced (self);
   self->modified = FALSE;
   _rugosa_window_update_title (self);
@@ -853,6 +855,7 @@ rugosa_window_class_init (RugosaWindowClass *klass)
 
   _rugosa_window_files_class_init (widget_class);
   _rugosa_window_output_class_init (widget_class);
+  _rugosa_window_edits_class_init (widget_class);
   _rugosa_window_sizing_class_init (widget_class);
   _rugosa_window_present_class_init (widget_class);
 }

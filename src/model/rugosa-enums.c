@@ -58,6 +58,14 @@ system_nick (int i)
 }
 
 static const char *
+part_nick (int i)
+{
+  static const char *const nicks[] = { "none", "fluid", "aging", "flow" };
+  G_STATIC_ASSERT (G_N_ELEMENTS (nicks) == RUGOSA_N_LINE_PARTS);
+  return nicks[i];
+}
+
+static const char *
 display_nick (int i)
 {
   const RugosaDisplayInfo *info = rugosa_display_info ((RugosaDisplayQuantity) i);
@@ -83,6 +91,8 @@ DEFINE_ENUM (rugosa_friction_model_get_type, "RugosaFrictionModel",
              "RUGOSA_FRICTION_MODEL_", RG_FRICTION_N_MODELS, model_nick)
 DEFINE_ENUM (rugosa_unit_system_get_type, "RugosaUnitSystem",
              "RUGOSA_UNIT_SYSTEM_", 2, system_nick)
+DEFINE_ENUM (rugosa_line_part_get_type, "RugosaLinePart",
+             "RUGOSA_LINE_PART_", RUGOSA_N_LINE_PARTS, part_nick)
 DEFINE_ENUM (rugosa_display_quantity_get_type, "RugosaDisplayQuantity",
              "RUGOSA_DISPLAY_", RUGOSA_N_DISPLAY, display_nick)
 

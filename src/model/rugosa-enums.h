@@ -68,6 +68,21 @@ typedef enum {
 #define RUGOSA_TYPE_DISPLAY_QUANTITY (rugosa_display_quantity_get_type ())
 GType rugosa_display_quantity_get_type (void) G_GNUC_CONST;
 
+/* The parts of a line option that are applied from one line to others
+ * at once (rugosa-apply.h): each row of the line field table belongs to
+ * at most one (RugosaField.part).  Nicks "none", "fluid", "aging",
+ * "flow" (the window's action targets). */
+typedef enum {
+  RUGOSA_LINE_PART_NONE = 0,
+  RUGOSA_LINE_PART_FLUID,        /* the fluid and its state */
+  RUGOSA_LINE_PART_AGING,        /* the roughness growth: class or rate */
+  RUGOSA_LINE_PART_FLOW,         /* the flow case: lowest, design, highest */
+  RUGOSA_N_LINE_PARTS
+} RugosaLinePart;
+
+#define RUGOSA_TYPE_LINE_PART (rugosa_line_part_get_type ())
+GType rugosa_line_part_get_type (void) G_GNUC_CONST;
+
 /* The nick of `value` in `enum_type`, or NULL. */
 /* How a value reads for people, translated ("US customary", "Colebrook
  * (1939)", "Water (IAPWS-IF97)"); its nick when the type has no titles. */

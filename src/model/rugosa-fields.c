@@ -71,10 +71,16 @@
 #define NUM(prop, path, disp, lo, hi, def, fl, label, help, cli, subj, off, spec) \
   { prop, path, RUGOSA_FIELD_NUMBER, RUGOSA_DISPLAY_##disp, 1.0, lo, hi, def, \
     NULL, fl, label, help, NULL, cli, subj, NULL, NULL, 0, off, spec, 0 }
-/* A number that is a state of the fluids `kinds`. */
+/* A number that is a state of the fluids `kinds` (part of the fluid). */
 #define FLUID_NUM(prop, path, disp, lo, hi, def, fl, label, help, cli, subj, off, spec, kinds) \
   { prop, path, RUGOSA_FIELD_NUMBER, RUGOSA_DISPLAY_##disp, 1.0, lo, hi, def, \
-    NULL, fl, label, help, NULL, cli, subj, NULL, NULL, 0, off, spec, kinds }
+    NULL, fl, label, help, NULL, cli, subj, NULL, NULL, 0, off, spec, kinds, \
+    RUGOSA_LINE_PART_FLUID }
+/* A number of the flow case. */
+#define FLOW_NUM(prop, path, disp, lo, hi, def, fl, label, help, cli, subj, off) \
+  { prop, path, RUGOSA_FIELD_NUMBER, RUGOSA_DISPLAY_##disp, 1.0, lo, hi, def, \
+    NULL, fl, label, help, NULL, cli, subj, NULL, NULL, 0, off, -1, 0, \
+    RUGOSA_LINE_PART_FLOW }
 #define WATER RUGOSA_FLUID_BIT (RG_FLUID_WATER)
 #define SEAWATER RUGOSA_FLUID_BIT (RG_FLUID_SEAWATER)
 #define OIL RUGOSA_FLUID_BIT (RG_FLUID_OIL)
@@ -104,7 +110,7 @@ static RugosaField line_fields[] = {
     RG_FLUID_WATER, NULL, RUGOSA_FIELD_REQUIRED_IN_GROUP, N_("Fluid"),
     N_("Which property model gives the fluid's density and viscosity."),
     NULL, "--fluid", SUBJ (FLUID), NULL, rugosa_fluid_kind_get_type, 0,
-    L (fluid_kind), -1, 0 },
+    L (fluid_kind), -1, 0, RUGOSA_LINE_PART_FLUID },
   FLUID_NUM ("temperature", "fluid.temperature_K", TEMPERATURE, T_LOWEST, T_HIGHEST, 0,
        RUGOSA_FIELD_CORE_DEFAULT | RUGOSA_FIELD_STATE_REQUIRED, N_("Temperature"),
        N_("The fluid's temperature."),
@@ -154,7 +160,7 @@ static RugosaField line_fields[] = {
     N_("Thermal expansion"),
     N_("The oil's volumetric thermal expansion coefficient."),
     "1/K", "--oil-expansion", SUBJ (OIL_EXPANSION), NULL, NULL, 0,
-    L (oil_expansion), SPEC (oil_expansion_per_k), OIL },
+    L (oil_expansion), SPEC (oil_expansion_per_k), OIL, RUGOSA_LINE_PART_FLUID },
   { "material-id", "material.catalog", RUGOSA_FIELD_CATALOG, RUGOSA_DISPLAY_NUMBER,
     1.0, 0, 0, 0, NULL, RUGOSA_FIELD_REQUIRED, N_("Material"),
     N_("A pipe material of the catalog, whose typical roughness when new is used; none: the roughness below."),
@@ -168,12 +174,13 @@ static RugosaField line_fields[] = {
     1.0, 0, 0, 0, NULL, 0, N_("Aging"),
     N_("A roughness growth class of the catalog (by the water's aggressiveness); none: the growth rate below."),
     NULL, "--aging", SUBJ (AGING_CLASS), "aging-rate", NULL, 120,
-    L (aging_class_id), -1 },
+    L (aging_class_id), -1, 0, RUGOSA_LINE_PART_AGING },
   { "aging-rate", "aging.rate_m_per_year", RUGOSA_FIELD_NUMBER,
     RUGOSA_DISPLAY_ROUGHNESS_RATE, 1.0 / SECONDS_PER_YEAR, 0.0, RG_AGING_RATE_MAX_M_PER_YEAR, 0.0, NULL,
     0, N_("Roughness growth"),
     N_("The growth of the roughness per year of service, α in ε(t) = ε₀ + α·t, used when no aging class is chosen."),
-    NULL, NULL, SUBJ (AGING_RATE), NULL, NULL, 0, L (aging_rate), -1 },
+    NULL, NULL, SUBJ (AGING_RATE), NULL, NULL, 0, L (aging_rate), -1, 0,
+    RUGOSA_LINE_PART_AGING },
   { "pipe-designation", "pipe.designation", RUGOSA_FIELD_CATALOG,
     RUGOSA_DISPLAY_NUMBER, 1.0, 0, 0, 0, NULL, RUGOSA_FIELD_REQUIRED,
     N_("Pipe size"),
@@ -198,18 +205,18 @@ static RugosaField line_fields[] = {
     N_("The minor losses: catalog fittings and plain loss coefficients, each with a count."),
     NULL, "--fitting", SUBJ (FITTING) | SUBJ (K_SUM), NULL, NULL, 0,
     L (fittings), -1 },
-  NUM ("flow-design", "flow.design_m3_s", FLOW, 0.0, 1.0e4, 0.01,
+  FLOW_NUM ("flow-design", "flow.design_m3_s", FLOW, 0.0, 1.0e4, 0.01,
        RUGOSA_FIELD_REQUIRED | RUGOSA_FIELD_MIN_OPEN, N_("Design flow"),
        N_("The volumetric flow the line is designed for."),
-       "--flow", SUBJ (FLOW), L (flow_design), -1),
-  NUM ("flow-minimum", "flow.minimum_m3_s", FLOW, 0.0, 1.0e4, 0.0,
+       "--flow", SUBJ (FLOW), L (flow_design)),
+  FLOW_NUM ("flow-minimum", "flow.minimum_m3_s", FLOW, 0.0, 1.0e4, 0.0,
        RUGOSA_FIELD_MIN_OPEN | RUGOSA_FIELD_ZERO_ABSENT, N_("Lowest flow"),
        N_("The lowest flow of operation, at most the design flow; none when not given."),
-       NULL, SUBJ (FLOW), L (flow_minimum), -1),
-  NUM ("flow-maximum", "flow.maximum_m3_s", FLOW, 0.0, 1.0e4, 0.0,
+       NULL, SUBJ (FLOW), L (flow_minimum)),
+  FLOW_NUM ("flow-maximum", "flow.maximum_m3_s", FLOW, 0.0, 1.0e4, 0.0,
        RUGOSA_FIELD_MIN_OPEN | RUGOSA_FIELD_ZERO_ABSENT, N_("Highest flow"),
        N_("The highest flow of operation, at least the design flow; none when not given."),
-       NULL, SUBJ (FLOW), L (flow_maximum), -1),
+       NULL, SUBJ (FLOW), L (flow_maximum)),
   /* Money has no unit to convert: plain numbers in the project's currency
    * (the settings' "currency"). */
   { "cost-per-metre", "cost.price_per_m", RUGOSA_FIELD_NUMBER, RUGOSA_DISPLAY_MONEY,

@@ -89,6 +89,8 @@ typedef struct {
   gssize spec_offset;     /* of the same value in RgFluidSpec, or -1 */
   guint fluid_kinds;      /* the fluids (bits 1 << RgFluidKind) this field
                            * describes; 0: it is not a fluid's state */
+  RugosaLinePart part;    /* the part of a line option it belongs to, which
+                           * is applied to other lines as a whole */
 } RugosaField;
 
 #define RUGOSA_FLUID_BIT(kind) (1u << (unsigned) (kind))

@@ -570,8 +570,11 @@ step (RugosaHistory *self, GPtrArray *from, GPtrArray *to, gboolean forward)
   could_undo = rugosa_history_can_undo (self);
   could_redo = rugosa_history_can_redo (self);
   c = g_ptr_array_steal_index (from, from->len - 1);
+  /* a step of many edits (one applied to many lines) is one change */
+  rugosa_project_hold_changed (self->project);
   command_apply (self, c, forward);
   g_ptr_array_add (to, c);
+  rugosa_project_release_changed (self->project);
   self->merge_broken = TRUE;
   notify_state (self, could_undo, could_redo);
   return TRUE;

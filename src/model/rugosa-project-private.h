@@ -19,6 +19,8 @@ struct _RugosaProject
 
   guint64 evaluation_count;
   guint64 eval_clock;         /* counts cache lookups, for LRU */
+  guint changed_holds;        /* rugosa_project_hold_changed, nested */
+  gboolean changed_pending;   /* a change seen while held */
 };
 
 /* Remember a catalog pipe under its own designation, so that evaluating

@@ -32,6 +32,29 @@ static guint signals[N_SIGNALS];
 static void
 on_child_notify (GObject *object, GParamSpec *pspec, RugosaProject *self)
 {
+  if (self->changed_holds > 0)
+    {
+      self->changed_pending = TRUE;
+      return;
+    }
+  g_signal_emit (self, signals[SIGNAL_CHANGED], 0);
+}
+
+void
+rugosa_project_hold_changed (RugosaProject *self)
+{
+  g_return_if_fail (RUGOSA_IS_PROJECT (self));
+  self->changed_holds++;
+}
+
+void
+rugosa_project_release_changed (RugosaProject *self)
+{
+  g_return_if_fail (RUGOSA_IS_PROJECT (self));
+  g_return_if_fail (self->changed_holds > 0);
+  if (--self->changed_holds > 0 || !self->changed_pending)
+    return;
+  self->changed_pending = FALSE;
   g_signal_emit (self, signals[SIGNAL_CHANGED], 0);
 }
 

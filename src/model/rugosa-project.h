@@ -51,6 +51,13 @@ void rugosa_project_insert_line (RugosaProject *self, guint position,
 RugosaLine *rugosa_project_remove_line (RugosaProject *self, guint position);
 void rugosa_project_move_line (RugosaProject *self, guint from, guint to);
 
+/* Many edits as one change: between hold and release (nested pairs
+ * allowed) the project emits "changed" at most once, at the outermost
+ * release, so that observers refresh once however many lines and fields
+ * the edits touched (an edit applied to many lines, its undo). */
+void rugosa_project_hold_changed (RugosaProject *self);
+void rugosa_project_release_changed (RugosaProject *self);
+
 /* ---- files (rugosa-project-io.c) ---- */
 
 /* Parse `data` (length bytes) into a new project; NULL and a GError whose
