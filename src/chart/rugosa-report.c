@@ -664,7 +664,7 @@ figure_chart (RugosaReport *report, RugosaProject *project, double width)
   RgError err = { 0 };
 
   input->spec.width = width;
-  input->spec.height = round (width * 0.6);
+  input->spec.height = round (width * 0.75);
   input->spec.scale = 1;
   input->spec.theme = RUGOSA_CHART_THEME_LIGHT;
   input->spec.footer_date[0] = '\0';
