@@ -4,6 +4,7 @@
 #include "config.h"
 
 #include "rugosa-line-list-private.h"
+#include "rugosa-visibility.h"
 
 void
 _rugosa_line_list_set_pressed (RugosaLineList *self,
@@ -35,22 +36,6 @@ _rugosa_line_list_row_pressed (GtkGestureClick *gesture,
  * user last clicked or moved to in the list; a change of the window's
  * line (picked on the chart, added, brought back by undo) selects that
  * line alone, unless it is one of the lines selected already. */
-
-static guint
-_rugosa_line_list_find (GListModel *model,
-                        gpointer    item)
-{
-  guint n = g_list_model_get_n_items (model);
-
-  /* linear: once per selection change, not per frame */
-  for (guint i = 0; i < n; i++)
-    {
-      g_autoptr (GObject) at = g_list_model_get_item (model, i);
-      if ((gpointer) at == item)
-        return i;
-    }
-  return GTK_INVALID_LIST_POSITION;
-}
 
 static void
 _rugosa_line_list_count_selected (RugosaLineList *self)
@@ -141,7 +126,7 @@ _rugosa_line_list_current (RugosaLineList *self,
     return line;
   if (n_items == 1 && gtk_selection_model_is_selected (model, position))
     return _rugosa_line_list_line_at (self, position);
-  main_pos = main_line != NULL ? _rugosa_line_list_find (G_LIST_MODEL (model), main_line)
+  main_pos = main_line != NULL ? rugosa_list_model_find (G_LIST_MODEL (model), main_line)
                                : GTK_INVALID_LIST_POSITION;
   if (main_pos != GTK_INVALID_LIST_POSITION && gtk_selection_model_is_selected (model, main_pos))
     return main_line;
@@ -205,7 +190,7 @@ _rugosa_line_list_follow_window (RugosaLineList *self)
       }
   }
   line = gtk_single_selection_get_selected_item (self->selection);
-  pos = line != NULL ? _rugosa_line_list_find (G_LIST_MODEL (self->listed), line)
+  pos = line != NULL ? rugosa_list_model_find (G_LIST_MODEL (self->listed), line)
                      : GTK_INVALID_LIST_POSITION;
   self->following = TRUE;
   if (pos == GTK_INVALID_LIST_POSITION)
@@ -237,7 +222,7 @@ _rugosa_line_list_listed_changed (RugosaLineList *self)
   guint pos;
 
   if (gtk_bitset_is_empty (set) && line != NULL
-      && (pos = _rugosa_line_list_find (G_LIST_MODEL (self->listed), line)) != GTK_INVALID_LIST_POSITION)
+      && (pos = rugosa_list_model_find (G_LIST_MODEL (self->listed), line)) != GTK_INVALID_LIST_POSITION)
     {
       self->following = TRUE;
       gtk_selection_model_select_item (GTK_SELECTION_MODEL (self->list_selection), pos, TRUE);

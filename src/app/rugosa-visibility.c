@@ -230,9 +230,9 @@ typedef struct {
   gboolean            busy;
 } SelectionLink;
 
-static guint
-_rugosa_find_item (GListModel *model,
-                   gpointer    item)
+guint
+rugosa_list_model_find (GListModel *model,
+                        gpointer    item)
 {
   guint n = g_list_model_get_n_items (model);
 
@@ -256,7 +256,7 @@ _rugosa_link_main_to_view (SelectionLink *link)
     return;
   link->busy = TRUE;
   item = gtk_single_selection_get_selected_item (link->main);
-  pos = item != NULL ? _rugosa_find_item (gtk_single_selection_get_model (link->view), item)
+  pos = item != NULL ? rugosa_list_model_find (gtk_single_selection_get_model (link->view), item)
                      : GTK_INVALID_LIST_POSITION;
   if (gtk_single_selection_get_selected (link->view) != pos)
     gtk_single_selection_set_selected (link->view, pos);
@@ -275,7 +275,7 @@ _rugosa_link_view_to_main (SelectionLink *link)
   if (item == NULL)
     return;
   link->busy = TRUE;
-  pos = _rugosa_find_item (gtk_single_selection_get_model (link->main), item);
+  pos = rugosa_list_model_find (gtk_single_selection_get_model (link->main), item);
   if (pos != GTK_INVALID_LIST_POSITION && gtk_single_selection_get_selected (link->main) != pos)
     gtk_single_selection_set_selected (link->main, pos);
   link->busy = FALSE;

@@ -60,5 +60,9 @@ GtkSingleSelection *rugosa_visibility_drawn_selection (RugosaVisibility *self,
  * selected line; a line `view` does not hold leaves it unselected. */
 void rugosa_selection_link (GtkSingleSelection *main,
                             GtkSingleSelection *view);
+/* The position of `item` in `model`, or GTK_INVALID_LIST_POSITION; linear,
+ * for a selection change, not a frame. */
+guint rugosa_list_model_find (GListModel *model,
+                              gpointer    item);
 
 G_END_DECLS

@@ -396,10 +396,12 @@ _rugosa_window_export_chart (GtkWidget  *widget,
   gtk_native_dialog_show (GTK_NATIVE_DIALOG (dialog));
 }
 
+/* The results table as CSV, or the report as PDF: a file asked for, then
+ * settled as every export is. */
 static void
-_rugosa_window_csv_response (GtkNativeDialog *dialog,
-                             int              response,
-                             RugosaWindow    *self)
+_rugosa_window_file_response (GtkNativeDialog *dialog,
+                              int              response,
+                              RugosaWindow    *self)
 {
   if (response == GTK_RESPONSE_ACCEPT)
     {
@@ -407,12 +409,30 @@ _rugosa_window_csv_response (GtkNativeDialog *dialog,
       g_autofree char *typed = g_file_get_path (file);
       RugosaExportJob *job = g_new0 (RugosaExportJob, 1);
 
-      /* Comma-separated values, named so. */
-      job->csv = TRUE;
-      job->path = _rugosa_window_with_extension (typed, ".csv", FALSE);
+      /* each named as what it holds */
+      job->report = GPOINTER_TO_INT (g_object_get_data (G_OBJECT (dialog), "report"));
+      job->csv = !job->report;
+      job->path = _rugosa_window_with_extension (typed, job->report ? ".pdf" : ".csv", FALSE);
       _rugosa_window_export_settled (self, typed, job);
     }
   g_object_unref (dialog);
+}
+
+static void
+_rugosa_window_ask_file (RugosaWindow *self,
+                         const char   *title,
+                         const char   *accept,
+                         const char   *name,
+                         gboolean      report)
+{
+  GtkFileChooserNative *dialog;
+
+  dialog = gtk_file_chooser_native_new (title, GTK_WINDOW (self), GTK_FILE_CHOOSER_ACTION_SAVE,
+                                        accept, _("_Cancel"));
+  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), name);
+  g_object_set_data (G_OBJECT (dialog), "report", GINT_TO_POINTER (report));
+  g_signal_connect (dialog, "response", G_CALLBACK (_rugosa_window_file_response), self);
+  gtk_native_dialog_show (GTK_NATIVE_DIALOG (dialog));
 }
 
 static void
@@ -420,32 +440,8 @@ _rugosa_window_export_csv (GtkWidget  *widget,
                            const char *action_name,
                            GVariant   *param)
 {
-  RugosaWindow *self = RUGOSA_WINDOW (widget);
-  GtkFileChooserNative *dialog;
-
-  dialog = gtk_file_chooser_native_new (_("Export the Results Table"), GTK_WINDOW (self),
-                                        GTK_FILE_CHOOSER_ACTION_SAVE, _("_Export"), _("_Cancel"));
-  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), _("line results.csv"));
-  g_signal_connect (dialog, "response", G_CALLBACK (_rugosa_window_csv_response), self);
-  gtk_native_dialog_show (GTK_NATIVE_DIALOG (dialog));
-}
-
-static void
-_rugosa_window_report_response (GtkNativeDialog *dialog,
-                                int              response,
-                                RugosaWindow    *self)
-{
-  if (response == GTK_RESPONSE_ACCEPT)
-    {
-      g_autoptr (GFile) file = gtk_file_chooser_get_file (GTK_FILE_CHOOSER (dialog));
-      g_autofree char *typed = g_file_get_path (file);
-      RugosaExportJob *job = g_new0 (RugosaExportJob, 1);
-
-      job->report = TRUE;
-      job->path = _rugosa_window_with_extension (typed, ".pdf", FALSE);
-      _rugosa_window_export_settled (self, typed, job);
-    }
-  g_object_unref (dialog);
+  _rugosa_window_ask_file (RUGOSA_WINDOW (widget), _("Export the Results Table"), _("_Export"),
+                           _("line results.csv"), FALSE);
 }
 
 static void
@@ -453,14 +449,8 @@ _rugosa_window_export_report (GtkWidget  *widget,
                               const char *action_name,
                               GVariant   *param)
 {
-  RugosaWindow *self = RUGOSA_WINDOW (widget);
-  GtkFileChooserNative *dialog;
-
-  dialog = gtk_file_chooser_native_new (_("Write the Report"), GTK_WINDOW (self),
-                                        GTK_FILE_CHOOSER_ACTION_SAVE, _("_Save"), _("_Cancel"));
-  gtk_file_chooser_set_current_name (GTK_FILE_CHOOSER (dialog), _("report.pdf"));
-  g_signal_connect (dialog, "response", G_CALLBACK (_rugosa_window_report_response), self);
-  gtk_native_dialog_show (GTK_NATIVE_DIALOG (dialog));
+  _rugosa_window_ask_file (RUGOSA_WINDOW (widget), _("Write the Report"), _("_Save"),
+                           _("report.pdf"), TRUE);
 }
 
 /* --- print ----------------------------------------------------------- */
