@@ -666,6 +666,15 @@ rg_pipe_lookup (const char *designation, const RgPipe **out, RgError *err)
 
   if (designation == NULL)
     designation = "";
+  /* A designation written as the catalog writes it (as a project file or
+   * a batch holds it) is found without parsing: a byte compare with each
+   * entry, where parsing would normalise every entry. */
+  for (int i = 0; i < rg_catalog_pipes_count; i++)
+    if (strcmp (designation, rg_catalog_pipes[i].designation) == 0)
+      {
+        *out = &rg_catalog_pipes[i];
+        return RG_OK;
+      }
   tokenize (designation, &tk);
   if (tk.stray)
     return rg_error_set_on (err, RG_ERR_PARSE, RG_SUBJECT_BIT (RG_SUBJECT_PIPE),

@@ -6,7 +6,8 @@
  * Method.  The C library's way (print, read back, up to three times)
  * costs about 10 000 instructions a number, most of a batch row's time.
  * The fast path decides each precision P in exact integer arithmetic:
- * with x = m·2^e (2^52 ≤ m < 2^53, e < 0) and k = ⌊log10 x⌋, the number
+ * with x = m·2^e (2^52 ≤ m < 2^53, e < 0) and k = ⌊log10 x⌋ (from the
+ * binary exponent, perhaps one below, then corrected), the number
  * in units of its P-th significant digit is s = x·10^n, n = P − 1 − k,
  * the fraction N/2^−e with N = m·10^n (below 2^127 for n ≤ 22).  Its
  * nearest integer D (from the quotient and remainder) is the digits
@@ -134,7 +135,9 @@ parts_of (double ax, Parts *parts)
 
   parts->m = (guint64) ldexp (fr, 53);
   parts->shift = 53 - e2;
-  parts->k = (int) floor (log10 (ax));
+  /* 2^(e2−1) ≤ ax < 2^e2: ⌊(e2 − 1)·log10 2⌋ is ⌊log10 ax⌋ or one
+   * below it, which decide() corrects; no log10 a number */
+  parts->k = (int) floor ((e2 - 1) * 0.30102999566398120);
 }
 
 /* 1 when precision p reads back, 0 when not, -1 when the C library must

@@ -37,6 +37,10 @@ struct _RugosaSettings
   guint64 revision;
   RgUnitChoice unit_choice;       /* cache of rugosa_settings_get_unit_choice */
   guint64 unit_choice_revision;   /* revision + 1 it was made for; 0: none */
+  /* cache of rugosa_settings_get_unit, each NULL until asked (an entry
+   * may point into unit_overrides, which a new revision replaces) */
+  const char *unit_of[RUGOSA_N_DISPLAY];
+  guint64 unit_of_revision;       /* revision + 1 it was made for; 0: none */
 };
 
 G_END_DECLS

@@ -144,13 +144,22 @@ rugosa_settings_get_unit (RugosaSettings *self, RugosaDisplayQuantity dq)
     return self->currency;
   if (info == NULL)
     return NULL;
+  /* asked for every number written: a batch row asks some twenty times */
+  if (self->unit_of_revision != self->revision + 1)
+    {
+      memset (self->unit_of, 0, sizeof self->unit_of);
+      self->unit_of_revision = self->revision + 1;
+    }
+  if (self->unit_of[dq] != NULL)
+    return self->unit_of[dq];
   /* An override this build cannot read (a later build's unit, a hand
    * edit) is kept in the file but not used. */
-  if (g_variant_n_children (self->unit_overrides) > 0
-      && g_variant_lookup (self->unit_overrides, info->id, "&s", &unit)
-      && rugosa_display_unit_valid (dq, unit))
-    return unit;
-  return rugosa_display_default_unit (dq, (RugosaUnitSystem) self->unit_system);
+  if (!(g_variant_n_children (self->unit_overrides) > 0
+        && g_variant_lookup (self->unit_overrides, info->id, "&s", &unit)
+        && rugosa_display_unit_valid (dq, unit)))
+    unit = rugosa_display_default_unit (dq, (RugosaUnitSystem) self->unit_system);
+  self->unit_of[dq] = unit;
+  return unit;
 }
 
 const RgUnitChoice *
