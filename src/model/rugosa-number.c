@@ -103,21 +103,21 @@ write_g (char *buf, gsize size, int negative, guint64 d, int p, int k)
 #ifdef __SIZEOF_INT128__
 __extension__ typedef unsigned __int128 u128;
 
-/* 10^n, n = 0 … 22 */
+/* 10^n, n = 0 … 22: a constant table (10^19 is the last below 2^64) */
+#define E19 ((u128) 10000000000000000000u)
+static const u128 pow10_table[23] = {
+  1u, 10u, 100u, 1000u, 10000u, 100000u, 1000000u, 10000000u, 100000000u,
+  1000000000u, 10000000000u, 100000000000u, 1000000000000u,
+  10000000000000u, 100000000000000u, 1000000000000000u,
+  10000000000000000u, 100000000000000000u, 1000000000000000000u,
+  E19, E19 * 10u, E19 * 100u, E19 * 1000u,
+};
+#undef E19
+
 static u128
 pow10_u128 (int n)
 {
-  static u128 table[23];
-  static gsize done;
-
-  if (g_once_init_enter (&done))
-    {
-      u128 p = 1;
-      for (int i = 0; i < 23; i++, p *= 10)
-        table[i] = p;
-      g_once_init_leave (&done, 1);
-    }
-  return table[n];
+  return pow10_table[n];
 }
 
 /* x as m / 2^shift, 2^52 ≤ m < 2^53, and ⌊log10 x⌋ (perhaps one off). */
