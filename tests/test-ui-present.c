@@ -29,6 +29,8 @@
 #include "rugosa-application.h"
 #include "rugosa-canvas.h"
 #include "rugosa-line-list.h"
+#include "rugosa-project-settings-window.h"
+#include "rugosa-sizing-window.h"
 #include "rugosa-window.h"
 #include "ui-harness.h"
 
@@ -407,6 +409,46 @@ test_hidden_lines_kept (void)
   ui_harness_drain ();
 }
 
+/* The project's settings and the sizing assistant, open before
+ * presenting, would edit the project: they close when it starts. */
+/* The open windows of `type` transient for `win`. */
+static guint
+open_windows (RugosaWindow *win,
+              GType         type)
+{
+  GList *tops = gtk_window_list_toplevels ();
+  guint n = 0;
+
+  for (GList *l = tops; l != NULL; l = l->next)
+    n += G_TYPE_CHECK_INSTANCE_TYPE (l->data, type) && gtk_widget_get_visible (l->data)
+         && gtk_window_get_transient_for (l->data) == GTK_WINDOW (win);
+  g_list_free (tops);
+  return n;
+}
+
+static void
+test_editing_windows_close (void)
+{
+  RugosaWindow *win = ui_harness_open_demo (app);
+
+  gtk_test_widget_wait_for_draw (GTK_WIDGET (win));
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.project-settings", NULL);
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.size-pipe", NULL);
+  ui_harness_drain ();
+  g_assert_cmpuint (open_windows (win, RUGOSA_TYPE_PROJECT_SETTINGS_WINDOW), ==, 1);
+  g_assert_cmpuint (open_windows (win, RUGOSA_TYPE_SIZING_WINDOW), ==, 1);
+
+  gtk_widget_activate_action (GTK_WIDGET (win), "win.present", NULL);
+  ui_harness_drain ();
+  g_assert_cmpuint (open_windows (win, RUGOSA_TYPE_PROJECT_SETTINGS_WINDOW), ==, 0);
+  g_assert_cmpuint (open_windows (win, RUGOSA_TYPE_SIZING_WINDOW), ==, 0);
+  g_assert_false (rugosa_window_get_modified (win));
+
+  rugosa_window_set_presenting (win, FALSE);
+  gtk_window_close (GTK_WINDOW (win));
+  ui_harness_drain ();
+}
+
 /* The demo presented at the screen's size (what a window manager gives a
  * full-screen window), saved for people to look at. */
 static void
@@ -465,6 +507,7 @@ main (int argc, char *argv[])
 
   g_test_add_func ("/ui/present/in-and-back", test_present_and_back);
   g_test_add_func ("/ui/present/hidden-lines-kept", test_hidden_lines_kept);
+  g_test_add_func ("/ui/present/editing-windows-close", test_editing_windows_close);
   g_test_add_func ("/ui/present/screenshot", test_screenshot);
 
   status = g_test_run ();

@@ -306,6 +306,16 @@ _rugosa_window_present_enter (RugosaWindow *self)
 
   /* a quick F5 F5: the last leaving is over */
   _rugosa_window_restore_done (self);
+  /* The project's other windows (its settings, the sizing assistant)
+   * edit it, and editing is off while presenting: they close. */
+  {
+    GList *tops = gtk_window_list_toplevels ();
+
+    for (GList *l = tops; l != NULL; l = l->next)
+      if (l->data != (gpointer) self && gtk_window_get_transient_for (l->data) == GTK_WINDOW (self))
+        gtk_window_close (l->data);
+    g_list_free (tops);
+  }
 
   p->fullscreen = gtk_window_is_fullscreen (GTK_WINDOW (self));
   p->maximized = gtk_window_is_maximized (GTK_WINDOW (self));
