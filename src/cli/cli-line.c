@@ -384,10 +384,77 @@ apply_enum (const CliArgs *args, const RugosaField *row, GObject *target,
   return TRUE;
 }
 
+/* The rows of both field tables each option names (one option may name
+ * several rows), made once. */
+static GHashTable *
+rows_by_option (void)
+{
+  static GHashTable *index;
+  static gsize done;
+
+  if (g_once_init_enter (&done))
+    {
+      GHashTable *made = g_hash_table_new_full (g_str_hash, g_str_equal, NULL,
+                                                (GDestroyNotify) g_ptr_array_unref);
+
+      for (int table = 0; table < 2; table++)
+        {
+          guint n;
+          const RugosaField *rows = table == 0 ? rugosa_line_fields (&n)
+                                               : rugosa_settings_fields (&n);
+
+          for (guint i = 0; i < n; i++)
+            {
+              GPtrArray *named;
+
+              if (rows[i].cli == NULL)
+                continue;
+              if ((named = g_hash_table_lookup (made, rows[i].cli)) == NULL)
+                {
+                  named = g_ptr_array_new ();
+                  g_hash_table_insert (made, (gpointer) rows[i].cli, named);
+                }
+              g_ptr_array_add (named, (gpointer) &rows[i]);
+            }
+        }
+      index = made;
+      g_once_init_leave (&done, 1);
+    }
+  return index;
+}
+
 gboolean
 cli_apply_field_options (const CliArgs *args, gboolean fluid_only, RugosaLine *line,
                          RugosaSettings *settings, const char **option, RgError *err)
 {
+  /* Which rows the given options name: a call gives a few options where
+   * the tables have some sixty rows (a batch row asks once per row). */
+  enum { ROWS_MAX = 512 };
+  guint8 given[ROWS_MAX] = { 0 };
+  guint n_line, n_settings;
+  const RugosaField *line_rows = rugosa_line_fields (&n_line);
+  const RugosaField *settings_rows = rugosa_settings_fields (&n_settings);
+  GHashTableIter iter;
+  gpointer key, value;
+
+  g_return_val_if_fail (n_line + n_settings <= ROWS_MAX, FALSE);
+  g_hash_table_iter_init (&iter, args->values);
+  while (g_hash_table_iter_next (&iter, &key, &value))
+    {
+      GPtrArray *named = ((GPtrArray *) value)->len > 0 ? g_hash_table_lookup (rows_by_option (), key) : NULL;
+
+      for (guint k = 0; named != NULL && k < named->len; k++)
+        {
+          const RugosaField *row = g_ptr_array_index (named, k);
+          gsize at = row >= line_rows && row < line_rows + n_line
+                       ? (gsize) (row - line_rows)
+                       : n_line + (gsize) (row - settings_rows);
+
+          if (at < ROWS_MAX)
+            given[at] = 1;
+        }
+    }
+
   for (int table = 0; table < 2; table++)
     {
       guint n;
@@ -400,7 +467,7 @@ cli_apply_field_options (const CliArgs *args, gboolean fluid_only, RugosaLine *l
           const RugosaField *row = &rows[i];
           gboolean ok = TRUE;
 
-          if (row->cli == NULL || !cli_args_has (args, row->cli)
+          if (!given[(table == 0 ? 0 : n_line) + i]
               || g_str_equal (row->property, "fluid-kind"))
             continue;
           *option = row->cli;
