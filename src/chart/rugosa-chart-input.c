@@ -413,15 +413,15 @@ rugosa_chart_input_conditions (RugosaChartInput *input,
 
       if (kind == RG_FLUID_CUSTOM)
         /* a fluid given by its properties has no temperature to name */
-        one = g_strdup (rugosa_fluid_kind_title (kind));
+        one = g_strdup (rugosa_enum_title (RUGOSA_TYPE_FLUID_KIND, kind));
       else if (g_str_equal (lo, hi))
         /* TRANSLATORS: a fluid of an exported chart's conditions: its
          * property model and temperature, e.g. "Water (IAPWS-IF97) at 15 °C" */
-        one = g_strdup_printf (_("%s at %s"), rugosa_fluid_kind_title (kind), lo);
+        one = g_strdup_printf (_("%s at %s"), rugosa_enum_title (RUGOSA_TYPE_FLUID_KIND, kind), lo);
       else
         /* TRANSLATORS: the same for lines at several temperatures, e.g.
          * "Water (IAPWS-IF97) at 5 °C to 60 °C" */
-        one = g_strdup_printf (_("%s at %s to %s"), rugosa_fluid_kind_title (kind), lo, hi);
+        one = g_strdup_printf (_("%s at %s to %s"), rugosa_enum_title (RUGOSA_TYPE_FLUID_KIND, kind), lo, hi);
       if (fluids->len > 0)
         g_string_append (fluids, "; ");
       g_string_append (fluids, one);

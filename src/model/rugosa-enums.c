@@ -129,14 +129,6 @@ static const char *fluid_titles[RG_FLUID_N_KINDS] = {
   [RG_FLUID_AIR] = N_("Air (ideal gas)"),
 };
 
-const char *
-rugosa_fluid_kind_title (int kind)
-{
-  if (kind < 0 || kind >= RG_FLUID_N_KINDS)
-    return "";
-  return _(fluid_titles[kind]);
-}
-
 static const char *system_titles[] = {
   [RUGOSA_UNIT_SYSTEM_SI] = N_("SI (metric)"),
   [RUGOSA_UNIT_SYSTEM_US] = N_("US customary"),

@@ -18,10 +18,6 @@ G_BEGIN_DECLS
  * "seawater", "oil", "air". */
 #define RUGOSA_TYPE_FLUID_KIND (rugosa_fluid_kind_get_type ())
 GType rugosa_fluid_kind_get_type (void) G_GNUC_CONST;
-/* A fluid kind's translated title, by the property model behind it
- * ("Water (IAPWS-IF97)"); "" for a value out of range. */
-const char *rugosa_fluid_kind_title (int kind);
-
 /* The friction models: the values of RgFrictionModel, nicks "colebrook",
  * "haaland", "swamee-jain", "churchill". */
 #define RUGOSA_TYPE_FRICTION_MODEL (rugosa_friction_model_get_type ())
