@@ -1271,6 +1271,30 @@ test_legend_entries (void)
 /* An export carries no selection: the scene with its selected line
  * exports exactly as with that line pinned instead, while the window's
  * drawing of the same scene shows the ring. */
+/* A crowded chart keeps the key to its symbols: when not every line can
+ * have a row, the legend shows three lines and counts the rest (numbered
+ * on the plot as in the list) rather than dropping the key. */
+static void
+test_legend_crowded (void)
+{
+  static SampleSet set;
+  GRand *rand = g_rand_new_with_seed (7);
+  RugosaChart *chart = chart_with (1000, 620, RUGOSA_CHART_SHOW_ALL, RUGOSA_CHART_THEME_LIGHT);
+  size_t line_rows = 0;
+
+  sample_random (&set, rand, 100);
+  rugosa_chart_set_lines (chart, set.lines, set.n);
+  char **entries = rugosa_chart_legend_entries (chart);
+  for (char **e = entries; *e != NULL; e++)
+    line_rows += g_str_has_prefix (*e, "Line ") || strstr (*e, " Line ") != NULL;
+  g_assert_true (g_strv_contains ((const char *const *) entries, "flow range, minimum to maximum"));
+  g_assert_true (g_strv_contains ((const char *const *) entries, "97 more, numbered as in the list"));
+  g_assert_cmpuint (line_rows, ==, 3);
+  g_strfreev (entries);
+  rugosa_chart_free (chart);
+  g_rand_free (rand);
+}
+
 static void
 test_export_no_selection (void)
 {
@@ -1382,6 +1406,7 @@ main (int argc, char **argv)
   g_test_add_func ("/chart/export/no-selection", test_export_no_selection);
   g_test_add_func ("/chart/export/heading", test_export_heading);
   g_test_add_func ("/chart/legend/entries", test_legend_entries);
+  g_test_add_func ("/chart/legend/crowded", test_legend_crowded);
   g_test_add_func ("/chart/overlay/small-share", test_labels_small_share);
   const int result = g_test_run ();
   if (g_getenv ("RUGOSA_CHART_KEEP") == NULL)

@@ -10,8 +10,10 @@
  * whole legend takes at most LEGEND_SHARE of the plot's height: the lines'
  * rows give way first (the last one counts the lines left out); the band
  * key goes when the lines would not all fit or the legend would cover
- * more than a tenth of the plot, the symbols' key past three lines or
- * 15 % of the plot.
+ * more than a tenth of the plot; the symbols' key stays while three
+ * lines keep their rows within 15 % of the plot — when not every line
+ * can have a row, the legend then shows three and counts the rest, whose
+ * markers carry their numbers in the list.
  *
  * Place: on a wide chart, a column of its own beside the plot
  * (chart-geometry.c); else a few candidate corners, the one covering the
@@ -316,18 +318,23 @@ plan (RugosaChart *chart, double *width, double *height)
       chart->legend_entries = saved;
       const size_t rows = (size_t) lround (h / row);
       const size_t keep = variant == 0 ? chart->n_lines : MIN (chart->n_lines, 3);
+      /* the lines' rows beside this key; when they cannot all have one,
+       * the symbols' key keeps three and the count of the rest (the
+       * others are numbered on the plot as in the list) */
+      const size_t fit = max_rows - MIN (rows + 1, max_rows);
+      const size_t shown = variant == 1 && chart->n_lines > fit ? MIN (fit, keep + 1)
+                                                                 : MIN (chart->n_lines, fit);
       /* the legend's area with this key, at most KEY_AREA_SHARE[variant]
        * of the plot's: on a small plot the key gives way first */
       const double area = (fmax (fmin (fmax (lines_w, w), max_w), 70 * k) + 2 * pad)
-                          * ((double) (rows + MIN (chart->n_lines, max_rows - MIN (rows + 1, max_rows))) * row
-                             + 6 * k + 2 * pad);
+                          * ((double) (rows + shown) * row + 6 * k + 2 * pad);
       if (entries->len > 0 && rows + keep + 1 <= max_rows
           && (side || area <= KEY_AREA_SHARE[variant] * lay->plot.width * lay->plot.height))
         {
           key = entries;
           key_w = w;
           key_h = h;
-          line_rows = MIN (chart->n_lines, max_rows - rows - 1);
+          line_rows = shown;
           break;
         }
       for (guint i = 0; i < entries->len; i++)
